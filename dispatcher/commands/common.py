@@ -1,0 +1,107 @@
+"""What every sub-command shares: exit codes, the error type, and the plan output contract."""
+
+from __future__ import annotations
+
+import json
+import math
+import sys
+from typing import Any
+
+import numpy as np
+
+from dispatcher.engine import DispatchResult
+
+EXIT_OK = 0
+EXIT_INTERNAL = 1
+EXIT_BAD_INPUT = 2
+EXIT_INFEASIBLE = 3
+EXIT_STORE = 4
+
+
+class CliError(Exception):
+    """A failure to report as one line on stderr with a given exit code (no traceback)."""
+
+    def __init__(self, message: str, exit_code: int = EXIT_BAD_INPUT):
+        super().__init__(message)
+        self.exit_code = exit_code
+
+
+def number(x: float) -> int | float:
+    """JSON-friendly number: whole values print without a trailing .0."""
+    x = float(x)
+    return int(x) if math.isfinite(x) and x.is_integer() and abs(x) < 2**53 else x
+
+
+def plan_json(result: DispatchResult, jobs: list[str], machines: list[str]) -> dict[str, Any]:
+    """The solve output contract for an engine result with names attached.
+
+    Keys fixed by the contract: status, objective, total, assignments (job, machine, cost),
+    waiting_jobs, idle_machines. Ours: bottleneck, waiting_reasons, certificate.
+    """
+    assignments = []
+    for j in np.flatnonzero(result.machine_of_job >= 0):
+        m = int(result.machine_of_job[j])
+        assignments.append({"job": jobs[j], "machine": machines[m],
+                            "cost": number(result.values[j, m])})
+    reasons = {}
+    for j in result.waiting_jobs:
+        w = result.wait_reason(int(j))
+        reasons[jobs[j]] = {
+            "competing_jobs": [jobs[i] for i in w.jobs],
+            "machines": [machines[i] for i in w.machines],
+            "text": wait_reason_text(jobs, machines, int(j), w),
+        }
+    return {
+        "status": "optimal",
+        "objective": result.objective,
+        "total": number(result.total),
+        "assignments": assignments,
+        "waiting_jobs": [jobs[j] for j in result.waiting_jobs],
+        "idle_machines": [machines[m] for m in result.idle_machines],
+        "bottleneck": None if result.bottleneck is None else number(result.bottleneck),
+        "waiting_reasons": reasons,
+        "certificate": {"verified": result.verify()},
+    }
+
+
+def wait_reason_text(jobs: list[str], machines: list[str], job: int, witness) -> str:
+    """One sentence a supervisor can check by hand."""
+    if len(witness.machines) == 0:
+        return f"{jobs[job]}: no available machine can run it"
+    names = ", ".join(machines[m] for m in witness.machines)
+    return (f"{jobs[job]}: {len(witness.jobs)} jobs can only run on {len(witness.machines)} "
+            f"machine(s) ({names}), so {witness.deficiency} of them must wait")
+
+
+def print_json(obj: Any) -> None:
+    json.dump(obj, sys.stdout, indent=2, ensure_ascii=False)
+    sys.stdout.write("\n")
+
+
+def print_plan(data: dict[str, Any], unit: str = "") -> None:
+    """Readable table of a plan in the solve contract."""
+    rows = [(a["job"], a["machine"], f"{a['cost']:g}") for a in data["assignments"]]
+    head = ("Job", "Machine", f"Value{(' (' + unit + ')') if unit else ''}")
+    widths = [max(len(str(r[i])) for r in rows + [head]) for i in range(3)]
+    line = "  ".join(h.ljust(w) for h, w in zip(head, widths))
+    print(line)
+    print("  ".join("-" * w for w in widths))
+    for r in rows:
+        print(f"{r[0].ljust(widths[0])}  {r[1].ljust(widths[1])}  {r[2].rjust(widths[2])}")
+    print()
+    if data["waiting_jobs"]:
+        print(f"Waiting jobs ({len(data['waiting_jobs'])}):")
+        for name in data["waiting_jobs"]:
+            reason = data.get("waiting_reasons", {}).get(name, {}).get("text", "")
+            print(f"  {name}" + (f"  - {reason.split(': ', 1)[-1]}" if reason else ""))
+    else:
+        print("Waiting jobs: none")
+    idle = data["idle_machines"]
+    print(f"Idle machines: {', '.join(idle) if idle else 'none'}")
+    label = {"total": "Total", "maximize": "Total value", "bottleneck": "Total"}[data["objective"]]
+    print(f"{label}: {data['total']:g}")
+    if data.get("bottleneck") is not None:
+        print(f"Largest single value: {data['bottleneck']:g}")
+    cert = data.get("certificate", {})
+    if cert:
+        print("Optimality certificate: " + ("checked" if cert.get("verified") else "FAILED"))

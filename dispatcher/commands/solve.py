@@ -1,0 +1,75 @@
+"""``dispatcher solve``: the cheapest plan for a grid file."""
+
+from __future__ import annotations
+
+import argparse
+
+from dispatcher.commands.common import (
+    EXIT_INFEASIBLE,
+    CliError,
+    plan_json,
+    print_json,
+    print_plan,
+)
+from dispatcher.engine import DispatchInputError, InfeasibleError, solve
+from dispatcher.io.grid import GridFileError, read_grid
+
+
+def register(sub: argparse._SubParsersAction) -> None:
+    p = sub.add_parser("solve", help="solve a grid file and print the plan",
+                       description="Solve a jobs x machines grid (.csv or .xlsx) and print the plan.")
+    p.add_argument("grid", metavar="GRID", help="grid file (.csv, .tsv, .txt or .xlsx)")
+    mode = p.add_mutually_exclusive_group()
+    mode.add_argument("--maximize", action="store_true", help="values are gains: maximise the total")
+    mode.add_argument("--bottleneck", action="store_true",
+                      help="minimise the largest single value, then the total")
+    p.add_argument("--must-run", metavar="JOB,JOB...", default="",
+                   help="jobs that must not wait (comma-separated names)")
+    p.add_argument("--json", action="store_true", help="print one JSON object")
+    p.set_defaults(func=run)
+
+
+def objective_of(args: argparse.Namespace) -> str:
+    if args.maximize:
+        return "maximize"
+    if args.bottleneck:
+        return "bottleneck"
+    return "total"
+
+
+def parse_names(text: str, known: list[str], what: str, source: str) -> list[int]:
+    """Indices of comma-separated names; unknown names are bad input."""
+    names = [n.strip() for n in text.split(",") if n.strip()]
+    index = {n: i for i, n in enumerate(known)}
+    unknown = [n for n in names if n not in index]
+    if unknown:
+        raise CliError(f"{source}: unknown {what} {', '.join(map(repr, unknown))}")
+    return [index[n] for n in names]
+
+
+def infeasible_message(exc: InfeasibleError, jobs: list[str], machines: list[str]) -> str:
+    w = exc.witness
+    return ("infeasible: must-run jobs " + ", ".join(jobs[j] for j in w.jobs)
+            + f" ({len(w.jobs)}) compete for only {len(w.machines)} machine(s): "
+            + (", ".join(machines[m] for m in w.machines) or "none"))
+
+
+def run(args: argparse.Namespace) -> int:
+    try:
+        table = read_grid(args.grid)
+    except GridFileError as exc:
+        raise CliError(str(exc)) from None
+    must = parse_names(args.must_run, table.jobs, "job", args.grid)
+    try:
+        result = solve(table.values, table.allowed, objective=objective_of(args), must_run=must)
+    except DispatchInputError as exc:
+        raise CliError(f"{args.grid}: {exc}") from None
+    except InfeasibleError as exc:
+        raise CliError(f"{args.grid}: {infeasible_message(exc, table.jobs, table.machines)}",
+                       EXIT_INFEASIBLE) from None
+    data = plan_json(result, table.jobs, table.machines)
+    if args.json:
+        print_json(data)
+    else:
+        print_plan(data)
+    return 0

@@ -1,0 +1,28 @@
+"""Numeric solvers (numpy and scipy only; no Qt, no files).
+
+The public entry point is :func:`solve`; see :mod:`dispatcher.engine.assignment` for the
+exact definition of a plan and of the certificate that proves it optimal.
+"""
+
+from .assignment import (
+    MAX_CELLS,
+    OBJECTIVES,
+    DispatchInputError,
+    DispatchResult,
+    InfeasibleError,
+    solve,
+)
+from .certificate import Certificate, CertificateError
+from .matching import HallWitness
+
+__all__ = [
+    "MAX_CELLS",
+    "OBJECTIVES",
+    "Certificate",
+    "CertificateError",
+    "DispatchInputError",
+    "DispatchResult",
+    "HallWitness",
+    "InfeasibleError",
+    "solve",
+]

@@ -1,0 +1,339 @@
+"""One-to-one dispatch of jobs to machines: any shape, incompatible pairs, three objectives.
+
+What a plan is (the definition every test checks against):
+
+* it places as many jobs as the allowed pairs permit (a maximum matching); this number
+  is proven maximal by a Konig vertex cover of the same size;
+* must-run jobs are always placed (if no maximum matching places them all, the problem
+  is infeasible and :class:`InfeasibleError` names a Hall witness among them);
+* among those plans it minimises ``sum(planned values) + sum(wait penalties of waiting
+  jobs)`` (objective ``"total"``), maximises ``sum(planned values) - sum(wait penalties)``
+  (``"maximize"``), or first minimises the largest planned value and then the total
+  (``"bottleneck"``).
+
+The primal plan comes from scipy's ``linear_sum_assignment`` (Crouse 2016, a shortest
+augmenting path method) on a square matrix built here; the dual potentials that prove it
+optimal are computed by :mod:`dispatcher.engine.certificate`.
+"""
+
+from __future__ import annotations
+
+from dataclasses import dataclass
+
+import numpy as np
+from scipy.optimize import linear_sum_assignment
+
+from .certificate import Certificate, potentials_from_plan
+from .matching import HallWitness, alternating_reach, hall_witness, konig_cover, maximum_matching
+
+OBJECTIVES = ("total", "maximize", "bottleneck")
+
+#: Largest number of grid cells accepted (jobs x machines). Refused early, never attempted.
+MAX_CELLS = 25_000_000
+
+# Kinds of rows and columns in the square matrix that is actually solved.
+ROW_JOB, ROW_IDLE = 0, 1
+COL_MACHINE, COL_WAIT = 0, 1
+
+
+class DispatchInputError(ValueError):
+    """The numbers given to the engine do not describe a dispatch problem."""
+
+
+class InfeasibleError(Exception):
+    """Must-run jobs cannot all be placed. ``witness`` names jobs and the machines they share."""
+
+    def __init__(self, message: str, witness: HallWitness):
+        super().__init__(message)
+        self.witness = witness
+
+
+@dataclass(frozen=True)
+class DispatchResult:
+    """A certified plan.
+
+    ``machine_of_job[i]`` is the machine of job i or -1 when it waits. ``total`` follows
+    the objective (see the module docstring). ``job_potential`` and ``machine_potential``
+    are the dual potentials restricted to real jobs and machines: for ``"total"`` and
+    ``"bottleneck"`` every allowed pair (of the problem solved) has
+    ``value - u - v >= 0`` and every planned pair ``== 0``; for ``"maximize"`` every
+    allowed pair has ``u + v - value >= 0`` and every planned pair ``== 0``.
+    :meth:`reduced_costs` returns that non-negative quantity in both cases.
+    """
+
+    machine_of_job: np.ndarray
+    total: float
+    objective: str
+    values: np.ndarray
+    allowed: np.ndarray
+    solved_allowed: np.ndarray
+    job_potential: np.ndarray
+    machine_potential: np.ndarray
+    wait_penalty: np.ndarray
+    must_run: np.ndarray
+    certificate: Certificate
+    cover_jobs: np.ndarray
+    cover_machines: np.ndarray
+    bottleneck: float | None
+
+    @property
+    def waiting_jobs(self) -> np.ndarray:
+        """Indices of jobs that wait."""
+        return np.flatnonzero(self.machine_of_job < 0)
+
+    @property
+    def idle_machines(self) -> np.ndarray:
+        """Indices of machines that get no job."""
+        used = np.zeros(self.values.shape[1], dtype=bool)
+        used[self.machine_of_job[self.machine_of_job >= 0]] = True
+        return np.flatnonzero(~used)
+
+    @property
+    def planned_count(self) -> int:
+        return int((self.machine_of_job >= 0).sum())
+
+    def planned_values(self) -> np.ndarray:
+        """Value of each job's planned pair; NaN for waiting jobs."""
+        out = np.full(len(self.machine_of_job), np.nan)
+        placed = self.machine_of_job >= 0
+        out[placed] = self.values[np.flatnonzero(placed), self.machine_of_job[placed]]
+        return out
+
+    def reduced_costs(self) -> np.ndarray:
+        """Non-negative on pairs of the problem solved, zero on planned pairs, inf elsewhere.
+
+        For ``"bottleneck"`` the problem solved keeps only pairs whose value is at most
+        the bottleneck value.
+        """
+        u, v = self.job_potential[:, None], self.machine_potential[None, :]
+        red = (u + v - self.values) if self.objective == "maximize" else (self.values - u - v)
+        return np.where(self.solved_allowed, red, np.inf)
+
+    def witness(self) -> HallWitness | None:
+        """Hall witness for all waiting jobs together (None if nobody waits)."""
+        return hall_witness(self.allowed, self.machine_of_job)
+
+    def wait_reason(self, job: int) -> HallWitness:
+        """Why ``job`` waits: the jobs it competes with and the machines they all can use."""
+        if self.machine_of_job[job] >= 0:
+            raise ValueError(f"job {job} is not waiting")
+        return hall_witness(self.allowed, self.machine_of_job, np.array([job]))
+
+    def verify(self) -> bool:
+        """Re-check everything the result claims: certificate, cover, totals."""
+        if not self.certificate.verify():
+            return False
+        placed = self.machine_of_job >= 0
+        machines = self.machine_of_job[placed]
+        if len(set(machines.tolist())) != len(machines):
+            return False
+        if not self.allowed[np.flatnonzero(placed), machines].all():
+            return False
+        if (self.must_run & ~placed).any():
+            return False
+        # Konig: a vertex cover of size = matching size proves the matching maximum.
+        cover_ok = int(self.cover_jobs.sum() + self.cover_machines.sum()) == self.planned_count
+        covered = self.cover_jobs[:, None] | self.cover_machines[None, :]
+        if not cover_ok or (self.allowed & ~covered).any():
+            return False
+        red = self.reduced_costs()
+        tol = 1e-9 * max(1.0, float(np.abs(self.values[self.allowed]).max(initial=0))) * max(1, len(red))
+        if (red[self.solved_allowed] < -tol).any():
+            return False
+        if placed.any() and np.abs(red[np.flatnonzero(placed), machines]).max() > tol:
+            return False
+        return bool(np.isclose(self.total, _plan_total(self.values, self.machine_of_job,
+                                                       self.wait_penalty, self.objective)))
+
+
+def _plan_total(values: np.ndarray, machine_of_job: np.ndarray, wait_penalty: np.ndarray,
+                objective: str) -> float:
+    placed = machine_of_job >= 0
+    planned = float(values[np.flatnonzero(placed), machine_of_job[placed]].sum())
+    penalty = float(wait_penalty[~placed].sum())
+    return planned - penalty if objective == "maximize" else planned + penalty
+
+
+def _check_inputs(costs, allowed, wait_penalty, must_run):
+    try:
+        values = np.asarray(costs, dtype=float)
+    except (TypeError, ValueError) as exc:
+        raise DispatchInputError(f"costs must be numbers, got {type(costs).__name__}: {exc}") from None
+    if values.ndim != 2:
+        raise DispatchInputError(f"costs must be a 2-D grid (jobs x machines), got {values.ndim}-D")
+    n_jobs, n_machines = values.shape
+    if n_jobs * n_machines > MAX_CELLS:
+        raise DispatchInputError(
+            f"grid of {n_jobs} x {n_machines} exceeds the limit of {MAX_CELLS} cells")
+    if allowed is None:
+        mask = np.ones(values.shape, dtype=bool)
+    else:
+        mask = np.asarray(allowed)
+        if mask.shape != values.shape:
+            raise DispatchInputError(
+                f"allowed mask has shape {mask.shape}, costs have shape {values.shape}")
+        if mask.dtype != bool:
+            raise DispatchInputError(f"allowed mask must be boolean, got {mask.dtype}")
+    vals = values[mask]
+    if not np.isfinite(vals).all():
+        i, j = np.argwhere(mask & ~np.isfinite(values))[0]
+        raise DispatchInputError(
+            f"value at job {i}, machine {j} is {values[i, j]}: values must be finite "
+            "(mark incompatible pairs in the allowed mask)")
+    if (vals < 0).any():
+        i, j = np.argwhere(mask & (values < 0))[0]
+        raise DispatchInputError(f"value at job {i}, machine {j} is {values[i, j]}: values must be >= 0")
+    if not mask.all():
+        values = np.where(mask, values, 0.0)
+    if wait_penalty is None:
+        penalty = np.zeros(n_jobs)
+    else:
+        penalty = np.asarray(wait_penalty, dtype=float).reshape(-1)
+        if penalty.shape != (n_jobs,):
+            raise DispatchInputError(f"wait_penalty needs {n_jobs} entries, got {penalty.size}")
+        if not np.isfinite(penalty).all() or (penalty < 0).any():
+            raise DispatchInputError("wait penalties must be finite numbers >= 0")
+    must = np.zeros(n_jobs, dtype=bool)
+    if must_run is not None:
+        arr = np.asarray(must_run)
+        if arr.dtype == bool:
+            if arr.shape != (n_jobs,):
+                raise DispatchInputError(f"must_run mask needs {n_jobs} entries, got {arr.size}")
+            must = arr.copy()
+        else:
+            idx = arr.astype(np.int64).reshape(-1)
+            if idx.size and (idx.min() < 0 or idx.max() >= n_jobs):
+                raise DispatchInputError(f"must_run names a job outside 0..{n_jobs - 1}")
+            must[idx] = True
+    return values, mask, penalty, must
+
+
+def _check_must_run(mask: np.ndarray, must: np.ndarray) -> None:
+    """Raise InfeasibleError unless some matching places every must-run job.
+
+    By the matroid property of matchings (Mendelsohn and Dulmage 1958) such a matching
+    then extends to a maximum matching that still places them.
+    """
+    rows = np.flatnonzero(must)
+    if rows.size == 0:
+        return
+    sub = mask[rows]
+    match = maximum_matching(sub)
+    if (match >= 0).all():
+        return
+    unplaced = np.flatnonzero(match < 0)
+    jobs, machines = alternating_reach(sub, match, unplaced)
+    witness = HallWitness(rows[np.flatnonzero(jobs)], np.flatnonzero(machines))
+    raise InfeasibleError(
+        f"{witness.jobs.size} must-run jobs can use only {witness.machines.size} machines "
+        "between them", witness)
+
+
+def _solve_min(cost: np.ndarray, mask: np.ndarray, penalty: np.ndarray, must: np.ndarray,
+               k: int) -> tuple[np.ndarray, Certificate]:
+    """Cheapest plan placing exactly k jobs (k = maximum matching size) on the square matrix."""
+    n_jobs, n_machines = cost.shape
+    n_wait = n_jobs - k
+    n_idle = n_machines - k
+    size = n_jobs + n_idle
+    full = mask.all()
+    if n_wait == 0 and n_idle == 0:
+        square = cost if full else np.where(mask, cost, np.inf)
+    else:
+        square = np.full((size, size), np.inf)
+        square[:n_jobs, :n_machines] = cost if full else np.where(mask, cost, np.inf)
+        square[:n_jobs, n_machines:] = np.where(must, np.inf, penalty)[:, None]
+        square[n_jobs:, :n_machines] = 0.0
+    if size:
+        rows, cols = linear_sum_assignment(square)
+        col_of_row = np.empty(size, dtype=np.int64)
+        col_of_row[rows] = cols
+    else:
+        col_of_row = np.zeros(0, dtype=np.int64)
+    u, v = potentials_from_plan(square, col_of_row)
+    row_kind = np.r_[np.full(n_jobs, ROW_JOB), np.full(n_idle, ROW_IDLE)]
+    col_kind = np.r_[np.full(n_machines, COL_MACHINE), np.full(n_wait, COL_WAIT)]
+    cert = Certificate(square, col_of_row, u, v, row_kind, col_kind)
+    job_cols = col_of_row[:n_jobs]
+    machine_of_job = np.where(job_cols < n_machines, job_cols, -1)
+    return machine_of_job, cert
+
+
+def _bottleneck_mask(values: np.ndarray, mask: np.ndarray, must: np.ndarray, k: int) -> np.ndarray:
+    """Smallest threshold t such that pairs with value <= t still allow k placed jobs."""
+    levels = np.unique(values[mask])
+    lo, hi = 0, len(levels) - 1
+    must_rows = np.flatnonzero(must)
+    while lo < hi:
+        mid = (lo + hi) // 2
+        sub = mask & (values <= levels[mid])
+        ok = int((maximum_matching(sub) >= 0).sum()) == k
+        if ok and must_rows.size:
+            ok = bool((maximum_matching(sub[must_rows]) >= 0).all())
+        if ok:
+            hi = mid
+        else:
+            lo = mid + 1
+    return mask & (values <= levels[lo]) if len(levels) else mask
+
+
+def solve(costs, allowed=None, *, maximize: bool = False, objective: str | None = None,
+          wait_penalty=None, must_run=None) -> DispatchResult:
+    """Certified dispatch plan for a jobs x machines grid.
+
+    ``costs``: jobs x machines values (finite, >= 0 wherever allowed). ``allowed``:
+    boolean mask, False = the machine cannot run the job (default: all allowed).
+    ``maximize=True`` is shorthand for ``objective="maximize"``. ``objective`` is one of
+    ``"total"``, ``"maximize"``, ``"bottleneck"``. ``wait_penalty``: one number >= 0 per
+    job, counted against any plan that leaves the job waiting. ``must_run``: boolean mask
+    or indices of jobs that must never wait.
+
+    Raises :class:`DispatchInputError` for bad numbers and :class:`InfeasibleError` when
+    must-run jobs cannot all be placed.
+    """
+    if objective is None:
+        objective = "maximize" if maximize else "total"
+    elif maximize and objective != "maximize":
+        raise DispatchInputError(f"maximize=True conflicts with objective={objective!r}")
+    if objective not in OBJECTIVES:
+        raise DispatchInputError(f"objective must be one of {', '.join(OBJECTIVES)}, got {objective!r}")
+    values, mask, penalty, must = _check_inputs(costs, allowed, wait_penalty, must_run)
+    _check_must_run(mask, must)
+    k = min(mask.shape) if mask.all() else int((maximum_matching(mask) >= 0).sum())
+
+    solve_mask = mask
+    if objective == "bottleneck":
+        solve_mask = _bottleneck_mask(values, mask, must, k)
+    if objective == "maximize":
+        top = float(values[mask].max()) if mask.any() else 0.0
+        cost = top - values
+    else:
+        top = 0.0
+        cost = values
+    machine_of_job, cert = _solve_min(cost, solve_mask, penalty, must, k)
+
+    n_jobs, n_machines = values.shape
+    u = cert.row_potential[:n_jobs]
+    v = cert.col_potential[:n_machines]
+    if objective == "maximize":
+        u, v = top - u, -v
+    cover_jobs, cover_machines = konig_cover(mask, machine_of_job)
+    placed = machine_of_job >= 0
+    bottleneck = (float(values[np.flatnonzero(placed), machine_of_job[placed]].max())
+                  if objective == "bottleneck" and placed.any() else None)
+    return DispatchResult(
+        machine_of_job=machine_of_job,
+        total=_plan_total(values, machine_of_job, penalty, objective),
+        objective=objective,
+        values=values,
+        allowed=mask,
+        solved_allowed=solve_mask,
+        job_potential=u,
+        machine_potential=v,
+        wait_penalty=penalty,
+        must_run=must,
+        certificate=cert,
+        cover_jobs=cover_jobs,
+        cover_machines=cover_machines,
+        bottleneck=bottleneck,
+    )

@@ -1,0 +1,107 @@
+"""Maximum-cardinality matching facts on the allowed pairs: size, Konig cover, Hall witness.
+
+A dispatch plan must place as many jobs as the allowed pairs permit. These helpers find
+that number and, when some jobs cannot be placed, *prove* it: by Konig's theorem
+(Konig 1931) the vertices reachable by alternating paths from the unmatched jobs form a
+set S of jobs whose allowed machines N(S) number |S| - (unmatched jobs) < |S|, which is a
+violation of Hall's condition (Hall 1935) that any supervisor can check by hand.
+"""
+
+from __future__ import annotations
+
+from dataclasses import dataclass
+
+import numpy as np
+from scipy.sparse import csr_matrix
+from scipy.sparse.csgraph import maximum_bipartite_matching
+
+
+@dataclass(frozen=True)
+class HallWitness:
+    """A set of jobs that together can use fewer machines than there are jobs.
+
+    ``jobs`` and ``machines`` are index arrays. Every allowed machine of every job in
+    ``jobs`` is in ``machines`` and ``len(machines) < len(jobs)``, so at least
+    ``len(jobs) - len(machines)`` of these jobs must wait whatever the plan.
+    """
+
+    jobs: np.ndarray
+    machines: np.ndarray
+
+    @property
+    def deficiency(self) -> int:
+        """How many of these jobs must wait in every plan."""
+        return int(len(self.jobs) - len(self.machines))
+
+    def holds(self, allowed: np.ndarray) -> bool:
+        """Check the witness against a mask: neighbours within ``machines``, fewer than jobs."""
+        if len(self.jobs) == 0:
+            return False
+        neighbours = np.flatnonzero(allowed[self.jobs].any(axis=0))
+        return bool(set(neighbours.tolist()) <= set(self.machines.tolist())
+                    and len(self.machines) < len(self.jobs))
+
+
+def maximum_matching(allowed: np.ndarray) -> np.ndarray:
+    """Machine index per job (-1 = unmatched) of one maximum matching (Hopcroft-Karp, in scipy)."""
+    n_jobs, n_machines = allowed.shape
+    if n_jobs == 0 or n_machines == 0:
+        return np.full(n_jobs, -1, dtype=np.int64)
+    graph = csr_matrix(allowed.astype(np.int8))
+    match = maximum_bipartite_matching(graph, perm_type="column")
+    return np.asarray(match, dtype=np.int64)
+
+
+def alternating_reach(allowed: np.ndarray, machine_of_job: np.ndarray,
+                      start_jobs: np.ndarray) -> tuple[np.ndarray, np.ndarray]:
+    """Jobs and machines reachable from ``start_jobs`` by alternating paths.
+
+    Paths leave a job along any allowed pair and leave a machine along its matched pair.
+    Returns boolean masks (jobs, machines).
+    """
+    n_jobs, n_machines = allowed.shape
+    job_of_machine = np.full(n_machines, -1, dtype=np.int64)
+    placed = machine_of_job >= 0
+    job_of_machine[machine_of_job[placed]] = np.flatnonzero(placed)
+    seen_jobs = np.zeros(n_jobs, dtype=bool)
+    seen_machines = np.zeros(n_machines, dtype=bool)
+    frontier = np.asarray(start_jobs, dtype=np.int64)
+    seen_jobs[frontier] = True
+    while frontier.size:
+        reach = allowed[frontier].any(axis=0) & ~seen_machines
+        seen_machines |= reach
+        nxt = job_of_machine[reach]
+        nxt = nxt[nxt >= 0]
+        nxt = nxt[~seen_jobs[nxt]]
+        seen_jobs[nxt] = True
+        frontier = nxt
+    return seen_jobs, seen_machines
+
+
+def hall_witness(allowed: np.ndarray, machine_of_job: np.ndarray,
+                 waiting: np.ndarray | None = None) -> HallWitness | None:
+    """Hall witness for the unmatched jobs of a *maximum* matching, or None if all are placed.
+
+    ``waiting`` restricts the start set to some unmatched jobs (their own witness); by
+    default all unmatched jobs are used. The matching must be maximum, otherwise an
+    augmenting path exists and the returned set would not be a witness; callers verify
+    with :meth:`HallWitness.holds`.
+    """
+    if waiting is None:
+        waiting = np.flatnonzero(machine_of_job < 0)
+    waiting = np.asarray(waiting, dtype=np.int64)
+    if waiting.size == 0:
+        return None
+    jobs, machines = alternating_reach(allowed, machine_of_job, waiting)
+    return HallWitness(np.flatnonzero(jobs), np.flatnonzero(machines))
+
+
+def konig_cover(allowed: np.ndarray, machine_of_job: np.ndarray) -> tuple[np.ndarray, np.ndarray]:
+    """A minimum vertex cover (job mask, machine mask) built from a maximum matching.
+
+    Its size equals the matching size, which proves the matching is maximum (Konig 1931):
+    no matching can have more pairs than any vertex cover has vertices.
+    """
+    start = np.flatnonzero(machine_of_job < 0)
+    jobs, machines = alternating_reach(allowed, machine_of_job, start)
+    return ~jobs, machines
