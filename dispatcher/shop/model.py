@@ -1,0 +1,299 @@
+"""The shop in a supervisor's terms: jobs, machines, the grid of values, pins, states.
+
+Plain dataclasses, no Qt and no files (reading and writing documents lives in
+:mod:`dispatcher.io.shopfile`). Jobs and machines carry a stable ``id`` (what the grid,
+pins and the plan in force refer to, so renaming keeps references intact) and a display
+``name`` (what plans, tables and printed sheets show; unique within the shop).
+
+Every mutable container is owned by its :class:`Shop`; :meth:`Shop.copy` gives an
+independent deep copy for what-if work (re-dispatch, undo snapshots).
+"""
+
+from __future__ import annotations
+
+import copy
+import math
+from dataclasses import dataclass, field
+from datetime import date, datetime, time
+
+import numpy as np
+
+# Job states.
+WAITING, RUNNING, DONE = "waiting", "running", "done"
+JOB_STATES = (WAITING, RUNNING, DONE)
+
+# Machine states. Only an "up" machine takes jobs.
+UP, DOWN, MAINTENANCE = "up", "down", "maintenance"
+MACHINE_STATES = (UP, DOWN, MAINTENANCE)
+
+# Pin kinds.
+MUST, MUST_NOT = "must", "must_not"
+PIN_KINDS = (MUST, MUST_NOT)
+
+# Units of the grid values.
+UNIT_KINDS = ("setup_minutes", "cost")
+
+
+class ShopError(ValueError):
+    """A shop that cannot be used as it is (bad references, contradictions, bad numbers).
+
+    ``problems`` lists every problem found, each a :class:`Problem` with its location.
+    """
+
+    def __init__(self, problems: list["Problem"], source: str = ""):
+        self.problems = list(problems)
+        self.source = source
+        head = f"{source}: " if source else ""
+        if len(self.problems) == 1:
+            text = head + str(self.problems[0])
+        else:
+            text = (head + f"{len(self.problems)} problems: "
+                    + "; ".join(str(p) for p in self.problems[:10])
+                    + ("; ..." if len(self.problems) > 10 else ""))
+        super().__init__(text)
+
+
+@dataclass(frozen=True)
+class Problem:
+    """One problem and where it is: ``location`` such as ``job 'WO-1' (id J1), field 'due'``."""
+
+    location: str
+    message: str
+
+    def __str__(self) -> str:
+        return f"{self.location}: {self.message}" if self.location else self.message
+
+
+@dataclass
+class Unit:
+    """What the grid values mean: setup minutes, or a cost in a currency."""
+
+    kind: str = "setup_minutes"
+    currency: str = ""
+
+    def label(self) -> str:
+        """Short label for column heads: ``setup min`` or the currency (``cost`` if none)."""
+        if self.kind == "cost":
+            return self.currency or "cost"
+        return "setup min"
+
+
+@dataclass
+class Shift:
+    """The shift being dispatched: its date, a label ("early", "night"...), start and length."""
+
+    day: date | None = None
+    label: str = ""
+    start: time | None = None
+    hours: float = 8.0
+
+
+@dataclass
+class Job:
+    """A job waiting for, running on, or done with a machine.
+
+    ``rush`` jobs must run this round (must-run). ``wait_penalty`` is added to the total
+    when the job is left waiting (or subtracted when maximising). ``machine`` and
+    ``since`` are set only while the job is running. ``run_hours`` is the job's own run
+    time (used when filling a whole shift); ``move_penalty`` overrides the shop's default
+    cost of moving a dispatched-but-not-started job during re-dispatch.
+    """
+
+    id: str
+    name: str
+    work_order: str = ""
+    rush: bool = False
+    wait_penalty: float = 0.0
+    due: datetime | None = None
+    notes: str = ""
+    state: str = WAITING
+    machine: str | None = None
+    since: datetime | None = None
+    run_hours: float | None = None
+    move_penalty: float | None = None
+
+    @property
+    def is_waiting(self) -> bool:
+        return self.state == WAITING
+
+    @property
+    def is_running(self) -> bool:
+        return self.state == RUNNING
+
+
+@dataclass
+class Machine:
+    """A machine: its state (with a note and when it changed), slots per round, shift hours.
+
+    ``slots`` is how many jobs the machine takes at once in one dispatch round (jobs already
+    running on it use up slots). ``shift_hours`` is the time it has in this shift (None: the
+    shift length); ``speed_factor`` scales a job's ``run_hours`` on this machine.
+    """
+
+    id: str
+    name: str
+    state: str = UP
+    state_note: str = ""
+    state_changed: datetime | None = None
+    slots: int = 1
+    shift_hours: float | None = None
+    speed_factor: float = 1.0
+    notes: str = ""
+
+    @property
+    def is_up(self) -> bool:
+        return self.state == UP
+
+
+@dataclass
+class Pin:
+    """``job`` must (or must not) go to ``machine``; both are ids."""
+
+    job: str
+    machine: str
+    kind: str = MUST
+    note: str = ""
+
+
+@dataclass
+class Shop:
+    """A whole shop: jobs, machines, the grid of values, pins and the plan in force.
+
+    ``grid`` maps ``(job id, machine id)`` to a value >= 0; a missing pair means the machine
+    cannot run the job. ``hours`` optionally maps pairs to run hours (overriding
+    ``job.run_hours * machine.speed_factor``). ``plan_in_force`` maps a machine id to the
+    job ids it was given by the decision currently in force (empty when none recorded).
+    """
+
+    name: str = ""
+    unit: Unit = field(default_factory=Unit)
+    shift: Shift = field(default_factory=Shift)
+    move_penalty: float = 0.0
+    description: str = ""
+    jobs: list[Job] = field(default_factory=list)
+    machines: list[Machine] = field(default_factory=list)
+    grid: dict[tuple[str, str], float] = field(default_factory=dict)
+    pins: list[Pin] = field(default_factory=list)
+    hours: dict[tuple[str, str], float] = field(default_factory=dict)
+    plan_in_force: dict[str, list[str]] = field(default_factory=dict)
+
+    # ---- look-ups -------------------------------------------------------------------
+    def job(self, job_id: str) -> Job:
+        """The job with this id (KeyError if none)."""
+        for j in self.jobs:
+            if j.id == job_id:
+                return j
+        raise KeyError(f"no job with id {job_id!r}")
+
+    def machine(self, machine_id: str) -> Machine:
+        """The machine with this id (KeyError if none)."""
+        for m in self.machines:
+            if m.id == machine_id:
+                return m
+        raise KeyError(f"no machine with id {machine_id!r}")
+
+    def job_by_name(self, name: str) -> Job:
+        for j in self.jobs:
+            if j.name == name:
+                return j
+        raise KeyError(f"no job named {name!r}")
+
+    def machine_by_name(self, name: str) -> Machine:
+        for m in self.machines:
+            if m.name == name:
+                return m
+        raise KeyError(f"no machine named {name!r}")
+
+    def job_names(self) -> list[str]:
+        return [j.name for j in self.jobs]
+
+    def machine_names(self) -> list[str]:
+        return [m.name for m in self.machines]
+
+    # ---- the grid --------------------------------------------------------------------
+    def value(self, job_id: str, machine_id: str) -> float | None:
+        """Grid value of a pair, or None when the machine cannot run the job."""
+        return self.grid.get((job_id, machine_id))
+
+    def set_value(self, job_id: str, machine_id: str, value: float | None) -> None:
+        """Set a pair's value (None = cannot run). Checks the ids and the number."""
+        self.job(job_id)
+        self.machine(machine_id)
+        if value is None:
+            self.grid.pop((job_id, machine_id), None)
+            return
+        value = float(value)
+        if not math.isfinite(value) or value < 0:
+            raise ValueError(f"value {value!r} for job {job_id!r}, machine {machine_id!r} "
+                             "must be a finite number >= 0")
+        self.grid[(job_id, machine_id)] = value
+
+    def matrix(self) -> tuple[np.ndarray, np.ndarray]:
+        """``(values, allowed)`` over all jobs x all machines in list order."""
+        jpos = {j.id: i for i, j in enumerate(self.jobs)}
+        mpos = {m.id: i for i, m in enumerate(self.machines)}
+        values = np.zeros((len(self.jobs), len(self.machines)))
+        allowed = np.zeros(values.shape, dtype=bool)
+        for (jid, mid), v in self.grid.items():
+            i, k = jpos.get(jid), mpos.get(mid)
+            if i is not None and k is not None:
+                values[i, k] = v
+                allowed[i, k] = True
+        return values, allowed
+
+    def hours_matrix(self) -> np.ndarray:
+        """Run hours per (job, machine): the pair's own hours, else job hours x speed factor.
+
+        NaN where neither is known.
+        """
+        out = np.full((len(self.jobs), len(self.machines)), np.nan)
+        for i, j in enumerate(self.jobs):
+            for k, m in enumerate(self.machines):
+                h = self.hours.get((j.id, m.id))
+                if h is None and j.run_hours is not None:
+                    h = j.run_hours * m.speed_factor
+                if h is not None:
+                    out[i, k] = h
+        return out
+
+    def capacity(self) -> np.ndarray:
+        """Hours each machine has this shift (its own ``shift_hours`` or the shift length)."""
+        return np.array([self.shift.hours if m.shift_hours is None else m.shift_hours
+                         for m in self.machines], dtype=float)
+
+    # ---- pins ------------------------------------------------------------------------
+    def pins_of(self, job_id: str) -> list[Pin]:
+        return [p for p in self.pins if p.job == job_id]
+
+    # ---- misc ------------------------------------------------------------------------
+    def copy(self) -> "Shop":
+        """An independent deep copy."""
+        return copy.deepcopy(self)
+
+    def describe_job(self, job_id: str) -> str:
+        """``job 'Name' (id X)`` for messages; just the id when unknown."""
+        try:
+            return f"job {self.job(job_id).name!r} (id {job_id})"
+        except KeyError:
+            return f"job id {job_id!r}"
+
+    def describe_machine(self, machine_id: str) -> str:
+        try:
+            return f"machine {self.machine(machine_id).name!r} (id {machine_id})"
+        except KeyError:
+            return f"machine id {machine_id!r}"
+
+
+def shop_from_grid(jobs: list[str], machines: list[str], values: np.ndarray,
+                   allowed: np.ndarray | None = None, *, name: str = "",
+                   unit: Unit | None = None) -> Shop:
+    """A shop with all jobs waiting and all machines up, one slot each, ids J1.., M1..."""
+    values = np.asarray(values, dtype=float)
+    if allowed is None:
+        allowed = np.ones(values.shape, dtype=bool)
+    shop = Shop(name=name, unit=unit or Unit())
+    shop.jobs = [Job(id=f"J{i + 1}", name=n) for i, n in enumerate(jobs)]
+    shop.machines = [Machine(id=f"M{k + 1}", name=n) for k, n in enumerate(machines)]
+    for i, k in zip(*np.nonzero(allowed)):
+        shop.grid[(shop.jobs[i].id, shop.machines[k].id)] = float(values[i, k])
+    return shop

@@ -1,0 +1,222 @@
+"""A dispatch plan in shop terms (names, not indices), and its JSON form.
+
+:meth:`Plan.to_json` gives exactly the ``dispatcher solve --json`` contract: the keys
+status, objective, total, assignments (``{"job", "machine", "cost"}``), waiting_jobs,
+idle_machines, bottleneck, waiting_reasons and certificate. Two keys are added only when a
+shop has something to put in them, so a shop made from a plain grid prints exactly what
+the grid prints: ``running`` (jobs already running, which stay where they are:
+``{"job", "machine", "since", "cost"}``) and ``unavailable_machines`` (down or under
+maintenance). :meth:`Plan.from_json` reads that object back, checking every field.
+
+``assignments`` are the jobs newly dispatched in this round; ``total`` counts them and the
+wait penalties of waiting jobs (running jobs are not counted: their setup is done).
+"""
+
+from __future__ import annotations
+
+import math
+from dataclasses import dataclass, field
+from typing import Any
+
+OBJECTIVES = ("total", "maximize", "bottleneck")
+
+
+class PlanFormatError(ValueError):
+    """A plan object (JSON) that does not follow the solve contract; names the field."""
+
+
+def json_number(x: float) -> int | float:
+    """JSON-friendly number: whole values print without a trailing .0."""
+    x = float(x)
+    return int(x) if math.isfinite(x) and x.is_integer() and abs(x) < 2**53 else x
+
+
+@dataclass(frozen=True)
+class Assignment:
+    """Job newly dispatched to a machine, with the grid value of the pair."""
+
+    job: str
+    machine: str
+    cost: float
+
+
+@dataclass(frozen=True)
+class RunningJob:
+    """A job already running; it stays where it is. ``cost`` is its grid value if known."""
+
+    job: str
+    machine: str
+    since: str | None = None
+    cost: float | None = None
+
+
+@dataclass(frozen=True)
+class WaitReason:
+    """Why a job waits: jobs competing for the same few machines, and a sentence."""
+
+    competing_jobs: list[str]
+    machines: list[str]
+    text: str
+
+
+@dataclass
+class Plan:
+    """Per machine its job(s) and value, waiting jobs with reasons, idle machines, totals.
+
+    ``result`` and ``problem`` keep the engine result and the expanded problem (with dual
+    potentials) for callers that continue from this plan, such as a warm re-dispatch;
+    they are not part of the JSON and not compared.
+    """
+
+    objective: str
+    total: float
+    assignments: list[Assignment] = field(default_factory=list)
+    waiting_jobs: list[str] = field(default_factory=list)
+    idle_machines: list[str] = field(default_factory=list)
+    bottleneck: float | None = None
+    waiting_reasons: dict[str, WaitReason] = field(default_factory=dict)
+    certificate: dict[str, Any] = field(default_factory=lambda: {"verified": False})
+    status: str = "optimal"
+    running: list[RunningJob] = field(default_factory=list)
+    unavailable_machines: list[str] = field(default_factory=list)
+    result: Any = field(default=None, repr=False, compare=False)
+    problem: Any = field(default=None, repr=False, compare=False)
+
+    # ---- shop-terms views ---------------------------------------------------------------
+    @property
+    def verified(self) -> bool:
+        return bool(self.certificate.get("verified"))
+
+    def machine_of(self, job: str) -> str | None:
+        """Machine the job runs on or is dispatched to (None if it waits or is unknown)."""
+        for r in self.running:
+            if r.job == job:
+                return r.machine
+        for a in self.assignments:
+            if a.job == job:
+                return a.machine
+        return None
+
+    def by_machine(self) -> dict[str, list[tuple[str, float | None, bool]]]:
+        """Machine name -> list of ``(job, value, already_running)``: running jobs first."""
+        out: dict[str, list[tuple[str, float | None, bool]]] = {}
+        for r in self.running:
+            out.setdefault(r.machine, []).append((r.job, r.cost, True))
+        for a in self.assignments:
+            out.setdefault(a.machine, []).append((a.job, a.cost, False))
+        return out
+
+    def jobs_on(self, machine: str) -> list[str]:
+        return [j for j, _, _ in self.by_machine().get(machine, [])]
+
+    def in_force(self, shop) -> dict[str, list[str]]:
+        """This plan as a shop's ``plan_in_force``: machine id -> job ids (running first)."""
+        out: dict[str, list[str]] = {}
+        for machine, entries in self.by_machine().items():
+            out[shop.machine_by_name(machine).id] = [shop.job_by_name(j).id for j, _, _ in entries]
+        return out
+
+    # ---- JSON ---------------------------------------------------------------------------
+    def to_json(self) -> dict[str, Any]:
+        """The solve output contract (see the module docstring)."""
+        data: dict[str, Any] = {
+            "status": self.status,
+            "objective": self.objective,
+            "total": json_number(self.total),
+            "assignments": [{"job": a.job, "machine": a.machine, "cost": json_number(a.cost)}
+                            for a in self.assignments],
+            "waiting_jobs": list(self.waiting_jobs),
+            "idle_machines": list(self.idle_machines),
+            "bottleneck": None if self.bottleneck is None else json_number(self.bottleneck),
+            "waiting_reasons": {
+                j: {"competing_jobs": list(w.competing_jobs), "machines": list(w.machines),
+                    "text": w.text} for j, w in self.waiting_reasons.items()},
+            "certificate": dict(self.certificate),
+        }
+        if self.running:
+            data["running"] = [{"job": r.job, "machine": r.machine, "since": r.since,
+                                "cost": None if r.cost is None else json_number(r.cost)}
+                               for r in self.running]
+        if self.unavailable_machines:
+            data["unavailable_machines"] = list(self.unavailable_machines)
+        return data
+
+    @classmethod
+    def from_json(cls, data: Any, source: str = "plan") -> "Plan":
+        """Read a solve-contract object back. Raises :class:`PlanFormatError` naming the field."""
+        def fail(where: str, msg: str) -> PlanFormatError:
+            return PlanFormatError(f"{source}: {where}: {msg}")
+
+        def num(x: Any, where: str, optional: bool = False) -> float | None:
+            if x is None and optional:
+                return None
+            if isinstance(x, bool) or not isinstance(x, (int, float)) or not math.isfinite(x):
+                raise fail(where, f"expected a number, got {x!r}")
+            return float(x)
+
+        def text(x: Any, where: str) -> str:
+            if not isinstance(x, str):
+                raise fail(where, f"expected a text, got {x!r}")
+            return x
+
+        def names(x: Any, where: str) -> list[str]:
+            if not isinstance(x, list):
+                raise fail(where, f"expected a list of names, got {type(x).__name__}")
+            return [text(v, f"{where}[{i}]") for i, v in enumerate(x)]
+
+        def obj(x: Any, where: str) -> dict:
+            if not isinstance(x, dict):
+                raise fail(where, f"expected an object, got {type(x).__name__}")
+            return x
+
+        data = obj(data, "top level")
+        for key in ("status", "objective", "total", "assignments", "waiting_jobs", "idle_machines"):
+            if key not in data:
+                raise fail(f"field '{key}'", "is missing")
+        objective = text(data["objective"], "field 'objective'")
+        if objective not in OBJECTIVES:
+            raise fail("field 'objective'", f"{objective!r} is not one of {', '.join(OBJECTIVES)}")
+        if not isinstance(data["assignments"], list):
+            raise fail("field 'assignments'", "expected a list")
+        assignments = []
+        for i, a in enumerate(data["assignments"]):
+            where = f"assignments[{i}]"
+            a = obj(a, where)
+            for key in ("job", "machine", "cost"):
+                if key not in a:
+                    raise fail(f"{where}, field '{key}'", "is missing")
+            assignments.append(Assignment(text(a["job"], f"{where}, field 'job'"),
+                                          text(a["machine"], f"{where}, field 'machine'"),
+                                          num(a["cost"], f"{where}, field 'cost'")))
+        reasons = {}
+        for job, w in obj(data.get("waiting_reasons", {}), "field 'waiting_reasons'").items():
+            where = f"waiting_reasons[{job!r}]"
+            w = obj(w, where)
+            reasons[job] = WaitReason(names(w.get("competing_jobs", []), f"{where}, field 'competing_jobs'"),
+                                      names(w.get("machines", []), f"{where}, field 'machines'"),
+                                      text(w.get("text", ""), f"{where}, field 'text'"))
+        running = []
+        for i, r in enumerate(data.get("running", []) or []):
+            where = f"running[{i}]"
+            r = obj(r, where)
+            since = r.get("since")
+            if since is not None:
+                since = text(since, f"{where}, field 'since'")
+            running.append(RunningJob(text(r.get("job"), f"{where}, field 'job'"),
+                                      text(r.get("machine"), f"{where}, field 'machine'"),
+                                      since, num(r.get("cost"), f"{where}, field 'cost'", True)))
+        cert = obj(data.get("certificate", {"verified": False}), "field 'certificate'")
+        return cls(
+            status=text(data["status"], "field 'status'"),
+            objective=objective,
+            total=num(data["total"], "field 'total'"),
+            assignments=assignments,
+            waiting_jobs=names(data["waiting_jobs"], "field 'waiting_jobs'"),
+            idle_machines=names(data["idle_machines"], "field 'idle_machines'"),
+            bottleneck=num(data.get("bottleneck"), "field 'bottleneck'", True),
+            waiting_reasons=reasons,
+            certificate=dict(cert),
+            running=running,
+            unavailable_machines=names(data.get("unavailable_machines", []),
+                                       "field 'unavailable_machines'"),
+        )

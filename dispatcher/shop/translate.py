@@ -1,0 +1,220 @@
+"""Turn a shop into an engine problem, solve it, and read the result back as a Plan.
+
+The rules (the definition the tests check by brute force):
+
+* done jobs take no part; running jobs stay on their machine and use up one of its slots;
+* only machines that are ``up`` take jobs; an up machine with ``slots`` k and r running jobs
+  offers k - r identical columns (a machine that can take several jobs at once);
+* a ``must`` pin restricts the job to that machine's columns and makes it must-run; a
+  ``must_not`` pin removes the pair; rush jobs are must-run;
+* every waiting job's ``wait_penalty`` is the value of leaving it waiting;
+* the engine (:func:`dispatcher.engine.solve`) then places as many of the waiting jobs as
+  those columns permit, all must-run jobs among them, at the best total.
+"""
+
+from __future__ import annotations
+
+from collections.abc import Iterable
+from dataclasses import dataclass
+
+import numpy as np
+
+from dispatcher.engine import DispatchResult, InfeasibleError, solve
+
+from .model import DONE, MUST, MUST_NOT, RUNNING, UP, Shop
+from .plan import Assignment, Plan, RunningJob, WaitReason
+from .validate import check_shop
+
+
+class ShopInfeasibleError(Exception):
+    """Must-run (rush or pinned) jobs cannot all be placed. Names jobs and machines."""
+
+    def __init__(self, message: str, jobs: list[str], machines: list[str]):
+        super().__init__(message)
+        self.jobs = jobs
+        self.machines = machines
+
+
+@dataclass
+class ShopProblem:
+    """The engine problem of a shop.
+
+    Rows are the waiting jobs (``rows[i]`` is an index into ``shop.jobs``); columns are free
+    machine slots (``columns[c]`` is an index into ``shop.machines``; a machine with two free
+    slots appears twice). ``values``/``allowed``/``wait_penalty``/``must_run`` are exactly
+    what is passed to :func:`dispatcher.engine.solve`.
+    """
+
+    shop: Shop
+    rows: list[int]
+    columns: list[int]
+    values: np.ndarray
+    allowed: np.ndarray
+    wait_penalty: np.ndarray
+    must_run: np.ndarray
+    running: list[tuple[int, int]]
+    unavailable: list[int]
+
+    def machine_name(self, column: int) -> str:
+        return self.shop.machines[self.columns[column]].name
+
+    def job_name(self, row: int) -> str:
+        return self.shop.jobs[self.rows[row]].name
+
+
+def build_problem(shop: Shop, *, extra_must_run: Iterable[str] = (), source: str = "") -> ShopProblem:
+    """The engine problem for ``shop`` (checked first: raises :class:`ShopError`).
+
+    ``extra_must_run`` names further jobs (by name) that must not wait this round.
+    """
+    check_shop(shop, source)
+    values_all, allowed_all = shop.matrix()
+    mindex = {m.id: k for k, m in enumerate(shop.machines)}
+    running: list[tuple[int, int]] = []
+    used = np.zeros(len(shop.machines), dtype=int)
+    for i, j in enumerate(shop.jobs):
+        if j.state == RUNNING:
+            k = mindex[j.machine]
+            running.append((i, k))
+            used[k] += 1
+    columns: list[int] = []
+    unavailable: list[int] = []
+    for k, m in enumerate(shop.machines):
+        if m.state != UP:
+            unavailable.append(k)
+            continue
+        columns.extend([k] * max(m.slots - int(used[k]), 0))
+    rows = [i for i, j in enumerate(shop.jobs) if j.state not in (RUNNING, DONE)]
+    extra = set(extra_must_run)
+    unknown = extra - {shop.jobs[i].name for i in rows}
+    if unknown:
+        from .model import Problem, ShopError
+        raise ShopError([Problem(f"must-run job {n!r}", "is not a waiting job of this shop")
+                         for n in sorted(unknown)], source)
+
+    cols = np.array(columns, dtype=np.int64)
+    r = np.array(rows, dtype=np.int64)
+    values = values_all[np.ix_(r, cols)] if len(rows) and len(columns) else np.zeros((len(rows), len(columns)))
+    allowed = allowed_all[np.ix_(r, cols)] if len(rows) and len(columns) else np.zeros(values.shape, dtype=bool)
+    allowed = allowed.copy()
+    row_of = {shop.jobs[i].id: n for n, i in enumerate(rows)}
+    must = np.array([shop.jobs[i].rush or shop.jobs[i].name in extra for i in rows], dtype=bool)
+    for p in shop.pins:
+        n = row_of.get(p.job)
+        if n is None:
+            continue  # running or done: validation has checked the pin agrees
+        on_machine = cols == mindex[p.machine]
+        if p.kind == MUST:
+            allowed[n] &= on_machine
+            must[n] = True
+        elif p.kind == MUST_NOT:
+            allowed[n] &= ~on_machine
+    penalty = np.array([shop.jobs[i].wait_penalty for i in rows], dtype=float)
+    return ShopProblem(shop, rows, columns, values, allowed, penalty, must, running, unavailable)
+
+
+def solve_problem(problem: ShopProblem, objective: str = "total") -> DispatchResult:
+    """Run the engine on a built problem; infeasible must-run jobs raise ShopInfeasibleError."""
+    try:
+        return solve(problem.values, problem.allowed, objective=objective,
+                     wait_penalty=problem.wait_penalty, must_run=problem.must_run)
+    except InfeasibleError as exc:
+        w = exc.witness
+        jobs = [problem.job_name(int(i)) for i in w.jobs]
+        machines = _unique(problem.machine_name(int(c)) for c in w.machines)
+        slots = len(w.machines)
+        msg = (f"infeasible: must-run jobs {', '.join(jobs)} ({len(jobs)}) compete for only "
+               f"{slots} free slot(s) on: {', '.join(machines) or 'no machine'}")
+        raise ShopInfeasibleError(msg, jobs, machines) from None
+
+
+def solve_shop(shop: Shop, objective: str = "total", *, extra_must_run: Iterable[str] = (),
+               source: str = "") -> Plan:
+    """The certified plan for ``shop``: per machine its jobs, waiting jobs with reasons.
+
+    ``objective`` is ``"total"`` (least setup plus wait penalties), ``"maximize"`` (values
+    are gains) or ``"bottleneck"``. Raises :class:`ShopError` for an inconsistent shop and
+    :class:`ShopInfeasibleError` when rush or pinned jobs cannot all be placed.
+    """
+    problem = build_problem(shop, extra_must_run=extra_must_run, source=source)
+    result = solve_problem(problem, objective)
+    return plan_from_result(problem, result)
+
+
+def _unique(names: Iterable[str]) -> list[str]:
+    return list(dict.fromkeys(names))
+
+
+def plan_from_result(problem: ShopProblem, result: DispatchResult) -> Plan:
+    """Read an engine result on ``problem`` back into shop terms."""
+    shop = problem.shop
+    assignments = []
+    busy = np.zeros(len(shop.machines), dtype=bool)
+    for n, c in enumerate(result.machine_of_job):
+        if c >= 0:
+            assignments.append(Assignment(problem.job_name(n), problem.machine_name(int(c)),
+                                          float(result.values[n, c])))
+            busy[problem.columns[int(c)]] = True
+    running = []
+    for i, k in problem.running:
+        j, m = shop.jobs[i], shop.machines[k]
+        busy[k] = True
+        running.append(RunningJob(j.name, m.name, j.since.isoformat() if j.since else None,
+                                  shop.value(j.id, m.id)))
+    unavailable = set(problem.unavailable)
+    idle = [m.name for k, m in enumerate(shop.machines) if not busy[k] and k not in unavailable]
+    waiting = [problem.job_name(int(n)) for n in result.waiting_jobs]
+    reasons = {problem.job_name(int(n)): _wait_reason(problem, result, int(n))
+               for n in result.waiting_jobs}
+    return Plan(
+        objective=result.objective,
+        total=float(result.total),
+        assignments=assignments,
+        waiting_jobs=waiting,
+        idle_machines=idle,
+        bottleneck=result.bottleneck,
+        waiting_reasons=reasons,
+        certificate={"verified": bool(result.verify())},
+        running=running,
+        unavailable_machines=[shop.machines[k].name for k in problem.unavailable],
+        result=result,
+        problem=problem,
+    )
+
+
+def _wait_reason(problem: ShopProblem, result: DispatchResult, row: int) -> WaitReason:
+    """Hall witness of a waiting job in shop names, with a sentence a supervisor can check."""
+    w = result.wait_reason(row)
+    jobs = [problem.job_name(int(i)) for i in w.jobs]
+    machines = _unique(problem.machine_name(int(c)) for c in w.machines)
+    name = problem.job_name(row)
+    if len(w.machines) == 0:
+        text = f"{name}: no available machine can run it" + _why_no_machine(problem, row)
+    elif len(machines) == len(w.machines):
+        text = (f"{name}: {len(jobs)} jobs can only run on {len(machines)} machine(s) "
+                f"({', '.join(machines)}), so {w.deficiency} of them must wait")
+    else:
+        text = (f"{name}: {len(jobs)} jobs can only use {len(w.machines)} free slot(s) on "
+                f"{len(machines)} machine(s) ({', '.join(machines)}), so {w.deficiency} of "
+                "them must wait")
+    return WaitReason(jobs, machines, text)
+
+
+def _why_no_machine(problem: ShopProblem, row: int) -> str:
+    """Which machines could run the job but cannot take it now (down, full, pinned away)."""
+    shop = problem.shop
+    job = shop.jobs[problem.rows[row]]
+    free = set(problem.columns)
+    notes = []
+    for k, m in enumerate(shop.machines):
+        if shop.value(job.id, m.id) is None:
+            continue
+        if m.state != UP:
+            notes.append(f"{m.name} is {'under maintenance' if m.state == 'maintenance' else m.state}")
+        elif k not in free:
+            notes.append(f"{m.name} is full with running jobs")
+        elif any(p.job == job.id and p.machine == m.id and p.kind == MUST_NOT for p in shop.pins):
+            notes.append(f"{m.name} is pinned away")
+        elif any(p.job == job.id and p.kind == MUST and p.machine != m.id for p in shop.pins):
+            notes.append(f"{m.name} is not its pinned machine")
+    return f" ({'; '.join(notes)})" if notes else ""

@@ -1,0 +1,209 @@
+"""Consistency checks of a :class:`~dispatcher.shop.model.Shop`, each problem with its place.
+
+The document reader checks types and fields; this module checks what only the whole shop
+can tell: unique ids and names, references that point somewhere, states that agree with
+each other (a running job needs a machine that is up and has a slot for it), and pins that
+can all hold at once (no pair both forced and forbidden, no job forced onto two machines,
+no machine forced to take more jobs than its free slots).
+"""
+
+from __future__ import annotations
+
+import math
+from collections import Counter, defaultdict
+
+from .model import (
+    DONE,
+    JOB_STATES,
+    MACHINE_STATES,
+    MUST,
+    MUST_NOT,
+    PIN_KINDS,
+    RUNNING,
+    UNIT_KINDS,
+    Problem,
+    Shop,
+    ShopError,
+)
+
+
+def _finite(x: object) -> bool:
+    return isinstance(x, (int, float)) and not isinstance(x, bool) and math.isfinite(x)
+
+
+def shop_problems(shop: Shop) -> list[Problem]:
+    """Every problem found in ``shop`` (empty list when it can be solved as it is)."""
+    out: list[Problem] = []
+    add = lambda where, msg: out.append(Problem(where, msg))  # noqa: E731
+
+    if shop.unit.kind not in UNIT_KINDS:
+        add("unit, field 'kind'", f"{shop.unit.kind!r} is not one of {', '.join(UNIT_KINDS)}")
+    if not _finite(shop.shift.hours) or shop.shift.hours <= 0:
+        add("shift, field 'hours'", f"{shop.shift.hours!r} must be a number > 0")
+    if not _finite(shop.move_penalty) or shop.move_penalty < 0:
+        add("shop, field 'move_penalty'", f"{shop.move_penalty!r} must be a number >= 0")
+    if not shop.jobs:
+        add("jobs", "the shop has no jobs; add at least one job")
+    if not shop.machines:
+        add("machines", "the shop has no machines; add at least one machine")
+
+    for what, items in (("job", shop.jobs), ("machine", shop.machines)):
+        for ident, n in Counter(x.id for x in items).items():
+            if n > 1:
+                add(f"{what} id {ident!r}", f"is used by {n} {what}s; ids must be unique")
+        for name, n in Counter(x.name for x in items).items():
+            if n > 1:
+                add(f"{what} name {name!r}", f"is used by {n} {what}s; names must be unique")
+        for x in items:
+            if not isinstance(x.id, str) or not x.id.strip():
+                add(f"{what} {x.name!r}, field 'id'", "must be a non-empty text")
+            if not isinstance(x.name, str) or not x.name.strip():
+                add(f"{what} id {x.id!r}, field 'name'", "must be a non-empty text")
+
+    machine_ids = {m.id for m in shop.machines}
+    job_ids = {j.id for j in shop.jobs}
+    running_on: dict[str, list[str]] = defaultdict(list)
+
+    for m in shop.machines:
+        where = shop.describe_machine(m.id)
+        if m.state not in MACHINE_STATES:
+            add(f"{where}, field 'state'", f"{m.state!r} is not one of {', '.join(MACHINE_STATES)}")
+        if isinstance(m.slots, bool) or not isinstance(m.slots, int) or m.slots < 1:
+            add(f"{where}, field 'slots'", f"{m.slots!r} must be a whole number >= 1")
+        if m.shift_hours is not None and (not _finite(m.shift_hours) or m.shift_hours < 0):
+            add(f"{where}, field 'shift_hours'", f"{m.shift_hours!r} must be a number >= 0")
+        if not _finite(m.speed_factor) or m.speed_factor <= 0:
+            add(f"{where}, field 'speed_factor'", f"{m.speed_factor!r} must be a number > 0")
+
+    for j in shop.jobs:
+        where = shop.describe_job(j.id)
+        if j.state not in JOB_STATES:
+            add(f"{where}, field 'state'", f"{j.state!r} is not one of {', '.join(JOB_STATES)}")
+        for fname in ("wait_penalty",):
+            v = getattr(j, fname)
+            if not _finite(v) or v < 0:
+                add(f"{where}, field '{fname}'", f"{v!r} must be a number >= 0")
+        for fname in ("move_penalty", "run_hours"):
+            v = getattr(j, fname)
+            if v is not None and (not _finite(v) or v < 0):
+                add(f"{where}, field '{fname}'", f"{v!r} must be a number >= 0")
+        if j.state == RUNNING:
+            if j.machine is None:
+                add(f"{where}, field 'machine'", "a running job needs the machine it runs on")
+            elif j.machine not in machine_ids:
+                add(f"{where}, field 'machine'", f"names unknown machine id {j.machine!r}")
+            else:
+                running_on[j.machine].append(j.id)
+                m = shop.machine(j.machine)
+                if m.state != "up":
+                    add(f"{where}, field 'machine'",
+                        f"is running on {shop.describe_machine(m.id)}, which is {m.state}; "
+                        "set the job back to waiting (or done) or the machine back up")
+        elif j.machine is not None:
+            add(f"{where}, field 'machine'", f"only a running job has a machine (state is {j.state})")
+
+    for mid, jobs in running_on.items():
+        m = shop.machine(mid)
+        if isinstance(m.slots, int) and len(jobs) > m.slots:
+            add(f"{shop.describe_machine(mid)}, field 'slots'",
+                f"{len(jobs)} jobs are running on it ({', '.join(shop.job(j).name for j in jobs)}) "
+                f"but it has {m.slots} slot(s)")
+
+    for (jid, mid), v in shop.grid.items():
+        where = f"grid, {shop.describe_job(jid)}, {shop.describe_machine(mid)}"
+        if jid not in job_ids:
+            add(where, f"names unknown job id {jid!r}")
+        if mid not in machine_ids:
+            add(where, f"names unknown machine id {mid!r}")
+        if not _finite(v) or v < 0:
+            add(where, f"value {v!r} must be a number >= 0 (leave the cell out when the "
+                "machine cannot run the job)")
+    for (jid, mid), v in shop.hours.items():
+        where = f"hours, {shop.describe_job(jid)}, {shop.describe_machine(mid)}"
+        if jid not in job_ids or mid not in machine_ids:
+            add(where, "names an unknown job or machine id")
+        if not _finite(v) or v < 0:
+            add(where, f"{v!r} must be a number >= 0")
+
+    out.extend(pin_problems(shop, running_on))
+
+    placed: dict[str, str] = {}
+    for mid, jids in shop.plan_in_force.items():
+        where = f"plan_in_force, {shop.describe_machine(mid)}"
+        if mid not in machine_ids:
+            add(where, f"names unknown machine id {mid!r}")
+        for jid in jids:
+            if jid not in job_ids:
+                add(where, f"names unknown job id {jid!r}")
+            elif jid in placed:
+                add(where, f"{shop.describe_job(jid)} is also planned on "
+                    f"{shop.describe_machine(placed[jid])}")
+            placed[jid] = mid
+    return out
+
+
+def pin_problems(shop: Shop, running_on: dict[str, list[str]]) -> list[Problem]:
+    """Pins naming unknown ids, contradicting each other, or over-filling a machine."""
+    out: list[Problem] = []
+    machine_ids = {m.id for m in shop.machines}
+    job_ids = {j.id for j in shop.jobs}
+    forced: dict[str, list[str]] = defaultdict(list)  # job -> machines it must go to
+    kinds: dict[tuple[str, str], set[str]] = defaultdict(set)
+    for n, p in enumerate(shop.pins, start=1):
+        where = f"pin {n} ({shop.describe_job(p.job)} -> {shop.describe_machine(p.machine)})"
+        ok = True
+        if p.kind not in PIN_KINDS:
+            out.append(Problem(f"{where}, field 'kind'", f"{p.kind!r} is not one of {', '.join(PIN_KINDS)}"))
+            ok = False
+        if p.job not in job_ids:
+            out.append(Problem(f"{where}, field 'job'", f"names unknown job id {p.job!r}"))
+            ok = False
+        if p.machine not in machine_ids:
+            out.append(Problem(f"{where}, field 'machine'", f"names unknown machine id {p.machine!r}"))
+            ok = False
+        if not ok:
+            continue
+        kinds[(p.job, p.machine)].add(p.kind)
+        job, machine = shop.job(p.job), shop.machine(p.machine)
+        if p.kind != MUST or job.state == DONE:
+            continue
+        if job.state == RUNNING:
+            if job.machine != p.machine:
+                out.append(Problem(where, f"the job is already running on "
+                                   f"{shop.describe_machine(job.machine)}"))
+            continue
+        if p.machine not in {m for m in forced[p.job]}:
+            forced[p.job].append(p.machine)
+        if machine.state != "up":
+            out.append(Problem(where, f"the machine is {machine.state}; it can take no job"))
+        if (p.job, p.machine) not in shop.grid:
+            out.append(Problem(where, "the grid says this machine cannot run this job"))
+
+    for (jid, mid), ks in kinds.items():
+        if ks == {MUST, MUST_NOT}:
+            out.append(Problem(f"pins on {shop.describe_job(jid)} and {shop.describe_machine(mid)}",
+                               "the job is pinned both to and away from this machine"))
+    onto: dict[str, list[str]] = defaultdict(list)
+    for jid, mids in forced.items():
+        if len(mids) > 1:
+            out.append(Problem(f"pins on {shop.describe_job(jid)}",
+                               "the job is pinned to more than one machine: "
+                               + ", ".join(shop.machine(m).name for m in mids)))
+        for mid in mids:
+            onto[mid].append(jid)
+    for mid, jids in onto.items():
+        m = shop.machine(mid)
+        free = (m.slots if isinstance(m.slots, int) else 1) - len(running_on.get(mid, []))
+        if len(jids) > free:
+            out.append(Problem(
+                f"pins on {shop.describe_machine(mid)}",
+                f"{len(jids)} jobs are pinned to it ({', '.join(shop.job(j).name for j in jids)}) "
+                f"but it has {max(free, 0)} free slot(s)"))
+    return out
+
+
+def check_shop(shop: Shop, source: str = "") -> None:
+    """Raise :class:`ShopError` listing every problem, if there is any."""
+    problems = shop_problems(shop)
+    if problems:
+        raise ShopError(problems, source)
