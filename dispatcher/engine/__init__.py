@@ -13,6 +13,7 @@ from .assignment import (
     solve,
 )
 from .certificate import Certificate, CertificateError
+from .fill_shift import ShiftInfeasibleError, ShiftPlan, ShiftSearchError, fill_shift
 from .matching import HallWitness
 
 __all__ = [
@@ -24,5 +25,9 @@ __all__ = [
     "DispatchResult",
     "HallWitness",
     "InfeasibleError",
+    "ShiftInfeasibleError",
+    "ShiftPlan",
+    "ShiftSearchError",
+    "fill_shift",
     "solve",
 ]
