@@ -202,12 +202,20 @@ def networkx_reference(values, allowed=None, penalty=None, must=None, objective=
     ok, size, total = _networkx_lexicographic(values, allowed, penalty, must, False)
     if not ok or size == 0:
         return Reference(ok, size, total)
-    for level in np.unique(values[allowed]):
-        ok, placed, total = _networkx_lexicographic(values, allowed & (values <= level),
-                                                    penalty, must, False)
+    # Whether a threshold works only grows with the threshold: bisect over the levels.
+    levels = np.unique(values[allowed])
+    lo, hi = 0, len(levels) - 1  # levels[hi] (every allowed pair) always works
+    while lo < hi:
+        mid = (lo + hi) // 2
+        ok, placed, _ = _networkx_lexicographic(values, allowed & (values <= levels[mid]),
+                                                penalty, must, False)
         if ok and placed == size:
-            return Reference(True, placed, total, float(level))
-    return Reference(False)  # pragma: no cover - the top level always works
+            hi = mid
+        else:
+            lo = mid + 1
+    ok, placed, total = _networkx_lexicographic(values, allowed & (values <= levels[hi]),
+                                                penalty, must, False)
+    return Reference(ok and placed == size, placed, total, float(levels[hi]))
 
 
 # --------------------------------------------------------------------------- checks
