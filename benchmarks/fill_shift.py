@@ -75,7 +75,7 @@ def main() -> int:
     optima = {name: [int(v) for v in opt.split()] for name, opt in
               re.findall(r"^\|\s*(gap\d\.txt)\s*\|[^|]*\|([\d\s]+)\|\s*$", readme, re.M)}
     print("seconds for all five sets of a file, best of", max(1, args.repeat), "runs")
-    print(f"{'file':<9} {'size':>7} {"fill_shift s":>13} {"scipy milp s":>13} {'ratio':>6}  optima")
+    print(f"{'file':<9} {'size':>7} {'fill_shift s':>13} {'scipy milp s':>13} {'ratio':>6}  optima")
     ok = True
     for k in range(1, 9):
         name = f"gap{k}.txt"
