@@ -1,5 +1,5 @@
 """Sub-commands of the ``dispatcher`` command line, one module each."""
 
-from dispatcher.commands import solve
+from dispatcher.commands import convert, history, solve
 
-COMMAND_MODULES = [solve]
+COMMAND_MODULES = [solve, convert, history]

@@ -11,6 +11,7 @@ from dispatcher.commands.common import (
     print_json,
     print_plan,
 )
+from dispatcher.commands.shop_input import is_shop_document, run_shop
 from dispatcher.engine import DispatchInputError, InfeasibleError, solve
 from dispatcher.io.grid import GridFileError, read_grid
 
@@ -18,7 +19,8 @@ from dispatcher.io.grid import GridFileError, read_grid
 def register(sub: argparse._SubParsersAction) -> None:
     p = sub.add_parser("solve", help="solve a grid file and print the plan",
                        description="Solve a jobs x machines grid (.csv or .xlsx) and print the plan.")
-    p.add_argument("grid", metavar="GRID", help="grid file (.csv, .tsv, .txt or .xlsx)")
+    p.add_argument("grid", metavar="GRID", help="grid file (.csv, .tsv, .txt or .xlsx) "
+                   "or shop document (.dshop)")
     mode = p.add_mutually_exclusive_group()
     mode.add_argument("--maximize", action="store_true", help="values are gains: maximise the total")
     mode.add_argument("--bottleneck", action="store_true",
@@ -55,6 +57,8 @@ def infeasible_message(exc: InfeasibleError, jobs: list[str], machines: list[str
 
 
 def run(args: argparse.Namespace) -> int:
+    if is_shop_document(args.grid):
+        return run_shop(args.grid, objective_of(args), args.must_run, args.json)
     try:
         table = read_grid(args.grid)
     except GridFileError as exc:

@@ -1,0 +1,87 @@
+"""``dispatcher convert IN OUT``: grid file <-> shop document, and plan export.
+
+* ``convert GRID.csv|.xlsx SHOP.dshop``: a new shop (all jobs waiting, all machines up);
+* ``convert GRID.csv SHOP.dshop --into OLD.dshop``: merge the grid into an existing shop,
+  matching jobs and machines by name, and report what was added, changed and unmatched;
+* ``convert SHOP.dshop GRID.csv|.xlsx``: the shop's grid as a grid file;
+* ``convert SHOP.dshop PLAN.csv|.xlsx --plan``: the shop's solved plan as a table.
+
+Nothing is written when the input has a problem; files are replaced in one step.
+"""
+
+from __future__ import annotations
+
+import argparse
+import sys
+from pathlib import Path
+
+from dispatcher.commands.common import CliError
+from dispatcher.commands.shop_input import is_shop_document, read_shop_arg, solve_shop_arg
+from dispatcher.io.grid import GRID_SUFFIXES, GridFileError
+from dispatcher.io.shopfile import ShopFileError, save_shop
+from dispatcher.io.spreadsheet import (
+    EXPORT_SUFFIXES,
+    ExportError,
+    export_grid,
+    export_plan,
+    import_grid_file,
+)
+
+
+def register(sub: argparse._SubParsersAction) -> None:
+    p = sub.add_parser("convert", help="turn a grid file into a shop document and back",
+                       description="Convert a grid file (.csv, .tsv, .txt, .xlsx) into a shop "
+                       "document (.dshop), or a shop document into a grid or plan table "
+                       "(.csv, .xlsx).")
+    p.add_argument("source", metavar="IN", help="grid file or shop document to read")
+    p.add_argument("target", metavar="OUT", help="file to write (.dshop, .csv or .xlsx)")
+    p.add_argument("--into", metavar="SHOP", default=None,
+                   help="merge the grid into this existing shop document (names matched)")
+    p.add_argument("--plan", action="store_true",
+                   help="from a shop document: write its solved plan instead of its grid")
+    p.set_defaults(func=run)
+
+
+def run(args: argparse.Namespace) -> int:
+    src, out = args.source, args.target
+    out_is_shop = is_shop_document(out)
+    if is_shop_document(src):
+        if out_is_shop:
+            raise CliError(f"{out}: both files are shop documents; write a .csv or .xlsx file")
+        if Path(out).suffix.lower() not in EXPORT_SUFFIXES:
+            raise CliError(f"{out}: unsupported extension {Path(out).suffix or '(none)'!r}; "
+                           f"expected one of {', '.join(EXPORT_SUFFIXES)}")
+        if args.into:
+            raise CliError("--into applies when reading a grid file into a shop document")
+        shop = read_shop_arg(src)
+        try:
+            if args.plan:
+                export_plan(solve_shop_arg(shop, src, "total"), out, shop)
+            else:
+                export_grid(shop, out)
+                print("note: a grid file holds names and values only; states, pins, rush flags "
+                      "and penalties stay in the shop document", file=sys.stderr)
+        except ExportError as exc:
+            raise CliError(str(exc)) from None
+        return 0
+
+    if Path(src).suffix.lower() not in GRID_SUFFIXES:
+        raise CliError(f"{src}: unsupported extension {Path(src).suffix or '(none)'!r}; expected a "
+                       f"shop document (.dshop) or a grid file ({', '.join(GRID_SUFFIXES)})")
+    if not out_is_shop:
+        raise CliError(f"{out}: a grid file converts to a shop document; name it *.dshop")
+    if args.plan:
+        raise CliError("--plan applies when reading a shop document")
+    existing = read_shop_arg(args.into) if args.into else None
+    try:
+        report = import_grid_file(src, existing)
+    except GridFileError as exc:
+        raise CliError(str(exc)) from None
+    if existing is None:
+        report.shop.description = f"Converted from the grid file {Path(src).name}."
+    try:
+        save_shop(report.shop, out)
+    except ShopFileError as exc:
+        raise CliError(str(exc)) from None
+    print(report.summary())
+    return 0

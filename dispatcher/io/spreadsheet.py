@@ -1,0 +1,245 @@
+"""Spreadsheets and shops: import a grid into a shop, export a shop's grid and plan.
+
+Import reads the grid layout of :mod:`dispatcher.io.grid` (CSV, XLSX cell values only, or a
+tab-separated block pasted from a spreadsheet: all through the same parser,
+:func:`~dispatcher.io.grid.parse_grid_text` / :func:`~dispatcher.io.grid.read_grid`) and
+merges it into a new or an existing shop, matching jobs and machines by name. It never
+changes the shop it is given: it returns a new shop and a report of what was added,
+changed and left unmatched, so the caller can show the report and keep or drop the result.
+
+Export writes with pandas (``to_csv``, and ``to_excel`` through openpyxl), through a
+temporary file in the same folder replaced in one step, so an existing file is never left
+half-written.
+"""
+
+from __future__ import annotations
+
+import os
+import tempfile
+from dataclasses import dataclass, field
+from pathlib import Path
+
+import numpy as np
+import pandas as pd
+
+from dispatcher.io.grid import GridFileError, GridTable, parse_grid_text, read_grid
+from dispatcher.shop.model import Job, Machine, Shop, shop_from_grid
+from dispatcher.shop.plan import Plan, json_number
+
+EXPORT_SUFFIXES = (".csv", ".xlsx")
+CANNOT_RUN_MARK = "x"
+
+
+class ExportError(OSError):
+    """A table could not be written; the message names the file."""
+
+
+@dataclass
+class ImportReport:
+    """What an import did, by name: new jobs and machines, changed cells, names not in the table."""
+
+    shop: Shop
+    added_jobs: list[str] = field(default_factory=list)
+    added_machines: list[str] = field(default_factory=list)
+    changed_cells: list[tuple[str, str, float | None, float | None]] = field(default_factory=list)
+    unmatched_jobs: list[str] = field(default_factory=list)
+    unmatched_machines: list[str] = field(default_factory=list)
+
+    def summary(self) -> str:
+        """A few lines for a message box or the terminal."""
+        def names(xs: list[str]) -> str:
+            return ", ".join(xs[:8]) + (f" and {len(xs) - 8} more" if len(xs) > 8 else "")
+        lines = [f"{len(self.added_jobs)} job(s) added" + (f": {names(self.added_jobs)}" if self.added_jobs else ""),
+                 f"{len(self.added_machines)} machine(s) added"
+                 + (f": {names(self.added_machines)}" if self.added_machines else ""),
+                 f"{len(self.changed_cells)} value(s) changed"]
+        if self.unmatched_jobs:
+            lines.append(f"{len(self.unmatched_jobs)} job(s) of the shop not in the table, kept as "
+                         f"they were: {names(self.unmatched_jobs)}")
+        if self.unmatched_machines:
+            lines.append(f"{len(self.unmatched_machines)} machine(s) of the shop not in the table, "
+                         f"kept as they were: {names(self.unmatched_machines)}")
+        return "\n".join(lines)
+
+
+def _next_id(prefix: str, taken: set[str]) -> str:
+    n = len(taken) + 1
+    while f"{prefix}{n}" in taken:
+        n += 1
+    return f"{prefix}{n}"
+
+
+def import_table(table: GridTable, shop: Shop | None = None, *, name: str = "") -> ImportReport:
+    """Merge a grid table into a copy of ``shop`` (or a new shop when None).
+
+    Jobs and machines are matched by name (exact, after trimming). New names are added as
+    waiting jobs and working one-slot machines. Cells of the table replace the shop's
+    values for matched pairs (an ``x`` / empty cell makes the pair cannot-run); pairs and
+    names the table does not mention are kept unchanged.
+    """
+    if shop is None:
+        new = shop_from_grid(table.jobs, table.machines, table.values, table.allowed, name=name)
+        return ImportReport(new, added_jobs=list(table.jobs), added_machines=list(table.machines))
+    out = shop.copy()
+    report = ImportReport(out)
+    jobs = {j.name: j for j in out.jobs}
+    machines = {m.name: m for m in out.machines}
+    job_ids = {j.id for j in out.jobs}
+    machine_ids = {m.id for m in out.machines}
+    for n in table.jobs:
+        if n not in jobs:
+            j = Job(id=_next_id("J", job_ids), name=n)
+            job_ids.add(j.id)
+            out.jobs.append(j)
+            jobs[n] = j
+            report.added_jobs.append(n)
+    for n in table.machines:
+        if n not in machines:
+            m = Machine(id=_next_id("M", machine_ids), name=n)
+            machine_ids.add(m.id)
+            out.machines.append(m)
+            machines[n] = m
+            report.added_machines.append(n)
+    for i, jn in enumerate(table.jobs):
+        jid = jobs[jn].id
+        for k, mn in enumerate(table.machines):
+            mid = machines[mn].id
+            old = out.grid.get((jid, mid))
+            new = float(table.values[i, k]) if table.allowed[i, k] else None
+            if old != new:
+                if new is None:
+                    del out.grid[(jid, mid)]
+                else:
+                    out.grid[(jid, mid)] = new
+                if jn not in report.added_jobs and mn not in report.added_machines:
+                    report.changed_cells.append((jn, mn, old, new))
+    in_table_j, in_table_m = set(table.jobs), set(table.machines)
+    report.unmatched_jobs = [j.name for j in shop.jobs if j.name not in in_table_j]
+    report.unmatched_machines = [m.name for m in shop.machines if m.name not in in_table_m]
+    return report
+
+
+def import_grid_file(path: str | os.PathLike, shop: Shop | None = None) -> ImportReport:
+    """Read a grid file (.csv, .tsv, .txt, .xlsx) and merge it. Raises GridFileError."""
+    table = read_grid(path)
+    return import_table(table, shop, name=Path(path).stem)
+
+
+def import_clipboard(text: str, shop: Shop | None = None) -> ImportReport:
+    """Merge a pasted block (tab-separated, as spreadsheets copy it). Raises GridFileError."""
+    return import_table(parse_grid_text(text, "pasted block"), shop)
+
+
+def grid_frame(shop: Shop) -> pd.DataFrame:
+    """The shop's grid as a table: jobs as rows, machines as columns, ``x`` = cannot run."""
+    values, allowed = shop.matrix()
+    cells = np.where(allowed, values.astype(object), CANNOT_RUN_MARK)
+    frame = pd.DataFrame(cells, index=pd.Index(shop.job_names(), name=shop.unit.label()),
+                         columns=shop.machine_names())
+    return frame.map(lambda v: int(v) if isinstance(v, float) and v.is_integer() else v)
+
+
+def grid_table(shop: Shop) -> GridTable:
+    """The shop's grid as a :class:`GridTable` (what a grid file would hold)."""
+    values, allowed = shop.matrix()
+    return GridTable(shop.job_names(), shop.machine_names(), values, allowed, shop.unit.label())
+
+
+def clipboard_text(shop: Shop) -> str:
+    """The grid as a tab-separated block, which :func:`import_clipboard` reads back."""
+    return grid_frame(shop).to_csv(sep="\t", lineterminator="\n")
+
+
+def plan_frame(plan: Plan, shop: Shop | None = None) -> pd.DataFrame:
+    """A plan as a table: one row per machine and job, then waiting jobs and idle machines."""
+    rows = []
+    for r in plan.running:
+        value = None if r.cost is None else json_number(r.cost)
+        rows.append({"machine": r.machine, "job": r.job, "value": value, "status": "running",
+                     "note": f"since {r.since}" if r.since else ""})
+    for a in plan.assignments:
+        rows.append({"machine": a.machine, "job": a.job, "value": json_number(a.cost), "status": "dispatched",
+                     "note": ""})
+    for j in plan.waiting_jobs:
+        w = plan.waiting_reasons.get(j)
+        rows.append({"machine": "", "job": j, "value": None, "status": "waiting",
+                     "note": w.text.split(": ", 1)[-1] if w else ""})
+    for m in plan.idle_machines:
+        rows.append({"machine": m, "job": "", "value": None, "status": "idle", "note": ""})
+    for m in plan.unavailable_machines:
+        state = shop.machine_by_name(m).state if shop is not None else "unavailable"
+        rows.append({"machine": m, "job": "", "value": None, "status": state, "note": ""})
+    frame = pd.DataFrame(rows, columns=["machine", "job", "value", "status", "note"], dtype=object)
+    return frame
+
+
+def plan_summary_frame(plan: Plan) -> pd.DataFrame:
+    """Totals of a plan as a two-column table."""
+    data = [("objective", plan.objective), ("total", plan.total),
+            ("bottleneck", plan.bottleneck if plan.bottleneck is not None else ""),
+            ("certificate", "checked" if plan.verified else "not checked")]
+    return pd.DataFrame(data, columns=["item", "value"])
+
+
+def _atomic_write(path: Path, write) -> None:
+    """Call ``write(tmp_path)`` then replace ``path`` in one step; clean up on failure."""
+    suffix = path.suffix.lower()
+    if suffix not in EXPORT_SUFFIXES:
+        raise ExportError(f"{path}: unsupported extension {path.suffix or '(none)'!r}; "
+                          f"expected one of {', '.join(EXPORT_SUFFIXES)}")
+    folder = path.parent if str(path.parent) else Path(".")
+    tmp = None
+    try:
+        fd, tmp = tempfile.mkstemp(prefix=f".{path.stem}.", suffix=suffix, dir=folder)
+        os.close(fd)
+        write(Path(tmp))
+        with open(tmp, "rb+") as fh:
+            os.fsync(fh.fileno())
+        os.replace(tmp, path)
+        tmp = None
+    except OSError as exc:
+        raise ExportError(f"{path}: cannot write: {exc.strerror or exc}; any previous file is "
+                          "unchanged") from None
+    finally:
+        if tmp is not None:
+            try:
+                os.unlink(tmp)
+            except OSError:
+                pass
+
+
+def export_grid(shop: Shop, path: str | os.PathLike) -> None:
+    """Write the shop's grid as CSV or XLSX (the grid file layout, readable by read_grid)."""
+    path = Path(path)
+    frame = grid_frame(shop)
+
+    def write(tmp: Path) -> None:
+        if path.suffix.lower() == ".csv":
+            frame.to_csv(tmp, encoding="utf-8")
+        else:
+            frame.to_excel(tmp, sheet_name="grid", engine="openpyxl")
+
+    _atomic_write(path, write)
+
+
+def export_plan(plan: Plan, path: str | os.PathLike, shop: Shop | None = None) -> None:
+    """Write a plan as CSV (one table) or XLSX (sheets ``plan`` and ``totals``)."""
+    path = Path(path)
+    frame = plan_frame(plan, shop)
+
+    def write(tmp: Path) -> None:
+        if path.suffix.lower() == ".csv":
+            frame.to_csv(tmp, index=False, encoding="utf-8")
+        else:
+            with pd.ExcelWriter(tmp, engine="openpyxl") as xl:
+                frame.to_excel(xl, sheet_name="plan", index=False)
+                plan_summary_frame(plan).to_excel(xl, sheet_name="totals", index=False)
+
+    _atomic_write(path, write)
+
+
+__all__ = [
+    "ExportError", "GridFileError", "ImportReport", "clipboard_text", "export_grid",
+    "export_plan", "grid_frame", "grid_table", "import_clipboard", "import_grid_file",
+    "import_table", "plan_frame", "plan_summary_frame",
+]

@@ -1,0 +1,313 @@
+"""The shop model and its translation to the engine.
+
+References outside the translation under test:
+* brute-force enumeration of every way to place the waiting jobs, straight from the
+  definition in dispatcher/shop/translate.py (up machines only, free slots, pins, rush jobs
+  placed, as many jobs placed as possible, then the best total);
+* dispatcher.engine.solve on the expanded matrix written out independently in this file.
+"""
+
+from __future__ import annotations
+
+import itertools
+import math
+import random
+from datetime import datetime
+
+import numpy as np
+import pytest
+
+from dispatcher.engine import solve
+from dispatcher.shop import (
+    DOWN,
+    MAINTENANCE,
+    MUST,
+    MUST_NOT,
+    RUNNING,
+    UP,
+    Job,
+    Machine,
+    Pin,
+    Plan,
+    Shop,
+    ShopError,
+    ShopInfeasibleError,
+    build_problem,
+    shop_from_grid,
+    shop_problems,
+    solve_shop,
+)
+
+
+def random_shop(rng: random.Random) -> Shop:
+    """A small consistent shop: states, slots, running jobs, pins, rush jobs, penalties."""
+    n_jobs, n_machines = rng.randint(1, 6), rng.randint(1, 4)
+    shop = Shop(name="random")
+    for k in range(n_machines):
+        state = rng.choices([UP, DOWN, MAINTENANCE], weights=[6, 1, 1])[0]
+        shop.machines.append(Machine(id=f"M{k}", name=f"m{k}", state=state, slots=rng.randint(1, 3)))
+    for i in range(n_jobs):
+        shop.jobs.append(Job(id=f"J{i}", name=f"j{i}", rush=rng.random() < 0.2,
+                             wait_penalty=rng.choice([0, 0, 3, 10, 40])))
+        for m in shop.machines:
+            if rng.random() < 0.75:
+                shop.grid[(f"J{i}", m.id)] = float(rng.randint(0, 20))
+    # some jobs running on up machines with room
+    for j in shop.jobs:
+        if rng.random() < 0.2:
+            room = [m for m in shop.machines if m.state == UP
+                    and sum(x.machine == m.id for x in shop.jobs) < m.slots]
+            if room:
+                j.state, j.machine, j.since = RUNNING, rng.choice(room).id, datetime(2026, 1, 5, 6)
+        elif rng.random() < 0.1:
+            j.state = "done"
+    for _ in range(rng.randint(0, 3)):
+        j, m = rng.choice(shop.jobs), rng.choice(shop.machines)
+        shop.pins.append(Pin(j.id, m.id, rng.choice([MUST, MUST_NOT])))
+    # drop pins until the shop is consistent (pins are the only random source of problems)
+    while shop_problems(shop) and shop.pins:
+        shop.pins.pop()
+    assert not shop_problems(shop)
+    return shop
+
+
+def brute_force(shop: Shop, objective: str):
+    """Best (placed count, score, max value) over every placement allowed by the definition.
+
+    Returns None when no placement puts every rush and must-pinned job on a machine.
+    """
+    waiting = [j for j in shop.jobs if j.state == "waiting"]
+    up = [m for m in shop.machines if m.state == UP]
+    free = {m.id: m.slots - sum(j.machine == m.id for j in shop.jobs if j.state == RUNNING)
+            for m in up}
+    forced = {p.job: p.machine for p in shop.pins if p.kind == MUST}
+    banned = {(p.job, p.machine) for p in shop.pins if p.kind == MUST_NOT}
+    options = []
+    for j in waiting:
+        opts = [None] if not (j.rush or j.id in forced) else []
+        for m in up:
+            if (j.id, m.id) in shop.grid and (j.id, m.id) not in banned and \
+                    forced.get(j.id, m.id) == m.id:
+                opts.append(m.id)
+        options.append(opts)
+    best = None
+    for choice in itertools.product(*options):
+        load: dict[str, int] = {}
+        for mid in choice:
+            if mid is not None:
+                load[mid] = load.get(mid, 0) + 1
+        if any(load[m] > free[m] for m in load):
+            continue
+        placed = sum(c is not None for c in choice)
+        vals = [shop.grid[(j.id, c)] for j, c in zip(waiting, choice) if c is not None]
+        pen = sum(j.wait_penalty for j, c in zip(waiting, choice) if c is None)
+        if objective == "maximize":
+            key = (-placed, -(sum(vals) - pen))
+        elif objective == "bottleneck":
+            key = (-placed, max(vals, default=0), sum(vals) + pen)
+        else:
+            key = (-placed, sum(vals) + pen)
+        if best is None or key < best:
+            best = key
+    return best
+
+
+def plan_key(plan: Plan, shop: Shop, objective: str):
+    placed = len(plan.assignments)
+    vals = [a.cost for a in plan.assignments]
+    if objective == "maximize":
+        return (-placed, -plan.total)
+    if objective == "bottleneck":
+        return (-placed, max(vals, default=0), plan.total)
+    return (-placed, plan.total)
+
+
+def check_plan_rules(plan: Plan, shop: Shop) -> None:
+    """The plan obeys the definition: states, slots, pins, rush jobs, running jobs kept."""
+    assert plan.verified
+    running = {j.name: shop.machine(j.machine).name for j in shop.jobs if j.state == RUNNING}
+    assert {r.job: r.machine for r in plan.running} == running
+    load: dict[str, int] = {}
+    for a in plan.assignments:
+        j, m = shop.job_by_name(a.job), shop.machine_by_name(a.machine)
+        assert j.state == "waiting" and m.state == UP
+        assert shop.value(j.id, m.id) == a.cost
+        load[m.name] = load.get(m.name, 0) + 1
+    for m in shop.machines:
+        assert load.get(m.name, 0) + sum(1 for r in running.values() if r == m.name) <= m.slots
+        if m.state != UP:
+            assert m.name in plan.unavailable_machines and m.name not in load
+    for p in shop.pins:
+        j, m = shop.job(p.job), shop.machine(p.machine)
+        if j.state != "waiting":
+            continue
+        if p.kind == MUST:
+            assert plan.machine_of(j.name) == m.name
+        else:
+            assert plan.machine_of(j.name) != m.name
+    for j in shop.jobs:
+        if j.rush and j.state == "waiting":
+            assert plan.machine_of(j.name) is not None
+    waiting = {j.name for j in shop.jobs if j.state == "waiting"} - {a.job for a in plan.assignments}
+    assert set(plan.waiting_jobs) == waiting
+    assert set(plan.waiting_reasons) == waiting
+
+
+@pytest.mark.parametrize("objective", ["total", "maximize", "bottleneck"])
+def test_random_shops_match_brute_force(objective):
+    rng = random.Random(20260314 + len(objective))
+    infeasible = 0
+    for _ in range(150):
+        shop = random_shop(rng)
+        expected = brute_force(shop, objective)  # reference: brute-force enumeration
+        if expected is None:
+            infeasible += 1
+            with pytest.raises(ShopInfeasibleError):
+                solve_shop(shop, objective)
+            continue
+        plan = solve_shop(shop, objective)
+        check_plan_rules(plan, shop)
+        got = plan_key(plan, shop, objective)
+        assert got[0] == expected[0]
+        assert all(math.isclose(a, b, abs_tol=1e-9) for a, b in zip(got[1:], expected[1:]))
+    assert infeasible < 150  # most random shops are feasible: the comparison did run
+
+
+def expanded_matrix(shop: Shop):
+    """The expanded engine problem written out by hand: rows waiting jobs, columns free slots."""
+    waiting = [j for j in shop.jobs if j.state == "waiting"]
+    cols = []
+    for m in shop.machines:
+        if m.state == UP:
+            busy = sum(j.machine == m.id for j in shop.jobs if j.state == RUNNING)
+            cols += [m] * (m.slots - busy)
+    values = np.zeros((len(waiting), len(cols)))
+    allowed = np.zeros(values.shape, dtype=bool)
+    for i, j in enumerate(waiting):
+        for c, m in enumerate(cols):
+            v = shop.value(j.id, m.id)
+            pins = [p for p in shop.pins if p.job == j.id]
+            forced = [p.machine for p in pins if p.kind == MUST]
+            if v is None or any(p.kind == MUST_NOT and p.machine == m.id for p in pins):
+                continue
+            if forced and forced[0] != m.id:
+                continue
+            values[i, c], allowed[i, c] = v, True
+    must = [i for i, j in enumerate(waiting)
+            if j.rush or any(p.kind == MUST for p in shop.pins if p.job == j.id)]
+    penalty = [j.wait_penalty for j in waiting]
+    return values, allowed, must, penalty
+
+
+def test_random_shops_match_engine_on_expanded_matrix():
+    rng = random.Random(7)
+    compared = 0
+    for _ in range(200):
+        shop = random_shop(rng)
+        values, allowed, must, penalty = expanded_matrix(shop)
+        try:
+            ref = solve(values, allowed, must_run=must, wait_penalty=penalty)  # reference: engine
+        except Exception:
+            with pytest.raises(ShopInfeasibleError):
+                solve_shop(shop)
+            continue
+        plan = solve_shop(shop)
+        assert math.isclose(plan.total, ref.total, abs_tol=1e-9)
+        assert len(plan.assignments) == ref.planned_count
+        compared += 1
+    assert compared > 150
+
+
+def test_two_slot_machine_takes_two_jobs():
+    # Brute force by hand: 3 jobs, one 2-slot machine (values 1, 2, 9) and one 1-slot machine
+    # that only job c can use at value 5. Best: a, b on the press (3), c on the saw (5) = 8.
+    shop = Shop(jobs=[Job("a", "a"), Job("b", "b"), Job("c", "c")],
+                machines=[Machine("P", "press", slots=2), Machine("S", "saw")])
+    shop.grid = {("a", "P"): 1, ("b", "P"): 2, ("c", "P"): 9, ("c", "S"): 5}
+    plan = solve_shop(shop)
+    assert sorted(plan.jobs_on("press")) == ["a", "b"]
+    assert plan.jobs_on("saw") == ["c"]
+    assert plan.total == 8 and plan.waiting_jobs == [] and plan.idle_machines == []
+
+
+def test_running_job_uses_a_slot_and_is_not_moved():
+    shop = Shop(jobs=[Job("a", "a", state=RUNNING, machine="P"), Job("b", "b")],
+                machines=[Machine("P", "press"), Machine("S", "saw")])
+    shop.grid = {("a", "P"): 1, ("b", "P"): 0, ("b", "S"): 50}
+    plan = solve_shop(shop)
+    assert plan.machine_of("a") == "press" and plan.machine_of("b") == "saw"
+    assert plan.total == 50  # the running job's setup is done and not counted
+
+
+def test_down_machine_takes_nothing_and_reason_says_so():
+    shop = Shop(jobs=[Job("a", "a")], machines=[Machine("P", "press", state=DOWN)])
+    shop.grid = {("a", "P"): 1}
+    plan = solve_shop(shop)
+    assert plan.waiting_jobs == ["a"] and plan.unavailable_machines == ["press"]
+    assert "press is down" in plan.waiting_reasons["a"].text
+    assert plan.idle_machines == []
+
+
+def test_rush_job_displaces_a_cheaper_job():
+    shop = Shop(jobs=[Job("a", "a"), Job("r", "r", rush=True)], machines=[Machine("P", "press")])
+    shop.grid = {("a", "P"): 1, ("r", "P"): 30}
+    assert solve_shop(shop).machine_of("r") == "press"
+
+
+def test_rush_jobs_over_one_machine_are_infeasible_with_names():
+    shop = Shop(jobs=[Job("a", "a", rush=True), Job("b", "b", rush=True)],
+                machines=[Machine("P", "press"), Machine("Q", "lathe")])
+    shop.grid = {("a", "P"): 1, ("b", "P"): 2}
+    with pytest.raises(ShopInfeasibleError, match="press") as info:
+        solve_shop(shop)
+    assert sorted(info.value.jobs) == ["a", "b"] and info.value.machines == ["press"]
+
+
+def test_plain_grid_shop_equals_engine_and_json_round_trip():
+    values = np.array([[4.0, 1, 3], [2, 0, 5], [3, 2, 2], [7, 7, 7]])
+    allowed = np.ones(values.shape, dtype=bool)
+    allowed[0, 1] = False
+    shop = shop_from_grid(list("abcd"), ["x", "y", "z"], values, allowed)
+    plan = solve_shop(shop)
+    ref = solve(values, allowed)  # reference: the engine on the same grid
+    assert plan.total == ref.total
+    data = plan.to_json()
+    assert set(data) == {"status", "objective", "total", "assignments", "waiting_jobs",
+                         "idle_machines", "bottleneck", "waiting_reasons", "certificate"}
+    assert Plan.from_json(data) == plan
+
+
+def test_in_force_maps_ids():
+    shop = Shop(jobs=[Job("J1", "a", state=RUNNING, machine="M1"), Job("J2", "b")],
+                machines=[Machine("M1", "press", slots=2)])
+    shop.grid = {("J2", "M1"): 3}
+    assert solve_shop(shop).in_force(shop) == {"M1": ["J1", "J2"]}
+
+
+@pytest.mark.parametrize("mutate, match", [
+    (lambda s: s.pins.extend([Pin("J1", "M1", MUST), Pin("J1", "M1", MUST_NOT)]), "both to and away"),
+    (lambda s: s.pins.extend([Pin("J1", "M1", MUST), Pin("J2", "M1", MUST)]), "0 free slot|1 free slot"),
+    (lambda s: s.pins.extend([Pin("J1", "M1", MUST), Pin("J1", "M2", MUST)]), "more than one machine"),
+    (lambda s: s.pins.append(Pin("J9", "M1", MUST)), "unknown job id 'J9'"),
+    (lambda s: s.pins.append(Pin("J1", "M9", MUST_NOT)), "unknown machine id 'M9'"),
+    (lambda s: setattr(s.machines[0], "slots", -1), "slots.*whole number >= 1"),
+    (lambda s: (setattr(s.machines[0], "state", DOWN), setattr(s.jobs[0], "state", RUNNING),
+                setattr(s.jobs[0], "machine", "M1")), "which is down"),
+    (lambda s: s.jobs.append(Job("J1", "other")), "id 'J1'.*unique"),
+    (lambda s: (s.jobs.clear(), s.grid.clear()), "no jobs"),
+])
+def test_inconsistent_shops_are_refused_with_location(mutate, match):
+    shop = Shop(jobs=[Job("J1", "a"), Job("J2", "b")],
+                machines=[Machine("M1", "press"), Machine("M2", "saw")])
+    shop.grid = {("J1", "M1"): 1, ("J2", "M1"): 2, ("J1", "M2"): 3}
+    mutate(shop)
+    with pytest.raises(ShopError, match=match):
+        solve_shop(shop)
+
+
+def test_build_problem_repeats_columns_for_free_slots():
+    shop = Shop(jobs=[Job("a", "a"), Job("r", "r", state=RUNNING, machine="P")],
+                machines=[Machine("P", "press", slots=3), Machine("D", "drill", state=MAINTENANCE)])
+    shop.grid = {("a", "P"): 1, ("a", "D"): 1}
+    problem = build_problem(shop)
+    assert problem.columns == [0, 0] and problem.rows == [0] and problem.unavailable == [1]
