@@ -1,0 +1,164 @@
+"""What a printed dispatch sheet says, as plain data (no Qt, no shop objects).
+
+The sheet is built once from a shop, a plan and optionally a recorded decision
+(:mod:`dispatcher.sheet.build`), and then rendered by :mod:`dispatcher.sheet.render` to
+a printer, a print preview or a PDF file. Keeping the content separate from the layout
+lets tests check what the sheet says without reading a PDF, and lets the layout change
+without touching the shop model.
+
+Every field is text, a number, a date/time or ``None``; nothing here is executed or
+looked up later.
+"""
+
+from __future__ import annotations
+
+import datetime as dt
+import math
+from dataclasses import dataclass, field
+
+#: The cautions printed at the foot of every page. Wording is ours; the points are the
+#: ones every sheet must carry (see the Safety section of the README).
+SAFETY_CAUTIONS: tuple[str, ...] = (
+    "Apply lockout/tagout before any work on a machine that is down.",
+    "Only operators trained and authorised for a machine may run it, whatever this sheet says.",
+    "Follow the machine's own setup instructions for every changeover.",
+    "Site safety rules and local regulations take precedence over this sheet.",
+)
+
+#: Machine states as printed. Words, never colour, carry the meaning.
+STATE_WORDS = {
+    "up": "Up",
+    "down": "DOWN",
+    "maintenance": "MAINTENANCE",
+}
+#: The same in the narrow State column of the machine table.
+STATE_SHORT = {
+    "up": "Up",
+    "down": "DOWN",
+    "maintenance": "MAINT.",
+}
+
+
+@dataclass(frozen=True)
+class SheetJob:
+    """One job on a machine's list, in run order.
+
+    ``setup`` is the grid value of the (job, machine) pair in ``unit`` (``None`` when the
+    value is not known, for example a job that was already running before the plan).
+    ``continuing`` marks a job already running on the machine that simply carries on.
+    ``hours`` is the planned run time in fill-shift mode, ``None`` otherwise.
+    """
+
+    name: str
+    work_order: str = ""
+    setup: float | None = None
+    unit: str = ""
+    notes: str = ""
+    rush: bool = False
+    continuing: bool = False
+    running_since: dt.datetime | None = None
+    hours: float | None = None
+
+
+@dataclass(frozen=True)
+class SheetMachine:
+    """One machine and the jobs it is to run this round, in order (empty: idle or down)."""
+
+    name: str
+    state: str = "up"
+    jobs: tuple[SheetJob, ...] = ()
+    notes: str = ""
+
+    @property
+    def is_down(self) -> bool:
+        return self.state != "up"
+
+
+@dataclass(frozen=True)
+class SheetWaitingJob:
+    """A job that is not dispatched this round and the plain reason why."""
+
+    name: str
+    work_order: str = ""
+    why: str = ""
+    rush: bool = False
+
+
+@dataclass(frozen=True)
+class SheetDownMachine:
+    """A machine that takes no work, with its state, note and the time the state changed."""
+
+    name: str
+    state: str = "down"
+    note: str = ""
+    since: dt.datetime | None = None
+
+
+@dataclass(frozen=True)
+class SheetTotals:
+    """Counts and the plan's total, as printed under the tables.
+
+    ``objective`` is a short phrase such as "least total setup"; ``status`` says whether
+    the plan is proven best ("proven optimal") or the best found with its gap.
+    """
+
+    machines: int = 0
+    machines_down: int = 0
+    machines_idle: int = 0
+    jobs_dispatched: int = 0
+    jobs_continuing: int = 0
+    jobs_waiting: int = 0
+    total: float | None = None
+    unit: str = ""
+    objective: str = ""
+    status: str = ""
+
+
+@dataclass(frozen=True)
+class SheetContent:
+    """Everything one dispatch sheet prints.
+
+    ``decision_number`` and ``decision_time`` are ``None`` when the plan has not been
+    recorded in the history; the sheet then says "not recorded" so nobody mistakes a
+    draft for a confirmed decision. ``printed_at`` is when the sheet was made.
+    """
+
+    shop_name: str
+    shift_date: dt.date | None = None
+    shift_label: str = ""
+    supervisor: str = ""
+    decision_number: int | None = None
+    decision_time: dt.datetime | None = None
+    printed_at: dt.datetime = field(default_factory=lambda: dt.datetime.now().astimezone())
+    machines: tuple[SheetMachine, ...] = ()
+    waiting: tuple[SheetWaitingJob, ...] = ()
+    down: tuple[SheetDownMachine, ...] = ()
+    totals: SheetTotals = field(default_factory=SheetTotals)
+    safety: tuple[str, ...] = SAFETY_CAUTIONS
+    demo_note: str = ""
+
+    def dispatched_jobs(self) -> list[SheetJob]:
+        """Every job on every machine, in sheet order."""
+        return [job for m in self.machines for job in m.jobs]
+
+
+def format_time(t: dt.datetime | None) -> str:
+    """``YYYY-MM-DD HH:MM`` in local time (aware times are converted), or an empty string."""
+    if t is None:
+        return ""
+    if t.tzinfo is not None:
+        t = t.astimezone()
+    return t.strftime("%Y-%m-%d %H:%M")
+
+
+def format_value(value: float | None, unit: str = "") -> str:
+    """A grid value with its unit: ``12 min``, ``7.5 EUR``; empty when unknown."""
+    if value is None:
+        return ""
+    if not math.isfinite(value):
+        text = str(value)
+    elif value == int(value):
+        text = f"{int(value):,}"
+    else:
+        text = f"{value:,.2f}".rstrip("0").rstrip(".")
+    return f"{text} {unit}".strip()
