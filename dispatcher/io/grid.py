@@ -159,6 +159,24 @@ def table_from_rows(rows: list[list[object]], source: str, *, decimal_comma: boo
     return GridTable(jobs, machines, values, allowed, label)
 
 
+def _bounded_rows(rows, source: str) -> list[list[object]]:
+    """Collect rows, refusing as soon as a non-empty row lies past the job-row limit.
+
+    Without this a huge file (an XLSX sheet especially, read cell by cell) would be read
+    whole before :func:`table_from_rows` could refuse it; this way the refusal comes after
+    at most ``MAX_JOBS + 2`` rows of data.
+    """
+    out: list[list[object]] = []
+    for row in rows:
+        row = list(row)
+        out.append(row)
+        if len(out) > MAX_JOBS + 1 and any(
+                c is not None and not (isinstance(c, str) and c.strip() == "") for c in row):
+            raise GridFileError(source, f"more than {MAX_JOBS} job rows exceed the limit of "
+                                f"{MAX_JOBS} (the rest of the file was not read)")
+    return out
+
+
 def _sniff_delimiter(text: str) -> str:
     first = text.split("\n", 1)[0]
     counts = {d: first.count(d) for d in ("\t", ";", ",")}
@@ -173,7 +191,7 @@ def parse_grid_text(text: str, source: str = "pasted block") -> GridTable:
     text = text.replace("\r\n", "\n").replace("\r", "\n")
     delimiter = _sniff_delimiter(text)
     try:
-        rows = list(csv.reader(io.StringIO(text), delimiter=delimiter))
+        rows = _bounded_rows(csv.reader(io.StringIO(text), delimiter=delimiter), source)
     except csv.Error as exc:
         raise GridFileError(source, f"not readable as delimited text: {exc}") from None
     return table_from_rows(rows, source, decimal_comma=(delimiter == ";"))
@@ -191,8 +209,8 @@ def _read_xlsx(path: Path) -> GridTable:
         raise GridFileError(source, f"not an XLSX spreadsheet ({exc.__class__.__name__})") from None
     try:
         sheet = book.worksheets[0]
-        rows = [list(r) for r in sheet.iter_rows(values_only=True)]
-        raw = [list(r) for r in formulas.worksheets[0].iter_rows(values_only=True)]
+        rows = _bounded_rows(sheet.iter_rows(values_only=True), source)
+        raw = _bounded_rows(formulas.worksheets[0].iter_rows(values_only=True), source)
     finally:
         book.close()
         formulas.close()
