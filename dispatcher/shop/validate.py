@@ -116,7 +116,8 @@ def shop_problems(shop: Shop) -> list[Problem]:
         if mid not in machine_ids:
             add(where, f"names unknown machine id {mid!r}")
         if not _finite(v) or v < 0:
-            add(where, f"value {v!r} must be a number >= 0 (leave the cell out when the "
+            shown = f"{v:g}" if _finite(v) else repr(v)
+            add(where, f"value {shown} must be a number >= 0 (leave the cell out when the "
                 "machine cannot run the job)")
     for (jid, mid), v in shop.hours.items():
         where = f"hours, {shop.describe_job(jid)}, {shop.describe_machine(mid)}"
