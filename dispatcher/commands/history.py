@@ -1,0 +1,240 @@
+"""``dispatcher history``: list, show, compare, restore and export recorded decisions.
+
+Also holds what ``dispatcher solve --record`` needs (:func:`add_record_arguments`,
+:func:`record_decision`) so the solve command only wires them in.
+
+History problems (missing, damaged, read-only, busy or full file) exit with code 4; an
+unknown decision number or reason kind is bad input (exit 2).
+"""
+
+from __future__ import annotations
+
+import argparse
+import sys
+from datetime import date
+from typing import Any
+
+from dispatcher.commands.common import (
+    EXIT_BAD_INPUT,
+    EXIT_STORE,
+    CliError,
+    print_json,
+    print_plan,
+)
+from dispatcher.history import (
+    HISTORY_ENV,
+    REASON_KINDS,
+    DecisionSummary,
+    HistoryError,
+    HistoryInputError,
+    HistoryStore,
+    parse_reason_kind,
+    reason_label,
+)
+
+_HISTORY_HELP = (f"history file (default: ${HISTORY_ENV}, else the per-user data folder, "
+                 "e.g. ~/.local/share/dispatcher/history.sqlite)")
+
+
+def _store_call(action):
+    """Run ``action()`` turning history errors into CLI errors with the right exit code."""
+    try:
+        return action()
+    except HistoryInputError as exc:
+        raise CliError(str(exc), EXIT_BAD_INPUT) from None
+    except HistoryError as exc:
+        raise CliError(str(exc), EXIT_STORE) from None
+
+
+# ---------------------------------------------------------------- solve --record
+
+def add_record_arguments(parser: argparse.ArgumentParser) -> None:
+    """The ``--record --by --reason --note --history`` options of ``dispatcher solve``."""
+    group = parser.add_argument_group("recording the decision")
+    group.add_argument("--record", action="store_true",
+                       help="record the plan as a decision in the history")
+    group.add_argument("--by", metavar="NAME", help="supervisor making the decision")
+    group.add_argument("--reason", metavar="KIND",
+                       help="why: " + ", ".join(REASON_KINDS))
+    group.add_argument("--note", metavar="TEXT", default="", help="free text about the reason")
+    group.add_argument("--history", metavar="PATH", help=_HISTORY_HELP)
+
+
+def check_record_arguments(args: argparse.Namespace) -> None:
+    """Before solving: ``--record`` needs ``--by`` and a known ``--reason`` (exit 2 if not)."""
+    if not getattr(args, "record", False):
+        if getattr(args, "by", None) or getattr(args, "reason", None):
+            raise CliError("--by and --reason are used with --record")
+        return
+    if not (args.by or "").strip():
+        raise CliError("--record needs --by NAME (the supervisor making the decision)")
+    if not args.reason:
+        raise CliError("--record needs --reason KIND, one of: " + ", ".join(REASON_KINDS))
+    _store_call(lambda: parse_reason_kind(args.reason))
+
+
+def record_decision(args: argparse.Namespace, shop_document: Any, plan: Any) -> int | None:
+    """Record ``plan`` for ``shop_document`` if ``--record`` was given; prints the number.
+
+    The message goes to stderr so that ``--json`` output stays one JSON object.
+    """
+    if not getattr(args, "record", False):
+        return None
+    store = HistoryStore(args.history)
+    number = _store_call(lambda: store.record(shop_document, plan, by=args.by,
+                                              reason=args.reason, note=args.note))
+    print(f"Recorded decision #{number} in {store.path}", file=sys.stderr)
+    return number
+
+
+# ---------------------------------------------------------------- history sub-commands
+
+def register(sub: argparse._SubParsersAction) -> None:
+    p = sub.add_parser("history", help="list, show, compare, restore and export decisions",
+                       description="The record of confirmed dispatch decisions.")
+    cmds = p.add_subparsers(dest="history_command", metavar="ACTION")
+    common = argparse.ArgumentParser(add_help=False)
+    common.add_argument("--history", metavar="PATH", help=_HISTORY_HELP)
+    filters = argparse.ArgumentParser(add_help=False)
+    filters.add_argument("--from", dest="date_from", metavar="DATE", type=_date,
+                         help="first shift date (YYYY-MM-DD)")
+    filters.add_argument("--to", dest="date_to", metavar="DATE", type=_date,
+                         help="last shift date (YYYY-MM-DD)")
+    filters.add_argument("--shift", metavar="LABEL", help="shift label, e.g. night")
+    filters.add_argument("--machine", metavar="NAME", help="decisions whose plan names it")
+    filters.add_argument("--job", metavar="NAME", help="decisions whose plan names it")
+    filters.add_argument("--by", metavar="NAME", help="supervisor")
+    filters.add_argument("--reason", metavar="KIND", help=", ".join(REASON_KINDS))
+
+    q = cmds.add_parser("list", parents=[common, filters], help="list decisions")
+    q.add_argument("--json", action="store_true", help="print a JSON list")
+    q.add_argument("--limit", type=int, metavar="N", help="only the newest N")
+    q.set_defaults(func=run_list)
+
+    q = cmds.add_parser("show", parents=[common], help="show one decision")
+    q.add_argument("number", type=int, metavar="N")
+    q.add_argument("--json", action="store_true", help="print one JSON object")
+    q.set_defaults(func=run_show)
+
+    q = cmds.add_parser("diff", parents=[common], help="what changed from decision A to B")
+    q.add_argument("a", type=int, metavar="A")
+    q.add_argument("b", type=int, metavar="B")
+    q.add_argument("--json", action="store_true", help="print one JSON object")
+    q.set_defaults(func=run_diff)
+
+    q = cmds.add_parser("export", parents=[common, filters],
+                        help="write decisions to a CSV file (one line per placement)")
+    q.add_argument("target", metavar="FILE.csv")
+    q.set_defaults(func=run_export)
+
+    q = cmds.add_parser("restore", parents=[common],
+                        help="record an earlier plan again as a new decision")
+    q.add_argument("number", type=int, metavar="N")
+    q.add_argument("--by", metavar="NAME", required=True, help="supervisor restoring it")
+    q.add_argument("--note", metavar="TEXT", default="")
+    q.set_defaults(func=run_restore)
+
+    p.set_defaults(func=lambda args: _usage(p))
+
+
+def _usage(parser: argparse.ArgumentParser) -> int:
+    parser.print_help()
+    return EXIT_BAD_INPUT
+
+
+def _date(text: str) -> date:
+    try:
+        return date.fromisoformat(text)
+    except ValueError:
+        raise argparse.ArgumentTypeError(f"expected a date YYYY-MM-DD, got {text!r}") from None
+
+
+def _filters(args: argparse.Namespace) -> dict[str, Any]:
+    keys = ("date_from", "date_to", "shift", "machine", "job", "by", "reason")
+    return {k: getattr(args, k) for k in keys if getattr(args, k, None) is not None}
+
+
+def _total(x: float | int | None) -> str:
+    return "-" if x is None else f"{x:g}"
+
+
+def run_list(args: argparse.Namespace) -> int:
+    store = HistoryStore(args.history)
+    found = _store_call(lambda: store.list(**_filters(args), limit=args.limit,
+                                           newest_first=args.limit is not None))
+    if args.limit is not None:
+        found.reverse()
+    if args.json:
+        print_json([d.to_json() for d in found])
+        return 0
+    if not found:
+        print(f"No decisions{' match' if _filters(args) else ' recorded yet'} ({store.path})")
+        return 0
+    _print_table(found)
+    return 0
+
+
+def _print_table(found: list[DecisionSummary]) -> None:
+    head = ("#", "Time (UTC)", "Shift", "By", "Reason", "Total", "Replaces", "Note")
+    rows = [(str(d.id), d.time.strftime("%Y-%m-%d %H:%M"),
+             f"{d.shift_date.isoformat()} {d.shift}", d.by, reason_label(d.reason),
+             _total(d.total), "" if d.replaces is None else f"#{d.replaces}", d.note)
+            for d in found]
+    widths = [max(len(r[i]) for r in rows + [head]) for i in range(len(head))]
+    print("  ".join(h.ljust(w) for h, w in zip(head, widths)).rstrip())
+    print("  ".join("-" * w for w in widths))
+    for r in rows:
+        print("  ".join(c.ljust(w) for c, w in zip(r, widths)).rstrip())
+
+
+def run_show(args: argparse.Namespace) -> int:
+    store = HistoryStore(args.history)
+    d = _store_call(lambda: store.get(args.number))
+    if args.json:
+        print_json(d.to_json())
+        return 0
+    print(f"Decision #{d.id}  {d.time.strftime('%Y-%m-%d %H:%M:%S')} UTC  "
+          f"(shift {d.shift_date.isoformat()} {d.shift})")
+    print(f"By: {d.by}")
+    print(f"Reason: {reason_label(d.reason)}" + (f" - {d.note}" if d.note else ""))
+    if d.shop:
+        print(f"Shop: {d.shop}")
+    print(f"Certificate: {d.certificate}")
+    print()
+    print_plan(d.plan)
+    print()
+    if d.replaces is None:
+        print("Replaces: none (first decision for this shop)")
+    else:
+        print(f"Changes from #{d.replaces}:")
+        for line in (d.diff_from_replaced.lines() if d.diff_from_replaced else []):
+            print(f"  {line}")
+    return 0
+
+
+def run_diff(args: argparse.Namespace) -> int:
+    store = HistoryStore(args.history)
+    diff = _store_call(lambda: store.diff(args.a, args.b))
+    if args.json:
+        print_json(diff.to_json())
+        return 0
+    print(f"From #{args.a} to #{args.b}:")
+    for line in diff.lines():
+        print(f"  {line}")
+    return 0
+
+
+def run_export(args: argparse.Namespace) -> int:
+    store = HistoryStore(args.history)
+    if not store.exists():
+        raise CliError(f"{store.path}: no history file here yet; nothing to export", EXIT_STORE)
+    count = _store_call(lambda: store.export_csv(args.target, **_filters(args)))
+    print(f"Wrote {count} rows to {args.target}")
+    return 0
+
+
+def run_restore(args: argparse.Namespace) -> int:
+    store = HistoryStore(args.history)
+    number = _store_call(lambda: store.restore(args.number, by=args.by, note=args.note))
+    print(f"Recorded decision #{number}: restored from #{args.number}")
+    return 0

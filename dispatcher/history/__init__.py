@@ -1,0 +1,49 @@
+"""The decision history: a crash-safe, append-only record of every dispatch decision.
+
+Stdlib sqlite3 only (pandas for the CSV export); no Qt and no import of the shop model:
+a decision stores the shop document as JSON text and the plan in the solve JSON contract.
+
+Typical use::
+
+    store = HistoryStore(path)                      # None: the per-user default file
+    n = store.record(shop_doc, plan, by="Ana", reason="breakdown", note="press 2 down")
+    store.list(machine="Press 2", date_from=date(2026, 12, 1))
+    store.get(n).plan
+    store.diff(n - 1, n).lines()
+    store.restore(n - 1, by="Ana")                  # a new decision "restored from #..."
+    store.export_csv("history.csv", by="Ana")
+"""
+
+from .errors import DecisionNotFound, HistoryError, HistoryInputError
+from .location import HISTORY_ENV, data_folder, default_history_path, resolve_history_path
+from .plans import Move, PlanDiff, certificate_status, check_plan, diff_plans
+from .reasons import REASON_KINDS, parse_reason_kind, reason_label
+from .schema import SCHEMA_VERSION
+from .shifts import DEFAULT_SHIFTS, ShiftStart, shift_of
+from .store import LATEST, Decision, DecisionSummary, HistoryStore
+
+__all__ = [
+    "DEFAULT_SHIFTS",
+    "HISTORY_ENV",
+    "LATEST",
+    "REASON_KINDS",
+    "SCHEMA_VERSION",
+    "Decision",
+    "DecisionNotFound",
+    "DecisionSummary",
+    "HistoryError",
+    "HistoryInputError",
+    "HistoryStore",
+    "Move",
+    "PlanDiff",
+    "ShiftStart",
+    "certificate_status",
+    "check_plan",
+    "data_folder",
+    "default_history_path",
+    "diff_plans",
+    "parse_reason_kind",
+    "reason_label",
+    "resolve_history_path",
+    "shift_of",
+]
