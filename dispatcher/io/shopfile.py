@@ -284,15 +284,15 @@ def _read_pairs(r: _Reader, block: Any, field: str, shop: Shop) -> dict[tuple[st
         r.bad(f"field '{field}'", f"expected an object job id -> {{machine id: number}}, got {_kind(block)}")
         return out
     for jid, row in block.items():
-        where = f"{field}, {shop.describe_job(jid)}"
         if not isinstance(row, dict):
-            r.bad(where, f"expected an object machine id -> number, got {_kind(row)}")
+            r.bad(f"{field}, {shop.describe_job(jid)}",
+                  f"expected an object machine id -> number, got {_kind(row)}")
             continue
         for mid, v in row.items():
             if v is None:
                 continue  # cannot run
             if isinstance(v, bool) or not isinstance(v, (int, float)) or not math.isfinite(v):
-                r.bad(f"{where}, {shop.describe_machine(mid)}",
+                r.bad(f"{field}, {shop.describe_job(jid)}, {shop.describe_machine(mid)}",
                       f"expected a number (or null: cannot run), got {_kind(v)}")
                 continue
             out[(jid, mid)] = float(v)

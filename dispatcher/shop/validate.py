@@ -109,22 +109,24 @@ def shop_problems(shop: Shop) -> list[Problem]:
                 f"{len(jobs)} jobs are running on it ({', '.join(shop.job(j).name for j in jobs)}) "
                 f"but it has {m.slots} slot(s)")
 
+    def pair(block: str, jid: str, mid: str) -> str:
+        return f"{block}, {shop.describe_job(jid)}, {shop.describe_machine(mid)}"
+
     for (jid, mid), v in shop.grid.items():
-        where = f"grid, {shop.describe_job(jid)}, {shop.describe_machine(mid)}"
+        # the place is spelled out only for a problem: grids have up to millions of cells
         if jid not in job_ids:
-            add(where, f"names unknown job id {jid!r}")
+            add(pair("grid", jid, mid), f"names unknown job id {jid!r}")
         if mid not in machine_ids:
-            add(where, f"names unknown machine id {mid!r}")
+            add(pair("grid", jid, mid), f"names unknown machine id {mid!r}")
         if not _finite(v) or v < 0:
             shown = f"{v:g}" if _finite(v) else repr(v)
-            add(where, f"value {shown} must be a number >= 0 (leave the cell out when the "
-                "machine cannot run the job)")
+            add(pair("grid", jid, mid), f"value {shown} must be a number >= 0 (leave the cell "
+                "out when the machine cannot run the job)")
     for (jid, mid), v in shop.hours.items():
-        where = f"hours, {shop.describe_job(jid)}, {shop.describe_machine(mid)}"
         if jid not in job_ids or mid not in machine_ids:
-            add(where, "names an unknown job or machine id")
+            add(pair("hours", jid, mid), "names an unknown job or machine id")
         if not _finite(v) or v < 0:
-            add(where, f"{v!r} must be a number >= 0")
+            add(pair("hours", jid, mid), f"{v!r} must be a number >= 0")
 
     out.extend(pin_problems(shop, running_on))
 
