@@ -311,3 +311,32 @@ def test_build_problem_repeats_columns_for_free_slots():
     shop.grid = {("a", "P"): 1, ("a", "D"): 1}
     problem = build_problem(shop)
     assert problem.columns == [0, 0] and problem.rows == [0] and problem.unavailable == [1]
+
+
+@pytest.mark.parametrize("change, match", [
+    (lambda d: d.pop("total"), "field 'total': is missing"),
+    (lambda d: d.update(objective="fastest"), "'fastest' is not one of"),
+    (lambda d: d["assignments"].append({"job": "a", "machine": "x"}), r"assignments\[\d\], field 'cost'"),
+    (lambda d: d.update(waiting_jobs="a"), "field 'waiting_jobs': expected a list"),
+    (lambda d: d.update(total="12"), "field 'total': expected a number"),
+])
+def test_plan_from_json_names_the_bad_field(change, match):
+    from dispatcher.shop import PlanFormatError
+    shop = shop_from_grid(["a", "b"], ["x"], np.array([[1.0], [2.0]]))
+    data = solve_shop(shop).to_json()
+    change(data)
+    with pytest.raises(PlanFormatError, match=match):
+        Plan.from_json(data, "plan.json")
+
+
+def test_plan_json_round_trip_with_running_and_unavailable():
+    shop = Shop(jobs=[Job("J1", "a", state=RUNNING, machine="M1", since=datetime(2026, 1, 5, 6)),
+                      Job("J2", "b")],
+                machines=[Machine("M1", "press", slots=2), Machine("M2", "saw", state=DOWN)])
+    shop.grid = {("J1", "M1"): 4, ("J2", "M1"): 3}
+    plan = solve_shop(shop)
+    data = plan.to_json()
+    assert data["running"] == [{"job": "a", "machine": "press", "since": "2026-01-05T06:00:00", "cost": 4}]
+    assert data["unavailable_machines"] == ["saw"]
+    assert Plan.from_json(data) == plan
+    assert plan.by_machine() == {"press": [("a", 4.0, True), ("b", 3.0, False)]}
