@@ -15,8 +15,17 @@ from .assignment import (
 from .certificate import Certificate, CertificateError
 from .fill_shift import ShiftInfeasibleError, ShiftPlan, ShiftSearchError, fill_shift
 from .matching import HallWitness
+from .ranking import RankedPlan, ranked_plans
+from .redispatch import redispatch, shortest_augmenting_path
+from .whatif import WhatIf, what_if
 
 __all__ = [
+    "RankedPlan",
+    "WhatIf",
+    "ranked_plans",
+    "redispatch",
+    "shortest_augmenting_path",
+    "what_if",
     "MAX_CELLS",
     "OBJECTIVES",
     "Certificate",

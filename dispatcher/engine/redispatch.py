@@ -1,0 +1,414 @@
+"""Warm re-dispatch: repair an optimal plan after an event instead of solving from scratch.
+
+After a machine goes down (or comes back), a rush job arrives, a job finishes or is
+pulled, most of the previous plan and most of its dual potentials are still valid. We
+map the previous square problem (see :mod:`dispatcher.engine.assignment`: jobs plus idle
+rows by machines plus wait slots) onto the new one, keep every potential that is still
+dual feasible, drop the planned pairs that lost their zero reduced cost, and re-place only
+the rows left free by shortest augmenting paths on reduced costs (Dijkstra), as in the
+successive shortest path method (Tomizawa 1971; Edmonds and Karp 1972) in the form of
+Jonker and Volgenant (1987). Every result carries a :class:`~.certificate.Certificate`
+and is a full :class:`~.assignment.DispatchResult`: ``verify()`` re-checks it.
+
+References
+----------
+N. Tomizawa, "On some techniques useful for solution of transportation network problems",
+Networks 1 (1971) 173-194.
+J. Edmonds and R. M. Karp, "Theoretical improvements in algorithmic efficiency for network
+flow problems", J. ACM 19(2) (1972) 248-264. doi:10.1145/321694.321699
+R. Jonker and A. Volgenant, "A shortest augmenting path algorithm for dense and sparse
+linear assignment problems", Computing 38 (1987) 325-340. doi:10.1007/BF02278710
+"""
+
+from __future__ import annotations
+
+from collections.abc import Mapping, Sequence
+
+import numpy as np
+
+from .assignment import (
+    COL_MACHINE,
+    COL_WAIT,
+    ROW_IDLE,
+    ROW_JOB,
+    DispatchInputError,
+    DispatchResult,
+    _check_inputs,
+    _check_must_run,
+    _plan_total,
+    solve,
+)
+from .certificate import Certificate, CertificateError
+from .matching import konig_cover, maximum_matching
+
+__all__ = ["redispatch", "shortest_augmenting_path"]
+
+
+def shortest_augmenting_path(cost: np.ndarray, col_of_row: np.ndarray, row_of_col: np.ndarray,
+                             u: np.ndarray, v: np.ndarray, start: int) -> bool:
+    """Place the free row ``start`` by one shortest augmenting path; update in place.
+
+    Parameters
+    ----------
+    cost : (n, n) array, ``inf`` where a pair is forbidden.
+    col_of_row, row_of_col : int arrays, -1 for free rows / columns; a partial matching.
+    u, v : row and column potentials, dual feasible (``cost - u - v >= 0`` on finite
+        entries) and tight (``== 0``) on every matched pair.
+    start : a free row.
+
+    Returns
+    -------
+    bool
+        False when no augmenting path exists (the row cannot be placed); nothing changes.
+
+    Notes
+    -----
+    Dijkstra's method on reduced costs from ``start`` to the nearest free column. As in
+    Jonker and Volgenant (1987), all columns at the current least distance are made final
+    together and their rows scanned in one numpy block operation (many at once when costs
+    are whole minutes and distances tie); then the dual update that
+    keeps feasibility and tightness (Tomizawa 1971; Jonker and Volgenant 1987; the update
+    follows Crouse 2016, Algorithm 1). O(n) per scanned row, O(n^2) per call at worst.
+    """
+    n = cost.shape[0]
+    cand = np.full(n, np.inf)       # tentative distances of unscanned columns
+    dist = np.zeros(n)              # final distances of scanned columns
+    blocked = np.zeros(n)           # +inf once a column is final
+    pred = np.full(n, -1, dtype=np.int64)
+    scanned_rows: list[np.ndarray] = []
+    final_cols: list[np.ndarray] = []
+    better = np.empty(n, dtype=bool)
+    rows = np.array([start], dtype=np.int64)
+    base = np.zeros(1)
+    while True:
+        scanned_rows.append(rows)
+        if rows.size == 1:
+            red = cost[rows[0]] - v
+            red += base[0] - u[rows[0]]
+            arg = None
+        else:
+            block = cost[rows] - v[None, :]
+            block += (base - u[rows])[:, None]
+            arg = block.argmin(axis=0)
+            red = block[arg, np.arange(n)]
+        red += blocked
+        np.less(red, cand, out=better)
+        np.copyto(cand, red, where=better)
+        if arg is None:
+            np.copyto(pred, rows[0], where=better)
+        else:
+            pred[better] = rows[arg[better]]
+        d = float(cand.min())
+        if not np.isfinite(d):
+            return False
+        layer = np.flatnonzero(cand == d)
+        final_cols.append(layer)
+        dist[layer] = d
+        blocked[layer] = np.inf
+        cand[layer] = np.inf
+        free = layer[row_of_col[layer] < 0]
+        if free.size:
+            sink = int(free[0])
+            break
+        rows = row_of_col[layer]
+        base = np.full(rows.size, d)
+    # Dual update (keeps cost - u - v >= 0 and tight pairs tight).
+    d_sink = dist[sink]
+    u[start] += d_sink
+    if len(scanned_rows) > 1:
+        rows = np.concatenate(scanned_rows[1:])
+        u[rows] += d_sink - dist[col_of_row[rows]]
+    cols = np.concatenate(final_cols)
+    v[cols] -= d_sink - dist[cols]
+    # Flip the path.
+    j = sink
+    while True:
+        i = int(pred[j])
+        row_of_col[j] = i
+        j, col_of_row[i] = int(col_of_row[i]), j
+        if i == start:
+            break
+    return True
+
+
+def _repair(cost: np.ndarray, col_of_row: np.ndarray, u: np.ndarray, v: np.ndarray,
+            touched_rows: np.ndarray, touched_cols: np.ndarray) -> None:
+    """Make (u, v) dual feasible again after the listed rows/columns changed; re-place.
+
+    ``u``/``v`` hold NaN for rows/columns that are new. Columns get the largest feasible
+    potential against rows whose potential is known, then rows get theirs against all
+    columns; planned pairs that are no longer tight are dropped and their rows re-placed
+    by :func:`shortest_augmenting_path`. Entries outside the touched rows and columns must
+    be unchanged, so the old potentials stay feasible there.
+    """
+    n = cost.shape[0]
+    known = ~np.isnan(u)
+    known[touched_rows] = False
+    cols = np.union1d(touched_cols, np.flatnonzero(np.isnan(v)))
+    if cols.size:
+        if known.any():
+            with np.errstate(invalid="ignore"):
+                best = (cost[np.ix_(np.flatnonzero(known), cols)] - u[known][:, None]).min(axis=0)
+        else:
+            best = np.full(cols.size, np.inf)
+        old = v[cols]
+        v[cols] = np.where(np.isfinite(best), best, np.where(np.isnan(old), 0.0, old))
+    # Rows: new, touched, or matched into a touched column (its potential may have dropped).
+    matched = col_of_row >= 0
+    into_touched = np.zeros(n, dtype=bool)
+    if cols.size:
+        into_touched[matched] = np.isin(col_of_row[matched], cols)
+    rows = np.flatnonzero(~known | into_touched)
+    if rows.size:
+        best = (cost[rows] - v[None, :]).min(axis=1)
+        if not np.isfinite(best).all():
+            raise CertificateError("a row has no allowed column; the problem is infeasible")
+        u[rows] = best
+    # Columns that only new rows can use: raise them to their largest feasible potential
+    # now that every row has one (a new idle row then meets the down machine at once).
+    if cols.size:
+        best = (cost[:, cols] - u[:, None]).min(axis=0)
+        v[cols] = np.where(np.isfinite(best), np.maximum(v[cols], best), v[cols])
+    # Drop planned pairs that are no longer tight.
+    scale = max(1.0, float(np.abs(u).max(initial=0.0)), float(np.abs(v).max(initial=0.0)))
+    tol = 1e-12 * scale * max(1, n)
+    row_of_col = np.full(n, -1, dtype=np.int64)
+    placed = np.flatnonzero(col_of_row >= 0)
+    slack = cost[placed, col_of_row[placed]] - u[placed] - v[col_of_row[placed]]
+    loose = placed[~(np.abs(slack) <= tol)]
+    col_of_row[loose] = -1
+    placed = np.flatnonzero(col_of_row >= 0)
+    row_of_col[col_of_row[placed]] = placed
+    free_cols = row_of_col < 0
+    for r in np.flatnonzero(col_of_row < 0):
+        # A free column already tight for this row needs no search (Jonker and Volgenant
+        # 1987, reduction transfer).
+        tight = np.flatnonzero(free_cols & (cost[r] - u[r] - v <= tol))
+        if tight.size:
+            j = int(tight[0])
+            col_of_row[r], row_of_col[j], free_cols[j] = j, r, False
+            continue
+        if not shortest_augmenting_path(cost, col_of_row, row_of_col, u, v, int(r)):
+            raise CertificateError("no perfect matching in the re-dispatch problem (a bug)")
+        np.less(row_of_col, 0, out=free_cols)
+
+
+def _max_placed(allowed: np.ndarray, machine_of_job: np.ndarray) -> int:
+    """Maximum matching size, skipping Hopcroft-Karp when a known matching meets a bound."""
+    placed = machine_of_job >= 0
+    size = int(placed.sum())
+    bound = min(int(allowed.any(axis=1).sum()), int(allowed.any(axis=0).sum()))
+    if size == bound:
+        return size
+    return int((maximum_matching(allowed) >= 0).sum())
+
+
+def redispatch(previous: DispatchResult, *, machines_down: Sequence[int] = (),
+               machines_up: Mapping[int, tuple[np.ndarray, np.ndarray]] | None = None,
+               jobs_removed: Sequence[int] = (), new_jobs=None, new_allowed=None,
+               new_wait_penalty=None, new_must_run=None,
+               move_penalty=None) -> DispatchResult:
+    """The optimal plan after an event, repaired warm from ``previous``.
+
+    Parameters
+    ----------
+    previous : DispatchResult
+        An optimal plan with its potentials (from :func:`~.assignment.solve` or from an
+        earlier call of this function).
+    machines_down : machine indices that can no longer run any job (their column becomes
+        forbidden; machine indices never shift).
+    machines_up : ``{machine: (values_column, allowed_column)}``, one entry per job of the
+        new problem: the machine's column is replaced (a machine coming back).
+    jobs_removed : indices (in ``previous``) of jobs that finished or were pulled.
+    new_jobs, new_allowed, new_wait_penalty, new_must_run : rows appended after the
+        surviving jobs (a rush job is a new job with ``new_must_run`` True).
+    move_penalty : one number >= 0 per job of the new problem. A job that ``previous``
+        placed on machine m pays it once if the new plan puts it anywhere else, including
+        waiting. The returned ``values`` and ``total`` include these penalties.
+
+    Returns
+    -------
+    DispatchResult
+        Jobs in the order: surviving jobs of ``previous`` (in order), then ``new_jobs``.
+        Identical in total to ``solve()`` of the modified problem, and certified.
+
+    Raises
+    ------
+    DispatchInputError
+        bad indices or numbers; :class:`~.assignment.InfeasibleError` when the must-run
+        jobs can no longer all be placed.
+
+    Notes
+    -----
+    Only rows and columns the event touched are re-placed, by shortest augmenting paths
+    on reduced costs (see the module references). The ``"bottleneck"`` objective changes
+    its threshold with the event, so it is re-solved cold.
+    """
+    n_old, n_machines = previous.values.shape
+    removed = np.unique(np.asarray(jobs_removed, dtype=np.int64))
+    if removed.size and (removed.min() < 0 or removed.max() >= n_old):
+        raise DispatchInputError(f"jobs_removed names a job outside 0..{n_old - 1}")
+    survivors = np.setdiff1d(np.arange(n_old), removed) if removed.size else np.arange(n_old)
+    n_keep = survivors.size
+    # New rows.
+    if new_jobs is None:
+        add_vals = np.zeros((0, n_machines))
+        add_mask = np.zeros((0, n_machines), dtype=bool)
+        add_pen = np.zeros(0)
+        add_must = np.zeros(0, dtype=bool)
+    else:
+        add_vals, add_mask, add_pen, add_must = _check_inputs(
+            np.atleast_2d(np.asarray(new_jobs, dtype=float)), new_allowed,
+            new_wait_penalty, new_must_run)
+        if add_vals.shape[1] != n_machines:
+            raise DispatchInputError(
+                f"new jobs have {add_vals.shape[1]} machine values, the plan has {n_machines} machines")
+    n_jobs = n_keep + add_vals.shape[0]
+    down = np.unique(np.asarray(machines_down, dtype=np.int64))
+    up = dict(machines_up or {})
+    for m in [*down.tolist(), *up]:
+        if not 0 <= int(m) < n_machines:
+            raise DispatchInputError(f"machine {m} is outside 0..{n_machines - 1}")
+    if set(down.tolist()) & set(up):
+        raise DispatchInputError("a machine cannot go down and come up in the same event")
+
+    # The new problem, sharing arrays with the previous one where nothing changed.
+    same_jobs = n_keep == n_old and add_vals.shape[0] == 0
+    values = previous.values if same_jobs else np.vstack([previous.values[survivors], add_vals])
+    allowed = np.vstack([previous.allowed[survivors], add_mask]) if not same_jobs \
+        else previous.allowed.copy()
+    penalty = np.r_[previous.wait_penalty[survivors], add_pen]
+    must = np.r_[previous.must_run[survivors], add_must]
+    up_cols = sorted(int(m) for m in up)
+    if up_cols and values is previous.values:
+        values = values.copy()
+    for m in up_cols:
+        col_vals, col_mask = up[m]
+        col_vals = np.asarray(col_vals, dtype=float).reshape(-1)
+        col_mask = np.asarray(col_mask, dtype=bool).reshape(-1)
+        if col_vals.shape != (n_jobs,) or col_mask.shape != (n_jobs,):
+            raise DispatchInputError(f"machine {m} coming up needs {n_jobs} values and allowed flags")
+        sel = col_vals[col_mask]
+        if not np.isfinite(sel).all() or (sel < 0).any():
+            raise DispatchInputError(f"machine {m} coming up: values must be finite and >= 0")
+        values[:, m] = np.where(col_mask, col_vals, 0.0)
+        allowed[:, m] = col_mask
+    allowed[:, down] = False
+    before = np.full(n_jobs, -1, dtype=np.int64)
+    before[:n_keep] = previous.machine_of_job[survivors]
+    move = None
+    if move_penalty is not None:
+        move = np.asarray(move_penalty, dtype=float).reshape(-1)
+        if move.shape != (n_jobs,) or not np.isfinite(move).all() or (move < 0).any():
+            raise DispatchInputError(f"move_penalty needs {n_jobs} numbers >= 0")
+        move = np.where(before >= 0, move, 0.0)
+        if move.any() and previous.objective != "total":
+            raise DispatchInputError("move penalties apply to the 'total' objective only")
+        if move.any():
+            rows = np.flatnonzero(move > 0)
+            values = values.copy() if values is previous.values else values
+            values[rows] += move[rows, None]
+            values[rows, before[rows]] -= move[rows]
+            penalty = penalty.copy()
+            penalty[rows] += move[rows]
+        else:
+            move = None
+
+    _check_must_run(allowed, must)
+    if previous.objective == "bottleneck":
+        return solve(values, allowed, objective="bottleneck", wait_penalty=penalty, must_run=must)
+
+    cert = previous.certificate
+    maximize = previous.objective == "maximize"
+    top = 0.0
+    if maximize:
+        ij = np.argwhere(previous.solved_allowed)
+        if len(ij):
+            i, j = ij[0]
+            top = float(cert.cost[i, j] + previous.values[i, j])
+
+    # Previous square layout.
+    k_old = n_old - (cert.col_kind == COL_WAIT).sum()
+    idle_old = n_machines - k_old
+    wait_old = n_old - k_old
+    # New layout.
+    still = before >= 0
+    still[still] = allowed[np.flatnonzero(still), before[still]]
+    k = _max_placed(allowed, np.where(still, before, -1))
+    idle_new, wait_new = n_machines - k, n_jobs - k
+    size = n_jobs + idle_new
+
+    def cost_of(x: np.ndarray) -> np.ndarray:
+        return top - x if maximize else x
+
+    sq = np.empty((size, size))
+    real = sq[:n_jobs, :n_machines]
+    old_real = cert.cost[:n_old, :n_machines]
+    if n_keep == n_old:
+        real[:n_keep] = old_real
+    elif n_keep:
+        real[:n_keep] = old_real[survivors]
+    if add_vals.shape[0]:
+        real[n_keep:] = np.where(add_mask, cost_of(add_vals), np.inf)
+    touched_cols = np.union1d(down, np.asarray(up_cols, dtype=np.int64)).astype(np.int64)
+    if down.size:
+        real[:, down] = np.inf
+    for m in up_cols:
+        real[:, m] = np.where(allowed[:, m], cost_of(values[:, m]), np.inf)
+    touched_rows = np.arange(n_keep, n_jobs)
+    if move is not None:
+        rows = np.flatnonzero(move > 0)
+        real[rows] += move[rows, None]
+        real[rows, before[rows]] -= move[rows]
+        touched_rows = np.union1d(touched_rows, rows)
+    sq[:n_jobs, n_machines:] = np.where(must, np.inf, penalty)[:, None]
+    sq[n_jobs:, :n_machines] = 0.0
+    sq[n_jobs:, n_machines:] = np.inf
+
+    # Map rows, columns, potentials and planned pairs of the previous square.
+    u = np.full(size, np.nan)
+    v = np.full(size, np.nan)
+    col_of_row = np.full(size, -1, dtype=np.int64)
+    old_cols = cert.col_of_row
+    keep_idle = min(idle_old, idle_new)
+    keep_wait = min(wait_old, wait_new)
+    old_rows = np.r_[survivors, n_old + np.arange(keep_idle)]
+    new_rows = np.r_[np.arange(n_keep), n_jobs + np.arange(keep_idle)]
+    u[new_rows] = cert.row_potential[old_rows]
+    v[:n_machines] = cert.col_potential[:n_machines]
+    v[n_machines:n_machines + keep_wait] = cert.col_potential[n_machines:n_machines + keep_wait]
+    c = old_cols[old_rows]
+    c = np.where(c < n_machines + keep_wait, c, -1)
+    ok = c >= 0
+    ok[ok] = np.isfinite(sq[new_rows[ok], c[ok]])
+    col_of_row[new_rows[ok]] = c[ok]
+    if wait_new > wait_old:
+        touched_cols = np.union1d(touched_cols, n_machines + np.arange(wait_old, wait_new))
+
+    _repair(sq, col_of_row, u, v, touched_rows.astype(np.int64), touched_cols)
+
+    row_kind = np.r_[np.full(n_jobs, ROW_JOB), np.full(idle_new, ROW_IDLE)]
+    col_kind = np.r_[np.full(n_machines, COL_MACHINE), np.full(wait_new, COL_WAIT)]
+    certificate = Certificate(sq, col_of_row, u, v, row_kind, col_kind)
+    job_cols = col_of_row[:n_jobs]
+    machine_of_job = np.where(job_cols < n_machines, job_cols, -1)
+    ju, mv = u[:n_jobs], v[:n_machines]
+    if maximize:
+        ju, mv = top - ju, -mv
+    cover_jobs, cover_machines = konig_cover(allowed, machine_of_job)
+    return DispatchResult(
+        machine_of_job=machine_of_job,
+        total=_plan_total(values, machine_of_job, penalty, previous.objective),
+        objective=previous.objective,
+        values=values,
+        allowed=allowed,
+        solved_allowed=allowed,
+        job_potential=ju,
+        machine_potential=mv,
+        wait_penalty=penalty,
+        must_run=must,
+        certificate=certificate,
+        cover_jobs=cover_jobs,
+        cover_machines=cover_machines,
+        bottleneck=None,
+    )
