@@ -11,6 +11,7 @@ from dispatcher.commands.common import (
     print_json,
     print_plan,
 )
+from dispatcher.commands.shift_fill import run_fill_shift
 from dispatcher.commands.shop_input import is_shop_document, run_shop
 from dispatcher.engine import DispatchInputError, InfeasibleError, solve
 from dispatcher.io.grid import GridFileError, read_grid
@@ -28,6 +29,12 @@ def register(sub: argparse._SubParsersAction) -> None:
     p.add_argument("--must-run", metavar="JOB,JOB...", default="",
                    help="jobs that must not wait (comma-separated names)")
     p.add_argument("--json", action="store_true", help="print one JSON object")
+    p.add_argument("--fill-shift", action="store_true",
+                   help="shop documents: plan the whole shift, several jobs per machine "
+                   "within each machine's hours")
+    p.add_argument("--time-limit", metavar="SECONDS", type=float, default=None,
+                   help="with --fill-shift: stop the solver after this many seconds and "
+                   "report the best plan found with its proven gap")
     p.set_defaults(func=run)
 
 
@@ -57,6 +64,8 @@ def infeasible_message(exc: InfeasibleError, jobs: list[str], machines: list[str
 
 
 def run(args: argparse.Namespace) -> int:
+    if args.fill_shift:
+        return run_fill_shift(args)
     if is_shop_document(args.grid):
         return run_shop(args.grid, objective_of(args), args.must_run, args.json)
     try:

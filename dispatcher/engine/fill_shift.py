@@ -56,13 +56,23 @@ __all__ = [
 class ShiftInfeasibleError(Exception):
     """Must-run or pinned jobs cannot all fit in the machines' hours.
 
-    ``jobs`` and ``machines`` are index arrays of the jobs and machines involved.
+    ``jobs`` and ``machines`` are index arrays of the jobs and machines involved. ``kind``
+    says which reason was found, so callers can phrase it with names: ``"pin_not_allowed"``
+    (a job pinned to a machine that cannot run it), ``"pinned_over"`` (jobs pinned to one
+    machine need ``needed`` hours, it has ``available``), ``"no_machine"`` (a must-run job
+    needs at least ``needed`` hours, its machines have at most ``available``; NaN when no
+    machine can run it), ``"total_hours"`` (must-run jobs need ``needed`` hours in total,
+    their machines have ``available``), ``"proven"`` (the solver proved no plan runs them).
     """
 
-    def __init__(self, message: str, jobs, machines=()):
+    def __init__(self, message: str, jobs, machines=(), *, kind: str = "proven",
+                 needed: float = float("nan"), available: float = float("nan")):
         super().__init__(message)
         self.jobs = np.asarray(jobs, dtype=np.int64)
         self.machines = np.asarray(machines, dtype=np.int64)
+        self.kind = kind
+        self.needed = needed
+        self.available = available
 
 
 class ShiftSearchError(RuntimeError):
@@ -262,20 +272,24 @@ def _diagnose(usable: np.ndarray, hours: np.ndarray, cap: np.ndarray, must: np.n
         j = pinned[i]
         if not mask[i, j]:
             raise ShiftInfeasibleError(f"job {i} is pinned to machine {j}, which cannot run it",
-                                       [i], [j])
+                                       [i], [j], kind="pin_not_allowed")
     for j in np.unique(pinned[pinned >= 0]):
         jobs = np.flatnonzero(pinned == j)
         need = float(hours[jobs, j].sum())
         if need > cap[j] * (1 + 1e-12):
             raise ShiftInfeasibleError(
                 f"jobs {', '.join(map(str, jobs))} are pinned to machine {j}: they need "
-                f"{need:g} hours, the machine has {cap[j]:g}", jobs, [j])
+                f"{need:g} hours, the machine has {cap[j]:g}", jobs, [j], kind="pinned_over",
+                needed=need, available=float(cap[j]))
     for i in np.flatnonzero(must & ~usable.any(axis=1)):
         allowed = np.flatnonzero(mask[i])
+        need = float(hours[i, allowed].min()) if allowed.size else float("nan")
+        have = float(cap[allowed].max()) if allowed.size else float("nan")
         detail = ("no machine can run it" if allowed.size == 0 else
-                  f"it needs at least {hours[i, allowed].min():g} hours, its machines "
-                  f"({', '.join(map(str, allowed))}) have at most {cap[allowed].max():g}")
-        raise ShiftInfeasibleError(f"must-run job {i} fits on no machine: {detail}", [i], allowed)
+                  f"it needs at least {need:g} hours, its machines "
+                  f"({', '.join(map(str, allowed))}) have at most {have:g}")
+        raise ShiftInfeasibleError(f"must-run job {i} fits on no machine: {detail}", [i], allowed,
+                                   kind="no_machine", needed=need, available=have)
     rows = np.flatnonzero(must)
     if rows.size:
         least = np.where(usable[rows], hours[rows], np.inf).min(axis=1)
@@ -284,7 +298,8 @@ def _diagnose(usable: np.ndarray, hours: np.ndarray, cap: np.ndarray, must: np.n
             raise ShiftInfeasibleError(
                 f"must-run jobs need at least {least.sum():g} hours (each on its quickest "
                 f"machine) but their machines have {cap[machines].sum():g} hours in total",
-                rows, machines)
+                rows, machines, kind="total_hours", needed=float(least.sum()),
+                available=float(cap[machines].sum()))
 
 
 def _milp(c, integrality, bounds, constraints, time_left):

@@ -1,0 +1,76 @@
+"""``dispatcher solve SHOP --fill-shift``: plan the whole shift, several jobs per machine.
+
+Not a sub-command of its own: :mod:`dispatcher.commands.solve` hands over to
+:func:`run_fill_shift` when ``--fill-shift`` is given. Exit codes as for ``solve``: 2 bad
+input (every problem located), 3 when rush or pinned jobs cannot all fit (or no plan
+running them was found within ``--time-limit``).
+"""
+
+from __future__ import annotations
+
+import argparse
+
+from dispatcher.commands.common import EXIT_INFEASIBLE, CliError, print_json
+from dispatcher.commands.shop_input import is_shop_document
+from dispatcher.engine import ShiftSearchError
+from dispatcher.io.shopfile import ShopFileError, load_shop
+from dispatcher.shop import ShopError, ShopInfeasibleError
+from dispatcher.shop.fill import ShiftFill, fill_shop_shift
+
+
+def run_fill_shift(args: argparse.Namespace) -> int:
+    """Load the shop document, fill its shift, print the plan (JSON or a table)."""
+    path = args.grid
+    if not is_shop_document(path):
+        raise CliError(f"{path}: --fill-shift needs a shop document (.dshop) with run hours "
+                       "and shift hours; a grid file has neither (see dispatcher convert)")
+    if args.bottleneck:
+        raise CliError("--fill-shift plans the least total or, with --maximize, the most "
+                       "value; it cannot be combined with --bottleneck")
+    limit = getattr(args, "time_limit", None)
+    if limit is not None and not limit > 0:
+        raise CliError(f"--time-limit must be a number of seconds > 0, got {limit:g}")
+    try:
+        shop = load_shop(path, check=False)  # fill_shop_shift checks it, with fill rules
+    except ShopFileError as exc:
+        raise CliError(str(exc)) from None
+    extra = [n.strip() for n in args.must_run.split(",") if n.strip()]
+    try:
+        fill = fill_shop_shift(shop, maximize=args.maximize, extra_must_run=extra,
+                               time_limit=limit, source=path)
+    except ShopInfeasibleError as exc:
+        raise CliError(str(exc), EXIT_INFEASIBLE) from None
+    except ShiftSearchError as exc:
+        raise CliError(f"{path}: {exc}", EXIT_INFEASIBLE) from None
+    except ShopError as exc:
+        raise CliError(str(exc)) from None
+    if args.json:
+        print_json(fill.to_json())
+    else:
+        print_fill(fill, shop.unit.label())
+    return 0
+
+
+def print_fill(fill: ShiftFill, unit: str = "") -> None:
+    """Readable shift plan: per machine its jobs in run order, then waiting jobs and totals."""
+    cost = {(a.job, a.machine): a.cost for a in fill.assignments}
+    for m in fill.machines:
+        print(f"{m.machine}  ({m.hours_used:g} of {m.capacity:g} h)")
+        for job in m.running:
+            print(f"  {job}  (already running)")
+        for n, job in enumerate(m.jobs, start=1):
+            print(f"  {n}. {job}  {cost[(job, m.machine)]:g}{(' ' + unit) if unit else ''}")
+        if not m.running and not m.jobs:
+            print("  (no jobs)")
+    print()
+    if fill.waiting_jobs:
+        print(f"Waiting for the next shift ({len(fill.waiting_jobs)}):")
+        for name in fill.waiting_jobs:
+            print(f"  {name}  - {fill.waiting_reasons[name].text.split(': ', 1)[-1]}")
+    else:
+        print("Waiting for the next shift: none")
+    if fill.unavailable_machines:
+        print("Not available: " + ", ".join(fill.unavailable_machines))
+    label = "Total value" if fill.objective == "maximize" else "Total"
+    print(f"{label}: {fill.total:g}")
+    print(f"Solver: {fill.status_text}; plan re-checked: {'yes' if fill.verified else 'FAILED'}")
