@@ -1,0 +1,205 @@
+"""The decision flow: an event (machine down or back up, rush job) -> the proposed new plan
+shown as a difference against the plan in force -> confirmed with a reason and a name ->
+recorded in the history and put in force.
+
+:func:`propose` is Qt-free: it applies the event to a copy of the shop and solves it with
+the core; :class:`DecisionDialog` shows the proposal (with the safety reminder when a
+machine goes down) and is non-blocking (``open()``), so tests drive it directly.
+"""
+
+from __future__ import annotations
+
+import html
+from dataclasses import dataclass, field
+
+from PySide6.QtCore import Qt, Signal
+from PySide6.QtWidgets import (
+    QComboBox,
+    QDialog,
+    QDialogButtonBox,
+    QFormLayout,
+    QFrame,
+    QLabel,
+    QLineEdit,
+    QPlainTextEdit,
+    QVBoxLayout,
+    QWidget,
+)
+
+from dispatcher.history import PlanDiff, REASON_KINDS, diff_plans
+from dispatcher.shop import DOWN, RUNNING, UP, WAITING, Plan, Shop, ShopError, ShopInfeasibleError
+from dispatcher.ui import palette
+from dispatcher.ui.format import fmt
+from dispatcher.ui.solving import snapshot, solve_relaxing_rush
+
+SAFETY_REMINDER = (
+    "\u26a0 Safety first: before anyone works on this machine, apply lockout/tagout and "
+    "follow the site's isolation procedure. Operators run only machines they are trained "
+    "and authorised for. Follow each machine's setup instructions. Local regulations and "
+    "the site's safety rules take precedence over this plan.")
+
+EVENT_DOWN, EVENT_UP, EVENT_RUSH, EVENT_CONFIRM = "down", "up", "rush", "confirm"
+EVENT_REASON = {EVENT_DOWN: "breakdown", EVENT_UP: "repair", EVENT_RUSH: "rush-job",
+                EVENT_CONFIRM: "shift-start"}
+
+
+@dataclass
+class Proposal:
+    """The shop after the event, its plan, and the difference from the plan in force."""
+
+    event: str
+    title: str
+    shop: Shop
+    plan: Plan | None
+    diff: PlanDiff | None
+    machine: int | None = None
+    job: int | None = None
+    job_changes: list[tuple[int, dict]] = field(default_factory=list)
+    problem: str = ""
+
+
+def _empty_plan_json(objective: str) -> dict:
+    return {"status": "optimal", "objective": objective, "total": 0, "assignments": [],
+            "waiting_jobs": [], "idle_machines": []}
+
+
+def propose(shop: Shop, event: str, objective: str, before: dict | None, *,
+            machine: int | None = None, job: int | None = None, note: str = "") -> Proposal:
+    """Apply ``event`` to a copy of ``shop`` and solve it; ``before`` is the plan in force (JSON).
+
+    Machine down: it takes nothing; jobs running on it go back to waiting (they need a new
+    setup elsewhere). Machine up: it takes jobs again. Rush: the job becomes a rush job.
+    """
+    new = snapshot(shop)
+    job_changes: list[tuple[int, dict]] = []
+    if event in (EVENT_DOWN, EVENT_UP):
+        m = new.machines[machine]
+        m.state = DOWN if event == EVENT_DOWN else UP
+        m.state_note = note
+        title = f"{m.name} {'is down' if event == EVENT_DOWN else 'is back up'}"
+        if event == EVENT_DOWN:
+            for i, j in enumerate(new.jobs):
+                if j.state == RUNNING and j.machine == m.id:
+                    j.state, j.machine, j.since = WAITING, None, None
+                    job_changes.append((i, {"state": WAITING, "machine": None, "since": None}))
+    elif event == EVENT_RUSH:
+        new.jobs[job].rush = True
+        title = f"Rush job: {new.jobs[job].name}"
+        job_changes.append((job, {"rush": True}))
+    elif event == EVENT_CONFIRM:
+        title = "Put the plan shown in force"
+    else:
+        raise ValueError(f"unknown event {event!r}")
+    try:
+        plan, note_text = solve_relaxing_rush(new, objective)
+    except (ShopError, ShopInfeasibleError) as exc:
+        return Proposal(event, title, new, None, None, machine, job, job_changes, str(exc))
+    diff = diff_plans(before or _empty_plan_json(objective), plan.to_json())
+    return Proposal(event, title, new, plan, diff, machine, job, job_changes, note_text)
+
+
+def diff_html(diff: PlanDiff | None, unit: str) -> str:
+    """The difference as a short list a supervisor reads at a glance (marks, not colour only)."""
+    if diff is None:
+        return "<p>No plan in force to compare with.</p>"
+    e = html.escape
+    items = []
+    for m in diff.moved:
+        items.append(f"<li>\u2192 <b>moves</b>: {e(m.job)} from {e(m.from_machine)} to {e(m.to_machine)}</li>")
+    for j, m in diff.newly_placed:
+        items.append(f"<li>{palette.MARK_PLANNED} <b>starts</b>: {e(j)} on {e(m)}</li>")
+    for j in diff.now_waiting:
+        items.append(f"<li>\u25cb <b>now waits</b>: {e(j)}</li>")
+    for m in diff.machines_now_idle:
+        items.append(f"<li>\u25c7 <b>now idle</b>: {e(m)}</li>")
+    for m in diff.machines_gone:
+        items.append(f"<li>{palette.MARK_DOWN} <b>out of the plan</b>: {e(m)}</li>")
+    if not items:
+        items.append("<li>No job changes machine.</li>")
+    total = ""
+    if diff.total_change is not None:
+        sign = "+" if diff.total_change > 0 else ""
+        total = (f"<p>Total: {fmt(diff.total_before)} \u2192 <b>{fmt(diff.total_after)}</b> {unit} "
+                 f"({sign}{fmt(diff.total_change)})</p>")
+    return "<ul>" + "".join(items) + "</ul>" + total
+
+
+class DecisionDialog(QDialog):
+    """Shows a :class:`Proposal`; ``confirmed(proposal, by, reason_kind, note)`` on OK."""
+
+    confirmed = Signal(object, str, str, str)
+
+    def __init__(self, proposal: Proposal, unit: str, supervisor: str = "",
+                 parent: QWidget | None = None):
+        super().__init__(parent)
+        self.setObjectName("decisionDialog")
+        self.proposal = proposal
+        self.setWindowTitle(f"Confirm re-dispatch - {proposal.title}")
+        layout = QVBoxLayout(self)
+        head = QLabel(f"<h3>{proposal.title}</h3>")
+        layout.addWidget(head)
+        if proposal.event == EVENT_DOWN:
+            safety = QLabel(SAFETY_REMINDER)
+            safety.setObjectName("safetyReminder")
+            safety.setWordWrap(True)
+            safety.setFrameShape(QFrame.Shape.Box)
+            safety.setStyleSheet(f"QLabel#safetyReminder {{ border: 2px solid "
+                                 f"{palette.OKABE_ITO['vermillion']}; padding: 6px; "
+                                 f"background: #FFF4E5; color: black; }}")
+            layout.addWidget(safety)
+        if proposal.plan is None:
+            body = QLabel(f"{palette.MARK_FORBIDDEN} No plan is possible after this event: "
+                          f"{html.escape(proposal.problem)}")
+        else:
+            warn = ""
+            if proposal.problem:
+                warn = (f"<p>{palette.MARK_RUSH} <b>Not every rush job can be placed:</b> "
+                        f"{html.escape(proposal.problem)}</p>")
+            body = QLabel(warn + "<b>Proposed changes against the plan in force:</b>"
+                          + diff_html(proposal.diff, unit))
+        body.setObjectName("proposalDiff")
+        body.setWordWrap(True)
+        body.setTextFormat(Qt.TextFormat.RichText)
+        layout.addWidget(body)
+
+        form = QFormLayout()
+        self.reason = QComboBox()
+        for key, label in REASON_KINDS.items():
+            self.reason.addItem(label, key)
+        self.reason.setCurrentIndex(self.reason.findData(EVENT_REASON[proposal.event]))
+        form.addRow("&Reason:", self.reason)
+        self.note = QPlainTextEdit()
+        self.note.setPlaceholderText("What happened (for example: hydraulic leak, waiting for fitter)")
+        self.note.setMaximumHeight(70)
+        self.note.setTabChangesFocus(True)
+        form.addRow("&Note:", self.note)
+        self.by = QLineEdit(supervisor)
+        self.by.setPlaceholderText("Supervisor name (required)")
+        form.addRow("&Supervisor:", self.by)
+        layout.addLayout(form)
+        self.buttons = QDialogButtonBox(QDialogButtonBox.StandardButton.Ok
+                                        | QDialogButtonBox.StandardButton.Cancel)
+        ok = self.buttons.button(QDialogButtonBox.StandardButton.Ok)
+        ok.setText("Confirm and record")
+        ok.setEnabled(proposal.plan is not None and bool(supervisor.strip()))
+        self.by.textChanged.connect(
+            lambda t: ok.setEnabled(proposal.plan is not None and bool(t.strip())))
+        self.buttons.accepted.connect(self._accept)
+        self.buttons.rejected.connect(self.reject)
+        layout.addWidget(self.buttons)
+        self.resize(560, self.sizeHint().height())
+
+    def confirm(self, by: str, note: str = "", reason: str | None = None) -> None:
+        """Fill in and confirm (what the OK button does; also used by tests)."""
+        self.by.setText(by)
+        self.note.setPlainText(note)
+        if reason:
+            self.reason.setCurrentIndex(self.reason.findData(reason))
+        self._accept()
+
+    def _accept(self) -> None:
+        if self.proposal.plan is None or not self.by.text().strip():
+            return
+        self.confirmed.emit(self.proposal, self.by.text().strip(), self.reason.currentData(),
+                            self.note.toPlainText().strip())
+        self.accept()

@@ -1,0 +1,115 @@
+"""Undoable edits of the shop document (Qt's QUndoCommand: Ctrl+Z / Ctrl+Shift+Z work).
+
+Each edit remembers the old and the new state of exactly what it touches and applies it
+through :class:`~dispatcher.ui.document.ShopDocument`, which announces the change.
+"""
+
+from __future__ import annotations
+
+from typing import Any
+
+from PySide6.QtGui import QUndoCommand
+
+from dispatcher.ui.document import ShopDocument
+
+
+class SetValues(QUndoCommand):
+    """Set grid values of several cells at once (one cell edit, a paste, or a clear)."""
+
+    def __init__(self, doc: ShopDocument, cells: list[tuple[int, int, float | None]], text: str):
+        super().__init__(text)
+        self._doc = doc
+        self._new = list(cells)
+        self._old = [(r, c, doc.value_at(r, c)) for r, c, _ in cells]
+
+    def redo(self) -> None:
+        self._doc._apply_values(self._new)
+
+    def undo(self) -> None:
+        self._doc._apply_values(self._old)
+
+
+class SetPin(QUndoCommand):
+    """Pin a pair (``"must"``), forbid it (``"must_not"``) or clear its pin (``None``)."""
+
+    def __init__(self, doc: ShopDocument, row: int, col: int, kind: str | None, text: str):
+        super().__init__(text)
+        self._doc, self._row, self._col = doc, row, col
+        self._new = kind
+        jid, mid = doc.job_ids[row], doc.machine_ids[col]
+        old = [p for p in doc.shop.pins if p.job == jid and p.machine == mid]
+        self._old = old[0].kind if old else None
+        self._old_note = old[0].note if old else ""
+
+    def redo(self) -> None:
+        self._doc._apply_pin(self._row, self._col, self._new)
+
+    def undo(self) -> None:
+        self._doc._apply_pin(self._row, self._col, self._old, self._old_note)
+
+
+class SetJobField(QUndoCommand):
+    """Change one field of one job (rush flag, wait penalty)."""
+
+    def __init__(self, doc: ShopDocument, row: int, field: str, value: Any, text: str):
+        super().__init__(text)
+        self._doc, self._row, self._field = doc, row, field
+        self._new = value
+        self._old = getattr(doc.job_at(row), field)
+
+    def redo(self) -> None:
+        self._doc._apply_job_field(self._row, self._field, self._new)
+
+    def undo(self) -> None:
+        self._doc._apply_job_field(self._row, self._field, self._old)
+
+
+class SetMachineFields(QUndoCommand):
+    """Change fields of one machine (state with its note and time, slots)."""
+
+    def __init__(self, doc: ShopDocument, col: int, fields: dict[str, Any], text: str):
+        super().__init__(text)
+        self._doc, self._col = doc, col
+        self._new = dict(fields)
+        machine = doc.machine_at(col)
+        self._old = {name: getattr(machine, name) for name in fields}
+
+    def redo(self) -> None:
+        self._doc._apply_machine_fields(self._col, self._new)
+
+    def undo(self) -> None:
+        self._doc._apply_machine_fields(self._col, self._old)
+
+
+class SetJobsState(QUndoCommand):
+    """Change state fields of several jobs (a running job put back to waiting)."""
+
+    def __init__(self, doc: ShopDocument, jobs: list[tuple[int, dict[str, Any]]], text: str,
+                 parent: QUndoCommand | None = None):
+        super().__init__(text, parent)
+        self._doc = doc
+        self._new = [(r, dict(f)) for r, f in jobs]
+        self._old = [(r, {n: getattr(doc.job_at(r), n) for n in f}) for r, f in jobs]
+
+    def redo(self) -> None:
+        self._doc._apply_jobs_state(self._new)
+
+    def undo(self) -> None:
+        self._doc._apply_jobs_state(self._old)
+
+
+class SetPlanInForce(QUndoCommand):
+    """Replace the plan in force (machine id -> job ids) after a confirmed decision."""
+
+    def __init__(self, doc: ShopDocument, plan_in_force: dict[str, list[str]], text: str,
+                 parent: QUndoCommand | None = None):
+        super().__init__(text, parent)
+        self._doc = doc
+        self._new = {k: list(v) for k, v in plan_in_force.items()}
+        self._old = {k: list(v) for k, v in doc.shop.plan_in_force.items()}
+
+    def redo(self) -> None:
+        self._doc._apply_plan_in_force(self._new)
+
+    def undo(self) -> None:
+        self._doc._apply_plan_in_force(self._old)

@@ -1,0 +1,223 @@
+"""Files for the window: new, open, save, save as, grid import/export, recent files,
+the unsaved-changes prompt, and autosave with recovery after a crash.
+
+Opening a file that cannot be read shows one message naming the file and the problem and
+leaves the open document exactly as it was. Autosave writes a copy of the unsaved document
+to a per-user folder every :data:`AUTOSAVE_MS` in a background thread (the GUI thread only
+takes a cheap snapshot); a clean save or close removes it, so a copy found at start-up
+means the app did not close normally and the user is offered to recover it.
+"""
+
+from __future__ import annotations
+
+import hashlib
+import os
+from pathlib import Path
+
+from PySide6.QtCore import QObject, QRunnable, QSettings, QStandardPaths, QThreadPool, QTimer, Signal
+
+from dispatcher.io.grid import GRID_SUFFIXES, GridFileError, read_grid
+from dispatcher.io.shopfile import SHOP_SUFFIX, ShopFileError, load_shop, save_shop
+from dispatcher.shop import Shop, ShopError, shop_from_grid
+from dispatcher.ui.document import ShopDocument
+from dispatcher.ui.messages import CANCEL, SAVE, Messenger
+from dispatcher.ui.solving import snapshot
+
+AUTOSAVE_MS = 60_000
+MAX_RECENT = 8
+RECENT_KEY = "files/recent"
+
+
+def autosave_folder() -> Path:
+    """Per-user folder for autosaved copies (``DISPATCHER_AUTOSAVE_DIR`` overrides)."""
+    env = os.environ.get("DISPATCHER_AUTOSAVE_DIR")
+    if env:
+        return Path(env)
+    base = QStandardPaths.writableLocation(QStandardPaths.StandardLocation.AppLocalDataLocation)
+    return Path(base or Path.home() / ".dispatcher") / "autosave"
+
+
+class _AutosaveJob(QRunnable):
+    def __init__(self, shop: Shop, target: Path):
+        super().__init__()
+        self._shop, self._target = shop, target
+
+    def run(self) -> None:
+        try:
+            self._target.parent.mkdir(parents=True, exist_ok=True)
+            save_shop(self._shop, self._target, check=False)
+        except (OSError, ShopError):
+            pass  # an autosave that cannot be written must never disturb the user's work
+
+
+class FileController(QObject):
+    """File actions on one :class:`ShopDocument`. ``recent_changed`` when the list changes."""
+
+    recent_changed = Signal()
+    status = Signal(str)
+
+    def __init__(self, doc: ShopDocument, messenger: Messenger, settings: QSettings,
+                 parent: QObject | None = None):
+        super().__init__(parent)
+        self.doc = doc
+        self.messenger = messenger
+        self.settings = settings
+        self._autosave_timer = QTimer(self)
+        self._autosave_timer.setInterval(AUTOSAVE_MS)
+        self._autosave_timer.timeout.connect(self.autosave_now)
+        self._autosave_timer.start()
+        self._pool = QThreadPool(self)
+        self._pool.setMaxThreadCount(1)
+
+    # ---- recent files ---------------------------------------------------------------------
+    def recent(self) -> list[str]:
+        value = self.settings.value(RECENT_KEY, [])
+        if isinstance(value, str):
+            value = [value]
+        return [str(v) for v in (value or [])]
+
+    def _remember(self, path: Path) -> None:
+        items = [p for p in self.recent() if p != str(path)]
+        self.settings.setValue(RECENT_KEY, [str(path)] + items[:MAX_RECENT - 1])
+        self.recent_changed.emit()
+
+    # ---- unsaved changes ------------------------------------------------------------------
+    def maybe_keep_changes(self) -> bool:
+        """True when it is fine to replace the document (saved, discarded, or not dirty)."""
+        if not self.doc.dirty:
+            return True
+        name = self.doc.path.name if self.doc.path else (self.doc.shop.name or "the new shop")
+        answer = self.messenger.ask_save(f"{name} has changes that are not saved. Save them?")
+        if answer == CANCEL:
+            return False
+        if answer == SAVE:
+            return self.save()
+        self.discard_autosave()
+        return True
+
+    # ---- new / open -----------------------------------------------------------------------
+    def new(self, shop: Shop | None = None) -> bool:
+        if not self.maybe_keep_changes():
+            return False
+        self.discard_autosave()
+        self.doc.replace(shop or Shop(name="New shop"), None)
+        return True
+
+    def open_path(self, path: str | os.PathLike) -> bool:
+        """Open a shop document or a grid file. On failure: a message, document untouched."""
+        path = Path(path)
+        try:
+            shop = self._read(path)
+        except (ShopError, GridFileError) as exc:
+            self.messenger.error("Cannot open file", str(exc))
+            self.status.emit(f"Not opened: {exc}")
+            return False
+        if not self.maybe_keep_changes():
+            return False
+        self.discard_autosave()
+        is_document = path.suffix.lower() == SHOP_SUFFIX
+        self.doc.replace(shop, path if is_document else None)
+        if is_document:
+            self._remember(path)
+        self.status.emit(f"Opened {path}")
+        return True
+
+    @staticmethod
+    def _read(path: Path) -> Shop:
+        if path.suffix.lower() in GRID_SUFFIXES:
+            table = read_grid(path)
+            return shop_from_grid(table.jobs, table.machines, table.values, table.allowed,
+                                  name=path.stem)
+        # Open without the whole-shop check: an inconsistent shop still opens so it can be
+        # fixed; the plan panel names what is wrong.
+        return load_shop(path, check=False)
+
+    # ---- save -----------------------------------------------------------------------------
+    def save(self) -> bool:
+        if self.doc.path is None or self.doc.path.suffix.lower() != SHOP_SUFFIX:
+            return False
+        return self.save_as(self.doc.path)
+
+    def save_as(self, path: str | os.PathLike) -> bool:
+        path = Path(path)
+        if path.suffix.lower() != SHOP_SUFFIX:
+            path = path.with_suffix(path.suffix + SHOP_SUFFIX if path.suffix else SHOP_SUFFIX)
+        try:
+            save_shop(self.doc.shop, path)
+        except ShopError as exc:
+            self.messenger.error("Cannot save", str(exc))
+            self.status.emit(f"Not saved: {exc}")
+            return False
+        self.discard_autosave()
+        self.doc.set_path(path)
+        self._remember(path)
+        self.status.emit(f"Saved {path}")
+        return True
+
+    def export_grid(self, path: str | os.PathLike) -> bool:
+        """Write the grid (values, ``x`` for cannot run) to CSV or XLSX."""
+        from dispatcher.ui.exporting import write_grid
+        try:
+            write_grid(self.doc.shop, Path(path))
+        except (OSError, ValueError) as exc:
+            self.messenger.error("Cannot export", f"{path}: {exc}")
+            return False
+        self.status.emit(f"Exported the grid to {path}")
+        return True
+
+    # ---- autosave -------------------------------------------------------------------------
+    def autosave_path(self) -> Path:
+        key = str(self.doc.path.resolve()) if self.doc.path else f"untitled-{os.getpid()}"
+        digest = hashlib.sha1(key.encode("utf-8")).hexdigest()[:16]
+        return autosave_folder() / f"{digest}{SHOP_SUFFIX}"
+
+    def autosave_now(self, wait: bool = False) -> None:
+        if not self.doc.dirty:
+            return
+        self._pool.start(_AutosaveJob(snapshot(self.doc.shop), self.autosave_path()))
+        if wait:
+            self._pool.waitForDone(30_000)
+
+    def discard_autosave(self) -> None:
+        self._pool.waitForDone(30_000)
+        try:
+            self.autosave_path().unlink(missing_ok=True)
+        except OSError:
+            pass
+
+    def recover(self) -> bool:
+        """Offer the newest autosaved copy left by a session that did not close normally."""
+        folder = autosave_folder()
+        if not folder.is_dir():
+            return False
+        copies = sorted(folder.glob(f"*{SHOP_SUFFIX}"), key=lambda p: p.stat().st_mtime, reverse=True)
+        if not copies:
+            return False
+        newest = copies[0]
+        if not self.messenger.ask_yes_no(
+                "Recover unsaved work",
+                f"The app did not close normally last time. Recover the unsaved copy "
+                f"saved at {newest.stat().st_mtime and _mtime_text(newest)}?"):
+            return False
+        try:
+            shop = load_shop(newest, check=False)
+        except ShopError as exc:
+            self.messenger.error("Cannot recover", str(exc))
+            return False
+        self.doc.replace(shop, None)
+        # The recovered shop is unsaved work: mark it dirty so closing asks to save it.
+        self.doc.undo_stack.resetClean()
+        self.doc.dirty_changed.emit(True)
+        for p in copies:
+            p.unlink(missing_ok=True)
+        self.status.emit("Recovered unsaved work; save it under a name")
+        return True
+
+    def shutdown(self) -> None:
+        self._autosave_timer.stop()
+        self._pool.waitForDone(30_000)
+
+
+def _mtime_text(path: Path) -> str:
+    from datetime import datetime
+    return datetime.fromtimestamp(path.stat().st_mtime).strftime("%Y-%m-%d %H:%M")

@@ -1,0 +1,368 @@
+"""The dispatch grid as a Qt table model: jobs as rows, machines as columns.
+
+Three leading columns describe the job (rush flag, wait penalty, where the plan puts it);
+machine columns follow from :data:`FIRST_MACHINE_COL`. The model reads the shop through
+:class:`~dispatcher.ui.document.ShopDocument` and the current plan; every edit becomes an
+undoable command on the document's stack. Planned cells carry a check mark, pins a
+diamond, forbidden pairs a cross and cannot-run pairs a dash, besides their colour.
+"""
+
+from __future__ import annotations
+
+from PySide6.QtCore import QAbstractTableModel, QModelIndex, QPersistentModelIndex, Qt, Signal
+
+from dispatcher.shop import DONE, DOWN, MAINTENANCE, MUST, MUST_NOT, RUNNING, Plan
+from dispatcher.ui import palette
+from dispatcher.ui.document import ShopDocument
+from dispatcher.ui.edits import SetJobField, SetValues
+from dispatcher.ui.format import CellTextError, fmt, parse_cell
+
+COL_RUSH = 0
+COL_PENALTY = 1
+COL_PLAN = 2
+FIRST_MACHINE_COL = 3
+LEADING_HEADERS = {COL_RUSH: "Rush", COL_PENALTY: "Wait penalty", COL_PLAN: "Plan puts it on"}
+
+ValueRole = Qt.ItemDataRole.UserRole + 1      # float | None: the grid value (None = cannot run)
+PlannedRole = Qt.ItemDataRole.UserRole + 2    # bool: the plan shown uses this pair
+PinRole = Qt.ItemDataRole.UserRole + 3        # "must" | "must_not" | None
+RunningRole = Qt.ItemDataRole.UserRole + 4    # bool: the job already runs on this machine
+
+_CELL_ROLES = [Qt.ItemDataRole.DisplayRole, Qt.ItemDataRole.EditRole,
+               Qt.ItemDataRole.BackgroundRole, Qt.ItemDataRole.ToolTipRole,
+               Qt.ItemDataRole.AccessibleTextRole, ValueRole, PinRole]
+_PLAN_ROLES = [Qt.ItemDataRole.DisplayRole, Qt.ItemDataRole.BackgroundRole,
+               Qt.ItemDataRole.ToolTipRole, Qt.ItemDataRole.AccessibleTextRole, PlannedRole]
+
+STATE_TEXT = {"up": f"{palette.MARK_UP} up", DOWN: f"{palette.MARK_DOWN} DOWN",
+              MAINTENANCE: f"{palette.MARK_MAINT} maintenance"}
+
+
+class GridModel(QAbstractTableModel):
+    """Table model over a :class:`ShopDocument` and the plan shown.
+
+    ``warning(str)`` reports typed text that was refused (the edit is not made).
+    """
+
+    warning = Signal(str)
+
+    def __init__(self, doc: ShopDocument, parent=None):
+        super().__init__(parent)
+        self._doc = doc
+        self._plan: Plan | None = None
+        self._planned: dict[int, int] = {}     # row -> machine col (newly dispatched)
+        self._running: dict[int, int] = {}     # row -> machine col (already running)
+        self._waiting: set[int] = set()
+        doc.reset.connect(self._on_reset)
+        doc.cells_changed.connect(self._on_cells)
+        doc.jobs_changed.connect(self._on_jobs)
+        doc.machines_changed.connect(self._on_machines)
+
+    # ---- shape ----------------------------------------------------------------------------
+    def rowCount(self, parent: QModelIndex | QPersistentModelIndex = QModelIndex()) -> int:
+        return 0 if parent.isValid() else self._doc.n_jobs()
+
+    def columnCount(self, parent: QModelIndex | QPersistentModelIndex = QModelIndex()) -> int:
+        return 0 if parent.isValid() else FIRST_MACHINE_COL + self._doc.n_machines()
+
+    @staticmethod
+    def machine_col(column: int) -> int | None:
+        """Machine index of a view column, None for the leading job columns."""
+        return column - FIRST_MACHINE_COL if column >= FIRST_MACHINE_COL else None
+
+    # ---- the plan shown -------------------------------------------------------------------
+    @property
+    def plan(self) -> Plan | None:
+        return self._plan
+
+    def set_plan(self, plan: Plan | None) -> None:
+        """Show ``plan`` (None: no plan). Emits dataChanged for the cells whose mark changed."""
+        shop = self._doc.shop
+        rows = {j.name: i for i, j in enumerate(shop.jobs)}
+        cols = {m.name: k for k, m in enumerate(shop.machines)}
+        planned: dict[int, int] = {}
+        running: dict[int, int] = {}
+        waiting: set[int] = set()
+        if plan is not None:
+            for a in plan.assignments:
+                if a.job in rows and a.machine in cols:
+                    planned[rows[a.job]] = cols[a.machine]
+            for r in plan.running:
+                if r.job in rows and r.machine in cols:
+                    running[rows[r.job]] = cols[r.machine]
+            waiting = {rows[n] for n in plan.waiting_jobs if n in rows}
+        touched = {(r, c) for r, c in self._planned.items()} ^ {(r, c) for r, c in planned.items()}
+        self._plan, self._planned, self._running, self._waiting = plan, planned, running, waiting
+        for r, c in touched:
+            idx = self.index(r, FIRST_MACHINE_COL + c)
+            self.dataChanged.emit(idx, idx, _PLAN_ROLES)
+        if self.rowCount():
+            self.dataChanged.emit(self.index(0, COL_PLAN), self.index(self.rowCount() - 1, COL_PLAN),
+                                  _PLAN_ROLES)
+
+    def planned_col(self, row: int) -> int | None:
+        """Machine index the plan shown gives this job (None if it waits or runs already)."""
+        return self._planned.get(row)
+
+    # ---- data -----------------------------------------------------------------------------
+    def data(self, index: QModelIndex | QPersistentModelIndex, role: int = Qt.ItemDataRole.DisplayRole):
+        if not index.isValid():
+            return None
+        row, column = index.row(), index.column()
+        if column == COL_RUSH:
+            return self._rush_data(row, role)
+        if column == COL_PENALTY:
+            return self._penalty_data(row, role)
+        if column == COL_PLAN:
+            return self._plan_data(row, role)
+        return self._cell_data(row, column - FIRST_MACHINE_COL, role)
+
+    def _rush_data(self, row: int, role: int):
+        job = self._doc.job_at(row)
+        if role == Qt.ItemDataRole.CheckStateRole:
+            return Qt.CheckState.Checked if job.rush else Qt.CheckState.Unchecked
+        if role in (Qt.ItemDataRole.DisplayRole, Qt.ItemDataRole.AccessibleTextRole):
+            return f"{palette.MARK_RUSH} RUSH" if job.rush else ""
+        if role == Qt.ItemDataRole.ForegroundRole and job.rush:
+            return palette.colour("black")
+        if role == Qt.ItemDataRole.BackgroundRole and job.rush:
+            return palette.colour("rush", 110)
+        if role == Qt.ItemDataRole.ToolTipRole:
+            return (f"{job.name} is a rush job: the plan must place it this round"
+                    if job.rush else f"{job.name} may wait if the machines are needed elsewhere "
+                    "(tick to make it a rush job)")
+        return None
+
+    def _penalty_data(self, row: int, role: int):
+        job = self._doc.job_at(row)
+        if role in (Qt.ItemDataRole.DisplayRole, Qt.ItemDataRole.AccessibleTextRole):
+            return fmt(job.wait_penalty)
+        if role == Qt.ItemDataRole.EditRole:
+            return fmt(job.wait_penalty)
+        if role == ValueRole:
+            return job.wait_penalty
+        if role == Qt.ItemDataRole.TextAlignmentRole:
+            return int(Qt.AlignmentFlag.AlignRight | Qt.AlignmentFlag.AlignVCenter)
+        if role == Qt.ItemDataRole.ToolTipRole:
+            return (f"Wait penalty of {job.name}: {fmt(job.wait_penalty)} "
+                    f"({self._doc.shop.unit.label()}) added to the total if it is left waiting")
+        return None
+
+    def _plan_data(self, row: int, role: int):
+        job = self._doc.job_at(row)
+        shop = self._doc.shop
+        if row in self._running:
+            m = shop.machines[self._running[row]].name
+            text, tip = f"\u25b6 runs on {m}", f"{job.name} is already running on {m}; it stays there"
+        elif row in self._planned:
+            m = shop.machines[self._planned[row]].name
+            v = self._doc.value_at(row, self._planned[row])
+            text = f"{palette.MARK_PLANNED} {m}"
+            tip = f"The plan puts {job.name} on {m} (value {fmt(v)} {shop.unit.label()})"
+        elif job.state == DONE:
+            text, tip = "done", f"{job.name} is done and takes no part"
+        elif row in self._waiting:
+            text = "\u25cb waits"
+            reason = self._plan.waiting_reasons.get(job.name) if self._plan else None
+            tip = f"{job.name} waits this round" + (f": {reason.text}" if reason else "")
+        else:
+            text, tip = "", "no plan yet"
+        if role in (Qt.ItemDataRole.DisplayRole, Qt.ItemDataRole.AccessibleTextRole):
+            return text
+        if role == Qt.ItemDataRole.ToolTipRole:
+            return tip
+        if role == Qt.ItemDataRole.BackgroundRole and row in self._waiting:
+            return palette.colour("waiting", 45)
+        return None
+
+    def _cell_data(self, row: int, col: int, role: int):
+        doc = self._doc
+        value = doc.value_at(row, col)
+        if role == ValueRole:
+            return value
+        pin = doc.pin_at(row, col)
+        if role == PinRole:
+            return pin
+        planned = self._planned.get(row) == col
+        running = self._running.get(row) == col
+        if role == PlannedRole:
+            return planned
+        if role == RunningRole:
+            return running
+        if role == Qt.ItemDataRole.EditRole:
+            return "x" if value is None else fmt(value)
+        if role in (Qt.ItemDataRole.DisplayRole, Qt.ItemDataRole.AccessibleTextRole):
+            if value is None:
+                return palette.MARK_CANNOT
+            marks = ""
+            if pin == MUST:
+                marks += palette.MARK_PINNED
+            elif pin == MUST_NOT:
+                marks += palette.MARK_FORBIDDEN
+            if planned:
+                marks += palette.MARK_PLANNED
+            elif running:
+                marks += "\u25b6"
+            return f"{marks} {fmt(value)}" if marks else fmt(value)
+        if role == Qt.ItemDataRole.TextAlignmentRole:
+            if value is None:
+                return int(Qt.AlignmentFlag.AlignCenter)
+            return int(Qt.AlignmentFlag.AlignRight | Qt.AlignmentFlag.AlignVCenter)
+        if role == Qt.ItemDataRole.BackgroundRole:
+            if planned or running:
+                return palette.colour("planned", 150)
+            if pin == MUST_NOT:
+                return palette.colour("forbidden", 60)
+            if value is None:
+                return palette.colour("cannot", 28)
+            if doc.machine_at(col).state != "up":
+                return palette.colour("down", 28)
+            return None
+        if role == Qt.ItemDataRole.FontRole and (planned or running):
+            from PySide6.QtGui import QFont
+            f = QFont()
+            f.setBold(True)
+            return f
+        if role == Qt.ItemDataRole.ToolTipRole:
+            return self._cell_tip(row, col, value, pin, planned, running)
+        return None
+
+    def _cell_tip(self, row: int, col: int, value, pin, planned: bool, running: bool) -> str:
+        shop = self._doc.shop
+        job, machine = self._doc.job_at(row), self._doc.machine_at(col)
+        if value is None:
+            lines = [f"{machine.name} cannot run {job.name} (type a number to allow it)"]
+        else:
+            lines = [f"Value of {job.name} on {machine.name}: {fmt(value)} ({shop.unit.label()})"]
+        if planned:
+            lines.append(f"{palette.MARK_PLANNED} the plan shown puts {job.name} here")
+        if running:
+            lines.append(f"\u25b6 {job.name} is already running here")
+        if pin == MUST:
+            lines.append(f"{palette.MARK_PINNED} pinned: {job.name} must go to {machine.name}")
+        elif pin == MUST_NOT:
+            lines.append(f"{palette.MARK_FORBIDDEN} forbidden: {job.name} must not go to {machine.name}")
+        if machine.state != "up":
+            lines.append(f"{machine.name} is {machine.state} and takes no jobs")
+        return "\n".join(lines)
+
+    def headerData(self, section: int, orientation: Qt.Orientation, role: int = Qt.ItemDataRole.DisplayRole):
+        shop = self._doc.shop
+        if orientation == Qt.Orientation.Horizontal:
+            if section < FIRST_MACHINE_COL:
+                if role in (Qt.ItemDataRole.DisplayRole, Qt.ItemDataRole.AccessibleTextRole):
+                    return LEADING_HEADERS[section]
+                if role == Qt.ItemDataRole.ToolTipRole:
+                    return {COL_RUSH: "Rush jobs must be placed this round",
+                            COL_PENALTY: f"Added to the total ({shop.unit.label()}) when the job waits",
+                            COL_PLAN: "Where the plan shown puts each job"}[section]
+                return None
+            if section - FIRST_MACHINE_COL >= self._doc.n_machines():
+                return None
+            m = self._doc.machine_at(section - FIRST_MACHINE_COL)
+            state = STATE_TEXT.get(m.state, m.state)
+            slots = f" \u00b7 {m.slots} slots" if m.slots != 1 else ""
+            if role in (Qt.ItemDataRole.DisplayRole, Qt.ItemDataRole.AccessibleTextRole):
+                return f"{m.name}\n{state}{slots}"
+            if role == Qt.ItemDataRole.ToolTipRole:
+                tip = f"{m.name}: {m.state}, takes {m.slots} job(s) per round"
+                if m.state_note:
+                    tip += f"\nNote: {m.state_note}"
+                return tip + "\nRight-click (or Shift+F10) for machine actions"
+            if role == Qt.ItemDataRole.BackgroundRole and m.state != "up":
+                return palette.colour(m.state if m.state == DOWN else "maintenance", 90)
+            return None
+        if section >= self._doc.n_jobs():
+            return None
+        job = self._doc.job_at(section)
+        if role in (Qt.ItemDataRole.DisplayRole, Qt.ItemDataRole.AccessibleTextRole):
+            mark = {RUNNING: "\u25b6 ", DONE: "\u2713 "}.get(job.state, "")
+            return f"{mark}{job.name}"
+        if role == Qt.ItemDataRole.ToolTipRole:
+            parts = [job.name]
+            if job.work_order:
+                parts.append(f"work order {job.work_order}")
+            if job.due:
+                parts.append(f"due {job.due:%Y-%m-%d %H:%M}")
+            parts.append(f"state: {job.state}")
+            if job.notes:
+                parts.append(job.notes)
+            return "\n".join(parts)
+        return None
+
+    def flags(self, index: QModelIndex | QPersistentModelIndex) -> Qt.ItemFlag:
+        if not index.isValid():
+            return Qt.ItemFlag.NoItemFlags
+        base = Qt.ItemFlag.ItemIsEnabled | Qt.ItemFlag.ItemIsSelectable
+        if index.column() == COL_RUSH:
+            return base | Qt.ItemFlag.ItemIsUserCheckable
+        if index.column() == COL_PLAN:
+            return base
+        return base | Qt.ItemFlag.ItemIsEditable
+
+    def setData(self, index: QModelIndex | QPersistentModelIndex, value, role: int = Qt.ItemDataRole.EditRole) -> bool:
+        if not index.isValid():
+            return False
+        row, column = index.row(), index.column()
+        job = self._doc.job_at(row)
+        stack = self._doc.undo_stack
+        if column == COL_RUSH and role == Qt.ItemDataRole.CheckStateRole:
+            rush = Qt.CheckState(value) == Qt.CheckState.Checked
+            if rush != job.rush:
+                stack.push(SetJobField(self._doc, row, "rush", rush,
+                                       f"{'Mark' if rush else 'Unmark'} {job.name} as rush"))
+            return True
+        if role != Qt.ItemDataRole.EditRole:
+            return False
+        try:
+            number = parse_cell(str(value))
+        except CellTextError as exc:
+            self.warning.emit(f"{job.name}: {exc}")
+            return False
+        if column == COL_PENALTY:
+            if number is None:
+                self.warning.emit(f"{job.name}: the wait penalty must be a number >= 0")
+                return False
+            if number != job.wait_penalty:
+                stack.push(SetJobField(self._doc, row, "wait_penalty", number,
+                                       f"Wait penalty of {job.name} = {fmt(number)}"))
+            return True
+        col = column - FIRST_MACHINE_COL
+        if col < 0:
+            return False
+        if number != self._doc.value_at(row, col):
+            m = self._doc.machine_at(col)
+            what = "cannot run" if number is None else fmt(number)
+            stack.push(SetValues(self._doc, [(row, col, number)], f"{job.name} on {m.name} = {what}"))
+        return True
+
+    # ---- document signals -----------------------------------------------------------------
+    def _on_reset(self) -> None:
+        self.beginResetModel()
+        self._plan, self._planned, self._running, self._waiting = None, {}, {}, set()
+        self.endResetModel()
+
+    def _on_cells(self, rows: list[int], cols: list[int]) -> None:
+        if not rows:
+            return
+        top = self.index(min(rows), FIRST_MACHINE_COL + min(cols))
+        bottom = self.index(max(rows), FIRST_MACHINE_COL + max(cols))
+        self.dataChanged.emit(top, bottom, _CELL_ROLES)
+
+    def _on_jobs(self, rows: list[int]) -> None:
+        if not rows:
+            return
+        lo, hi = min(rows), max(rows)
+        self.dataChanged.emit(self.index(lo, 0), self.index(hi, FIRST_MACHINE_COL - 1),
+                              [Qt.ItemDataRole.DisplayRole, Qt.ItemDataRole.CheckStateRole,
+                               Qt.ItemDataRole.BackgroundRole, Qt.ItemDataRole.ToolTipRole,
+                               ValueRole])
+        self.headerDataChanged.emit(Qt.Orientation.Vertical, lo, hi)
+
+    def _on_machines(self, cols: list[int]) -> None:
+        if not cols or not self.rowCount():
+            return
+        lo, hi = FIRST_MACHINE_COL + min(cols), FIRST_MACHINE_COL + max(cols)
+        self.headerDataChanged.emit(Qt.Orientation.Horizontal, lo, hi)
+        self.dataChanged.emit(self.index(0, lo), self.index(self.rowCount() - 1, hi),
+                              [Qt.ItemDataRole.BackgroundRole, Qt.ItemDataRole.ToolTipRole])

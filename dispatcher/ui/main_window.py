@@ -1,0 +1,530 @@
+"""The main window: the dispatch grid, the live plan, files, and the decision flows.
+
+Every number shown comes from the Qt-free core (``dispatcher.shop``, ``dispatcher.engine``,
+``dispatcher.history``); this module arranges widgets, turns user actions into undoable
+edits, and re-solves in the background after each edit.
+"""
+
+from __future__ import annotations
+
+import os
+from datetime import datetime, timezone
+from pathlib import Path
+
+from PySide6.QtCore import QSettings, Qt, QTimer, Signal
+from PySide6.QtGui import QAction, QActionGroup, QCloseEvent, QGuiApplication, QKeySequence
+from PySide6.QtWidgets import (
+    QDockWidget,
+    QFileDialog,
+    QInputDialog,
+    QLabel,
+    QMainWindow,
+    QMenu,
+    QTabWidget,
+    QWidget,
+)
+
+from dispatcher.history import HistoryError, HistoryInputError, HistoryStore
+from dispatcher.io.shopfile import SHOP_SUFFIX, shop_to_dict
+from dispatcher.shop import DOWN, MAINTENANCE, MUST, MUST_NOT, UP, Plan, Shop
+from dispatcher.ui import palette
+from dispatcher.ui.clipboard import PasteError, copy_block, paste_changes
+from dispatcher.ui.decision import (
+    EVENT_CONFIRM,
+    EVENT_DOWN,
+    EVENT_RUSH,
+    EVENT_UP,
+    DecisionDialog,
+    Proposal,
+    propose,
+)
+from dispatcher.ui.document import ShopDocument
+from dispatcher.ui.edits import (
+    SetJobField,
+    SetJobsState,
+    SetMachineFields,
+    SetPin,
+    SetPlanInForce,
+    SetValues,
+)
+from dispatcher.ui.files import FileController
+from dispatcher.ui.grid_model import FIRST_MACHINE_COL, GridModel
+from dispatcher.ui.grid_view import GridView
+from dispatcher.ui.messages import Messenger
+from dispatcher.ui.plan_panel import PlanPanel
+from dispatcher.ui.solving import SolveOutcome, snapshot, solve_outcome
+from dispatcher.ui.worker import BackgroundRunner
+
+APP_TITLE = "Dispatcher"
+FILE_FILTER = f"Shop documents (*{SHOP_SUFFIX});;Grid files (*.csv *.tsv *.txt *.xlsx);;All files (*)"
+GRID_FILTER = "Grid files (*.csv *.tsv *.txt *.xlsx)"
+
+
+class MainWindow(QMainWindow):
+    """The app window. ``plan_shown(plan)`` after each fresh plan; ``warning(str)`` for
+    refused input (also shown in the status bar)."""
+
+    plan_shown = Signal(object)
+    warning = Signal(str)
+    decision_recorded = Signal(int)
+
+    def __init__(self, shop: Shop | None = None, *, settings: QSettings | None = None,
+                 messenger: Messenger | None = None, history_path: str | os.PathLike | None = None,
+                 parent: QWidget | None = None):
+        super().__init__(parent)
+        self.setObjectName("mainWindow")
+        self.settings = settings or QSettings()
+        self.messenger = messenger or Messenger(self)
+        self.doc = ShopDocument(shop, self)
+        self.files = FileController(self.doc, self.messenger, self.settings, self)
+        self.history = HistoryStore(history_path or self.settings.value("history/path") or None)
+        self.objective = "total"
+        self.plan: Plan | None = None
+        self.decision_dialog: DecisionDialog | None = None
+
+        self.model = GridModel(self.doc, self)
+        self.view = GridView(self)
+        self.view.setModel(self.model)
+        self.plan_panel = PlanPanel(self)
+        self.runner = BackgroundRunner(self)
+
+        self.tabs = QTabWidget(self)
+        self.tabs.setObjectName("centralTabs")
+        self.tabs.addTab(self.view, "&Grid")
+        self.setCentralWidget(self.tabs)
+        plan_dock = QDockWidget("Plan", self)
+        plan_dock.setObjectName("planDock")
+        plan_dock.setWidget(self.plan_panel)
+        self.addDockWidget(Qt.DockWidgetArea.RightDockWidgetArea, plan_dock)
+        self.plan_dock = plan_dock
+        self._legend = QLabel(
+            f"{palette.MARK_PLANNED} planned   \u25b6 running   {palette.MARK_PINNED} pinned   "
+            f"{palette.MARK_FORBIDDEN} forbidden   {palette.MARK_CANNOT} cannot run   "
+            f"{palette.MARK_DOWN} machine down   {palette.MARK_RUSH} rush")
+        self._legend.setToolTip("What the marks in the grid mean (colours repeat them)")
+        self.statusBar().addPermanentWidget(self._legend)
+
+        self._build_actions()
+        self._build_menus()
+        self._connect()
+        self._extra_views()
+        self._update_title()
+        self.resize(1280, 760)
+        self.view.setFocus()
+        self.request_solve()
+
+    # ---- construction ---------------------------------------------------------------------
+    def _action(self, text: str, slot, shortcut=None, tip: str = "", checkable: bool = False) -> QAction:
+        a = QAction(text, self)
+        if shortcut is not None:
+            a.setShortcut(QKeySequence(shortcut))
+        if tip:
+            a.setStatusTip(tip)
+            a.setToolTip(tip)
+        a.setCheckable(checkable)
+        a.triggered.connect(slot)
+        self.addAction(a)
+        return a
+
+    def _build_actions(self) -> None:
+        S = QKeySequence.StandardKey
+        self.act_new = self._action("&New", self.on_new, S.New, "Start an empty shop")
+        self.act_open = self._action("&Open\u2026", self.on_open, S.Open, "Open a shop document or grid file")
+        self.act_save = self._action("&Save", self.on_save, S.Save, "Save the shop document")
+        self.act_save_as = self._action("Save &As\u2026", self.on_save_as, S.SaveAs, "Save under a new name")
+        self.act_import = self._action("&Import grid (CSV/XLSX)\u2026", self.on_import, None,
+                                       "Start a shop from a grid file")
+        self.act_export = self._action("&Export grid (CSV/XLSX)\u2026", self.on_export, None,
+                                       "Write the grid to a CSV or XLSX file")
+        self.act_quit = self._action("&Quit", self.close, S.Quit, "Close the app")
+        self.act_undo = self.doc.undo_stack.createUndoAction(self, "&Undo")
+        self.act_undo.setShortcut(S.Undo)
+        self.act_redo = self.doc.undo_stack.createRedoAction(self, "&Redo")
+        redo_keys = QKeySequence.keyBindings(S.Redo)
+        if QKeySequence("Ctrl+Y") not in redo_keys:
+            redo_keys.append(QKeySequence("Ctrl+Y"))
+        self.act_redo.setShortcuts(redo_keys)
+        self.addAction(self.act_undo)
+        self.addAction(self.act_redo)
+        self.act_copy = self._action("&Copy", self.on_copy, S.Copy, "Copy the selected values")
+        self.act_copy_names = self._action("Copy with &names", lambda: self.on_copy(True), "Ctrl+Shift+C",
+                                           "Copy the selection with job and machine names")
+        self.act_paste = self._action("&Paste", self.on_paste, S.Paste,
+                                      "Paste a tab-separated block from a spreadsheet")
+        self.act_cannot = self._action("Mark &cannot run", self.on_cannot_run, S.Delete,
+                                       "The machine cannot run the job (selected cells)")
+        self.act_pin = self._action("&Pin job to this machine", lambda: self.on_pin(MUST), "Ctrl+P",
+                                    "The job must go to this machine")
+        self.act_forbid = self._action("&Forbid this pair", lambda: self.on_pin(MUST_NOT), "Ctrl+Shift+F",
+                                       "The job must not go to this machine")
+        self.act_unpin = self._action("C&lear pin", lambda: self.on_pin(None), "Ctrl+Shift+P",
+                                      "Remove the pin or ban of this pair")
+        self.act_rush = self._action("&Rush job arrived\u2026", self.on_rush, "Ctrl+R",
+                                     "Make the current job a rush job and re-dispatch")
+        self.act_penalty = self._action("Set &wait penalty\u2026", self.on_penalty, "Ctrl+W",
+                                        "Cost of leaving the current job waiting")
+        self.act_down = self._action("Machine &down\u2026", lambda: self.on_machine_event(EVENT_DOWN),
+                                     "Ctrl+D", "Mark the current machine down and re-dispatch")
+        self.act_up = self._action("Machine back &up\u2026", lambda: self.on_machine_event(EVENT_UP),
+                                   "Ctrl+U", "Mark the current machine up again and re-dispatch")
+        self.act_maint = self._action("Machine in &maintenance", self.on_maintenance, None,
+                                      "The current machine takes no jobs (planned maintenance)")
+        self.act_slots = self._action("Set &slots\u2026", self.on_slots, None,
+                                      "How many jobs the current machine takes per round")
+        self.act_confirm = self._action("&Put plan in force\u2026", self.on_confirm_plan, "Ctrl+Return",
+                                        "Record the plan shown as the decision in force")
+        self.act_resolve = self._action("Re-&solve now", self.request_solve, "F5", "Solve again")
+        self.act_cancel = self._action("&Cancel solve", self.runner.cancel, "Esc",
+                                       "Stop waiting for a long solve")
+        self.objective_group = QActionGroup(self)
+        self.act_objectives = {}
+        for key, label, keyseq in (("total", "Least &total", "Ctrl+1"),
+                                   ("maximize", "Most &value", "Ctrl+2"),
+                                   ("bottleneck", "Smallest &largest value", "Ctrl+3")):
+            a = self._action(label, lambda _=False, k=key: self.set_objective(k), keyseq,
+                             f"Objective: {label.replace('&', '')}", checkable=True)
+            self.objective_group.addAction(a)
+            self.act_objectives[key] = a
+        self.act_objectives["total"].setChecked(True)
+
+    def _build_menus(self) -> None:
+        bar = self.menuBar()
+        m = bar.addMenu("&File")
+        for a in (self.act_new, self.act_open, self.act_save, self.act_save_as):
+            m.addAction(a)
+        self.recent_menu = m.addMenu("Open &recent")
+        m.addSeparator()
+        m.addAction(self.act_import)
+        m.addAction(self.act_export)
+        m.addSeparator()
+        self.file_menu = m
+        self._print_anchor = m.addSeparator()
+        m.addAction(self.act_quit)
+        m = bar.addMenu("&Edit")
+        for a in (self.act_undo, self.act_redo, None, self.act_copy, self.act_copy_names,
+                  self.act_paste, None, self.act_cannot, self.act_pin, self.act_forbid, self.act_unpin):
+            m.addSeparator() if a is None else m.addAction(a)
+        m = bar.addMenu("&Job")
+        m.addAction(self.act_rush)
+        m.addAction(self.act_penalty)
+        m = bar.addMenu("&Machine")
+        for a in (self.act_down, self.act_up, self.act_maint, self.act_slots):
+            m.addAction(a)
+        m = bar.addMenu("&Plan")
+        for a in self.act_objectives.values():
+            m.addAction(a)
+        m.addSeparator()
+        for a in (self.act_resolve, self.act_cancel, self.act_confirm):
+            m.addAction(a)
+        self.plan_menu = m
+        self.view_menu = bar.addMenu("&View")
+        self.view_menu.addAction(self.plan_dock.toggleViewAction())
+        self._fill_recent()
+
+    def _extra_views(self) -> None:
+        """What-if, alternatives, history and printing, each in its own module."""
+        from dispatcher.ui import extras
+        extras.install(self)
+
+    def _connect(self) -> None:
+        self.doc.edited.connect(self.request_solve)
+        self.doc.dirty_changed.connect(self._update_title)
+        self.doc.path_changed.connect(self._update_title)
+        self.doc.reset.connect(self._on_reset)
+        self.model.warning.connect(self.show_warning)
+        self.files.status.connect(lambda t: self.statusBar().showMessage(t, 8000))
+        self.files.recent_changed.connect(self._fill_recent)
+        self.runner.started.connect(lambda _: self.plan_panel.show_busy(True))
+        self.runner.slow.connect(lambda _: self.plan_panel.show_busy(True, slow=True))
+        self.runner.finished.connect(self._on_solved)
+        self.runner.failed.connect(self._on_solve_failed)
+        self.runner.cancelled.connect(self.plan_panel.show_cancelled)
+        self.plan_panel.objective_changed.connect(self.set_objective)
+        self.plan_panel.cancel_requested.connect(self.runner.cancel)
+        self.view.cell_menu_requested.connect(self._cell_menu)
+        self.view.machine_menu_requested.connect(self._machine_menu)
+        self.view.job_menu_requested.connect(self._job_menu)
+
+    # ---- title, status ----------------------------------------------------------------------
+    def _update_title(self, *_args) -> None:
+        name = self.doc.path.name if self.doc.path else (self.doc.shop.name or "Untitled")
+        self.setWindowTitle(f"{name}[*] - {APP_TITLE}")
+        self.setWindowModified(self.doc.dirty)
+
+    def show_warning(self, text: str) -> None:
+        self.statusBar().showMessage(f"{palette.MARK_FORBIDDEN} {text}", 10000)
+        self.warning.emit(text)
+
+    def _fill_recent(self) -> None:
+        self.recent_menu.clear()
+        recent = self.files.recent()
+        for n, path in enumerate(recent, 1):
+            a = self.recent_menu.addAction(f"&{n} {path}")
+            a.triggered.connect(lambda _=False, p=path: self.open_path(p))
+        self.recent_menu.setEnabled(bool(recent))
+
+    # ---- solving ----------------------------------------------------------------------------
+    def request_solve(self) -> None:
+        """Re-solve the current shop in the background; older results will be discarded."""
+        shop = snapshot(self.doc.shop)
+        objective = self.objective
+        self.runner.submit(lambda cancel: solve_outcome(shop, objective, cancel))
+
+    def set_objective(self, objective: str) -> None:
+        if objective == self.objective:
+            return
+        self.objective = objective
+        self.act_objectives[objective].setChecked(True)
+        self.plan_panel.set_objective(objective)
+        self.request_solve()
+
+    def _on_solved(self, outcome: SolveOutcome) -> None:
+        if outcome.plan is None:
+            self.plan_panel.show_problem(outcome.problem)
+            self.model.set_plan(None)
+            self.plan = None
+            self.plan_shown.emit(None)
+            return
+        self.plan = outcome.plan
+        self.model.set_plan(outcome.plan)
+        self.plan_panel.show_plan(outcome.plan, self.doc.shop.unit.label(), outcome.seconds)
+        if outcome.problem:
+            self.plan_panel.show_note(outcome.problem)
+        self.plan_shown.emit(outcome.plan)
+
+    def _on_solve_failed(self, exc: Exception) -> None:
+        self.plan_panel.show_problem(f"internal error while solving: {exc}")
+        self.show_warning(f"Solving failed: {exc}")
+
+    def _on_reset(self) -> None:
+        self.plan = None
+        self.view.resizeColumnsToContents() if self.doc.n_machines() <= 60 else None
+
+    # ---- files ------------------------------------------------------------------------------
+    def on_new(self) -> None:
+        self.files.new()
+
+    def open_path(self, path: str | os.PathLike) -> bool:
+        return self.files.open_path(path)
+
+    def on_open(self) -> None:
+        path, _ = QFileDialog.getOpenFileName(self, "Open", self._folder(), FILE_FILTER)
+        if path:
+            self.open_path(path)
+
+    def on_import(self) -> None:
+        path, _ = QFileDialog.getOpenFileName(self, "Import grid", self._folder(), GRID_FILTER)
+        if path:
+            self.open_path(path)
+
+    def on_save(self) -> bool:
+        if self.doc.path is None or self.doc.path.suffix.lower() != SHOP_SUFFIX:
+            return self.on_save_as()
+        return self.files.save()
+
+    def on_save_as(self) -> bool:
+        path, _ = QFileDialog.getSaveFileName(self, "Save shop", self._folder(),
+                                              f"Shop documents (*{SHOP_SUFFIX})")
+        return self.files.save_as(path) if path else False
+
+    def on_export(self) -> None:
+        path, _ = QFileDialog.getSaveFileName(self, "Export grid", self._folder(), GRID_FILTER)
+        if path:
+            self.files.export_grid(path)
+
+    def _folder(self) -> str:
+        return str(self.doc.path.parent) if self.doc.path else str(Path.cwd())
+
+    def closeEvent(self, event: QCloseEvent) -> None:
+        if not self.files.maybe_keep_changes():
+            event.ignore()
+            return
+        self.runner.cancel()
+        self.runner.wait_idle()
+        self.files.shutdown()
+        self.files.discard_autosave()
+        event.accept()
+
+    # ---- grid edits ---------------------------------------------------------------------------
+    def on_copy(self, with_names: bool = False) -> None:
+        rows, cols = self.view.selected_block()
+        if rows and cols:
+            QGuiApplication.clipboard().setText(copy_block(self.doc.shop, rows, cols, with_names))
+            self.statusBar().showMessage(f"Copied {len(rows)} x {len(cols)} cells", 4000)
+
+    def paste_text(self, text: str) -> bool:
+        """Paste a tab-separated block at the current cell (one undoable edit)."""
+        cell = self.view.current_cell() or (0, 0)
+        if not self.doc.n_jobs() or not self.doc.n_machines():
+            self.show_warning("nothing to paste into: the shop has no jobs or machines")
+            return False
+        try:
+            changes = paste_changes(text, self.doc.shop, *cell)
+        except PasteError as exc:
+            self.show_warning(str(exc))
+            return False
+        changes = [c for c in changes if self.doc.value_at(c[0], c[1]) != c[2]]
+        if changes:
+            self.doc.undo_stack.push(SetValues(self.doc, changes, f"Paste {len(changes)} cells"))
+        self.statusBar().showMessage(f"Pasted; {len(changes)} cells changed", 4000)
+        return True
+
+    def on_paste(self) -> None:
+        self.paste_text(QGuiApplication.clipboard().text())
+
+    def on_cannot_run(self) -> None:
+        rows, cols = self.view.selected_block()
+        changes = [(r, c, None) for r in rows for c in cols if self.doc.value_at(r, c) is not None]
+        if changes:
+            self.doc.undo_stack.push(SetValues(self.doc, changes, f"Mark {len(changes)} cells cannot run"))
+
+    def on_pin(self, kind: str | None) -> None:
+        cell = self.view.current_cell()
+        if cell is None:
+            self.show_warning("choose a cell in a machine column first")
+            return
+        row, col = cell
+        job, machine = self.doc.job_at(row), self.doc.machine_at(col)
+        if self.doc.pin_at(row, col) == kind:
+            return
+        text = {MUST: f"Pin {job.name} to {machine.name}",
+                MUST_NOT: f"Forbid {job.name} on {machine.name}",
+                None: f"Clear pin of {job.name} on {machine.name}"}[kind]
+        self.doc.undo_stack.push(SetPin(self.doc, row, col, kind, text))
+
+    def on_penalty(self) -> None:
+        row = self.view.current_row()
+        if row is None:
+            return
+        job = self.doc.job_at(row)
+        value, ok = QInputDialog.getDouble(self, "Wait penalty", f"Cost of leaving {job.name} waiting:",
+                                           job.wait_penalty, 0.0, 1e12, 2)
+        if ok and value != job.wait_penalty:
+            self.doc.undo_stack.push(SetJobField(self.doc, row, "wait_penalty", value,
+                                                 f"Wait penalty of {job.name}"))
+
+    def on_slots(self) -> None:
+        col = self.view.current_machine()
+        if col is None:
+            self.show_warning("choose a cell in a machine column first")
+            return
+        m = self.doc.machine_at(col)
+        value, ok = QInputDialog.getInt(self, "Slots", f"Jobs {m.name} takes per round:", m.slots, 1, 100)
+        if ok:
+            self.set_slots(col, value)
+
+    def set_slots(self, col: int, slots: int) -> None:
+        m = self.doc.machine_at(col)
+        if slots != m.slots:
+            self.doc.undo_stack.push(SetMachineFields(self.doc, col, {"slots": slots},
+                                                      f"{m.name} takes {slots} job(s)"))
+
+    def on_maintenance(self) -> None:
+        col = self.view.current_machine()
+        if col is None:
+            return
+        m = self.doc.machine_at(col)
+        state = UP if m.state == MAINTENANCE else MAINTENANCE
+        self.doc.undo_stack.push(SetMachineFields(
+            self.doc, col, {"state": state, "state_changed": datetime.now(timezone.utc)},
+            f"{m.name}: {state}"))
+
+    # ---- decision flows -------------------------------------------------------------------------
+    def plan_in_force_json(self) -> dict | None:
+        """The plan in force: the latest recorded decision of this shop, else the plan shown."""
+        try:
+            latest = self.history.latest(self.doc.shop.name) if self.doc.shop.plan_in_force else None
+        except HistoryError:
+            latest = None
+        if latest is not None and latest.plan:
+            return latest.plan
+        return self.plan.to_json() if self.plan is not None else None
+
+    def on_machine_event(self, event: str, col: int | None = None) -> DecisionDialog | None:
+        col = self.view.current_machine() if col is None else col
+        if col is None:
+            self.show_warning("choose a cell in a machine column first (or use the column's menu)")
+            return None
+        m = self.doc.machine_at(col)
+        if event == EVENT_DOWN and m.state == DOWN:
+            self.show_warning(f"{m.name} is already down")
+            return None
+        if event == EVENT_UP and m.state == UP:
+            self.show_warning(f"{m.name} is already up")
+            return None
+        return self._open_decision(propose(self.doc.shop, event, self.objective,
+                                           self.plan_in_force_json(), machine=col))
+
+    def on_rush(self, row: int | None = None) -> DecisionDialog | None:
+        row = self.view.current_row() if row is None or row is False else row
+        if row is None:
+            return None
+        if self.doc.job_at(row).rush:
+            self.show_warning(f"{self.doc.job_at(row).name} is already a rush job")
+            return None
+        return self._open_decision(propose(self.doc.shop, EVENT_RUSH, self.objective,
+                                           self.plan_in_force_json(), job=row))
+
+    def on_confirm_plan(self) -> DecisionDialog | None:
+        return self._open_decision(propose(self.doc.shop, EVENT_CONFIRM, self.objective,
+                                           self.plan_in_force_json()))
+
+    def _open_decision(self, proposal: Proposal) -> DecisionDialog:
+        dialog = DecisionDialog(proposal, self.doc.shop.unit.label(),
+                                str(self.settings.value("history/supervisor", "")), self)
+        dialog.confirmed.connect(self.apply_decision)
+        dialog.setAttribute(Qt.WidgetAttribute.WA_DeleteOnClose)
+        self.decision_dialog = dialog
+        dialog.open()
+        return dialog
+
+    def apply_decision(self, proposal: Proposal, by: str, reason: str, note: str) -> int | None:
+        """Record the decision first; only if that worked, change the document (undoable)."""
+        recorded_shop = proposal.shop
+        recorded_shop.plan_in_force = proposal.plan.in_force(recorded_shop)
+        try:
+            number = self.history.record(shop_to_dict(recorded_shop), proposal.plan.to_json(),
+                                         by=by, reason=reason, note=note)
+        except (HistoryError, HistoryInputError, OSError) as exc:
+            self.messenger.error("Decision not recorded", f"{exc}\n\nThe plan in force is unchanged.")
+            return None
+        self.settings.setValue("history/supervisor", by)
+        stack = self.doc.undo_stack
+        stack.beginMacro(f"{proposal.title} (decision #{number})")
+        if proposal.machine is not None and proposal.event in (EVENT_DOWN, EVENT_UP):
+            m = recorded_shop.machines[proposal.machine]
+            stack.push(SetMachineFields(self.doc, proposal.machine,
+                                        {"state": m.state, "state_note": note,
+                                         "state_changed": datetime.now(timezone.utc)},
+                                        proposal.title))
+        if proposal.job_changes:
+            stack.push(SetJobsState(self.doc, proposal.job_changes, proposal.title))
+        stack.push(SetPlanInForce(self.doc, recorded_shop.plan_in_force, "plan in force"))
+        stack.endMacro()
+        self.statusBar().showMessage(f"Decision #{number} recorded: {proposal.title}", 8000)
+        self.decision_recorded.emit(number)
+        return number
+
+    # ---- context menus ---------------------------------------------------------------------------
+    def _cell_menu(self, pos) -> None:
+        menu = QMenu(self)
+        for a in (self.act_pin, self.act_forbid, self.act_unpin, self.act_cannot, None,
+                  self.act_copy, self.act_copy_names, self.act_paste, None,
+                  self.act_rush, self.act_penalty, None, self.act_down, self.act_up, self.act_slots):
+            menu.addSeparator() if a is None else menu.addAction(a)
+        menu.popup(pos)
+
+    def _machine_menu(self, col: int, pos) -> None:
+        self.view.setCurrentIndex(self.model.index(max(self.view.current_row() or 0, 0),
+                                                    FIRST_MACHINE_COL + col))
+        menu = QMenu(self)
+        for a in (self.act_down, self.act_up, self.act_maint, self.act_slots):
+            menu.addAction(a)
+        menu.popup(pos)
+
+    def _job_menu(self, row: int, pos) -> None:
+        self.view.setCurrentIndex(self.model.index(row, max(self.view.currentIndex().column(), 0)))
+        menu = QMenu(self)
+        menu.addAction(self.act_rush)
+        menu.addAction(self.act_penalty)
+        menu.popup(pos)

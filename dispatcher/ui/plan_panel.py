@@ -1,0 +1,187 @@
+"""The plan panel: per machine its job and value, waiting jobs with reasons, idle machines,
+the total, the objective (switchable) and whether the optimality certificate checked out."""
+
+from __future__ import annotations
+
+from PySide6.QtCore import Qt, Signal
+from PySide6.QtWidgets import (
+    QComboBox,
+    QFormLayout,
+    QHBoxLayout,
+    QLabel,
+    QPushButton,
+    QProgressBar,
+    QTreeWidget,
+    QTreeWidgetItem,
+    QVBoxLayout,
+    QWidget,
+)
+
+from dispatcher.shop import Plan
+from dispatcher.ui import palette
+from dispatcher.ui.format import fmt
+
+OBJECTIVE_LABELS = {
+    "total": "Least total (setup + wait penalties)",
+    "maximize": "Most total value (values are gains)",
+    "bottleneck": "Smallest largest single value, then least total",
+}
+
+
+class PlanPanel(QWidget):
+    """Shows one plan. Emits ``objective_changed(str)`` and ``cancel_requested()``."""
+
+    objective_changed = Signal(str)
+    cancel_requested = Signal()
+
+    def __init__(self, parent: QWidget | None = None):
+        super().__init__(parent)
+        self.setObjectName("planPanel")
+        layout = QVBoxLayout(self)
+        form = QFormLayout()
+        self.objective = QComboBox()
+        for key, label in OBJECTIVE_LABELS.items():
+            self.objective.addItem(label, key)
+        self.objective.setToolTip("What the plan optimises; changing it re-solves at once")
+        self.objective.currentIndexChanged.connect(
+            lambda _: self.objective_changed.emit(self.objective.currentData()))
+        form.addRow("&Objective:", self.objective)
+        self.total = QLabel("-")
+        self.total.setTextInteractionFlags(Qt.TextInteractionFlag.TextSelectableByMouse)
+        form.addRow("Total:", self.total)
+        self.counts = QLabel("-")
+        form.addRow("Placed:", self.counts)
+        self.proof = QLabel("-")
+        form.addRow("Proof:", self.proof)
+        layout.addLayout(form)
+
+        status_row = QHBoxLayout()
+        self.status = QLabel("No plan yet")
+        self.status.setWordWrap(True)
+        self.status.setObjectName("planStatus")
+        self.progress = QProgressBar()
+        self.progress.setRange(0, 0)
+        self.progress.setMaximumWidth(90)
+        self.progress.setVisible(False)
+        self.progress.setToolTip("Solving in the background; the grid stays editable")
+        self.cancel = QPushButton("Cancel")
+        self.cancel.setToolTip("Stop waiting for this solve (Esc)")
+        self.cancel.setVisible(False)
+        self.cancel.clicked.connect(self.cancel_requested)
+        status_row.addWidget(self.status, 1)
+        status_row.addWidget(self.progress)
+        status_row.addWidget(self.cancel)
+        layout.addLayout(status_row)
+
+        self.tree = QTreeWidget()
+        self.tree.setColumnCount(3)
+        self.tree.setHeaderLabels(["Machine", "Job / why it waits", "Value"])
+        self.tree.setRootIsDecorated(True)
+        self.tree.setAlternatingRowColors(True)
+        self.tree.setUniformRowHeights(True)
+        layout.addWidget(self.tree, 1)
+        self._unit = ""
+
+    # ---- state ----------------------------------------------------------------------------
+    def set_objective(self, objective: str) -> None:
+        i = self.objective.findData(objective)
+        if i >= 0 and i != self.objective.currentIndex():
+            self.objective.blockSignals(True)
+            self.objective.setCurrentIndex(i)
+            self.objective.blockSignals(False)
+
+    def show_busy(self, busy: bool, slow: bool = False) -> None:
+        """busy: a solve is under way; slow: it has taken over half a second."""
+        if busy:
+            self.status.setText("Solving\u2026")
+        self.progress.setVisible(busy and slow)
+        self.cancel.setVisible(busy and slow)
+
+    def show_problem(self, message: str) -> None:
+        """The shop cannot be solved as it is: say why, keep the last plan visible but stale."""
+        self.progress.setVisible(False)
+        self.cancel.setVisible(False)
+        self.status.setText(f"{palette.MARK_FORBIDDEN} No plan: {message}")
+        self.status.setToolTip(message)
+
+    def show_note(self, message: str) -> None:
+        """A plan is shown, but with a caveat the supervisor must read (e.g. a rush job left out)."""
+        self.status.setText(f"{palette.MARK_RUSH} {message}")
+        self.status.setToolTip(message)
+
+    def show_cancelled(self) -> None:
+        self.progress.setVisible(False)
+        self.cancel.setVisible(False)
+        self.status.setText("Solve cancelled; the plan shown is out of date (edit or F5 to re-solve)")
+
+    def show_plan(self, plan: Plan | None, unit: str, seconds: float = 0.0) -> None:
+        self._unit = unit
+        self.tree.clear()
+        self.progress.setVisible(False)
+        self.cancel.setVisible(False)
+        if plan is None:
+            self.total.setText("-")
+            self.counts.setText("-")
+            self.proof.setText("-")
+            return
+        self.status.setText(f"{palette.MARK_PLANNED} Up to date (solved in {seconds * 1000:.0f} ms)")
+        self.status.setToolTip("The plan shown matches the grid as it is now")
+        label = "value" if plan.objective == "maximize" else unit
+        self.total.setText(f"{fmt(plan.total)} {label}")
+        self.total.setToolTip(
+            "Sum of the values of newly dispatched jobs "
+            + ("minus" if plan.objective == "maximize" else "plus")
+            + " the wait penalties of waiting jobs (running jobs are not counted)")
+        placed = len(plan.assignments)
+        self.counts.setText(f"{placed} dispatched, {len(plan.running)} running, "
+                            f"{len(plan.waiting_jobs)} waiting")
+        self.counts.setToolTip("Jobs newly dispatched this round, jobs already running, jobs waiting")
+        if plan.verified:
+            self.proof.setText(f"{palette.MARK_PLANNED} optimal (certificate checked)")
+            self.proof.setToolTip("Dual potentials prove no other plan placing as many jobs "
+                                  "has a better total")
+        else:
+            self.proof.setText(f"{palette.MARK_FORBIDDEN} certificate did NOT check")
+        if plan.bottleneck is not None:
+            self.proof.setText(self.proof.text() + f"; largest value {fmt(plan.bottleneck)}")
+
+        machines = QTreeWidgetItem(self.tree, [f"Machines ({len(plan.by_machine())})", "", ""])
+        machines.setFirstColumnSpanned(True)
+        for machine, entries in plan.by_machine().items():
+            for job, value, running in entries:
+                item = QTreeWidgetItem(machines, [machine, ("\u25b6 " if running else
+                                                            f"{palette.MARK_PLANNED} ") + job,
+                                                  fmt(value)])
+                item.setTextAlignment(2, Qt.AlignmentFlag.AlignRight | Qt.AlignmentFlag.AlignVCenter)
+                item.setToolTip(2, f"Value of {job} on {machine} ({unit})"
+                                + (" - already running, not counted in the total" if running else ""))
+                item.setToolTip(1, "already running, stays" if running else "newly dispatched")
+        machines.setExpanded(True)
+        waiting = QTreeWidgetItem(self.tree, [f"Waiting jobs ({len(plan.waiting_jobs)})", "", ""])
+        waiting.setFirstColumnSpanned(True)
+        for job in plan.waiting_jobs:
+            reason = plan.waiting_reasons.get(job)
+            if reason and reason.machines:
+                text = (f"{len(reason.competing_jobs)} jobs compete for "
+                        f"{len(reason.machines)} machine(s)")
+            elif reason:
+                text = "no available machine can run it"
+            else:
+                text = "cheaper to leave it waiting"
+            item = QTreeWidgetItem(waiting, [f"\u25cb {job}", text, ""])
+            item.setToolTip(1, reason.text if reason else "left waiting: cheaper overall")
+            item.setToolTip(0, reason.text if reason else "")
+        waiting.setExpanded(True)
+        idle = QTreeWidgetItem(self.tree, [f"Idle machines ({len(plan.idle_machines)})", "", ""])
+        idle.setFirstColumnSpanned(True)
+        for m in plan.idle_machines:
+            QTreeWidgetItem(idle, [m, "no job this round", ""])
+        idle.setExpanded(True)
+        if plan.unavailable_machines:
+            down = QTreeWidgetItem(self.tree, [f"Not available ({len(plan.unavailable_machines)})", "", ""])
+            down.setFirstColumnSpanned(True)
+            for m in plan.unavailable_machines:
+                QTreeWidgetItem(down, [f"{palette.MARK_DOWN} {m}", "down or in maintenance", ""])
+            down.setExpanded(True)
+        for c in range(3):
+            self.tree.resizeColumnToContents(c)

@@ -1,0 +1,152 @@
+"""Run core computations off the GUI thread and hand back plain data.
+
+:class:`BackgroundRunner` keeps at most one computation running and at most one waiting:
+a request made while another runs replaces any earlier waiting request (only the newest
+edit matters). Every request carries a generation number; a result whose generation is
+not the newest is discarded, so a slow, stale solve can never overwrite a newer plan.
+
+Cancellation is explicit: :meth:`BackgroundRunner.cancel` sets the running job's cancel
+event (computations that look at it stop early), discards its result and reports
+``cancelled``. Long computations (over :data:`PROGRESS_AFTER_MS`) report ``slow`` so the
+window can show progress and a cancel button.
+"""
+
+from __future__ import annotations
+
+import threading
+import traceback
+from collections.abc import Callable
+from dataclasses import dataclass
+from typing import Any
+
+from PySide6.QtCore import QObject, QRunnable, QThreadPool, QTimer, Signal, Slot
+
+#: A computation taking longer than this shows progress and can be cancelled.
+PROGRESS_AFTER_MS = 500
+
+
+@dataclass
+class _Request:
+    generation: int
+    label: str
+    fn: Callable[[threading.Event], Any]
+
+
+class _Signals(QObject):
+    done = Signal(int, object)       # generation, result (plain data)
+    failed = Signal(int, object)     # generation, exception (the core's own error types)
+
+
+class _Job(QRunnable):
+    def __init__(self, request: _Request, cancel: threading.Event, signals: _Signals):
+        super().__init__()
+        self.setAutoDelete(True)
+        self._request = request
+        self._cancel = cancel
+        self._signals = signals
+
+    def run(self) -> None:  # runs in a pool thread
+        try:
+            result = self._request.fn(self._cancel)
+        except Exception as exc:  # reported to the GUI thread, never lost
+            exc.__traceback_text__ = traceback.format_exc()  # type: ignore[attr-defined]
+            self._signals.failed.emit(self._request.generation, exc)
+            return
+        self._signals.done.emit(self._request.generation, result)
+
+
+class BackgroundRunner(QObject):
+    """One-at-a-time runner with stale-result discarding. Signals carry plain data.
+
+    Signals: ``started(label)``, ``slow(label)`` after :data:`PROGRESS_AFTER_MS`,
+    ``finished(result)`` for the newest request only, ``failed(exception)``,
+    ``cancelled()``, ``idle()`` when nothing runs or waits.
+    """
+
+    started = Signal(str)
+    slow = Signal(str)
+    finished = Signal(object)
+    failed = Signal(object)
+    cancelled = Signal()
+    idle = Signal()
+
+    def __init__(self, parent: QObject | None = None, pool: QThreadPool | None = None):
+        super().__init__(parent)
+        self._pool = pool or QThreadPool.globalInstance()
+        self._signals = _Signals(self)
+        self._signals.done.connect(self._on_done)
+        self._signals.failed.connect(self._on_failed)
+        self._generation = 0
+        self._running: _Request | None = None
+        self._running_cancel: threading.Event | None = None
+        self._pending: _Request | None = None
+        self._slow_timer = QTimer(self)
+        self._slow_timer.setSingleShot(True)
+        self._slow_timer.setInterval(PROGRESS_AFTER_MS)
+        self._slow_timer.timeout.connect(self._on_slow)
+
+    @property
+    def generation(self) -> int:
+        """Number of the newest request."""
+        return self._generation
+
+    def is_busy(self) -> bool:
+        return self._running is not None or self._pending is not None
+
+    def submit(self, fn: Callable[[threading.Event], Any], label: str = "solving") -> int:
+        """Queue ``fn(cancel_event)``; returns its generation. Older waiting requests are dropped."""
+        self._generation += 1
+        self._pending = _Request(self._generation, label, fn)
+        if self._running is None:
+            self._start_pending()
+        return self._generation
+
+    def cancel(self) -> None:
+        """Stop waiting for the running computation and drop any waiting one."""
+        self._pending = None
+        if self._running_cancel is not None:
+            self._running_cancel.set()
+        if self._running is not None:
+            self._generation += 1   # whatever comes back is now stale
+            self._slow_timer.stop()
+            self.cancelled.emit()
+
+    def wait_idle(self, timeout_ms: int = 30_000) -> bool:
+        """Block until the pool thread is done (for tests and shutdown only)."""
+        return self._pool.waitForDone(timeout_ms)
+
+    def _start_pending(self) -> None:
+        request, self._pending = self._pending, None
+        if request is None:
+            self.idle.emit()
+            return
+        self._running = request
+        self._running_cancel = threading.Event()
+        self.started.emit(request.label)
+        self._slow_timer.start()
+        self._pool.start(_Job(request, self._running_cancel, self._signals))
+
+    def _finish_running(self) -> None:
+        self._running = None
+        self._running_cancel = None
+        self._slow_timer.stop()
+        self._start_pending()
+
+    @Slot(int, object)
+    def _on_done(self, generation: int, result: Any) -> None:
+        fresh = generation == self._generation
+        self._finish_running()
+        if fresh:
+            self.finished.emit(result)
+
+    @Slot(int, object)
+    def _on_failed(self, generation: int, exc: Exception) -> None:
+        fresh = generation == self._generation
+        self._finish_running()
+        if fresh:
+            self.failed.emit(exc)
+
+    @Slot()
+    def _on_slow(self) -> None:
+        if self._running is not None:
+            self.slow.emit(self._running.label)

@@ -1,0 +1,279 @@
+"""The main window, driven headless with pytest-qt: edits re-solve the plan, paste, undo and
+redo, the breakdown and rush flows record decisions, files round-trip, bad files are
+refused without touching the open document."""
+
+from __future__ import annotations
+
+import numpy as np
+import pytest
+from PySide6.QtCore import Qt
+
+from dispatcher.history import HistoryStore
+from dispatcher.io.shopfile import load_shop, shop_to_dict
+from dispatcher.shop import DOWN, solve_shop
+from dispatcher.ui.decision import SAFETY_REMINDER
+from dispatcher.ui.grid_model import FIRST_MACHINE_COL, PlannedRole
+from tests.ui_support import activate, make_window, reference_total, save_shot, wait_plan
+
+
+@pytest.fixture
+def grid_window(qtbot, tmp_path, monkeypatch, samples):
+    return make_window(qtbot, tmp_path, monkeypatch, samples / "sheet_metal_grid.csv")
+
+
+@pytest.fixture
+def shop_window(qtbot, tmp_path, monkeypatch, samples):
+    return make_window(qtbot, tmp_path, monkeypatch, samples / "small_moulding_cell.dshop")
+
+
+def _edit(qtbot, window, row: int, col: int, text: str) -> None:
+    idx = window.model.index(row, FIRST_MACHINE_COL + col)
+    assert window.model.setData(idx, text, Qt.ItemDataRole.EditRole)
+    wait_plan(qtbot, window)
+
+
+def test_plan_matches_scipy_after_editing_a_planned_cell(qtbot, grid_window):
+    window = grid_window
+    values, allowed = window.doc.shop.matrix()
+    # scipy's linear_sum_assignment is the reference for the plan's total.
+    assert window.plan.total == pytest.approx(reference_total(values, allowed))
+    a = window.plan.assignments[0]
+    row = window.doc.shop.job_names().index(a.job)
+    col = window.doc.shop.machine_names().index(a.machine)
+    assert window.model.index(row, FIRST_MACHINE_COL + col).data(PlannedRole) is True
+    _edit(qtbot, window, row, col, "5000")
+    values, allowed = window.doc.shop.matrix()
+    assert values[row, col] == 5000
+    assert window.plan.total == pytest.approx(reference_total(values, allowed))
+    assert window.plan.machine_of(a.job) != a.machine
+    assert window.model.index(row, FIRST_MACHINE_COL + col).data(PlannedRole) is False
+
+
+def test_typed_text_that_is_not_a_number_is_refused_with_a_message(qtbot, grid_window):
+    window = grid_window
+    before = shop_to_dict(window.doc.shop)
+    with qtbot.waitSignal(window.model.warning) as blocker:
+        ok = window.model.setData(window.model.index(0, FIRST_MACHINE_COL), "twelve")
+    assert not ok
+    assert "'twelve' is not a number" in blocker.args[0]
+    assert shop_to_dict(window.doc.shop) == before
+    assert window.doc.undo_stack.count() == 0
+
+
+def test_paste_a_block_then_undo_and_redo_with_the_keyboard(qtbot, grid_window):
+    window = grid_window
+    shop = window.doc.shop
+    original = shop_to_dict(shop)
+    window.view.setCurrentIndex(window.model.index(1, FIRST_MACHINE_COL + 2))
+    assert window.paste_text("1\t2\n3\tx\n")
+    wait_plan(qtbot, window)
+    assert shop.value(shop.jobs[1].id, shop.machines[2].id) == 1
+    assert shop.value(shop.jobs[1].id, shop.machines[3].id) == 2
+    assert shop.value(shop.jobs[2].id, shop.machines[2].id) == 3
+    assert shop.value(shop.jobs[2].id, shop.machines[3].id) is None
+    values, allowed = shop.matrix()
+    assert window.plan.total == pytest.approx(reference_total(values, allowed))  # scipy
+    pasted = shop_to_dict(shop)
+
+    activate(qtbot, window)
+    window.view.setFocus()
+    qtbot.keyClick(window.view, Qt.Key.Key_Z, Qt.KeyboardModifier.ControlModifier)
+    wait_plan(qtbot, window)
+    assert shop_to_dict(shop) == original
+    values, allowed = shop.matrix()
+    assert window.plan.total == pytest.approx(reference_total(values, allowed))
+    qtbot.keyClick(window.view, Qt.Key.Key_Y, Qt.KeyboardModifier.ControlModifier)
+    wait_plan(qtbot, window)
+    assert shop_to_dict(shop) == pasted
+
+
+def test_paste_with_names_goes_to_the_named_cells(qtbot, grid_window):
+    window = grid_window
+    shop = window.doc.shop
+    job, machine = shop.jobs[5], shop.machines[6]
+    text = f"label\t{machine.name}\n{job.name}\t7.5\n"
+    window.view.setCurrentIndex(window.model.index(0, FIRST_MACHINE_COL))
+    assert window.paste_text(text)
+    assert shop.value(job.id, machine.id) == 7.5
+
+
+def test_a_bad_paste_names_row_and_column_and_changes_nothing(qtbot, grid_window):
+    window = grid_window
+    before = shop_to_dict(window.doc.shop)
+    window.view.setCurrentIndex(window.model.index(0, FIRST_MACHINE_COL))
+    with qtbot.waitSignal(window.warning) as blocker:
+        assert not window.paste_text("1\t2\n3\tabc\n")
+    assert "row 2, column 2" in blocker.args[0] and "'abc' is not a number" in blocker.args[0]
+    assert shop_to_dict(window.doc.shop) == before
+
+
+def test_machine_down_confirmed_is_recorded_with_safety_reminder(qtbot, shop_window, tmp_path):
+    window = shop_window
+    shop = window.doc.shop
+    # A machine running an ordinary (not rush, not pinned) job.
+    busy = next(a.machine for a in window.plan.assignments
+                if not shop.job_by_name(a.job).rush and not shop.pins_of(shop.job_by_name(a.job).id))
+    col = shop.machine_names().index(busy)
+    dialog = window.on_machine_event("down", col)
+    assert dialog is not None and dialog.isVisible()
+    texts = " ".join(w.text() for w in dialog.findChildren(type(dialog.findChild(object, "safetyReminder"))))
+    assert SAFETY_REMINDER in texts and "lockout/tagout" in SAFETY_REMINDER
+    assert busy in dialog.findChild(object, "proposalDiff").text()
+    save_shot(dialog, tmp_path, "breakdown_dialog")
+    with qtbot.waitSignal(window.decision_recorded) as rec:
+        dialog.confirm("A. Supervisor", "hydraulic leak")
+    wait_plan(qtbot, window)
+    assert shop.machines[col].state == DOWN
+    assert busy not in [a.machine for a in window.plan.assignments]
+    store = HistoryStore(tmp_path / "history.sqlite")
+    [entry] = store.list()
+    assert entry.id == rec.args[0] and entry.reason == "breakdown" and entry.by == "A. Supervisor"
+    decision = store.get(entry.id)
+    assert decision.note == "hydraulic leak"
+    assert busy not in [a["machine"] for a in decision.plan["assignments"]]
+    # The recorded plan is what the core computes for the shop after the event.
+    assert decision.plan["total"] == pytest.approx(solve_shop(shop, "total").total)
+    # Undo puts the machine back up; the history keeps the decision (append-only).
+    window.doc.undo_stack.undo()
+    assert shop.machines[col].state == "up"
+    assert store.count() == 1
+
+
+def test_breakdown_that_strands_a_rush_job_still_offers_a_plan(qtbot, shop_window, tmp_path):
+    window = shop_window
+    shop = window.doc.shop
+    rush_machine = next(a.machine for a in window.plan.assignments if shop.job_by_name(a.job).rush)
+    col = shop.machine_names().index(rush_machine)
+    dialog = window.on_machine_event("down", col)
+    text = dialog.findChild(object, "proposalDiff").text()
+    if "Not every rush job can be placed" in text:
+        assert "rush flags stay set" in text
+    dialog.confirm("C. Night")
+    wait_plan(qtbot, window)
+    assert shop.machines[col].state == DOWN
+    assert HistoryStore(tmp_path / "history.sqlite").count() == 1
+
+
+def test_rush_job_arrival_is_recorded(qtbot, shop_window, tmp_path):
+    window = shop_window
+    shop = window.doc.shop
+    row = shop.job_names().index(window.plan.waiting_jobs[0])
+    name = shop.jobs[row].name
+    dialog = window.on_rush(row)
+    assert dialog.findChild(object, "safetyReminder") is None
+    dialog.confirm("B. Lead")
+    wait_plan(qtbot, window)
+    assert shop.jobs[row].rush
+    assert window.plan is not None
+    if name in window.plan.waiting_jobs:   # it cannot be placed: the panel says why
+        assert "rush" in window.plan_panel.status.text() and name in window.plan_panel.status.text()
+    [entry] = HistoryStore(tmp_path / "history.sqlite").list()
+    assert entry.reason == "rush-job"
+
+
+def test_save_and_reopen_gives_the_identical_shop(qtbot, shop_window, tmp_path):
+    window = shop_window
+    _edit(qtbot, window, 0, 0, "33")
+    window.set_slots(1, 2)
+    assert window.doc.dirty
+    target = tmp_path / "saved.dshop"
+    assert window.files.save_as(target)
+    assert not window.doc.dirty
+    saved = shop_to_dict(window.doc.shop)
+    assert shop_to_dict(load_shop(target)) == saved
+    window.files.new()
+    assert window.doc.n_jobs() == 0
+    assert window.open_path(target)
+    assert shop_to_dict(window.doc.shop) == saved
+    assert str(target) in window.files.recent()
+
+
+@pytest.mark.parametrize("content", ["{ not json", '{"format": "dispatcher-shop", "format_version": 99}',
+                                     "", "\x00\x01binary"])
+def test_a_bad_file_shows_a_message_and_keeps_the_document(qtbot, shop_window, tmp_path, content):
+    window = shop_window
+    _edit(qtbot, window, 0, 0, "44")
+    before, path, shop = shop_to_dict(window.doc.shop), window.doc.path, window.doc.shop
+    bad = tmp_path / "broken.dshop"
+    bad.write_text(content, encoding="utf-8")
+    assert not window.open_path(bad)
+    kind, title, text = window.messenger.messages[-1]
+    assert kind == "error" and str(bad) in text
+    assert window.doc.shop is shop and window.doc.path == path and window.doc.dirty
+    assert shop_to_dict(window.doc.shop) == before
+
+
+def test_unsaved_changes_prompt_can_cancel_opening(qtbot, shop_window, samples):
+    window = shop_window
+    _edit(qtbot, window, 0, 0, "45")
+    window.messenger.save_answer = "cancel"
+    shop = window.doc.shop
+    assert not window.open_path(samples / "sheet_metal_grid.csv")
+    assert window.doc.shop is shop
+    assert window.messenger.messages[-1][0] == "save?"
+
+
+def test_autosave_is_offered_back_after_a_crash(qtbot, tmp_path, monkeypatch, samples):
+    first = make_window(qtbot, tmp_path, monkeypatch, samples / "small_moulding_cell.dshop")
+    _edit(qtbot, first, 1, 1, "99")
+    first.files.autosave_now(wait=True)
+    expected = shop_to_dict(first.doc.shop)
+    # Simulate a crash: the first window never closes normally, so its copy stays.
+    second = make_window(qtbot, tmp_path, monkeypatch)
+    assert second.files.recover()
+    assert shop_to_dict(second.doc.shop) == expected
+    assert second.doc.dirty
+
+
+def test_switching_the_objective_re_solves(qtbot, grid_window):
+    window = grid_window
+    window.plan_panel.objective.setCurrentIndex(window.plan_panel.objective.findData("bottleneck"))
+    wait_plan(qtbot, window)
+    assert window.plan.objective == "bottleneck"
+    values, allowed = window.doc.shop.matrix()
+    # Reference: the smallest threshold t for which scipy still finds a full assignment
+    # using only pairs <= t (brute force over the distinct values).
+    best = None
+    for t in np.unique(values[allowed]):
+        ok = allowed & (values <= t)
+        try:
+            total = reference_total(values, ok)
+        except AssertionError:
+            continue
+        best = t
+        break
+    assert window.plan.bottleneck == pytest.approx(best)
+    assert total is not None
+
+
+def test_no_exception_escapes_during_a_session(qtbot, shop_window, samples, tmp_path):
+    window = shop_window
+    with qtbot.captureExceptions() as exceptions:
+        for objective in ("maximize", "bottleneck", "total"):
+            window.set_objective(objective)
+        window.view.setCurrentIndex(window.model.index(2, FIRST_MACHINE_COL + 1))
+        window.on_pin("must")
+        window.on_pin("must_not")
+        window.on_pin(None)
+        window.on_cannot_run()
+        window.on_copy(True)
+        window.paste_text("")
+        window.doc.undo_stack.undo()
+        window.doc.undo_stack.redo()
+        window.request_solve()
+        window.runner.cancel()
+        wait_plan(qtbot, window)
+        window.open_path(tmp_path / "missing.dshop")
+        window.open_path(samples / "medium_machining_shop.dshop")
+        wait_plan(qtbot, window)
+    assert exceptions == []
+    assert window.plan is not None
+
+
+def test_screenshot_of_the_main_window(qtbot, tmp_path, monkeypatch, samples):
+    window = make_window(qtbot, tmp_path, monkeypatch, samples / "medium_machining_shop.dshop")
+    window.show()
+    qtbot.waitExposed(window)
+    wait_plan(qtbot, window)
+    out = save_shot(window, tmp_path, "main_window")
+    assert out.stat().st_size > 10_000

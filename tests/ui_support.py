@@ -1,0 +1,68 @@
+"""Helpers shared by the app tests (pytest-qt, headless)."""
+
+from __future__ import annotations
+
+from pathlib import Path
+
+import numpy as np
+from PySide6.QtCore import QSettings
+from scipy.optimize import linear_sum_assignment
+
+from dispatcher.ui.main_window import MainWindow
+from dispatcher.ui.messages import RecordingMessenger
+
+SHOTS = Path("/tmp/ui_shots")
+
+
+def make_window(qtbot, tmp_path: Path, monkeypatch, path: Path | None = None) -> MainWindow:
+    """A main window with its own settings file, history file and autosave folder."""
+    monkeypatch.setenv("DISPATCHER_AUTOSAVE_DIR", str(tmp_path / "autosave"))
+    settings = QSettings(str(tmp_path / "settings.ini"), QSettings.Format.IniFormat)
+    window = MainWindow(settings=settings, messenger=RecordingMessenger(),
+                        history_path=tmp_path / "history.sqlite")
+    qtbot.addWidget(window)
+    if path is not None:
+        assert window.open_path(path), window.messenger.messages
+    wait_plan(qtbot, window)
+    return window
+
+
+def activate(qtbot, window) -> None:
+    """Show the window and make it the active one, so keyboard shortcuts reach it
+    (the offscreen platform does not activate windows by itself)."""
+    from PySide6.QtWidgets import QApplication
+
+    window.show()
+    qtbot.waitExposed(window)
+    QApplication.setActiveWindow(window)
+
+
+def wait_plan(qtbot, window: MainWindow) -> None:
+    """Wait until the background solve of the newest edit has been shown."""
+    qtbot.waitUntil(lambda: not window.runner.is_busy(), timeout=20_000)
+    window.runner.wait_idle()
+    qtbot.waitUntil(lambda: not window.runner.is_busy(), timeout=20_000)
+
+
+def reference_total(values: np.ndarray, allowed: np.ndarray) -> float:
+    """Least total placing min(jobs, machines) jobs, by scipy's linear_sum_assignment
+    (reference library) with forbidden pairs priced out of reach."""
+    big = 1e9
+    cost = np.where(allowed, values, big)
+    rows, cols = linear_sum_assignment(cost)
+    total = float(cost[rows, cols].sum())
+    assert total < big, "reference needs a grid where every machine can be used"
+    return total
+
+
+def save_shot(widget, tmp_path: Path, name: str) -> Path:
+    """Render ``widget`` to PNG in tmp_path and keep a copy in /tmp/ui_shots for review."""
+    image = widget.grab()
+    out = tmp_path / f"{name}.png"
+    assert image.save(str(out)), f"could not write {out}"
+    try:
+        SHOTS.mkdir(parents=True, exist_ok=True)
+        image.save(str(SHOTS / f"{name}.png"))
+    except OSError:
+        pass
+    return out
