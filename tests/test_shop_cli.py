@@ -128,9 +128,13 @@ def test_convert_refuses_bad_grid_and_writes_nothing(capsys, tmp_path):
 def test_must_run_option_on_a_shop_document(capsys):
     sample = str(SAMPLES / "small_moulding_cell.dshop")
     _, plain = run_json(capsys, "solve", sample, "--json")
-    waiting = plain["waiting_jobs"][0]
+    waiting = "WO-7008 spacer"
+    assert waiting in plain["waiting_jobs"]
     code, forced = run_json(capsys, "solve", sample, "--json", "--must-run", waiting)
     assert code == 0 and waiting in {a["job"] for a in forced["assignments"]}
     assert forced["total"] >= plain["total"]  # a restriction cannot improve the optimum
     assert main(["solve", sample, "--must-run", "No such job"]) == 2
     assert "must-run job 'No such job'" in capsys.readouterr().err
+    # the clip runs only on the two small presses, which the two rush jobs need
+    assert main(["solve", sample, "--must-run", "WO-7002 clip"]) == 3
+    assert "Press 80t" in capsys.readouterr().err
