@@ -72,7 +72,7 @@ def test_input_arrays_are_not_modified():
     allowed = np.array([[True, False], [True, True]])
     penalty = np.array([4.0, 5.0])
     copies = costs.copy(), allowed.copy(), penalty.copy()
-    solve(costs, allowed, wait_penalty=penalty, must_run=[0])
+    assert solve(costs, allowed, wait_penalty=penalty, must_run=[0]).verify()
     np.testing.assert_array_equal(costs, copies[0])
     np.testing.assert_array_equal(allowed, copies[1])
     np.testing.assert_array_equal(penalty, copies[2])

@@ -221,5 +221,6 @@ def test_maximize_flag_is_the_maximize_objective():
     values = np.random.default_rng(7).integers(0, 100, size=(6, 9))
     a = _solve_checked(values, None, None, None, "maximize")
     b = solve(values, maximize=True)
+    assert b.verify()
     rows, cols = linear_sum_assignment(values, maximize=True)
     assert a.total == b.total == values[rows, cols].sum()
