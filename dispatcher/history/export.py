@@ -46,8 +46,9 @@ def to_dataframe(store: HistoryStore, **filters: Any) -> pd.DataFrame:
 def export_csv(store: HistoryStore, target: str | os.PathLike, **filters: Any) -> int:
     """Write the matching decisions' rows to ``target`` (UTF-8 CSV); returns the row count."""
     frame = to_dataframe(store, **filters)
-    text_columns = [c for c in COLUMNS if frame[c].dtype == object]
-    for column in text_columns:
+    import pandas as pd
+
+    for column in [c for c in COLUMNS if not pd.api.types.is_numeric_dtype(frame[c])]:
         frame[column] = frame[column].map(_defuse)
     target = Path(target)
     tmp = target.with_name(f".{target.name}.{os.getpid()}.partial")

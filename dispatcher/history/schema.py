@@ -190,16 +190,19 @@ def check_header(path: Path) -> None:
                            "a backup or choose another file with --history PATH")
 
 
-def check_identity(conn: sqlite3.Connection, path: Path) -> int:
-    """The file's schema version, after checking it is a dispatcher history we can read."""
+def check_identity(conn: sqlite3.Connection, path: Path, newest: int = SCHEMA_VERSION) -> int:
+    """The file's schema version, after checking it is a dispatcher history we can read.
+
+    ``newest`` is the latest schema this program knows (files above it are refused).
+    """
     app_id = conn.execute("PRAGMA application_id").fetchone()[0]
     version = conn.execute("PRAGMA user_version").fetchone()[0]
     if app_id != APPLICATION_ID:
         raise HistoryError(f"{path}: an SQLite file, but not a dispatcher history; it was left "
                            "as it is. Choose another file with --history PATH")
-    if version > SCHEMA_VERSION:
+    if version > newest:
         raise HistoryError(f"{path}: written by a newer version of dispatcher (history schema "
-                           f"{version}, this version reads up to {SCHEMA_VERSION}); update "
+                           f"{version}, this version reads up to {newest}); update "
                            "dispatcher to use it. The file was left as it is")
     if version < 1:
         raise HistoryError(f"{path}: a dispatcher history without a schema; it was left as it "

@@ -224,7 +224,8 @@ class HistoryStore:
 
         def check() -> None:
             with self._connection(write=False) as conn:
-                version = schema.check_identity(conn, self.path)
+                version = schema.check_identity(conn, self.path,
+                                                 self._migrations[-1].version)
                 schema.quick_check(conn, self.path)
                 if version < self._migrations[-1].version:
                     if self.read_only():
