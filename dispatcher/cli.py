@@ -12,6 +12,7 @@ Exit codes: 0 done, 2 bad input, 3 infeasible (must-run jobs cannot all be place
 from __future__ import annotations
 
 import argparse
+import os
 import sys
 from collections.abc import Sequence
 
@@ -47,3 +48,10 @@ def main(argv: Sequence[str] | None = None) -> int:
     except KeyboardInterrupt:
         print("dispatcher: interrupted", file=sys.stderr)
         return 130
+    except BrokenPipeError:
+        # The reader (for example `head`) closed the pipe: not an error of ours.
+        try:
+            sys.stdout = open(os.devnull, "w")  # noqa: SIM115 - silence the flush at exit
+        except OSError:
+            pass
+        return 0
