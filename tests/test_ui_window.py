@@ -13,7 +13,7 @@ from dispatcher.io.shopfile import load_shop, shop_to_dict
 from dispatcher.shop import DOWN, solve_shop
 from dispatcher.ui.decision import SAFETY_REMINDER
 from dispatcher.ui.grid_model import FIRST_MACHINE_COL, PlannedRole
-from tests.ui_support import activate, make_window, reference_total, save_shot, wait_plan
+from ui_support import activate, make_window, reference_total, save_shot, wait_plan
 
 
 @pytest.fixture
