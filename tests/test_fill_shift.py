@@ -289,3 +289,23 @@ def test_time_limit_gives_a_checked_plan_and_states_what_is_proven():
         assert plan.status == "optimal" and plan.gap == 0
     else:
         assert plan.status == "time_limit" and "proven gap" in plan.status_text
+
+
+def test_progress_reports_stages_and_cancel_stops_before_solving():
+    import threading
+
+    from dispatcher.engine.fill_shift import ShiftCancelled
+
+    seen: list[str] = []
+    fill_shift([[1.0, 2.0], [3.0, 4.0]], np.ones((2, 2)), [1, 1], progress=seen.append)
+    assert seen == ["stage 1 of 2: the most jobs that fit", "stage 2 of 2: the best total"]
+    stop = threading.Event()
+    stop.set()
+    with pytest.raises(ShiftCancelled):
+        fill_shift([[1.0, 2.0], [3.0, 4.0]], np.ones((2, 2)), [1, 1], cancel=stop)
+    # Cancelled while stage 1 runs: stage 2 never starts.
+    later, stages = threading.Event(), []
+    with pytest.raises(ShiftCancelled):
+        fill_shift([[1.0, 2.0], [3.0, 4.0]], np.ones((2, 2)), [1, 1], cancel=later,
+                   progress=lambda text: (stages.append(text), later.set()))
+    assert stages == ["stage 1 of 2: the most jobs that fit"]

@@ -45,6 +45,7 @@ __all__ = [
     "MIP_REL_GAP",
     "STATUS_OPTIMAL",
     "STATUS_TIME_LIMIT",
+    "ShiftCancelled",
     "ShiftInfeasibleError",
     "ShiftPlan",
     "ShiftSearchError",
@@ -73,6 +74,10 @@ class ShiftInfeasibleError(Exception):
         self.kind = kind
         self.needed = needed
         self.available = available
+
+
+class ShiftCancelled(Exception):
+    """The caller's ``cancel`` event was set; no plan is returned."""
 
 
 class ShiftSearchError(RuntimeError):
@@ -313,7 +318,8 @@ def _milp(c, integrality, bounds, constraints, time_left):
 def fill_shift(values, hours, capacity, *, allowed=None, maximize: bool = False,
                time_limit: float | None = None, wait_penalty=None, must_run=None,
                all_jobs: bool = False, pins: Mapping | None = None, rush=None, due=None,
-               machine_factor=None, most_jobs_first: bool = True) -> ShiftPlan:
+               machine_factor=None, most_jobs_first: bool = True, cancel=None,
+               progress=None) -> ShiftPlan:
     """Best shift plan running several jobs per machine within each machine's hours.
 
     Parameters
@@ -344,6 +350,12 @@ def fill_shift(values, hours, capacity, *, allowed=None, maximize: bool = False,
         defaults to the must-run jobs.
     most_jobs_first : bool
         Run as many jobs as fit before optimising values (as the one-to-one engine does).
+    cancel : threading.Event, optional
+        Checked before each solver stage; when set, :class:`ShiftCancelled` is raised. A
+        stage already running is not interrupted (scipy offers no hook): pair it with a
+        ``time_limit`` so a cancelled solve ends soon.
+    progress : callable, optional
+        Called with a short text as each solver stage starts (for a progress display).
 
     Returns
     -------
@@ -357,6 +369,8 @@ def fill_shift(values, hours, capacity, *, allowed=None, maximize: bool = False,
         Must-run or pinned jobs cannot all fit; the message names them.
     ShiftSearchError
         The time limit ran out before any plan placing the must-run jobs was found.
+    ShiftCancelled
+        ``cancel`` was set.
 
     Notes
     -----
@@ -419,10 +433,18 @@ def fill_shift(values, hours, capacity, *, allowed=None, maximize: bool = False,
     def time_left():
         return None if time_limit is None else time_limit - (time.perf_counter() - started)
 
+    def stage(text: str) -> None:
+        if cancel is not None and cancel.is_set():
+            raise ShiftCancelled("the shift plan was cancelled")
+        if progress is not None:
+            progress(text)
+
     x = np.zeros(n_var)
     count_proven = True
     fallback = None
-    if n_var and most_jobs_first and not must.all():
+    two_stages = bool(n_var) and most_jobs_first and not must.all()
+    if two_stages:
+        stage("stage 1 of 2: the most jobs that fit")
         left = time_left()  # the first stage gets half the time, the second the rest
         first = _milp(-np.ones(n_var), integrality, bounds, constraints,
                       None if left is None else left / 2)
@@ -438,6 +460,7 @@ def fill_shift(values, hours, capacity, *, allowed=None, maximize: bool = False,
         count_proven = first.status == 0
         constraints = constraints + [LinearConstraint(np.ones((1, n_var)), count_needed, np.inf)]
     if n_var:
+        stage("stage 2 of 2: the best total" if two_stages else "solving")
         res = _milp(coef, integrality, bounds, constraints, time_left())
         if res.status == 2:
             _raise_infeasible(must, usable)

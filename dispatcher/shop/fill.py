@@ -135,14 +135,18 @@ def _check_fill(shop: Shop, source: str) -> None:
 
 
 def fill_shop_shift(shop: Shop, *, maximize: bool = False, extra_must_run: Iterable[str] = (),
-                    time_limit: float | None = None, source: str = "") -> ShiftFill:
+                    time_limit: float | None = None, source: str = "", cancel=None,
+                    progress=None) -> ShiftFill:
     """Plan the whole shift of ``shop``: several jobs per machine within its hours.
 
     ``maximize``: grid values are gains. ``extra_must_run``: names of further waiting
     jobs that must run this shift. ``time_limit``: seconds for the solver (the result
     then says whether it is proven optimal). Raises :class:`ShopError` for an
     inconsistent shop or missing run hours (every problem located) and
-    :class:`ShopInfeasibleError` when rush or pinned jobs cannot all fit.
+    :class:`ShopInfeasibleError` when rush or pinned jobs cannot all fit. ``cancel`` (a
+    ``threading.Event``) and ``progress`` (called with a short text per solver stage) are
+    passed to :func:`dispatcher.engine.fill_shift`, which raises
+    :class:`~dispatcher.engine.fill_shift.ShiftCancelled` when cancelled.
     """
     _check_fill(shop, source)
     values_all, allowed_all = shop.matrix()
@@ -200,7 +204,8 @@ def fill_shop_shift(shop: Shop, *, maximize: bool = False, extra_must_run: Itera
         plan = fill_shift(values.reshape(len(rows), len(up)), hours.reshape(len(rows), len(up)),
                           capacity, allowed=allowed.reshape(len(rows), len(up)),
                           maximize=maximize, time_limit=time_limit, wait_penalty=penalty,
-                          must_run=must, pins=pins, rush=rush, due=due)
+                          must_run=must, pins=pins, rush=rush, due=due, cancel=cancel,
+                          progress=progress)
     except ShiftInfeasibleError as exc:
         raise ShopInfeasibleError(_infeasible_text(exc, names, mnames, source),
                                   [names[i] for i in exc.jobs],
