@@ -98,8 +98,9 @@ class SheetDownMachine:
 class SheetTotals:
     """Counts and the plan's total, as printed under the tables.
 
-    ``objective`` is a short phrase such as "least total setup"; ``status`` says whether
-    the plan is proven best ("proven optimal") or the best found with its gap.
+    ``jobs_dispatched`` counts jobs newly given to a machine; ``jobs_continuing`` those
+    already running that carry on. ``objective`` is a short phrase such as "least total
+    setup"; ``status`` says whether the plan is proven best or the best found with its gap.
     """
 
     machines: int = 0
@@ -121,6 +122,8 @@ class SheetContent:
     ``decision_number`` and ``decision_time`` are ``None`` when the plan has not been
     recorded in the history; the sheet then says "not recorded" so nobody mistakes a
     draft for a confirmed decision. ``printed_at`` is when the sheet was made.
+    ``value_heading`` names the value column ("Setup", "Cost", "Value"); ``shop_note`` is
+    the shop's own description, printed small at the end.
     """
 
     shop_name: str
@@ -135,7 +138,8 @@ class SheetContent:
     down: tuple[SheetDownMachine, ...] = ()
     totals: SheetTotals = field(default_factory=SheetTotals)
     safety: tuple[str, ...] = SAFETY_CAUTIONS
-    demo_note: str = ""
+    value_heading: str = "Setup"
+    shop_note: str = ""
 
     def dispatched_jobs(self) -> list[SheetJob]:
         """Every job on every machine, in sheet order."""
@@ -162,3 +166,63 @@ def format_value(value: float | None, unit: str = "") -> str:
     else:
         text = f"{value:,.2f}".rstrip("0").rstrip(".")
     return f"{text} {unit}".strip()
+
+
+def sheet_text(content: SheetContent) -> str:
+    """The sheet as plain text for a terminal: same facts as the printed page, no boxes."""
+    out = [f"Dispatch sheet - {content.shop_name}"]
+    date = content.shift_date.isoformat() if content.shift_date else "-"
+    out.append(f"Date {date}   Shift {content.shift_label or '-'}   "
+               f"Supervisor {content.supervisor or '-'}")
+    if content.decision_number is not None:
+        when = format_time(content.decision_time)
+        out.append(f"Decision #{content.decision_number}" + (f" of {when}" if when else ""))
+    else:
+        out.append("Decision: not recorded (draft plan)")
+    out.append(f"Printed {format_time(content.printed_at)}")
+    out.append("")
+    out.append(f"Machines and jobs ({len(content.machines)} machines, "
+               f"{len(content.dispatched_jobs())} jobs):")
+    for m in content.machines:
+        state = STATE_WORDS.get(m.state, m.state.upper())
+        if not m.jobs:
+            what = "no work: see Machines down" if m.is_down else "idle: no job this round"
+            out.append(f"  {m.name} [{state}]: {what}" + (f" ({m.notes})" if m.notes else ""))
+            continue
+        out.append(f"  {m.name} [{state}]" + (f" ({m.notes})" if m.notes else ""))
+        for k, job in enumerate(m.jobs, start=1):
+            bits = [f"{k}. " + ("RUSH " if job.rush else "") + job.name]
+            if job.work_order:
+                bits.append(job.work_order)
+            if job.continuing:
+                bits.append("carries on" + (f", running since {format_time(job.running_since)}"
+                                            if job.running_since else ""))
+            value = format_value(job.setup, job.unit)
+            if value:
+                bits.append(f"{content.value_heading.lower()} {value}")
+            if job.hours is not None:
+                bits.append(f"run {format_value(job.hours, 'h')}")
+            if job.notes:
+                bits.append(job.notes)
+            out.append("      " + "  |  ".join(bits))
+    out.append("")
+    out.append(f"Waiting jobs ({len(content.waiting)}):" if content.waiting else "Waiting jobs: none")
+    first_with: dict[str, str] = {}
+    for w in content.waiting:
+        why = w.why if w.why not in first_with else f"same reason as {first_with[w.why]}"
+        first_with.setdefault(w.why, w.name)
+        out.append(f"  {'RUSH ' if w.rush else ''}{w.name}"
+                   + (f" ({w.work_order})" if w.work_order else "") + (f": {why}" if why else ""))
+    out.append(f"Machines down ({len(content.down)}):" if content.down else "Machines down: none")
+    for d in content.down:
+        since = format_time(d.since)
+        out.append(f"  {d.name} [{STATE_WORDS.get(d.state, d.state.upper())}]"
+                   + (f" since {since}" if since else "") + (f": {d.note}" if d.note else ""))
+    t = content.totals
+    out.append("")
+    out.append(f"Total ({t.objective or 'plan'}): {format_value(t.total, t.unit) or '-'}"
+               + (f"   [{t.status}]" if t.status else ""))
+    out.append("")
+    out.append("SAFETY:")
+    out.extend(f"  {k}. {text}" for k, text in enumerate(content.safety, start=1))
+    return "\n".join(out)

@@ -232,12 +232,19 @@ def sheet_body_html(content: SheetContent) -> str:
     n_jobs = len(content.dispatched_jobs())
     parts.append(_table(
         f"Machines and jobs ({len(content.machines)} machines, {n_jobs} jobs)",
-        _MACHINE_COLUMNS, machine_rows, write_in=True))
+        tuple((content.value_heading if h == "Setup" else h, w) for h, w in _MACHINE_COLUMNS),
+        machine_rows, write_in=True))
 
     parts.append(_SPACER)
     wait_cols = (("Job", 26), ("Work order", 14), ("Why it waits", 60))
-    wait_rows = [f"<tr><td>{'<b>RUSH</b> ' if w.rush else ''}{_e(w.name)}</td>"
-                 f"<td>{_e(w.work_order)}</td><td>{_e(w.why)}</td></tr>" for w in content.waiting]
+    wait_rows = []
+    first_with: dict[str, str] = {}
+    for w in content.waiting:
+        # a long reason shared by many jobs is printed once, then referred to by job name
+        why = w.why if w.why not in first_with else f"same reason as {first_with[w.why]}"
+        first_with.setdefault(w.why, w.name)
+        wait_rows.append(f"<tr><td>{'<b>RUSH</b> ' if w.rush else ''}{_e(w.name)}</td>"
+                         f"<td>{_e(w.work_order)}</td><td>{_e(why)}</td></tr>")
     if not wait_rows:
         wait_rows = ["<tr><td colspan=3><i>No job waits.</i></td></tr>"]
     parts.append(_table(f"Waiting jobs ({len(content.waiting)})", wait_cols, wait_rows))
@@ -257,8 +264,8 @@ def sheet_body_html(content: SheetContent) -> str:
     t = content.totals
     total_rows = [
         ("Machines", f"{t.machines} ({t.machines_down} down, {t.machines_idle} idle)"),
-        ("Jobs dispatched", f"{t.jobs_dispatched}"
-         + (f" (of which {t.jobs_continuing} carry on)" if t.jobs_continuing else "")),
+        ("Jobs dispatched", str(t.jobs_dispatched)),
+        ("Jobs already running (carry on)", str(t.jobs_continuing)),
         ("Jobs waiting", str(t.jobs_waiting)),
         ("Plan total" + (f" ({t.objective})" if t.objective else ""),
          format_value(t.total, t.unit) or "-"),
@@ -275,8 +282,8 @@ def sheet_body_html(content: SheetContent) -> str:
             '<td width="7%">Time</td><td width="11%"></td></tr>']
     parts.append(_table("Sign-off", (("", 13), ("", 30), ("", 12), ("", 27), ("", 7), ("", 11)),
                         sign, headings=False, write_in=True))
-    if content.demo_note:
-        parts.append(f"<p><i>{_e(content.demo_note)}</i></p>")
+    if content.shop_note:
+        parts.append(f'<p style="font-size:7.5pt"><i>About this shop: {_e(content.shop_note)}</i></p>')
     return "".join(parts)
 
 

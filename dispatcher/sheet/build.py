@@ -1,0 +1,237 @@
+"""Build a :class:`SheetContent` from a shop, its plan and optionally a recorded decision.
+
+Qt-free. The decision is read by attribute only (``id``, ``time``, ``by``, and optionally
+``shift_date``/``shift``), so this module does not depend on the history package: any
+object with those attributes, such as :class:`dispatcher.history.Decision`, will do.
+
+Run order on a machine: jobs already running come first (they carry on), then the newly
+dispatched jobs with rush jobs first, then by due time, then in the plan's order. This is
+common practice on the shop floor; the plan itself fixes which jobs go where, not their
+order.
+"""
+
+from __future__ import annotations
+
+import dataclasses
+import datetime as dt
+from typing import Any, Protocol
+
+from dispatcher.shop import UP, Shop
+
+from .content import (
+    SAFETY_CAUTIONS,
+    SheetContent,
+    SheetDownMachine,
+    SheetJob,
+    SheetMachine,
+    SheetTotals,
+    SheetWaitingJob,
+)
+
+__all__ = ["DecisionLike", "build_sheet", "objective_phrase", "run_order", "value_heading"]
+
+
+class DecisionLike(Protocol):
+    """What the sheet needs of a recorded decision."""
+
+    id: int
+    time: dt.datetime
+    by: str
+
+
+def value_heading(shop: Shop, objective: str) -> str:
+    """Heading of the value column: what the grid numbers mean for this shop."""
+    if objective == "maximize":
+        return "Value"
+    return "Cost" if shop.unit.kind == "cost" else "Setup"
+
+
+def value_unit(shop: Shop) -> str:
+    """Unit printed after each value: ``min`` for setup minutes, else the currency label."""
+    return shop.unit.currency if shop.unit.kind == "cost" else "min"
+
+
+def objective_phrase(shop: Shop, objective: str) -> str:
+    """The plan's aim in a few words, for the totals."""
+    what = "cost" if shop.unit.kind == "cost" else "setup"
+    return {
+        "total": f"least total {what}",
+        "maximize": "greatest total value",
+        "bottleneck": f"smallest largest {what}, then least total",
+    }.get(objective, objective)
+
+
+def _status(plan: Any) -> str:
+    # a filled shift says "proven optimal" or "best found, gap x%" in its own words
+    extra = getattr(plan, "status_text", None)
+    if not extra and isinstance(getattr(plan, "certificate", None), dict):
+        extra = plan.certificate.get("text")
+    if isinstance(extra, str) and extra:
+        return extra
+    if plan.verified:
+        return f"{plan.status}, proven by its certificate"
+    return f"{plan.status} (certificate NOT verified: check the plan before use)"
+
+
+def _reason_text(plan: Any, job: str) -> str:
+    reason = plan.waiting_reasons.get(job)
+    if reason is None or not reason.text:
+        return "not placed in this round"
+    text = reason.text
+    prefix = f"{job}: "
+    return text[len(prefix):] if text.startswith(prefix) else text
+
+
+def _order_key(shop: Shop, name: str, position: int) -> tuple:
+    try:
+        job = shop.job_by_name(name)
+    except KeyError:
+        return (1, dt.datetime.max, position)
+    due = job.due
+    if due is not None and due.tzinfo is not None:
+        due = due.astimezone(dt.timezone.utc).replace(tzinfo=None)
+    return (0 if job.rush else 1, due or dt.datetime.max, position)
+
+
+def _sheet_job(shop: Shop, name: str, value: float | None, running: bool, unit: str) -> SheetJob:
+    try:
+        job = shop.job_by_name(name)
+    except KeyError:  # a recorded plan naming a job the snapshot lacks: print what we know
+        return SheetJob(name=name, setup=None if running else value, unit=unit,
+                        continuing=running)
+    return SheetJob(
+        name=job.name, work_order=job.work_order, setup=None if running else value, unit=unit,
+        notes=job.notes, rush=job.rush, continuing=running,
+        running_since=job.since if running else None,
+    )
+
+
+def _pair_hours(shop: Shop, job_name: str, machine_name: str) -> float | None:
+    """Run hours of a job on a machine: the pair's own entry, else job hours x speed."""
+    try:
+        job, machine = shop.job_by_name(job_name), shop.machine_by_name(machine_name)
+    except KeyError:
+        return None
+    hours = shop.hours.get((job.id, machine.id))
+    if hours is None and job.run_hours is not None:
+        hours = job.run_hours * machine.speed_factor
+    return hours
+
+
+def run_order(plan: Any) -> dict[str, list[str]] | None:
+    """Machine -> jobs in run order when the plan fixes it (a filled shift), else None.
+
+    Accepts a filled-shift plan object (``machines`` of objects with ``machine``,
+    ``running`` and ``jobs``) or its JSON (a ``machines`` list of such objects).
+    """
+    machines = plan.get("machines") if isinstance(plan, dict) else getattr(plan, "machines", None)
+    if not isinstance(machines, list):
+        return None
+    order: dict[str, list[str]] = {}
+    for m in machines:
+        get = m.get if isinstance(m, dict) else (lambda key, default=None, m=m: getattr(m, key, default))
+        name = get("machine")
+        if isinstance(name, str):
+            order[name] = [str(j) for j in (get("running", []) or [])] + \
+                          [str(j) for j in (get("jobs", []) or [])]
+    return order
+
+
+def _entries(plan: Any) -> dict[str, list[tuple[str, float | None, bool]]]:
+    """Machine -> ``(job, value, already_running)`` for a Plan or a filled-shift plan."""
+    if hasattr(plan, "by_machine"):
+        return plan.by_machine()
+    out: dict[str, list[tuple[str, float | None, bool]]] = {}
+    for r in plan.running:
+        out.setdefault(r.machine, []).append((r.job, r.cost, True))
+    for a in plan.assignments:
+        out.setdefault(a.machine, []).append((a.job, a.cost, False))
+    return out
+
+
+def build_sheet(shop: Shop, plan: Any, decision: Any | None = None, *,
+                order: dict[str, list[str]] | None = None,
+                printed_at: dt.datetime | None = None, supervisor: str = "") -> SheetContent:
+    """Everything the sheet prints for ``plan`` in ``shop``.
+
+    ``plan`` is a :class:`dispatcher.shop.Plan` or a filled-shift plan (several jobs per
+    machine in run order, with ``machines``, ``assignments``, ``running``, ``waiting_jobs``,
+    ``waiting_reasons``, ``idle_machines``, ``total``, ``objective``, ``status_text``).
+    ``order`` (machine -> jobs in run order) overrides the order; by default it is the
+    filled-shift order if the plan has one, else running jobs first, then rush, then due.
+    A filled shift also prints each job's run hours.
+
+    ``decision`` (optional) is the recorded decision the plan comes from; its number, time
+    and supervisor go into the header. Without it the sheet says the plan is not recorded
+    and prints ``supervisor`` (or a blank line to fill in).
+    """
+    unit = value_unit(shop)
+    by_machine = _entries(plan)
+    order = order if order is not None else run_order(plan)
+    machines = []
+    for machine in shop.machines:
+        entries = by_machine.get(machine.name, [])
+        if order is not None and machine.name in order:
+            rank = {name: k for k, name in enumerate(order[machine.name])}
+            ordered = sorted(entries, key=lambda e: (rank.get(e[0], len(rank)), not e[2]))
+        else:
+            carrying = [e for e in entries if e[2]]
+            new = sorted(((e, k) for k, e in enumerate(entries) if not e[2]),
+                         key=lambda ek: _order_key(shop, ek[0][0], ek[1]))
+            ordered = carrying + [e for e, _k in new]
+        jobs = []
+        for name, value, running in ordered:
+            job = _sheet_job(shop, name, value, running, unit)
+            if order is not None:
+                job = dataclasses.replace(job, hours=_pair_hours(shop, name, machine.name))
+            jobs.append(job)
+        notes = machine.notes
+        if machine.slots > 1:
+            notes = f"{machine.slots} slots" + (f"; {notes}" if notes else "")
+        machines.append(SheetMachine(name=machine.name, state=machine.state, jobs=tuple(jobs),
+                                     notes=notes))
+
+    down = tuple(SheetDownMachine(name=m.name, state=m.state, note=m.state_note,
+                                  since=m.state_changed)
+                 for m in shop.machines if m.state != UP)
+    waiting = []
+    for name in plan.waiting_jobs:
+        try:
+            job = shop.job_by_name(name)
+            work_order, rush = job.work_order, job.rush
+        except KeyError:
+            work_order, rush = "", False
+        waiting.append(SheetWaitingJob(name=name, work_order=work_order,
+                                       why=_reason_text(plan, name), rush=rush))
+
+    totals = SheetTotals(
+        machines=len(shop.machines),
+        machines_down=len(down),
+        machines_idle=len(plan.idle_machines),
+        jobs_dispatched=len(plan.assignments),
+        jobs_continuing=len(plan.running),
+        jobs_waiting=len(plan.waiting_jobs),
+        total=plan.total,
+        unit=unit,
+        objective=objective_phrase(shop, plan.objective),
+        status=_status(plan),
+    )
+
+    shift_date = shop.shift.day or getattr(decision, "shift_date", None)
+    shift_label = shop.shift.label or getattr(decision, "shift", "") or ""
+    return SheetContent(
+        shop_name=shop.name or "(unnamed shop)",
+        shift_date=shift_date,
+        shift_label=shift_label,
+        supervisor=(decision.by if decision is not None else supervisor) or "",
+        decision_number=None if decision is None else int(decision.id),
+        decision_time=None if decision is None else decision.time,
+        printed_at=printed_at or dt.datetime.now().astimezone(),
+        machines=tuple(machines),
+        waiting=tuple(waiting),
+        down=down,
+        totals=totals,
+        safety=SAFETY_CAUTIONS,
+        value_heading=value_heading(shop, plan.objective),
+        shop_note=shop.description,
+    )
