@@ -18,6 +18,7 @@ from scipy.optimize import linear_sum_assignment
 
 from dispatcher.engine import InfeasibleError, solve
 from helpers_reference import (
+    brute_force,
     check_result,
     networkx_reference,
     scipy_reference,
@@ -224,3 +225,41 @@ def test_maximize_flag_is_the_maximize_objective():
     assert b.verify()
     rows, cols = linear_sum_assignment(values, maximize=True)
     assert a.total == b.total == values[rows, cols].sum()
+
+
+# ----------------------------------------------------------------- floating point
+
+@settings(max_examples=200, **FAST)
+@given(m=st.integers(0, 6), n=st.integers(0, 6), seed=st.integers(0, 2**32 - 1),
+       value_exp=st.integers(-8, 12), penalty_exp=st.integers(-8, 12),
+       density=st.sampled_from([1.0, 0.7, 0.4]), objective=st.sampled_from(OBJECTIVES))
+def test_wide_magnitudes_against_brute_force(m, n, seed, value_exp, penalty_exp, density, objective):
+    # Reference: brute-force enumeration of every plan (floats, values and wait penalties
+    # of very different magnitudes); verify() must accept every correct plan.
+    rng = np.random.default_rng(seed)
+    values = rng.random((m, n)) * 10.0 ** value_exp
+    allowed = rng.random((m, n)) < density
+    penalty = rng.random(m) * 10.0 ** penalty_exp
+    must = rng.random(m) < 0.2
+    expect = brute_force(values, allowed, penalty, must, objective)
+    if not expect.feasible:
+        with pytest.raises(InfeasibleError):
+            solve(values, allowed, objective=objective, wait_penalty=penalty, must_run=must)
+        return
+    result = _solve_checked(values, allowed, penalty, must, objective)
+    assert result.planned_count == expect.placed
+    assert result.total == pytest.approx(expect.total, rel=1e-9)
+    assert result.bottleneck == expect.bottleneck
+
+
+def test_regression_verify_with_wait_penalties_far_above_values():
+    # verify() once scaled its tolerance by the values only; with penalties ~1e9 next to
+    # values ~50 the potentials' rounding (~1e-7) made it reject a correct plan.
+    # Reference: brute-force enumeration.
+    values = np.array([[4.48, 10.96, 0.00074], [48.6, 26.9, 0.132],
+                       [0.00073, 0.00016, 48.7], [5.05, 0.0000195, 2.04]])
+    allowed = np.array([[1, 0, 1], [1, 1, 1], [1, 1, 1], [0, 1, 1]], dtype=bool)
+    penalty = np.array([7.044266332682212e9, 3.399675333083312e9, 8.463200240723073e9,
+                        8.649757670516403e9])
+    result = _solve_checked(values, allowed, penalty, None, "maximize")
+    assert result.total == pytest.approx(brute_force(values, allowed, penalty, None, "maximize").total)

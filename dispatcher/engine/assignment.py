@@ -137,7 +137,10 @@ class DispatchResult:
         if not cover_ok or (self.allowed & ~covered).any():
             return False
         red = self.reduced_costs()
-        tol = 1e-9 * max(1.0, float(np.abs(self.values[self.allowed]).max(initial=0))) * max(1, len(red))
+        # Potentials carry the wait penalties too, so the slack scales with both.
+        scale = max(1.0, float(np.abs(self.values[self.allowed]).max(initial=0)),
+                    float(self.wait_penalty.max(initial=0)))
+        tol = 1e-9 * scale * max(1, len(red))
         if (red[self.solved_allowed] < -tol).any():
             return False
         if placed.any() and np.abs(red[np.flatnonzero(placed), machines]).max() > tol:
