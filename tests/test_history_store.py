@@ -104,8 +104,10 @@ def test_objects_with_to_json_are_accepted(store):
      r"assignments\[0\].machine: expected a non-empty name"),
     (dict(plan({"A": "M", "B": "M2"}), waiting_jobs=["B"]), r"waiting_jobs\[0\]: 'B' is also placed"),
     (dict(plan({"A": "M"}), assignments=[{"job": "A", "machine": "M", "cost": 1},
-                                         {"job": "B", "machine": "M", "cost": 2}]),
-     "'M' runs two jobs"),
+                                         {"job": "A", "machine": "N", "cost": 2}]),
+     r"assignments\[1\].job: 'A' is placed twice"),
+    (dict(plan({"A": "M"}), running=[{"job": "R", "cost": 1}]),
+     r"running\[0\].machine: expected a non-empty name"),
     ("{not json", "plan: not JSON"),
     ([1, 2], "expected a JSON object"),
 ])
@@ -214,6 +216,21 @@ def test_diff_between_any_two_decisions(store):
         "machines_gone": ["M2"], "total_before": 33, "total_after": 15,
         "total_change": -18, "objective_changed": False}
     assert store.diff(a, a).is_empty
+
+
+def test_running_jobs_and_multi_slot_machines(store):
+    before = plan({"J1": "M1", "J2": "M2"}, idle=["M3"])
+    after = plan({"J2": "M2", "J3": "M3"}, waiting=["J4"])
+    after["assignments"].append({"job": "J5", "machine": "M3", "cost": 1})  # two slots
+    after["running"] = [{"job": "J1", "machine": "M1", "since": "2026-03-14T06:05", "cost": 7}]
+    n = store.record({"name": "s"}, before, by="Ana", reason="other")
+    m = store.record({"name": "s"}, after, by="Ana", reason="rush job")
+    diff = store.diff(n, m)
+    assert diff.jobs_gone == () and diff.machines_gone == ()
+    assert diff.newly_placed == (("J3", "M3"), ("J5", "M3"))
+    assert diff.machines_back_in_use == ("M3",) and diff.now_waiting == ("J4",)
+    assert [d.id for d in store.list(job="J1")] == [n, m]  # the running row is searchable
+    assert [d.id for d in store.list(machine="M3")] == [n, m]
 
 
 NAMES = st.sampled_from([f"J{i}" for i in range(6)])

@@ -3,6 +3,7 @@
 from __future__ import annotations
 
 import argparse
+from pathlib import Path
 
 from dispatcher.commands.common import (
     EXIT_INFEASIBLE,
@@ -11,10 +12,22 @@ from dispatcher.commands.common import (
     print_json,
     print_plan,
 )
+from dispatcher.commands.history import (
+    add_record_arguments,
+    check_record_arguments,
+    record_decision,
+)
 from dispatcher.commands.shift_fill import run_fill_shift
-from dispatcher.commands.shop_input import is_shop_document, run_shop
+from dispatcher.commands.shop_input import (
+    is_shop_document,
+    print_shop_plan,
+    read_shop_arg,
+    solve_shop_arg,
+)
 from dispatcher.engine import DispatchInputError, InfeasibleError, solve
 from dispatcher.io.grid import GridFileError, read_grid
+from dispatcher.io.shopfile import shop_to_dict
+from dispatcher.shop import shop_from_grid
 
 
 def register(sub: argparse._SubParsersAction) -> None:
@@ -35,6 +48,7 @@ def register(sub: argparse._SubParsersAction) -> None:
     p.add_argument("--time-limit", metavar="SECONDS", type=float, default=None,
                    help="with --fill-shift: stop the solver after this many seconds and "
                    "report the best plan found with its proven gap")
+    add_record_arguments(p)
     p.set_defaults(func=run)
 
 
@@ -64,10 +78,17 @@ def infeasible_message(exc: InfeasibleError, jobs: list[str], machines: list[str
 
 
 def run(args: argparse.Namespace) -> int:
+    check_record_arguments(args)
     if args.fill_shift:
+        if args.record:
+            raise CliError("--record cannot be combined with --fill-shift yet")
         return run_fill_shift(args)
     if is_shop_document(args.grid):
-        return run_shop(args.grid, objective_of(args), args.must_run, args.json)
+        shop = read_shop_arg(args.grid)
+        shop_plan = solve_shop_arg(shop, args.grid, objective_of(args), args.must_run)
+        print_shop_plan(shop_plan, shop, args.json)
+        record_decision(args, shop_to_dict(shop), shop_plan.to_json())
+        return 0
     try:
         table = read_grid(args.grid)
     except GridFileError as exc:
@@ -85,4 +106,8 @@ def run(args: argparse.Namespace) -> int:
         print_json(data)
     else:
         print_plan(data)
+    if args.record:  # the grid as a shop document, so every decision keeps one format
+        snapshot = shop_from_grid(table.jobs, table.machines, table.values, table.allowed,
+                                  name=Path(args.grid).stem)
+        record_decision(args, shop_to_dict(snapshot), data)
     return 0

@@ -15,8 +15,9 @@ from typing import Any
 
 from .errors import HistoryInputError
 
-#: Row states of the per-decision table used for machine and job queries.
-ASSIGNED, WAITING, IDLE = "assigned", "waiting", "idle"
+#: Row states of the per-decision table used for machine and job queries. ``running``:
+#: a job already running that the plan leaves where it is (shop documents).
+ASSIGNED, RUNNING, WAITING, IDLE = "assigned", "running", "waiting", "idle"
 
 
 def json_text(value: Any, what: str) -> str:
@@ -90,10 +91,18 @@ def check_plan(plan: Any) -> dict[str, Any]:
         _number(a.get("cost"), f"{where}.cost")
         if job in seen_jobs:
             raise HistoryInputError(f"{where}.job: {job!r} is placed twice")
-        if machine in seen_machines:
-            raise HistoryInputError(f"{where}.machine: {machine!r} runs two jobs")
         seen_jobs.add(job)
         seen_machines.add(machine)
+    running = data.get("running", [])
+    if not isinstance(running, list):
+        raise HistoryInputError("plan: running: expected a list")
+    for i, r in enumerate(running):
+        where = f"plan: running[{i}]"
+        if not isinstance(r, dict):
+            raise HistoryInputError(f"{where}: expected an object")
+        _name(r.get("job"), f"{where}.job")
+        _name(r.get("machine"), f"{where}.machine")
+        _number(r.get("cost"), f"{where}.cost", allow_none=True)
     for i, job in enumerate(data["waiting_jobs"]):
         if _name(job, f"plan: waiting_jobs[{i}]") in seen_jobs:
             raise HistoryInputError(f"plan: waiting_jobs[{i}]: {job!r} is also placed")
@@ -112,9 +121,12 @@ def certificate_status(plan: dict[str, Any]) -> str:
 
 
 def plan_rows(plan: dict[str, Any]) -> list[tuple[str, str | None, str | None, float | None]]:
-    """(state, machine, job, value) rows: one per placement, waiting job and idle machine."""
+    """(state, machine, job, value) rows: one per placement, running job, waiting job and
+    idle machine. A machine with several slots may appear in several placements."""
     rows: list[tuple[str, str | None, str | None, float | None]] = [
         (ASSIGNED, a["machine"], a["job"], float(a["cost"])) for a in plan["assignments"]]
+    rows += [(RUNNING, r["machine"], r["job"], None if r.get("cost") is None else
+              float(r["cost"])) for r in plan.get("running", [])]
     rows += [(WAITING, None, job, None) for job in plan["waiting_jobs"]]
     rows += [(IDLE, machine, None, None) for machine in plan["idle_machines"]]
     return rows
@@ -140,7 +152,8 @@ class PlanDiff:
     * ``moved``: jobs placed in both, on a different machine;
     * ``newly_placed``: (job, machine) placed now but waiting or absent before;
     * ``now_waiting``: jobs waiting now that were placed or absent before;
-    * ``jobs_gone``: jobs in the earlier plan and not in the later one (done or removed);
+    * ``jobs_gone``: jobs in the earlier plan and not in the later one (done or removed;
+      a job the later plan lists as already running is not gone);
     * ``machines_now_idle``: idle now, running a job or absent before;
     * ``machines_back_in_use``: running a job now, idle before;
     * ``machines_gone``: in the earlier plan and not in the later one (e.g. broken down);
@@ -229,9 +242,11 @@ def diff_plans(before: dict[str, Any], after: dict[str, Any], from_id: int | Non
     old_place = {a["job"]: a["machine"] for a in before["assignments"]}
     new_place = {a["job"]: a["machine"] for a in after["assignments"]}
     old_wait = set(before["waiting_jobs"])
-    new_jobs = set(new_place) | set(after["waiting_jobs"])
+    new_running = {r["job"]: r["machine"] for r in after.get("running", [])}
+    new_jobs = set(new_place) | set(after["waiting_jobs"]) | set(new_running)
     old_idle = set(before["idle_machines"])
-    new_machines = set(new_place.values()) | set(after["idle_machines"])
+    new_machines = (set(new_place.values()) | set(after["idle_machines"])
+                    | set(new_running.values()))
 
     moved = tuple(Move(j, old_place[j], m) for j, m in new_place.items()
                   if j in old_place and old_place[j] != m)
@@ -240,9 +255,11 @@ def diff_plans(before: dict[str, Any], after: dict[str, Any], from_id: int | Non
     gone = tuple(j for j in [a["job"] for a in before["assignments"]] + before["waiting_jobs"]
                  if j not in new_jobs)
     now_idle = tuple(m for m in after["idle_machines"] if m not in old_idle)
-    back = tuple(a["machine"] for a in after["assignments"] if a["machine"] in old_idle)
-    machines_gone = tuple(m for m in [a["machine"] for a in before["assignments"]]
-                          + before["idle_machines"] if m not in new_machines)
+    back = tuple(dict.fromkeys(a["machine"] for a in after["assignments"]
+                               if a["machine"] in old_idle))
+    machines_gone = tuple(dict.fromkeys(
+        m for m in [a["machine"] for a in before["assignments"]] + before["idle_machines"]
+        if m not in new_machines))
     t0, t1 = before.get("total"), after.get("total")
     change = _tidy(t1 - t0) if isinstance(t0, (int, float)) and isinstance(t1, (int, float)) \
         else None
