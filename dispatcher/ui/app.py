@@ -23,15 +23,32 @@ def make_application(argv: Sequence[str] | None = None):
     return app
 
 
-def run(path: str | None = None, history: str | None = None) -> int:
-    """Open the main window (on ``path`` if given) and run the event loop."""
+def default_messenger(window):
+    """Message boxes over the window (tests replace this)."""
+    from dispatcher.ui.messages import Messenger
+
+    return Messenger(window)
+
+
+def run(path: str | None = None, history: str | None = None, on_error=None) -> int:
+    """Open the main window (on ``path`` if given) and run the event loop.
+
+    A file that cannot be opened is reported (stderr, or ``on_error``) and gives exit code 2.
+    """
     app = make_application()
     from dispatcher.ui.main_window import MainWindow
 
     window = MainWindow(history_path=history)
+    window.messenger = window.files.messenger = default_messenger(window)
     if not path:
         window.files.recover()
     elif not window.open_path(path):
+        problem = window.last_problem or f"{path}: cannot be opened"
+        (on_error or (lambda t: print(f"dispatcher: {t}", file=sys.stderr)))(problem)
+        window.runner.cancel()
+        window.runner.wait_idle()
+        window.files.shutdown()
+        window.deleteLater()
         return 2
     window.show()
     return app.exec()

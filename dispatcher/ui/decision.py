@@ -98,7 +98,7 @@ def propose(shop: Shop, event: str, objective: str, before: dict | None, *,
     return Proposal(event, title, new, plan, diff, machine, job, job_changes, note_text)
 
 
-def diff_html(diff: PlanDiff | None, unit: str) -> str:
+def diff_html(diff: PlanDiff | None, unit: str, before: dict | None = None) -> str:
     """The difference as a short list a supervisor reads at a glance (marks, not colour only)."""
     if diff is None:
         return "<p>No plan in force to compare with.</p>"
@@ -108,8 +108,10 @@ def diff_html(diff: PlanDiff | None, unit: str) -> str:
         items.append(f"<li>\u2192 <b>moves</b>: {e(m.job)} from {e(m.from_machine)} to {e(m.to_machine)}</li>")
     for j, m in diff.newly_placed:
         items.append(f"<li>{palette.MARK_PLANNED} <b>starts</b>: {e(j)} on {e(m)}</li>")
+    was_on = {a["job"]: a["machine"] for a in (before or {}).get("assignments", [])}
     for j in diff.now_waiting:
-        items.append(f"<li>\u25cb <b>now waits</b>: {e(j)}</li>")
+        where = f" (was on {e(was_on[j])})" if j in was_on else ""
+        items.append(f"<li>\u25cb <b>now waits</b>: {e(j)}{where}</li>")
     for m in diff.machines_now_idle:
         items.append(f"<li>\u25c7 <b>now idle</b>: {e(m)}</li>")
     for m in diff.machines_gone:
@@ -120,7 +122,11 @@ def diff_html(diff: PlanDiff | None, unit: str) -> str:
     if diff.total_change is not None:
         sign = "+" if diff.total_change > 0 else ""
         total = (f"<p>Total: {fmt(diff.total_before)} \u2192 <b>{fmt(diff.total_after)}</b> {unit} "
-                 f"({sign}{fmt(diff.total_change)})</p>")
+                 f"({sign}{fmt(diff.total_change)})")
+        if diff.now_waiting and diff.total_change < 0:
+            total += (" - lower only because fewer jobs are dispatched: a waiting job adds "
+                      "just its wait penalty")
+        total += "</p>"
     return "<ul>" + "".join(items) + "</ul>" + total
 
 
@@ -130,7 +136,8 @@ class DecisionDialog(QDialog):
     confirmed = Signal(object, str, str, str)
 
     def __init__(self, proposal: Proposal, unit: str, supervisor: str = "",
-                 parent: QWidget | None = None):
+                 parent: QWidget | None = None, before: dict | None = None,
+                 before_label: str = "the plan in force"):
         super().__init__(parent)
         self.setObjectName("decisionDialog")
         self.proposal = proposal
@@ -155,8 +162,8 @@ class DecisionDialog(QDialog):
             if proposal.problem:
                 warn = (f"<p>{palette.MARK_RUSH} <b>Not every rush job can be placed:</b> "
                         f"{html.escape(proposal.problem)}</p>")
-            body = QLabel(warn + "<b>Proposed changes against the plan in force:</b>"
-                          + diff_html(proposal.diff, unit))
+            body = QLabel(warn + f"<b>Proposed changes against {html.escape(before_label)}:</b>"
+                          + diff_html(proposal.diff, unit, before))
         body.setObjectName("proposalDiff")
         body.setWordWrap(True)
         body.setTextFormat(Qt.TextFormat.RichText)

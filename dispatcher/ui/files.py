@@ -55,6 +55,7 @@ class FileController(QObject):
 
     recent_changed = Signal()
     status = Signal(str)
+    problem = Signal(str)   # a file could not be opened or saved (the message shown)
 
     def __init__(self, doc: ShopDocument, messenger: Messenger, settings: QSettings,
                  parent: QObject | None = None):
@@ -110,6 +111,7 @@ class FileController(QObject):
             shop = self._read(path)
         except (ShopError, GridFileError) as exc:
             self.messenger.error("Cannot open file", str(exc))
+            self.problem.emit(str(exc))
             self.status.emit(f"Not opened: {exc}")
             return False
         if not self.maybe_keep_changes():
@@ -146,6 +148,7 @@ class FileController(QObject):
             save_shop(self.doc.shop, path)
         except ShopError as exc:
             self.messenger.error("Cannot save", str(exc))
+            self.problem.emit(str(exc))
             self.status.emit(f"Not saved: {exc}")
             return False
         self.discard_autosave()

@@ -261,7 +261,7 @@ class GridModel(QAbstractTableModel):
                 return None
             m = self._doc.machine_at(section - FIRST_MACHINE_COL)
             state = STATE_TEXT.get(m.state, m.state)
-            slots = f" \u00b7 {m.slots} slots" if m.slots != 1 else ""
+            slots = f" \u00d7{m.slots}" if m.slots != 1 else ""
             if role in (Qt.ItemDataRole.DisplayRole, Qt.ItemDataRole.AccessibleTextRole):
                 return f"{m.name}\n{state}{slots}"
             if role == Qt.ItemDataRole.ToolTipRole:

@@ -48,7 +48,7 @@ from dispatcher.ui.edits import (
     SetValues,
 )
 from dispatcher.ui.files import FileController
-from dispatcher.ui.grid_model import FIRST_MACHINE_COL, GridModel
+from dispatcher.ui.grid_model import COL_PLAN, FIRST_MACHINE_COL, GridModel
 from dispatcher.ui.grid_view import GridView
 from dispatcher.ui.messages import Messenger
 from dispatcher.ui.plan_panel import PlanPanel
@@ -81,6 +81,8 @@ class MainWindow(QMainWindow):
         self.objective = "total"
         self.plan: Plan | None = None
         self.decision_dialog: DecisionDialog | None = None
+        self._fit_columns = True
+        self.last_problem = ""
 
         self.model = GridModel(self.doc, self)
         self.view = GridView(self)
@@ -233,6 +235,7 @@ class MainWindow(QMainWindow):
         self.doc.reset.connect(self._on_reset)
         self.model.warning.connect(self.show_warning)
         self.files.status.connect(lambda t: self.statusBar().showMessage(t, 8000))
+        self.files.problem.connect(self._remember_problem)
         self.files.recent_changed.connect(self._fill_recent)
         self.runner.started.connect(lambda _: self.plan_panel.show_busy(True))
         self.runner.slow.connect(lambda _: self.plan_panel.show_busy(True, slow=True))
@@ -250,6 +253,9 @@ class MainWindow(QMainWindow):
         name = self.doc.path.name if self.doc.path else (self.doc.shop.name or "Untitled")
         self.setWindowTitle(f"{name}[*] - {APP_TITLE}")
         self.setWindowModified(self.doc.dirty)
+
+    def _remember_problem(self, text: str) -> None:
+        self.last_problem = text
 
     def show_warning(self, text: str) -> None:
         self.statusBar().showMessage(f"{palette.MARK_FORBIDDEN} {text}", 10000)
@@ -287,6 +293,8 @@ class MainWindow(QMainWindow):
             return
         self.plan = outcome.plan
         self.model.set_plan(outcome.plan)
+        if self._fit_columns:
+            self._fit_grid_columns()
         self.plan_panel.show_plan(outcome.plan, self.doc.shop.unit.label(), outcome.seconds)
         if outcome.problem:
             self.plan_panel.show_note(outcome.problem)
@@ -298,7 +306,15 @@ class MainWindow(QMainWindow):
 
     def _on_reset(self) -> None:
         self.plan = None
-        self.view.resizeColumnsToContents() if self.doc.n_machines() <= 60 else None
+        self._fit_columns = True
+
+    def _fit_grid_columns(self) -> None:
+        """Size columns to their text once per opened shop (small shops only: on a huge
+        grid measuring every cell would stall the window)."""
+        self._fit_columns = False
+        if self.doc.n_jobs() * self.doc.n_machines() <= 20_000:
+            self.view.resizeColumnsToContents()
+        self.view.setColumnWidth(COL_PLAN, max(self.view.columnWidth(COL_PLAN), 170))
 
     # ---- files ------------------------------------------------------------------------------
     def on_new(self) -> None:
@@ -430,15 +446,17 @@ class MainWindow(QMainWindow):
             f"{m.name}: {state}"))
 
     # ---- decision flows -------------------------------------------------------------------------
-    def plan_in_force_json(self) -> dict | None:
-        """The plan in force: the latest recorded decision of this shop, else the plan shown."""
+    def plan_in_force(self) -> tuple[dict | None, str]:
+        """The plan in force (JSON) and how to name it: the latest recorded decision of this
+        shop when the shop has one in force, else the plan shown (not yet recorded)."""
         try:
             latest = self.history.latest(self.doc.shop.name) if self.doc.shop.plan_in_force else None
         except HistoryError:
             latest = None
         if latest is not None and latest.plan:
-            return latest.plan
-        return self.plan.to_json() if self.plan is not None else None
+            return latest.plan, f"the plan in force (decision #{latest.id})"
+        plan = self.plan.to_json() if self.plan is not None else None
+        return plan, "the plan shown (no decision recorded yet)"
 
     def on_machine_event(self, event: str, col: int | None = None) -> DecisionDialog | None:
         col = self.view.current_machine() if col is None else col
@@ -452,8 +470,7 @@ class MainWindow(QMainWindow):
         if event == EVENT_UP and m.state == UP:
             self.show_warning(f"{m.name} is already up")
             return None
-        return self._open_decision(propose(self.doc.shop, event, self.objective,
-                                           self.plan_in_force_json(), machine=col))
+        return self._open_decision(self.doc.shop, event, machine=col)
 
     def on_rush(self, row: int | None = None) -> DecisionDialog | None:
         row = self.view.current_row() if row is None or row is False else row
@@ -462,16 +479,17 @@ class MainWindow(QMainWindow):
         if self.doc.job_at(row).rush:
             self.show_warning(f"{self.doc.job_at(row).name} is already a rush job")
             return None
-        return self._open_decision(propose(self.doc.shop, EVENT_RUSH, self.objective,
-                                           self.plan_in_force_json(), job=row))
+        return self._open_decision(self.doc.shop, EVENT_RUSH, job=row)
 
     def on_confirm_plan(self) -> DecisionDialog | None:
-        return self._open_decision(propose(self.doc.shop, EVENT_CONFIRM, self.objective,
-                                           self.plan_in_force_json()))
+        return self._open_decision(self.doc.shop, EVENT_CONFIRM)
 
-    def _open_decision(self, proposal: Proposal) -> DecisionDialog:
+    def _open_decision(self, shop: Shop, event: str, **where) -> DecisionDialog:
+        before, label = self.plan_in_force()
+        proposal = propose(shop, event, self.objective, before, **where)
         dialog = DecisionDialog(proposal, self.doc.shop.unit.label(),
-                                str(self.settings.value("history/supervisor", "")), self)
+                                str(self.settings.value("history/supervisor", "")), self,
+                                before=before, before_label=label)
         dialog.confirmed.connect(self.apply_decision)
         dialog.setAttribute(Qt.WidgetAttribute.WA_DeleteOnClose)
         self.decision_dialog = dialog

@@ -7,6 +7,7 @@ from PySide6.QtCore import Qt, Signal
 from PySide6.QtWidgets import (
     QComboBox,
     QFormLayout,
+    QHeaderView,
     QHBoxLayout,
     QLabel,
     QPushButton,
@@ -79,6 +80,11 @@ class PlanPanel(QWidget):
         self.tree.setRootIsDecorated(True)
         self.tree.setAlternatingRowColors(True)
         self.tree.setUniformRowHeights(True)
+        head = self.tree.header()
+        head.setStretchLastSection(False)
+        head.setSectionResizeMode(0, QHeaderView.ResizeMode.ResizeToContents)
+        head.setSectionResizeMode(1, QHeaderView.ResizeMode.Stretch)
+        head.setSectionResizeMode(2, QHeaderView.ResizeMode.ResizeToContents)
         layout.addWidget(self.tree, 1)
         self._unit = ""
 
@@ -183,5 +189,3 @@ class PlanPanel(QWidget):
             for m in plan.unavailable_machines:
                 QTreeWidgetItem(down, [f"{palette.MARK_DOWN} {m}", "down or in maintenance", ""])
             down.setExpanded(True)
-        for c in range(3):
-            self.tree.resizeColumnToContents(c)
