@@ -284,6 +284,9 @@ def test_time_limit_gives_a_checked_plan_and_states_what_is_proven():
     capacity = np.full(15, hours.mean() * 300 / 15 * 0.8)
     plan = fill_shift(values, hours, capacity, maximize=True, time_limit=0.5)
     assert isinstance(plan, ShiftPlan) and plan.verify()
+    # The machines have 80% of the mean job's hours times the jobs: at least half of the
+    # jobs fit (the greedy floor alone runs the shortest first), whatever the solver reached.
+    assert plan.planned_count >= 150
     assert plan.bound >= plan.total  # an upper bound when maximising
     if plan.proven_optimal:
         assert plan.status == "optimal" and plan.gap == 0
@@ -309,3 +312,23 @@ def test_progress_reports_stages_and_cancel_stops_before_solving():
         fill_shift([[1.0, 2.0], [3.0, 4.0]], np.ones((2, 2)), [1, 1], cancel=later,
                    progress=lambda text: (stages.append(text), later.set()))
     assert stages == ["stage 1 of 2: the most jobs that fit"]
+
+
+def test_greedy_floor_is_feasible_or_none():
+    from dispatcher.engine.fill_shift import _greedy
+
+    rng = np.random.default_rng(11)
+    for _ in range(200):
+        n_jobs, n_machines = int(rng.integers(1, 7)), int(rng.integers(1, 4))
+        values, hours, capacity, allowed, penalty, must, _ = random_instance(rng, n_jobs, n_machines)
+        usable = allowed & (hours <= capacity)
+        jobs, machines = np.nonzero(usable)
+        x = _greedy(jobs, machines, hours[usable], capacity, values[usable], must,
+                    np.zeros(jobs.size), True)
+        if x is None:
+            continue
+        # Checked directly: each job at most once, hours within capacity, must-run placed.
+        assert (np.bincount(jobs, weights=x, minlength=n_jobs) <= 1).all()
+        assert (np.bincount(machines, weights=x * hours[usable], minlength=n_machines)
+                <= capacity + 1e-9).all()
+        assert (np.bincount(jobs, weights=x, minlength=n_jobs)[must] == 1).all()

@@ -441,7 +441,11 @@ def fill_shift(values, hours, capacity, *, allowed=None, maximize: bool = False,
 
     x = np.zeros(n_var)
     count_proven = True
-    fallback = None
+    # Under a time limit the solver may stop with a poor plan (or none); a quick greedy
+    # plan is kept as a floor. scipy's milp takes no starting plan, so it is compared after.
+    greedy = (_greedy(job_of_var, machine_of_var, hrs[usable], cap, coef, must, lower,
+                      most_jobs_first) if time_limit is not None and n_var else None)
+    fallback = greedy
     two_stages = bool(n_var) and most_jobs_first and not must.all()
     if two_stages:
         stage("stage 1 of 2: the most jobs that fit")
@@ -450,13 +454,11 @@ def fill_shift(values, hours, capacity, *, allowed=None, maximize: bool = False,
                       None if left is None else left / 2)
         if first.status == 2:
             _raise_infeasible(must, usable)
-        if first.x is None:
-            if must.any():
-                raise ShiftSearchError(_no_plan_text(time_limit, must))
-            count_needed = 0.0
-        else:
+        if first.x is not None and (fallback is None or first.x.sum() > fallback.sum() + 0.5):
             fallback = np.round(first.x)
-            count_needed = float(fallback.sum())
+        if fallback is None and must.any():
+            raise ShiftSearchError(_no_plan_text(time_limit, must))
+        count_needed = 0.0 if fallback is None else float(fallback.sum())
         count_proven = first.status == 0
         constraints = constraints + [LinearConstraint(np.ones((1, n_var)), count_needed, np.inf)]
     if n_var:
@@ -464,7 +466,8 @@ def fill_shift(values, hours, capacity, *, allowed=None, maximize: bool = False,
         res = _milp(coef, integrality, bounds, constraints, time_left())
         if res.status == 2:
             _raise_infeasible(must, usable)
-        if res.x is not None:
+        if res.x is not None and (fallback is None or res.status == 0
+                                  or coef @ np.round(res.x) <= coef @ fallback):
             x = np.round(res.x)
         elif fallback is not None:
             x = fallback
@@ -508,6 +511,40 @@ def fill_shift(values, hours, capacity, *, allowed=None, maximize: bool = False,
         values=values, hours=hrs, allowed=mask & ~forbidden, wait_penalty=penalty,
         must_run=must, pinned_machine=pinned, count_proven_maximal=bool(count_proven),
         seconds=time.perf_counter() - started)
+
+
+def _greedy(job_of_var: np.ndarray, machine_of_var: np.ndarray, hours: np.ndarray,
+            cap: np.ndarray, coef: np.ndarray, must: np.ndarray, forced: np.ndarray,
+            most_jobs_first: bool) -> np.ndarray | None:
+    """A quick feasible plan (None if it misses a must-run job), used as a floor under a
+    time limit. Common practice for bin packing and GAP heuristics: pinned, then must-run
+    jobs first, then the shortest jobs (to run many); each job takes its best-valued pair
+    that still fits, and with ``most_jobs_first`` off only pairs that improve the total.
+    """
+    x = np.zeros(job_of_var.size)
+    left = cap.astype(float).copy()
+    for v in np.flatnonzero(forced > 0):
+        x[v] = 1.0
+        left[machine_of_var[v]] -= hours[v]
+    done = np.zeros(must.size, dtype=bool)
+    done[job_of_var[forced > 0]] = True
+    shortest = np.full(must.size, np.inf)
+    np.minimum.at(shortest, job_of_var, hours)
+    for i in np.lexsort((shortest, ~must)):
+        if done[i] or not np.isfinite(shortest[i]):
+            continue
+        pairs = np.flatnonzero(job_of_var == i)
+        for v in pairs[np.argsort(coef[pairs], kind="stable")]:
+            if not (must[i] or most_jobs_first or coef[v] < 0):
+                break
+            if hours[v] <= left[machine_of_var[v]] + 1e-12:
+                x[v] = 1.0
+                left[machine_of_var[v]] -= hours[v]
+                done[i] = True
+                break
+    if (must & ~done).any() or (left < -1e-9).any():
+        return None
+    return x
 
 
 def _no_plan_text(time_limit, must: np.ndarray) -> str:
