@@ -141,7 +141,8 @@ class ShiftPlan:
         if (mj[pinned] != self.pinned_machine[pinned]).any():
             return False
         used = np.bincount(mj[placed], weights=self.hours[rows, mj[placed]], minlength=n_machines)
-        tol = 1e-9 * max(1.0, float(self.capacity.max(initial=0)))
+        # HiGHS accepts rows within its feasibility tolerance (1e-7); allow a little more.
+        tol = 1e-6 * max(1.0, float(self.capacity.max(initial=0)))
         if (used > self.capacity + tol).any() or not np.allclose(used, self.hours_used):
             return False
         listed = sorted(int(i) for jobs in self.jobs_on_machine for i in jobs)
@@ -347,7 +348,7 @@ def fill_shift(values, hours, capacity, *, allowed=None, maximize: bool = False,
         True forces the job onto that machine (and makes it must-run); False forbids it.
     rush, due : optional
         Run order keys only (mask/indices, and one due time per job, NaN = none). ``rush``
-        defaults to the must-run jobs.
+        defaults to the ``must_run`` jobs given (not to ``all_jobs`` or pinned ones).
     most_jobs_first : bool
         Run as many jobs as fit before optimising values (as the one-to-one engine does).
     cancel : threading.Event, optional
@@ -402,10 +403,10 @@ def fill_shift(values, hours, capacity, *, allowed=None, maximize: bool = False,
     hrs = _check_hours(hours, machine_factor, values.shape, mask)
     cap = _check_capacity(capacity, n_machines)
     pinned, forbidden = _check_pins(pins, values.shape)
+    rush_mask = must.copy() if rush is None else _job_mask(rush, n_jobs, "rush")
     if all_jobs:
         must[:] = True
     must |= pinned >= 0
-    rush_mask = must.copy() if rush is None else _job_mask(rush, n_jobs, "rush")
     due_time = _job_vector(due, n_jobs, "due", np.nan)
     objective = "maximize" if maximize else "total"
 
