@@ -23,9 +23,11 @@ from dispatcher.sheet.content import SAFETY_CAUTIONS, sheet_text  # noqa: E402
 from dispatcher.shop import (  # noqa: E402
     DOWN,
     MAINTENANCE,
+    MUST,
     RUNNING,
     Job,
     Machine,
+    Pin,
     Shift,
     Shop,
     solve_shop,
@@ -33,6 +35,13 @@ from dispatcher.shop import (  # noqa: E402
 
 ROOT = Path(__file__).resolve().parent.parent
 T0 = dt.datetime(2026, 3, 9, 5, 30)
+
+
+@pytest.fixture(autouse=True)
+def _qt_app(qapp):
+    """The command draws with Qt in this process: let pytest-qt's QApplication be the one,
+    so widget tests later in the same run still get a QApplication."""
+    return qapp
 
 
 def invented_shop() -> Shop:
@@ -241,6 +250,16 @@ class TestRecordedDecision:
         assert main(["sheet", str(other_doc), "--decision", str(number), "--history", str(db)]) == 2
         err = capsys.readouterr().err
         assert "is for shop 'Invented sheet test shop'" in err and "other.dshop" in err
+
+
+def test_pinned_job_says_so():
+    shop = invented_shop()
+    shop.pins.append(Pin("J6", "M5", MUST, "fixture stays on the saw"))
+    plan = solve_shop(shop)
+    assert plan.machine_of("Cover 600") == "Saw E"
+    saw = next(m for m in build_sheet(shop, plan).machines if m.name == "Saw E")
+    cover = next(j for j in saw.jobs if j.name == "Cover 600")
+    assert cover.notes == "pinned here (fixture stays on the saw)"
 
 
 def test_text_sheet_of_builder_names_every_job():

@@ -78,9 +78,11 @@ def pdf_pages(path: Path) -> list[str]:
     return [re.sub(r"\s+", " ", page.extract_text() or "") for page in reader.pages]
 
 
-@pytest.fixture(scope="module")
-def app():
-    return ensure_gui_application()
+@pytest.fixture
+def app(qapp):
+    """pytest-qt's QApplication, so later widget tests in the same run still get one."""
+    assert ensure_gui_application() is qapp
+    return qapp
 
 
 def test_pdf_has_every_machine_job_and_the_safety_footer(app, tmp_path):
@@ -206,6 +208,20 @@ def test_printer_and_pdf_share_the_layout(app, tmp_path):
     assert len(theirs) == pages
     for i in range(pages):
         assert f"Page {i + 1} of {pages}" in theirs[i]
+
+
+def test_print_preview_paints_every_page(app):
+    """Regression: the preview's printer must stay usable for every page (no ownership
+    taken by a text layout)."""
+    from PySide6.QtPrintSupport import QPrintPreviewWidget
+
+    content = make_content(60)
+    painted: list[int] = []
+    preview = QPrintPreviewWidget()
+    preview.paintRequested.connect(lambda printer: painted.append(print_sheet(content, printer)))
+    preview.updatePreview()
+    assert painted and painted[-1] == preview.pageCount() >= 2
+    preview.deleteLater()
 
 
 def test_missing_folder_is_reported_and_nothing_written(app, tmp_path):

@@ -16,7 +16,7 @@ import dataclasses
 import datetime as dt
 from typing import Any, Protocol
 
-from dispatcher.shop import UP, Shop
+from dispatcher.shop import MUST, UP, Shop
 
 from .content import (
     SAFETY_CAUTIONS,
@@ -137,6 +137,19 @@ def run_order(plan: Any) -> dict[str, list[str]] | None:
     return order
 
 
+def _must_pins(shop: Shop) -> dict[tuple[str, str], str]:
+    """(job name, machine name) -> note of each "must go to" pin."""
+    out = {}
+    for pin in shop.pins:
+        if pin.kind != MUST:
+            continue
+        try:
+            out[(shop.job(pin.job).name, shop.machine(pin.machine).name)] = pin.note
+        except KeyError:
+            continue
+    return out
+
+
 def _entries(plan: Any) -> dict[str, list[tuple[str, float | None, bool]]]:
     """Machine -> ``(job, value, already_running)`` for a Plan or a filled-shift plan."""
     if hasattr(plan, "by_machine"):
@@ -167,6 +180,7 @@ def build_sheet(shop: Shop, plan: Any, decision: Any | None = None, *,
     """
     unit = value_unit(shop)
     by_machine = _entries(plan)
+    pinned = _must_pins(shop)
     order = order if order is not None else run_order(plan)
     machines = []
     for machine in shop.machines:
@@ -182,6 +196,10 @@ def build_sheet(shop: Shop, plan: Any, decision: Any | None = None, *,
         jobs = []
         for name, value, running in ordered:
             job = _sheet_job(shop, name, value, running, unit)
+            pin = pinned.get((name, machine.name))
+            if pin is not None:
+                note = "pinned here" + (f" ({pin})" if pin else "")
+                job = dataclasses.replace(job, notes=f"{note}; {job.notes}" if job.notes else note)
             if order is not None:
                 job = dataclasses.replace(job, hours=_pair_hours(shop, name, machine.name))
             jobs.append(job)

@@ -7,8 +7,10 @@ One function, :func:`print_sheet`, paints the sheet onto any paged paint device:
 How a page is made:
 
 * the body (machine table, waiting jobs, machines down, totals, sign-off) is one
-  ``QTextDocument`` laid out for the target device with a page height equal to the space
-  between the page header and the safety footer. Qt paginates it and repeats each table's
+  ``QTextDocument`` laid out once in device-independent layout pixels, with a page
+  height equal to the space between the page header and the safety footer, and painted
+  through a scaled painter (as ``QTextDocument.print`` does), so every device gets the
+  same page breaks. Qt paginates it and repeats each table's
   header rows (``QTextTableFormat.setHeaderRowCount``) at the top of every page the table
   continues on;
 * the page header (shop, date, shift, supervisor, decision, printed time, "Page X of Y")
@@ -18,8 +20,9 @@ How a page is made:
 Nothing relies on colour: states are words ("DOWN"), rush jobs say "RUSH", shading is a
 light grey behind text that already says what it means.
 
-This module imports QtGui only (no widgets). A ``QGuiApplication`` must exist before
-painting; :func:`ensure_gui_application` makes one (offscreen when there is no display).
+This module imports QtGui only (no widgets). A Qt application must exist before
+painting; :func:`ensure_gui_application` returns the running one (the app's
+``QApplication``) or makes a ``QGuiApplication`` (offscreen when there is no display).
 """
 
 from __future__ import annotations
@@ -291,13 +294,21 @@ def sheet_body_html(content: SheetContent) -> str:
 
 @dataclass(frozen=True)
 class _Metrics:
-    """Device pixels per typographic point, and the bands of a page in device pixels."""
+    """A page in layout pixels (see :func:`_layout_px_per_pt`) and its bands.
+
+    The sheet is laid out once in layout pixels, independent of the device, and painted
+    with the painter scaled by ``scale_x``/``scale_y`` (device pixels per layout pixel),
+    as ``QTextDocument.print`` does. The documents are never bound to the device: Qt's
+    bindings would take ownership of a printer handed to ``setPaintDevice``.
+    """
 
     px_per_pt: float
     width: float
     height: float
     header_h: float
     footer_h: float
+    scale_x: float
+    scale_y: float
 
     @property
     def body_h(self) -> float:
@@ -332,10 +343,9 @@ def _layout_px_per_pt() -> float:
     return (round(screen.logicalDotsPerInchY()) if screen is not None else 100) / 72
 
 
-def _document(device: QPagedPaintDevice, html_text: str, width: float, pt: float,
-              style: str = "") -> QTextDocument:
+def _document(html_text: str, width: float, pt: float, style: str = "") -> QTextDocument:
+    """A rich-text document laid out ``width`` layout pixels wide."""
     doc = QTextDocument()
-    doc.documentLayout().setPaintDevice(device)
     doc.setDefaultFont(_font(pt))
     doc.setDocumentMargin(0)
     if style:
@@ -366,7 +376,8 @@ def _header_html(content: SheetContent, page: int, pages: int) -> str:
 
 def _footer_html(content: SheetContent) -> str:
     items = " ".join(f"<b>{k}.</b> {_e(text)}" for k, text in enumerate(content.safety, start=1))
-    return f"<p><b>SAFETY:</b> {items}</p>"
+    return ('<table width="100%" cellspacing=0 cellpadding=4 style="border-collapse:collapse">'
+            f'<tr><td style="border: 2px solid black"><b>SAFETY:</b> {items}</td></tr></table>')
 
 
 def print_sheet(content: SheetContent, device: QPagedPaintDevice) -> int:
@@ -390,7 +401,7 @@ def print_sheet(content: SheetContent, device: QPagedPaintDevice) -> int:
             with none_refcount_guard():
                 if i:
                     device.newPage()
-                _paint_page(painter, content, device, body, m, i, pages)
+                _paint_page(painter, content, body, m, i, pages)
     finally:
         with none_refcount_guard():
             painter.end()
@@ -398,32 +409,36 @@ def print_sheet(content: SheetContent, device: QPagedPaintDevice) -> int:
 
 
 def _lay_out(content: SheetContent, device: QPagedPaintDevice) -> tuple[QTextDocument, _Metrics]:
-    """The paginated body document for ``device`` and the bands of its pages."""
-    width, height = float(device.width()), float(device.height())
-    px_per_pt = device.logicalDpiY() / 72.0
-    if width <= 0 or height <= 0:
+    """The paginated body document and the bands of the pages of ``device``."""
+    if device.width() <= 0 or device.height() <= 0:
         raise SheetRenderError("the printer reports an empty page")
-    footer = _document(device, _footer_html(content), width, SMALL_PT)
-    probe = _document(device, _header_html(content, 999, 999), width, BODY_PT)
-    m = _Metrics(px_per_pt, width, height,
-                 header_h=probe.size().height() + GAP_PT * px_per_pt,
-                 footer_h=footer.size().height() + GAP_PT * px_per_pt)
-    if m.body_h < 72 * px_per_pt:
-        raise SheetRenderError("the page is too small for the sheet (less than an inch of body)")
     unit = _layout_px_per_pt()
+    scale_x = device.logicalDpiX() / (72.0 * unit)
+    scale_y = device.logicalDpiY() / (72.0 * unit)
+    width, height = device.width() / scale_x, device.height() / scale_y
+    footer = _document(_footer_html(content), width, SMALL_PT)
+    probe = _document(_header_html(content, 999, 999), width, BODY_PT)
+    m = _Metrics(unit, width, height,
+                 header_h=probe.size().height() + GAP_PT * unit,
+                 footer_h=footer.size().height() + GAP_PT * unit,
+                 scale_x=scale_x, scale_y=scale_y)
+    if m.body_h < 72 * unit:
+        raise SheetRenderError("the page is too small for the sheet (less than an inch of body)")
     style = BODY_STYLE.format(rule=max(1, round(0.6 * unit)), tall=round(6 * unit))
-    body = _document(device, sheet_body_html(content), width, BODY_PT, style)
+    body = _document(sheet_body_html(content), width, BODY_PT, style)
     body.setPageSize(QSizeF(width, m.body_h))
     return body, m
 
 
-def _paint_page(painter: QPainter, content: SheetContent, device: QPagedPaintDevice,
-                body: QTextDocument, m: _Metrics, index: int, pages: int) -> None:
+def _paint_page(painter: QPainter, content: SheetContent, body: QTextDocument, m: _Metrics,
+                index: int, pages: int) -> None:
     """Header band, the body's page ``index``, and the safety footer."""
+    painter.save()
+    painter.scale(m.scale_x, m.scale_y)
     pen = QPen(Qt.GlobalColor.black)
     pen.setWidthF(0.8 * m.px_per_pt)
     gap = GAP_PT * m.px_per_pt
-    header = _document(device, _header_html(content, index + 1, pages), m.width, BODY_PT)
+    header = _document(_header_html(content, index + 1, pages), m.width, BODY_PT)
     header.drawContents(painter)
     painter.setPen(pen)
     painter.drawLine(QLineF(0, m.header_h - gap / 2, m.width, m.header_h - gap / 2))
@@ -433,12 +448,8 @@ def _paint_page(painter: QPainter, content: SheetContent, device: QPagedPaintDev
     body.drawContents(painter, QRectF(0, index * m.body_h, m.width, m.body_h))
     painter.restore()
 
-    footer = _document(device, _footer_html(content), m.width, SMALL_PT)
-    foot_y = m.height - footer.size().height()
-    painter.setPen(pen)
-    painter.drawLine(QLineF(0, foot_y - gap / 2, m.width, foot_y - gap / 2))
-    painter.save()
-    painter.translate(0, foot_y)
+    footer = _document(_footer_html(content), m.width, SMALL_PT)
+    painter.translate(0, m.height - footer.size().height())
     footer.drawContents(painter)
     painter.restore()
 
