@@ -41,7 +41,8 @@ T0 = datetime(2026, 3, 14, 5, 0, tzinfo=UTC)
 
 def plan(placed: dict[str, str], waiting=(), idle=(), total=None, objective="total",
          verified=True) -> dict:
-    assignments = [{"job": j, "machine": m, "cost": 10 + i} for i, (j, m) in enumerate(placed.items())]
+    assignments = [{"job": j, "machine": m, "cost": 10 + i}
+                   for i, (j, m) in enumerate(placed.items())]
     return {"status": "optimal", "objective": objective,
             "total": sum(a["cost"] for a in assignments) if total is None else total,
             "assignments": assignments, "waiting_jobs": list(waiting),
@@ -102,7 +103,8 @@ def test_objects_with_to_json_are_accepted(store):
     (dict(plan({"A": "M"}), total="12"), "total: expected a finite number"),
     (dict(plan({"A": "M"}), assignments=[{"job": "A", "cost": 1}]),
      r"assignments\[0\].machine: expected a non-empty name"),
-    (dict(plan({"A": "M", "B": "M2"}), waiting_jobs=["B"]), r"waiting_jobs\[0\]: 'B' is also placed"),
+    (dict(plan({"A": "M", "B": "M2"}), waiting_jobs=["B"]),
+     r"waiting_jobs\[0\]: 'B' is also placed"),
     (dict(plan({"A": "M"}), assignments=[{"job": "A", "machine": "M", "cost": 1},
                                          {"job": "A", "machine": "N", "cost": 2}]),
      r"assignments\[1\].job: 'A' is placed twice"),
@@ -357,7 +359,8 @@ def test_per_user_data_folder(platform, env, expected):
     # XDG Base Directory Specification: relative XDG_DATA_HOME values are ignored.
     assert data_folder(env, platform, Path("home")) == Path(expected)
     assert default_history_path(env, platform, Path("home")) == Path(expected) / "history.sqlite"
-    assert default_history_path({"DISPATCHER_HISTORY": "/x/h.sqlite"}, platform) == Path("/x/h.sqlite")
+    override = {"DISPATCHER_HISTORY": "/x/h.sqlite"}
+    assert default_history_path(override, platform) == Path("/x/h.sqlite")
 
 
 @pytest.mark.parametrize("clock, expected", [

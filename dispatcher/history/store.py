@@ -143,6 +143,14 @@ class HistoryStore:
     shifts, tz
         The shift pattern and time zone used to label decisions (default: three shifts
         from 06:00, local time of this computer).
+    migrations
+        The schema steps this program knows (default: all released ones); a file at an
+        older step is copied to a backup and upgraded when first opened.
+
+    Attributes
+    ----------
+    last_backup
+        The backup written by an upgrade during this store's first use, else None.
     """
 
     def __init__(self, path: str | os.PathLike | None = None, *, timeout: float = 10.0,
