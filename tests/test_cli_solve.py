@@ -283,3 +283,15 @@ def test_bad_input_as_a_real_process(tmp_path):
     assert "Traceback" not in proc.stderr
     assert proc.stderr.strip() == f"dispatcher: {path}: row 2, column 3 (C): 'two' is not a number " \
                                   "(use x or leave empty when the machine cannot run the job)"
+
+
+def test_no_compatible_pair_everyone_waits(capsys, tmp_path):
+    # Hall's theorem with S = {job}: a job with no allowed machine waits in every plan.
+    grid = tmp_path / "none.csv"
+    grid.write_text("l,M1,M2\nA,x,x\nB,,X\n")
+    code, out, err = run_cli(capsys, grid, "--json")
+    assert code == 0, err
+    data = json.loads(out)
+    assert data["assignments"] == [] and data["total"] == 0
+    assert data["waiting_jobs"] == ["A", "B"] and data["idle_machines"] == ["M1", "M2"]
+    assert data["waiting_reasons"]["A"]["machines"] == []

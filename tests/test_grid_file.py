@@ -291,3 +291,79 @@ def test_sample_grid_reads(samples):
     assert len(table.jobs) == 12 and len(table.machines) == 8
     assert not table.allowed.all(), "the sample has incompatible pairs"
     assert os.path.getsize(samples / "sheet_metal_grid.csv") < MAX_FILE_BYTES
+
+
+# ----------------------------------------------------------------- round trips (hypothesis)
+
+from hypothesis import HealthCheck, given, settings  # noqa: E402
+from hypothesis import strategies as st  # noqa: E402
+
+_name = st.text(st.characters(blacklist_categories=("Cs", "Cc", "Zl", "Zp")), min_size=1, max_size=12) \
+    .map(str.strip).filter(lambda s: s and not s.startswith("\ufeff") and s not in ("x", "X"))
+_cell = st.one_of(st.sampled_from(["x", "X", ""]),
+                  st.floats(0, 1e9, allow_nan=False, allow_infinity=False),
+                  st.integers(0, 10**9))
+
+
+@st.composite
+def grids(draw):
+    m = draw(st.integers(1, 6))
+    n = draw(st.integers(1, 6))
+    jobs = draw(st.lists(_name, min_size=m, max_size=m, unique=True))
+    machines = draw(st.lists(_name, min_size=n, max_size=n, unique=True))
+    cells = draw(st.lists(st.lists(_cell, min_size=n, max_size=n), min_size=m, max_size=m))
+    label = draw(st.one_of(st.just(""), _name))
+    return label, jobs, machines, cells
+
+
+def _check_round_trip(table, jobs, machines, cells, rel=0.0):
+    assert table.jobs == jobs and table.machines == machines
+    for i, row in enumerate(cells):
+        for j, cell in enumerate(row):
+            if isinstance(cell, str):
+                assert not table.allowed[i, j]
+            else:
+                assert table.allowed[i, j]
+                assert table.values[i, j] == pytest.approx(float(cell), rel=rel, abs=0)
+
+
+@settings(max_examples=150, deadline=None, suppress_health_check=[HealthCheck.function_scoped_fixture])
+@given(grid=grids(), style=st.sampled_from([(",", "."), (";", "."), (";", ","), ("\t", ".")]))
+def test_csv_round_trip(tmp_path, grid, style):
+    # Reference: files written by Python's csv module (an outside writer) in each dialect.
+    import csv
+    import io
+
+    label, jobs, machines, cells = grid
+    delimiter, decimal = style
+    buffer = io.StringIO()
+    writer = csv.writer(buffer, delimiter=delimiter)
+    writer.writerow([label, *machines])
+    for name, row in zip(jobs, cells):
+        writer.writerow([name, *[c if isinstance(c, str) else repr(c).replace(".", decimal) for c in row]])
+    path = tmp_path / "round.csv"
+    path.write_text(buffer.getvalue(), encoding="utf-8", newline="")
+    try:
+        table = read_grid(path)
+    except GridFileError as exc:
+        # The only refusal allowed: a name that itself holds the delimiter guessed wrongly
+        # from the header; the message must still name the file.
+        assert str(path) in str(exc)
+        assert any(d in "".join([label, *machines]) for d in ",;\t")
+        return
+    _check_round_trip(table, jobs, machines, cells)
+
+
+@settings(max_examples=40, deadline=None, suppress_health_check=[HealthCheck.function_scoped_fixture])
+@given(grid=grids())
+def test_xlsx_round_trip_hypothesis(tmp_path, grid):
+    # Reference: workbooks written by openpyxl (an outside writer).
+    label, jobs, machines, cells = grid
+    book = openpyxl.Workbook()
+    book.active.append([label or None, *machines])
+    for name, row in zip(jobs, cells):
+        book.active.append([name, *[None if c == "" else c for c in row]])
+    path = tmp_path / "round.xlsx"
+    book.save(path)
+    # openpyxl may write the last of 17 significant digits differently (spreadsheets keep 15).
+    _check_round_trip(read_grid(path), jobs, machines, cells, rel=1e-15)
