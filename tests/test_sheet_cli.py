@@ -262,6 +262,55 @@ def test_pinned_job_says_so():
     assert cover.notes == "pinned here (fixture stays on the saw)"
 
 
+def filled_shop() -> Shop:
+    """The invented shop with run hours on every job and a 6-hour shift."""
+    shop = invented_shop()
+    shop.shift.hours = 6.0
+    for k, job in enumerate(shop.jobs):
+        job.run_hours = 1.0 + (k % 3)
+    return shop
+
+
+def test_filled_shift_keeps_the_planned_run_order_and_hours():
+    from dispatcher.shop.fill import fill_shop_shift
+
+    shop = filled_shop()
+    fill = fill_shop_shift(shop)
+    content = build_sheet(shop, fill)
+    assert any(len(m.jobs) > 1 for m in content.machines)
+    for m in content.machines:
+        assert [j.name for j in m.jobs] == fill.jobs_on(m.name)
+        for job in m.jobs:
+            machine = shop.machine_by_name(m.name)
+            expected = shop.job_by_name(job.name).run_hours * machine.speed_factor
+            assert job.hours == pytest.approx(expected)
+    assert content.totals.status == fill.status_text
+    assert {w.name for w in content.waiting} == set(fill.waiting_jobs)
+
+
+def test_cli_fill_shift_sheet(tmp_path, capsys):
+    from dispatcher.shop.fill import fill_shop_shift
+
+    shop = filled_shop()
+    doc = tmp_path / "filled.dshop"
+    save_shop(shop, doc)
+    out = tmp_path / "filled.pdf"
+    assert main(["sheet", str(doc), "--fill-shift", "--pdf", str(out)]) == 0
+    _, text = pdf_text(out)
+    fill = fill_shop_shift(shop)
+    for m in fill.machines:
+        count = len(m.running) + len(m.jobs)
+        for k, job in enumerate(m.running + m.jobs, start=1):
+            assert job in text
+            if count > 1:
+                assert f"{k} of {count}" in text
+    grid = ROOT / "sample_shops" / "sheet_metal_grid.csv"
+    assert main(["sheet", str(grid), "--fill-shift"]) == 2
+    assert "needs a shop document" in capsys.readouterr().err
+    assert main(["sheet", str(doc), "--time-limit", "5"]) == 2
+    assert "--fill-shift only" in capsys.readouterr().err
+
+
 def test_text_sheet_of_builder_names_every_job():
     shop = invented_shop()
     plan = solve_shop(shop)

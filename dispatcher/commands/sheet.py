@@ -1,10 +1,10 @@
 """``dispatcher sheet``: the daily dispatch sheet as a PDF (or as text), with no window.
 
 ``dispatcher sheet SHOP [--decision N|latest] [--history PATH] [--pdf OUT.pdf]
-[--paper a4|letter]``
+[--paper a4|letter] [--fill-shift [--time-limit SECONDS]]``
 
-Without ``--decision`` the shop is solved now (least total) and the sheet is marked as a
-draft that is not recorded. With ``--decision`` the sheet prints that recorded decision:
+Without ``--decision`` the shop is solved now (least total; one round, or with
+``--fill-shift`` the whole shift) and the sheet is marked as a draft that is not recorded. With ``--decision`` the sheet prints that recorded decision:
 its shop snapshot and plan, number, time and supervisor; the decision must belong to
 the shop named by SHOP. Without ``--pdf`` the sheet is printed as text on stdout.
 
@@ -17,9 +17,10 @@ import argparse
 from pathlib import Path
 from typing import Any
 
-from dispatcher.commands.common import EXIT_STORE, CliError
+from dispatcher.commands.common import EXIT_INFEASIBLE, EXIT_STORE, CliError
 from dispatcher.commands.shop_input import is_shop_document, read_shop_arg, solve_shop_arg
 from dispatcher.io.grid import GridFileError, read_grid
+from dispatcher.io.shopfile import ShopFileError, load_shop
 from dispatcher.shop import Plan, PlanFormatError, Shop, shop_from_grid
 from dispatcher.sheet.build import build_sheet, run_order
 from dispatcher.sheet.content import SheetContent, sheet_text
@@ -31,8 +32,15 @@ def register(sub: argparse._SubParsersAction) -> None:
                        "its jobs in order, waiting jobs, machines down, totals and the safety "
                        "cautions. Works without a window.")
     p.add_argument("shop", metavar="SHOP", help="shop document (.dshop) or grid file (.csv, .xlsx)")
-    p.add_argument("--decision", metavar="N",
-                   help="print recorded decision N (or 'latest' for this shop's newest)")
+    source = p.add_mutually_exclusive_group()
+    source.add_argument("--decision", metavar="N",
+                        help="print recorded decision N (or 'latest' for this shop's newest)")
+    source.add_argument("--fill-shift", action="store_true",
+                        help="plan the whole shift now (several jobs per machine, in run "
+                        "order, within each machine's hours) instead of one round")
+    p.add_argument("--time-limit", metavar="SECONDS", type=float, default=None,
+                   help="with --fill-shift: stop the solver after this long and print the "
+                   "best plan found, marked as such")
     p.add_argument("--history", metavar="PATH", default=None,
                    help="history file to read --decision from (default: the per-user one)")
     p.add_argument("--pdf", metavar="OUT.pdf", help="write the sheet to this PDF file")
@@ -42,10 +50,19 @@ def register(sub: argparse._SubParsersAction) -> None:
     p.set_defaults(func=run)
 
 
-def _load(path: str) -> Shop:
-    """A shop document, or a plain grid file turned into a shop named after the file."""
+def _load(path: str, check: bool = True) -> Shop:
+    """A shop document, or a plain grid file turned into a shop named after the file.
+
+    ``check=False`` leaves the checks to the planner (a filled shift checks by its own
+    rules, which allow several jobs pinned to one machine).
+    """
     if is_shop_document(path):
-        return read_shop_arg(path)
+        if check:
+            return read_shop_arg(path)
+        try:
+            return load_shop(path, check=False)
+        except ShopFileError as exc:
+            raise CliError(str(exc)) from None
     try:
         table = read_grid(path)
     except GridFileError as exc:
@@ -62,7 +79,7 @@ def _recorded(shop: Shop, source: str, number: str, history: str | None) -> tupl
     except ImportError:  # pragma: no cover - only in a build without the history package
         raise CliError("--decision needs the decision history, which this installation "
                        "lacks") from None
-    from dispatcher.io.shopfile import ShopFileError, shop_from_dict
+    from dispatcher.io.shopfile import shop_from_dict
 
     path = resolve_history_path(history)
     store = HistoryStore(path)
@@ -95,13 +112,38 @@ def _recorded(shop: Shop, source: str, number: str, history: str | None) -> tupl
 
 def make_content(args: argparse.Namespace) -> SheetContent:
     """The sheet for the parsed arguments (no Qt involved)."""
-    shop = _load(args.shop)
+    shop = _load(args.shop, check=not args.fill_shift)
     if args.decision is not None:
         snapshot, plan, decision = _recorded(shop, args.shop, args.decision, args.history)
         # a recorded filled shift keeps each machine's run order in its "machines" list
         return build_sheet(snapshot, plan, decision, order=run_order(decision.plan))
+    if args.fill_shift:
+        return build_sheet(shop, _filled(shop, args.shop, args.time_limit))
+    if args.time_limit is not None:
+        raise CliError("--time-limit applies to --fill-shift only")
     plan = solve_shop_arg(shop, args.shop, "total")
     return build_sheet(shop, plan)
+
+
+def _filled(shop: Shop, source: str, time_limit: float | None) -> Any:
+    """The filled shift of a shop document (least total), errors as for ``solve --fill-shift``."""
+    from dispatcher.engine import ShiftSearchError
+    from dispatcher.shop import ShopError, ShopInfeasibleError
+    from dispatcher.shop.fill import fill_shop_shift
+
+    if not is_shop_document(source):
+        raise CliError(f"{source}: --fill-shift needs a shop document (.dshop) with run hours "
+                       "and shift hours; a grid file has neither (see dispatcher convert)")
+    if time_limit is not None and not time_limit > 0:
+        raise CliError(f"--time-limit must be a number of seconds > 0, got {time_limit:g}")
+    try:
+        return fill_shop_shift(shop, time_limit=time_limit, source=source)
+    except ShopInfeasibleError as exc:
+        raise CliError(str(exc), EXIT_INFEASIBLE) from None
+    except ShiftSearchError as exc:
+        raise CliError(f"{source}: {exc}", EXIT_INFEASIBLE) from None
+    except ShopError as exc:
+        raise CliError(str(exc)) from None
 
 
 def run(args: argparse.Namespace) -> int:
