@@ -295,7 +295,7 @@ def test_sample_grid_reads(samples):
 
 # ----------------------------------------------------------------- round trips (hypothesis)
 
-from hypothesis import HealthCheck, given, settings  # noqa: E402
+from hypothesis import HealthCheck, assume, given, settings  # noqa: E402
 from hypothesis import strategies as st  # noqa: E402
 
 _name = st.text(st.characters(blacklist_categories=("Cs", "Cc", "Zl", "Zp")), min_size=1, max_size=12) \
@@ -359,6 +359,8 @@ def test_csv_round_trip(tmp_path, grid, style):
 def test_xlsx_round_trip_hypothesis(tmp_path, grid):
     # Reference: workbooks written by openpyxl (an outside writer).
     label, jobs, machines, cells = grid
+    # openpyxl stores any text starting with "=" as a formula: not a name then.
+    assume(not any(name.startswith("=") for name in [label, *jobs, *machines]))
     book = openpyxl.Workbook()
     book.active.append([label or None, *machines])
     for name, row in zip(jobs, cells):
