@@ -51,6 +51,7 @@ from dispatcher.ui.files import FileController
 from dispatcher.ui.grid_model import COL_PLAN, FIRST_MACHINE_COL, GridModel
 from dispatcher.ui.grid_view import GridView
 from dispatcher.ui.messages import Messenger
+from dispatcher.ui.nonefix import keep_none_alive
 from dispatcher.ui.plan_panel import PlanPanel
 from dispatcher.ui.solving import SolveOutcome, snapshot, solve_outcome
 from dispatcher.ui.worker import BackgroundRunner
@@ -71,6 +72,7 @@ class MainWindow(QMainWindow):
     def __init__(self, shop: Shop | None = None, *, settings: QSettings | None = None,
                  messenger: Messenger | None = None, history_path: str | os.PathLike | None = None,
                  parent: QWidget | None = None):
+        keep_none_alive()
         super().__init__(parent)
         self.setObjectName("mainWindow")
         self.settings = settings or QSettings()
@@ -155,11 +157,11 @@ class MainWindow(QMainWindow):
                                       "Paste a tab-separated block from a spreadsheet")
         self.act_cannot = self._action("Mark &cannot run", self.on_cannot_run, S.Delete,
                                        "The machine cannot run the job (selected cells)")
-        self.act_pin = self._action("&Pin job to this machine", lambda: self.on_pin(MUST), "Ctrl+P",
+        self.act_pin = self._action("&Pin job to this machine", lambda: self.on_pin(MUST), "Ctrl+Shift+M",
                                     "The job must go to this machine")
         self.act_forbid = self._action("&Forbid this pair", lambda: self.on_pin(MUST_NOT), "Ctrl+Shift+F",
                                        "The job must not go to this machine")
-        self.act_unpin = self._action("C&lear pin", lambda: self.on_pin(None), "Ctrl+Shift+P",
+        self.act_unpin = self._action("C&lear pin", lambda: self.on_pin(None), "Ctrl+Shift+U",
                                       "Remove the pin or ban of this pair")
         self.act_rush = self._action("&Rush job arrived\u2026", self.on_rush, "Ctrl+R",
                                      "Make the current job a rush job and re-dispatch")

@@ -1,0 +1,91 @@
+"""Print preview, print and PDF export of the daily dispatch sheet.
+
+The layout is the sheet package's (:func:`dispatcher.sheet.build.build_sheet` for the
+content, :mod:`dispatcher.sheet.render` for paper and PDF), so the preview, the printer and
+the PDF are the same pages. The sheet prints the decision in force when one is recorded
+for this shop, otherwise the plan shown (and says it is not recorded).
+"""
+
+from __future__ import annotations
+
+import os
+from pathlib import Path
+
+from PySide6.QtPrintSupport import QPrintDialog, QPrinter, QPrinterInfo, QPrintPreviewDialog
+
+from dispatcher.history import HistoryError
+from dispatcher.shop import Plan, PlanFormatError
+from dispatcher.sheet.build import build_sheet
+from dispatcher.sheet.content import SheetContent
+from dispatcher.sheet.render import SheetRenderError, page_size_for, print_sheet, write_pdf
+
+
+def sheet_content(window) -> SheetContent | None:
+    """The sheet for the window's shop: the recorded decision in force, else the plan shown."""
+    shop = window.doc.shop
+    supervisor = str(window.settings.value("history/supervisor", ""))
+    if shop.plan_in_force:
+        try:
+            decision = window.history.latest(shop.name)
+        except HistoryError:
+            decision = None
+        if decision is not None and decision.plan:
+            try:
+                return build_sheet(shop, Plan.from_json(decision.plan, f"decision #{decision.id}"),
+                                   decision, supervisor=supervisor)
+            except PlanFormatError:
+                pass
+    if window.plan is None:
+        return None
+    return build_sheet(shop, window.plan, None, supervisor=supervisor)
+
+
+def export_pdf(window, path: str | os.PathLike) -> int | None:
+    """Write the sheet to ``path``; returns the page count (None, with a message, on failure)."""
+    content = sheet_content(window)
+    if content is None:
+        window.messenger.error("Nothing to print", "There is no plan yet: fix the grid first.")
+        return None
+    try:
+        pages = write_pdf(content, Path(path))
+    except (SheetRenderError, OSError) as exc:
+        window.messenger.error("PDF not written", str(exc))
+        return None
+    window.statusBar().showMessage(f"Wrote {pages} page(s) to {path}", 8000)
+    return pages
+
+
+def _printer() -> QPrinter:
+    """A high-resolution printer on the default page size. Without any installed printer
+    it prints to PDF (Qt's native preview crashes when no printer exists at all)."""
+    printer = QPrinter(QPrinter.PrinterMode.HighResolution)
+    if not QPrinterInfo.availablePrinters():
+        printer.setOutputFormat(QPrinter.OutputFormat.PdfFormat)
+    printer.setPageSize(page_size_for(None))
+    return printer
+
+
+def preview(window) -> QPrintPreviewDialog | None:
+    """Open the print preview (non-blocking); printing from it uses the same layout."""
+    content = sheet_content(window)
+    if content is None:
+        window.messenger.error("Nothing to print", "There is no plan yet: fix the grid first.")
+        return None
+    printer = _printer()
+    dialog = QPrintPreviewDialog(printer, window)
+    dialog.printer_ref = printer   # the dialog does not own the printer: keep it alive
+    dialog.setWindowTitle("Dispatch sheet - print preview")
+    dialog.paintRequested.connect(lambda printer: print_sheet(content, printer))
+    dialog.open()
+    return dialog
+
+
+def print_now(window) -> None:
+    content = sheet_content(window)
+    if content is None:
+        window.messenger.error("Nothing to print", "There is no plan yet: fix the grid first.")
+        return
+    printer = _printer()
+    dialog = QPrintDialog(printer, window)
+    if dialog.exec() == QPrintDialog.DialogCode.Accepted:
+        print_sheet(content, printer)

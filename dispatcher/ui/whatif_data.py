@@ -1,0 +1,82 @@
+"""What-if costs of a shop plan laid out on the shop's jobs x machines (Qt-free).
+
+The numbers are the engine's exact what-if costs (:func:`dispatcher.engine.whatif.what_if`)
+on the problem the plan was solved on; this module only maps the problem's rows (waiting
+jobs) and columns (machine slots) back to the shop's jobs and machines. A machine with
+several slots takes the least extra over its slots (any free slot will do).
+"""
+
+from __future__ import annotations
+
+from dataclasses import dataclass
+
+import numpy as np
+
+from dispatcher.engine.whatif import what_if
+from dispatcher.shop import Plan
+
+NOT_APPLICABLE = "n/a"
+
+
+@dataclass(frozen=True)
+class WhatIfGrid:
+    """``extra[i, k]``: how much worse the best plan with job i on machine k is (0 on the
+    plan, NaN where no plan can contain the pair). ``in_problem[i]``: job i was waiting
+    (others run already or are done). ``planned[i]``: machine index of job i in the plan or
+    -1. ``best_other[i]``/``best_other_extra[i]``: the cheapest other machine (-1/NaN if none).
+    ``wait_extra[i]``: extra for keeping job i waiting (NaN if impossible).
+    """
+
+    objective: str
+    extra: np.ndarray
+    in_problem: np.ndarray
+    machine_up: np.ndarray
+    planned: np.ndarray
+    best_other: np.ndarray
+    best_other_extra: np.ndarray
+    wait_extra: np.ndarray
+
+    @property
+    def largest(self) -> float:
+        finite = self.extra[np.isfinite(self.extra)]
+        return float(finite.max()) if finite.size else 0.0
+
+
+def what_if_grid(plan: Plan) -> WhatIfGrid:
+    """Map the engine's what-if costs for ``plan`` onto its shop (raises ValueError for
+    the bottleneck objective, where one number per pair does not describe the plans)."""
+    problem, result = plan.problem, plan.result
+    if problem is None or result is None:
+        raise ValueError("this plan carries no solver result to compute what-if costs from")
+    w = what_if(result)
+    shop = problem.shop
+    n_jobs, n_machines = len(shop.jobs), len(shop.machines)
+    rows = np.asarray(problem.rows, dtype=np.int64)
+    cols = np.asarray(problem.columns, dtype=np.int64)
+    extra = np.full((n_jobs, n_machines), np.nan)
+    for k in np.unique(cols):
+        slots = np.flatnonzero(cols == k)
+        block = w.extra[:, slots]
+        with np.errstate(all="ignore"):
+            best = np.where(np.isnan(block).all(axis=1), np.nan, np.nanmin(
+                np.where(np.isnan(block), np.inf, block), axis=1))
+        extra[rows, k] = best
+    in_problem = np.zeros(n_jobs, dtype=bool)
+    in_problem[rows] = True
+    planned = np.full(n_jobs, -1, dtype=np.int64)
+    placed = result.machine_of_job >= 0
+    planned[rows[placed]] = cols[result.machine_of_job[placed]]
+    others = extra.copy()
+    has_plan = planned >= 0
+    others[np.flatnonzero(has_plan), planned[has_plan]] = np.nan
+    best_other = np.full(n_jobs, -1, dtype=np.int64)
+    best_other_extra = np.full(n_jobs, np.nan)
+    ok = ~np.isnan(others).all(axis=1) if n_machines else np.zeros(n_jobs, dtype=bool)
+    if ok.any():
+        best_other[ok] = np.nanargmin(others[ok], axis=1)
+        best_other_extra[ok] = others[np.flatnonzero(ok), best_other[ok]]
+    wait_extra = np.full(n_jobs, np.nan)
+    wait_extra[rows] = w.wait_extra
+    machine_up = np.array([m.state == "up" for m in shop.machines], dtype=bool)
+    return WhatIfGrid(result.objective, extra, in_problem, machine_up, planned, best_other,
+                      best_other_extra, wait_extra)
