@@ -1,4 +1,5 @@
-"""Keep ``None`` alive despite a reference leak in PySide6 6.12 on CPython 3.11.
+"""Keep ``None`` (and ``True``/``False``) alive despite a reference leak in PySide6 6.12
+on CPython 3.11.
 
 With PySide6/shiboken6 6.12.0 on CPython 3.11, each call of a Qt method returning
 ``void`` (``QLabel.setText``, ``QObject.setObjectName``...) gives back ``None`` without
@@ -27,10 +28,14 @@ _done = False
 
 
 def keep_none_alive() -> None:
-    """Add :data:`EXTRA_REFERENCES` references to ``None`` (once per process; 3.11 only)."""
+    """Add :data:`EXTRA_REFERENCES` references to ``None``, ``True`` and ``False`` (once per
+    process; 3.11 only)."""
     global _done
     if _done or sys.version_info >= (3, 12):
         return
     # ob_refcnt is the first field of every PyObject (Include/object.h); the GIL is held.
-    ctypes.c_ssize_t.from_address(id(None)).value += EXTRA_REFERENCES
+    # True and False are static singletons too, and lose references the same way in a
+    # long session (seen as "bool_dealloc: deallocating True or False" at exit).
+    for singleton in (None, True, False):
+        ctypes.c_ssize_t.from_address(id(singleton)).value += EXTRA_REFERENCES
     _done = True
