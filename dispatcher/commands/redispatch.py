@@ -1,0 +1,130 @@
+"""``dispatcher redispatch``: a new plan after a breakdown or another event, and what changed.
+
+The plan in force comes from the shop document's ``plan_in_force`` (machine id -> job
+ids, written when a decision is recorded) or from ``--plan PLANFILE``, a plan in the
+``dispatcher solve --json`` format. The new plan is printed in the solve contract, plus
+``changes`` (every job whose machine differs from the plan in force) and ``difference``.
+"""
+
+from __future__ import annotations
+
+import argparse
+import json
+from pathlib import Path
+
+from dispatcher.commands.common import EXIT_INFEASIBLE, CliError, print_json
+from dispatcher.commands.shop_input import print_shop_plan, read_shop_arg
+from dispatcher.shop import Plan, PlanFormatError, ShopError, ShopInfeasibleError
+from dispatcher.shop.redispatch import ShopEvent, ShopRedispatch, redispatch_shop
+
+#: Largest plan file read with --plan (a plan of a very large shop is well under this).
+MAX_PLAN_BYTES = 16 * 1024 * 1024
+
+
+def register(sub: argparse._SubParsersAction) -> None:
+    p = sub.add_parser(
+        "redispatch", help="re-plan after a machine goes down (or another event)",
+        description="Re-dispatch a shop document after an event, starting from the plan in "
+                    "force, and print the new plan and what changed. Jobs running on working "
+                    "machines stay; a job running on a machine that goes down waits for a "
+                    "new machine.")
+    p.add_argument("shop", metavar="SHOP", help="shop document (.dshop)")
+    p.add_argument("--down", metavar="MACHINE", action="append", default=[],
+                   help="machine that went down (repeatable)")
+    p.add_argument("--up", metavar="MACHINE", action="append", default=[],
+                   help="machine that is back up (repeatable)")
+    p.add_argument("--rush", metavar="JOB", action="append", default=[],
+                   help="waiting job that arrived as a rush job and must run (repeatable)")
+    p.add_argument("--done", metavar="JOB", action="append", default=[],
+                   help="job that finished (repeatable)")
+    p.add_argument("--pull", metavar="JOB", action="append", default=[],
+                   help="job pulled from this round (repeatable)")
+    p.add_argument("--move-penalty", metavar="X", type=float, default=None,
+                   help="cost of moving a dispatched job that has not started "
+                        "(default: the shop's; a job's own value wins)")
+    p.add_argument("--plan", metavar="PLANFILE", default=None,
+                   help="plan in force as 'dispatcher solve --json' output "
+                        "(default: the shop document's plan_in_force)")
+    p.add_argument("--maximize", action="store_true", help="values are gains: maximise the total")
+    p.add_argument("--json", action="store_true", help="print one JSON object")
+    p.set_defaults(func=run)
+
+
+def _events(args: argparse.Namespace) -> list[ShopEvent]:
+    events = [ShopEvent("down", n) for n in args.down]
+    events += [ShopEvent("up", n) for n in args.up]
+    events += [ShopEvent("rush", n) for n in args.rush]
+    events += [ShopEvent("done", n) for n in args.done]
+    events += [ShopEvent("pulled", n) for n in args.pull]
+    return events
+
+
+def _plan_in_force(args: argparse.Namespace, shop) -> dict[str, list[str]]:
+    if args.plan is None:
+        if not shop.plan_in_force:
+            raise CliError(f"{args.shop}: the document holds no plan in force (field "
+                           "'plan_in_force' is empty); record a decision first or pass "
+                           "--plan PLANFILE (the output of 'dispatcher solve SHOP --json')")
+        return shop.plan_in_force
+    path = Path(args.plan)
+    try:
+        if path.stat().st_size > MAX_PLAN_BYTES:
+            raise CliError(f"{args.plan}: plan file larger than {MAX_PLAN_BYTES} bytes")
+        data = json.loads(path.read_text(encoding="utf-8"))
+    except OSError as exc:
+        raise CliError(f"{args.plan}: cannot read the plan file: {exc.strerror or exc}") from None
+    except UnicodeDecodeError:
+        raise CliError(f"{args.plan}: the plan file is not UTF-8 text") from None
+    except json.JSONDecodeError as exc:
+        raise CliError(f"{args.plan}: line {exc.lineno}, column {exc.colno}: not valid JSON: "
+                       f"{exc.msg}") from None
+    try:
+        plan = Plan.from_json(data, source=args.plan)
+        return plan.in_force(shop)
+    except PlanFormatError as exc:
+        raise CliError(str(exc)) from None
+    except KeyError as exc:
+        raise CliError(f"{args.plan}: {exc.args[0]} in {args.shop}") from None
+
+
+def run(args: argparse.Namespace) -> int:
+    events = _events(args)
+    if not events:
+        raise CliError("redispatch needs an event: --down MACHINE (or --up, --rush, --done, --pull)")
+    shop = read_shop_arg(args.shop)
+    in_force = _plan_in_force(args, shop)
+    try:
+        outcome = redispatch_shop(shop, events, plan_in_force=in_force,
+                                  move_penalty=args.move_penalty,
+                                  objective="maximize" if args.maximize else "total",
+                                  source=args.shop)
+    except ShopInfeasibleError as exc:
+        raise CliError(f"{args.shop}: {exc}", EXIT_INFEASIBLE) from None
+    except ShopError as exc:
+        raise CliError(str(exc)) from None
+    if args.json:
+        print_json(outcome.to_json())
+    else:
+        print_outcome(outcome, args)
+    return 0
+
+
+def print_outcome(outcome: ShopRedispatch, args: argparse.Namespace) -> None:
+    """The new plan as 'solve' prints it, then the changes against the plan in force."""
+    print_shop_plan(outcome.plan, outcome.shop, False)
+    print()
+    if outcome.changes:
+        print(f"Changes against the plan in force ({len(outcome.changes)}):")
+        width = max(len(c.job) for c in outcome.changes)
+        for c in outcome.changes:
+            print(f"  {c.job.ljust(width)}  {c.before or 'waiting'} -> {c.after or 'waiting'}")
+    else:
+        print("Changes against the plan in force: none")
+    if outcome.machines_now_idle:
+        print("Machines now idle: " + ", ".join(outcome.machines_now_idle))
+    print(f"Change in total: {outcome.total_change:+g}"
+          + (f" (plus move penalties paid: {outcome.move_penalties_paid:g})"
+             if outcome.move_penalties_paid else ""))
+    for name in args.down:
+        print(f"Caution: {name} is down. Apply lockout/tagout and the site's isolation "
+              "procedure before any work on it.")

@@ -1,0 +1,397 @@
+"""Re-dispatch a shop after an event, and say what changed against the plan in force.
+
+Events: a machine goes down or comes back up, a rush job arrives, a job finishes, a job is
+pulled. Rules (the definition the tests check):
+
+* jobs running on machines that stay up keep running where they are;
+* a job running on a machine that goes down becomes waiting (it needs a new setup
+  elsewhere, which its grid values already price);
+* a job finishing or pulled leaves the round; if it was running, its slot becomes free;
+* a rush job that arrives (already added to the shop, named in the event) must run;
+* a job dispatched by the plan in force but not started pays a *move penalty* (its own
+  ``move_penalty``, else the shop's, unless overridden) if the new plan puts it anywhere
+  else, waiting included, so the new plan moves only what the costs justify. No penalty
+  is due when its machine went down: that move is forced.
+
+Warm start: both the state before the event and the state after it are laid out on the
+same columns (every slot of every machine; slots not free in a state are forbidden), so
+the event becomes a change of some rows and columns. The state before is solved once,
+then :func:`dispatcher.engine.redispatch` re-places only what changed, from that plan's
+dual potentials (shortest augmenting paths; see that module). The result is certified.
+
+The difference reported is against the plan in force: moved jobs (from, to), jobs newly
+dispatched, jobs now waiting, machines now idle, and the change in total (the new plan's
+total including move penalties paid, minus the plan in force's total; both count grid
+values of dispatched jobs that have not started and wait penalties of waiting jobs).
+"""
+
+from __future__ import annotations
+
+from collections.abc import Mapping, Sequence
+from dataclasses import dataclass, field, replace
+from typing import Any
+
+import numpy as np
+
+from dispatcher.engine import DispatchResult, InfeasibleError, redispatch, solve
+
+from .model import DONE, DOWN, MUST, MUST_NOT, RUNNING, UP, WAITING, Problem, Shop, ShopError
+from .plan import Assignment, Plan, json_number
+from .translate import ShopInfeasibleError, ShopProblem, plan_from_result
+from .validate import check_shop
+
+EVENT_KINDS = ("down", "up", "rush", "done", "pulled")
+
+
+@dataclass(frozen=True)
+class ShopEvent:
+    """One event: ``kind`` in :data:`EVENT_KINDS`, ``name`` of the machine or job."""
+
+    kind: str
+    name: str
+
+
+@dataclass(frozen=True)
+class Change:
+    """A job whose machine differs from the plan in force (None = waiting / not in the round)."""
+
+    job: str
+    before: str | None
+    after: str | None
+
+
+@dataclass
+class ShopRedispatch:
+    """The new plan and its difference from the plan in force."""
+
+    plan: Plan
+    shop: Shop
+    changes: list[Change]
+    moved: list[Change]
+    newly_dispatched: list[str]
+    now_waiting: list[str]
+    machines_now_idle: list[str]
+    total_in_force: float
+    total_change: float
+    move_penalties_paid: float
+    result: DispatchResult = field(repr=False)
+
+    def to_json(self) -> dict[str, Any]:
+        """The solve contract of the new plan plus ``changes`` and ``difference``."""
+        data = self.plan.to_json()
+        data["changes"] = [{"job": c.job, "from": c.before, "to": c.after} for c in self.changes]
+        data["difference"] = {
+            "moved": [{"job": c.job, "from": c.before, "to": c.after} for c in self.moved],
+            "newly_dispatched": list(self.newly_dispatched),
+            "now_waiting": list(self.now_waiting),
+            "machines_now_idle": list(self.machines_now_idle),
+            "total_in_force": json_number(self.total_in_force),
+            "total_change": json_number(self.total_change),
+            "move_penalties_paid": json_number(self.move_penalties_paid),
+        }
+        return data
+
+
+@dataclass
+class _Layout:
+    """Rows (job indices) and slot columns of one state, with the engine arrays."""
+
+    rows: list[int]
+    values: np.ndarray      # grid values plus move penalties
+    grid: np.ndarray        # grid values only
+    allowed: np.ndarray
+    penalty: np.ndarray     # wait penalty plus move penalty
+    wait: np.ndarray        # wait penalty only
+    must: np.ndarray
+    move: np.ndarray        # move penalty due when the row leaves its machine in force
+
+
+def apply_events(shop: Shop, events: Sequence[ShopEvent], source: str = "") -> tuple[Shop, set[int], set[int]]:
+    """A copy of ``shop`` after the events, the job indices that left, and those that arrived.
+
+    Raises :class:`ShopError` naming the event that does not fit the shop.
+    """
+    after = shop.copy()
+    left: set[int] = set()
+    arrived: set[int] = set()
+    problems: list[Problem] = []
+    jpos = {j.name: i for i, j in enumerate(after.jobs)}
+    mpos = {m.name: k for k, m in enumerate(after.machines)}
+    for n, ev in enumerate(events, 1):
+        where = f"event {n} ({ev.kind} {ev.name!r})"
+        if ev.kind not in EVENT_KINDS:
+            problems.append(Problem(where, f"kind must be one of {', '.join(EVENT_KINDS)}"))
+            continue
+        if ev.kind in ("down", "up"):
+            if ev.name not in mpos:
+                problems.append(Problem(where, f"no machine named {ev.name!r}"))
+                continue
+            machine = after.machines[mpos[ev.name]]
+            if ev.kind == "down":
+                machine.state = DOWN
+                for job in after.jobs:
+                    if job.state == RUNNING and job.machine == machine.id:
+                        job.state, job.machine, job.since = WAITING, None, None
+            else:
+                machine.state = UP
+            continue
+        if ev.name not in jpos:
+            problems.append(Problem(where, f"no job named {ev.name!r}"))
+            continue
+        i = jpos[ev.name]
+        job = after.jobs[i]
+        if job.state == DONE:
+            problems.append(Problem(where, "the job is already done"))
+        elif ev.kind == "rush":
+            if job.state != WAITING:
+                problems.append(Problem(where, "a job that arrives must be waiting"))
+            else:
+                job.rush = True
+                arrived.add(i)
+        elif ev.kind == "done":
+            job.state, job.machine, job.since = DONE, None, None
+            left.add(i)
+        else:  # pulled: out of this round; a running job frees its slot
+            job.state, job.machine, job.since = WAITING, None, None
+            left.add(i)
+    if problems:
+        raise ShopError(problems, source)
+    return after, left, arrived
+
+
+def _columns(shop: Shop) -> list[int]:
+    """Every slot of every machine, as the machine index of each column."""
+    return [k for k, m in enumerate(shop.machines) for _ in range(m.slots)]
+
+
+def _layout(shop: Shop, rows: list[int], columns: list[int], in_force: Mapping[int, int],
+            move_default: float | None) -> _Layout:
+    """Engine arrays of ``shop`` for ``rows`` on the common slot ``columns``."""
+    values_all, allowed_all = shop.matrix()
+    cols = np.asarray(columns, dtype=np.int64)
+    running = np.zeros(len(shop.machines), dtype=int)
+    mindex = {m.id: k for k, m in enumerate(shop.machines)}
+    for j in shop.jobs:
+        if j.state == RUNNING:
+            running[mindex[j.machine]] += 1
+    # A slot column is free when its machine is up and it is past the running jobs' slots.
+    slot_no = np.zeros(len(columns), dtype=int)
+    seen: dict[int, int] = {}
+    for c, k in enumerate(columns):
+        slot_no[c] = seen.get(k, 0)
+        seen[k] = slot_no[c] + 1
+    up = np.array([m.state == UP for m in shop.machines], dtype=bool)
+    free = up[cols] & (slot_no >= running[cols]) if len(columns) else np.zeros(0, dtype=bool)
+    r = np.asarray(rows, dtype=np.int64)
+    grid = values_all[np.ix_(r, cols)] if len(rows) and len(columns) else np.zeros((len(rows), len(columns)))
+    allowed = (allowed_all[np.ix_(r, cols)] & free[None, :]) if len(rows) and len(columns) \
+        else np.zeros(grid.shape, dtype=bool)
+    must = np.array([shop.jobs[i].rush for i in rows], dtype=bool)
+    row_of = {shop.jobs[i].id: n for n, i in enumerate(rows)}
+    for p in shop.pins:
+        n = row_of.get(p.job)
+        if n is None:
+            continue
+        on = cols == mindex[p.machine]
+        if p.kind == MUST:
+            allowed[n] &= on
+            must[n] = True
+        elif p.kind == MUST_NOT:
+            allowed[n] &= ~on
+    grid = np.where(allowed, grid, 0.0)
+    wait = np.array([shop.jobs[i].wait_penalty for i in rows], dtype=float)
+    move = np.zeros(len(rows))
+    values, penalty = grid.copy(), wait.copy()
+    for n, i in enumerate(rows):
+        k = in_force.get(i)
+        if k is None or not up[k]:
+            continue  # not dispatched, or its machine went down: moving is forced, no penalty
+        job = shop.jobs[i]
+        p = job.move_penalty if job.move_penalty is not None else (
+            move_default if move_default is not None else shop.move_penalty)
+        if p > 0:
+            move[n] = p
+            values[n, cols != k] += p
+            penalty[n] += p
+    values = np.where(allowed, values, 0.0)
+    return _Layout(list(rows), values, grid, allowed, penalty, wait, must, move)
+
+
+def _in_force_machines(shop: Shop, plan_in_force: Mapping[str, Sequence[str]] | None,
+                       source: str) -> dict[int, int]:
+    """Job index -> machine index of the plan in force (running and dispatched jobs)."""
+    pif = shop.plan_in_force if plan_in_force is None else plan_in_force
+    jpos = {j.id: i for i, j in enumerate(shop.jobs)}
+    mpos = {m.id: k for k, m in enumerate(shop.machines)}
+    out: dict[int, int] = {}
+    problems = []
+    for mid, jids in pif.items():
+        if mid not in mpos:
+            problems.append(Problem(f"plan in force, machine id {mid!r}", "is not a machine of the shop"))
+            continue
+        for jid in jids:
+            if jid not in jpos:
+                problems.append(Problem(f"plan in force, machine id {mid!r}",
+                                        f"job id {jid!r} is not a job of the shop"))
+            else:
+                out[jpos[jid]] = mpos[mid]
+    if problems:
+        raise ShopError(problems, source)
+    for i, j in enumerate(shop.jobs):
+        if j.state == RUNNING:
+            out[i] = mpos[j.machine]
+    return out
+
+
+def _infeasible(exc: InfeasibleError, shop: Shop, layout: _Layout, columns: list[int]) -> ShopInfeasibleError:
+    w = exc.witness
+    jobs = [shop.jobs[layout.rows[int(i)]].name for i in w.jobs]
+    machines = list(dict.fromkeys(shop.machines[columns[int(c)]].name for c in w.machines))
+    msg = (f"infeasible after the event: must-run jobs {', '.join(jobs)} ({len(jobs)}) compete "
+           f"for only {len(w.machines)} free slot(s) on: {', '.join(machines) or 'no machine'}")
+    return ShopInfeasibleError(msg, jobs, machines)
+
+
+def _warm(pre: _Layout, pre_result: DispatchResult, post: _Layout) -> tuple[DispatchResult, list[int]]:
+    """Post-event result by warm re-dispatch from ``pre_result``; returns it and its row order.
+
+    A row of the state before survives when its job is still waiting with the same
+    must-run flag and wait penalty; other rows are removed and, if still waiting, added
+    again as new rows. Columns whose entries differ on surviving rows are forbidden (a
+    machine going down) or replaced (a machine coming up, a slot freed).
+    """
+    post_pos = {i: n for n, i in enumerate(post.rows)}
+    cand = [n for n, i in enumerate(pre.rows)
+            if i in post_pos and pre.must[n] == post.must[post_pos[i]]
+            and pre.penalty[n] == post.penalty[post_pos[i]]]
+    s = np.array(cand, dtype=np.int64)
+    ks = np.array([post_pos[pre.rows[n]] for n in cand], dtype=np.int64)
+    n_cols = post.values.shape[1]
+    diff = np.zeros((len(cand), n_cols), dtype=bool)
+    if len(cand):
+        diff = (pre.values[s] != post.values[ks]) | (pre.allowed[s] != post.allowed[ks])
+    changed = diff.any(axis=0) if len(cand) else np.zeros(n_cols, dtype=bool)
+    survivors = cand
+    removed = sorted(set(range(len(pre.rows))) - set(survivors))
+    kept_rows = [pre.rows[n] for n in survivors]
+    kept = set(kept_rows)
+    new_rows = [i for i in post.rows if i not in kept]
+    order = kept_rows + new_rows
+    idx = np.array([post_pos[i] for i in order], dtype=np.int64)
+    values, allowed = post.values[idx], post.allowed[idx]
+    down = [int(c) for c in np.flatnonzero(changed) if not allowed[:, c].any()]
+    up = {int(c): (values[:, c], allowed[:, c]) for c in np.flatnonzero(changed)
+          if allowed[:, c].any()}
+    nidx = idx[len(kept_rows):]
+    fresh = len(new_rows) > 0
+    result = redispatch(
+        pre_result, machines_down=down, machines_up=up, jobs_removed=removed,
+        new_jobs=post.values[nidx] if fresh else None,
+        new_allowed=post.allowed[nidx] if fresh else None,
+        new_wait_penalty=post.penalty[nidx] if fresh else None,
+        new_must_run=post.must[nidx] if fresh else None)
+    return result, order
+
+
+def redispatch_shop(shop: Shop, events: Sequence[ShopEvent], *,
+                    plan_in_force: Mapping[str, Sequence[str]] | None = None,
+                    move_penalty: float | None = None, objective: str = "total",
+                    source: str = "") -> ShopRedispatch:
+    """Re-dispatch ``shop`` after ``events``, starting from the plan in force.
+
+    ``plan_in_force``: machine id -> job ids (default: ``shop.plan_in_force``).
+    ``move_penalty`` overrides the shop's default (a job's own value still wins).
+    ``objective``: ``"total"`` or ``"maximize"``. Raises :class:`ShopError` for an
+    inconsistent shop or event and :class:`ShopInfeasibleError` when must-run jobs can no
+    longer all be placed. The shop passed in is never modified.
+    """
+    if objective not in ("total", "maximize"):
+        raise ShopError([Problem("objective", "re-dispatch supports 'total' and 'maximize'")], source)
+    if move_penalty is not None and not (np.isfinite(move_penalty) and move_penalty >= 0):
+        raise ShopError([Problem("move penalty", f"must be a number >= 0, got {move_penalty!r}")], source)
+    if objective == "maximize" and move_penalty:
+        raise ShopError([Problem("move penalty", "applies to the 'total' objective only")], source)
+    check_shop(shop, source)
+    in_force = _in_force_machines(shop, plan_in_force, source)
+    after, left, arrived = apply_events(shop, events, source)
+    columns = _columns(shop)
+    pre_rows = [i for i, j in enumerate(shop.jobs) if j.state == WAITING and i not in arrived]
+    post_rows = [i for i, j in enumerate(after.jobs) if j.state == WAITING and i not in left]
+    pre = _layout(shop, pre_rows, columns, in_force, move_penalty)
+    post = _layout(after, post_rows, columns, in_force, move_penalty)
+    if objective == "maximize":
+        pre.values, pre.penalty = pre.grid, pre.wait
+        post.values, post.penalty = post.grid, post.wait
+        post.move[:] = 0.0
+    try:
+        pre_result = solve(pre.values, pre.allowed, wait_penalty=pre.penalty,
+                           must_run=pre.must, objective=objective)
+    except InfeasibleError as exc:
+        raise _infeasible(exc, shop, pre, columns) from None
+    try:
+        result, order = _warm(pre, pre_result, post)
+    except InfeasibleError as exc:
+        raise _infeasible(exc, after, post, columns) from None
+    return _difference(shop, after, in_force, left, post, order, columns, result)
+
+
+def _difference(shop: Shop, after: Shop, in_force: Mapping[int, int], left: set[int],
+                post: _Layout, order: list[int], columns: list[int],
+                result: DispatchResult) -> ShopRedispatch:
+    post_pos = {i: n for n, i in enumerate(post.rows)}
+    idx = np.array([post_pos[i] for i in order], dtype=np.int64)
+    mindex = {m.id: k for k, m in enumerate(after.machines)}
+    running = [(i, mindex[j.machine]) for i, j in enumerate(after.jobs) if j.state == RUNNING]
+    unavailable = [k for k, m in enumerate(after.machines) if m.state != UP]
+    problem = ShopProblem(after, list(order), list(columns), post.grid[idx], post.allowed[idx],
+                          post.wait[idx], post.must[idx], running, unavailable)
+    plan = plan_from_result(problem, result)
+    # Assignment values are grid values (the engine's include move penalties).
+    plan = replace(plan, assignments=[
+        Assignment(a.job, a.machine, float(post.grid[idx[n], c]))
+        for a, (n, c) in zip(plan.assignments,
+                             [(n, int(c)) for n, c in enumerate(result.machine_of_job) if c >= 0])])
+    machines = after.machines
+    now: dict[int, int] = {order[n]: columns[int(c)] for n, c in enumerate(result.machine_of_job) if c >= 0}
+    for i, k in running:
+        now[i] = k
+    name_j = lambda i: after.jobs[i].name  # noqa: E731
+    name_m = lambda k: None if k is None else machines[k].name  # noqa: E731
+    changes, moved, newly, waiting = [], [], [], []
+    for i in sorted(set(in_force) | set(now)):
+        if i in left or after.jobs[i].state == DONE:
+            continue
+        b, a = in_force.get(i), now.get(i)
+        if b == a:
+            continue
+        ch = Change(name_j(i), name_m(b), name_m(a))
+        changes.append(ch)
+        if b is not None and a is not None:
+            moved.append(ch)
+        elif b is None:
+            newly.append(ch.job)
+        else:
+            waiting.append(ch.job)
+    busy_before = {k for i, k in in_force.items()}
+    busy_now = set(now.values())
+    idle_now = [m.name for k, m in enumerate(machines)
+                if k in busy_before and k not in busy_now and m.state == UP]
+    # Totals in the same terms: grid values of dispatched-not-started jobs + wait penalties.
+    values_all, _ = shop.matrix()
+    total_before = 0.0
+    for i, j in enumerate(shop.jobs):
+        if j.state != WAITING:
+            continue
+        k = in_force.get(i)
+        total_before += j.wait_penalty if k is None else float(values_all[i, k])
+    move_paid = 0.0
+    for n, i in enumerate(order):
+        if post.move[idx[n]] > 0 and now.get(i) != in_force.get(i):
+            move_paid += float(post.move[idx[n]])
+    plan = replace(plan, total=float(result.total) - move_paid)
+    total_after = plan.total
+    return ShopRedispatch(plan=plan, shop=after, changes=changes, moved=moved,
+                          newly_dispatched=newly, now_waiting=waiting,
+                          machines_now_idle=idle_now, total_in_force=total_before,
+                          total_change=total_after - total_before,
+                          move_penalties_paid=move_paid, result=result)
