@@ -1,0 +1,139 @@
+"""Worst GUI-thread stall of the desktop app while scrolling and editing big shops.
+
+Opens the large sample shop and a generated 1000 jobs x 200 machines shop (random
+invented values, about 10 % cannot-run pairs), then scrolls the grid page by page and
+edits cells (each edit re-solves in the background). A 5 ms heartbeat timer on the GUI
+thread records the longest gap between its ticks: that gap is the longest time the window
+could not respond. Goal: under 100 ms. Run: ``python benchmarks/gui_stall.py``.
+
+The script prints one line per shop and ends with ``worst_stall_ms <number>``.
+"""
+
+from __future__ import annotations
+
+import os
+import sys
+import tempfile
+import time
+from pathlib import Path
+
+os.environ.setdefault("QT_QPA_PLATFORM", "offscreen")
+ROOT = Path(__file__).resolve().parent.parent
+sys.path.insert(0, str(ROOT))
+
+import numpy as np  # noqa: E402
+from PySide6.QtCore import QElapsedTimer, QSettings, QTimer  # noqa: E402
+
+from dispatcher.io.shopfile import save_shop  # noqa: E402
+from dispatcher.shop import shop_from_grid  # noqa: E402
+from dispatcher.ui.app import make_application  # noqa: E402
+
+GOAL_MS = 100.0
+
+
+class Heartbeat:
+    """Largest gap between ticks of a 5 ms timer on the GUI thread."""
+
+    def __init__(self):
+        self.clock = QElapsedTimer()
+        self.timer = QTimer()
+        self.timer.setInterval(5)
+        self.timer.timeout.connect(self._tick)
+        self.last = 0
+        self.worst = 0.0
+
+    def start(self) -> None:
+        self.clock.start()
+        self.last = self.clock.elapsed()
+        self.worst = 0.0
+        self.timer.start()
+
+    def _tick(self) -> None:
+        now = self.clock.elapsed()
+        self.worst = max(self.worst, now - self.last)
+        self.last = now
+
+    def stop(self) -> float:
+        self.timer.stop()
+        return self.worst
+
+
+def generated_shop(path: Path, jobs: int = 1000, machines: int = 200, seed: int = 7) -> Path:
+    rng = np.random.default_rng(seed)
+    values = rng.integers(1, 500, size=(jobs, machines)).astype(float)
+    allowed = rng.random((jobs, machines)) > 0.1
+    shop = shop_from_grid([f"Job {i:04d} (invented)" for i in range(jobs)],
+                          [f"Machine {k:03d}" for k in range(machines)], values, allowed,
+                          name="Generated benchmark shop (invented)")
+    save_shop(shop, path)
+    return path
+
+
+def pump(app, seconds: float) -> None:
+    end = time.perf_counter() + seconds
+    while time.perf_counter() < end:
+        app.processEvents()
+        time.sleep(0.001)
+
+
+def measure(app, window, path: Path, edits: int = 12) -> tuple[float, float]:
+    """(stall while opening, stall while scrolling and editing) in ms."""
+    beat = Heartbeat()
+    beat.start()
+    QTimer.singleShot(0, lambda: window.open_path(path))
+    pump(app, 0.2)
+    while window.runner.is_busy():
+        pump(app, 0.05)
+    opening = beat.stop()
+    beat.start()
+    view, model = window.view, window.model
+    bar_v, bar_h = view.verticalScrollBar(), view.horizontalScrollBar()
+    rng = np.random.default_rng(1)
+    for step in range(edits):
+        bar_v.setValue(int(bar_v.maximum() * step / edits))
+        bar_h.setValue(int(bar_h.maximum() * ((step * 7) % edits) / edits))
+        pump(app, 0.03)
+        row = int(rng.integers(model.rowCount()))
+        col = 3 + int(rng.integers(model.columnCount() - 3))
+        model.setData(model.index(row, col), str(int(rng.integers(1, 400))))
+        pump(app, 0.05)
+    while window.runner.is_busy():
+        pump(app, 0.05)
+    pump(app, 0.2)
+    return opening, beat.stop()
+
+
+def main() -> int:
+    app = make_application()
+    from dispatcher.ui.main_window import MainWindow
+    from dispatcher.ui.messages import RecordingMessenger
+
+    with tempfile.TemporaryDirectory() as tmp:
+        os.environ["DISPATCHER_AUTOSAVE_DIR"] = str(Path(tmp) / "autosave")
+        settings = QSettings(str(Path(tmp) / "s.ini"), QSettings.Format.IniFormat)
+        window = MainWindow(settings=settings, messenger=RecordingMessenger(),
+                            history_path=Path(tmp) / "h.sqlite")
+        window.resize(1400, 900)
+        window.show()
+        pump(app, 0.3)
+        worst = 0.0
+        shops = [ROOT / "sample_shops" / "large_print_plant.dshop",
+                 generated_shop(Path(tmp) / "generated_1000x200.dshop")]
+        for path in shops:
+            t0 = time.perf_counter()
+            opening, editing = measure(app, window, path)
+            plan = window.plan
+            print(f"{path.name}: {window.doc.n_jobs()} x {window.doc.n_machines()}, "
+                  f"stall opening {opening:.0f} ms (file read on the GUI thread), "
+                  f"worst stall scrolling+editing {editing:.0f} ms, "
+                  f"plan {'ok' if plan is not None else 'none'}, {time.perf_counter() - t0:.1f} s")
+            worst = max(worst, editing)
+        window.doc.undo_stack.setClean()
+        window.close()
+    print(f"goal: scrolling and editing never block the GUI thread for more than {GOAL_MS:.0f} ms")
+    print(f"worst_stall_ms {worst:.0f}")
+    return 0
+
+
+if __name__ == "__main__":
+    raise SystemExit(main())
