@@ -177,7 +177,7 @@ def _check_inputs(costs, allowed, wait_penalty, must_run):
                 f"allowed mask has shape {mask.shape}, costs have shape {values.shape}")
         if mask.dtype != bool:
             raise DispatchInputError(f"allowed mask must be boolean, got {mask.dtype}")
-    vals = values[mask]
+    vals = values if allowed is None else values[mask]
     if not np.isfinite(vals).all():
         i, j = np.argwhere(mask & ~np.isfinite(values))[0]
         raise DispatchInputError(

@@ -30,8 +30,10 @@ class CertificateError(RuntimeError):
 
 def tolerance(cost: np.ndarray) -> float:
     """Absolute slack allowed in reduced costs, scaled to the magnitude of the finite costs."""
-    finite = cost[np.isfinite(cost)]
-    scale = float(np.abs(finite).max()) if finite.size else 1.0
+    finite = np.isfinite(cost)
+    high = float(np.max(cost, where=finite, initial=0.0))
+    low = float(np.min(cost, where=finite, initial=0.0))
+    scale = max(abs(high), abs(low))
     return 1e-9 * max(1.0, scale) * max(1, cost.shape[0])
 
 
