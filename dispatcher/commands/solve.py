@@ -17,6 +17,7 @@ from dispatcher.commands.history import (
     check_record_arguments,
     record_decision,
 )
+from dispatcher.commands import solve_extras
 from dispatcher.commands.shift_fill import run_fill_shift
 from dispatcher.commands.shop_input import (
     is_shop_document,
@@ -48,6 +49,7 @@ def register(sub: argparse._SubParsersAction) -> None:
     p.add_argument("--time-limit", metavar="SECONDS", type=float, default=None,
                    help="with --fill-shift: stop the solver after this many seconds and "
                    "report the best plan found with its proven gap")
+    solve_extras.add_arguments(p)
     add_record_arguments(p)
     p.set_defaults(func=run)
 
@@ -79,6 +81,7 @@ def infeasible_message(exc: InfeasibleError, jobs: list[str], machines: list[str
 
 def run(args: argparse.Namespace) -> int:
     check_record_arguments(args)
+    solve_extras.check_arguments(args, objective_of(args))
     if args.fill_shift:
         if args.record:
             raise CliError("--record cannot be combined with --fill-shift yet")
@@ -86,7 +89,17 @@ def run(args: argparse.Namespace) -> int:
     if is_shop_document(args.grid):
         shop = read_shop_arg(args.grid)
         shop_plan = solve_shop_arg(shop, args.grid, objective_of(args), args.must_run)
-        print_shop_plan(shop_plan, shop, args.json)
+        problem = shop_plan.problem
+        added = solve_extras.extras(
+            shop_plan.result, args, [problem.job_name(n) for n in range(len(problem.rows))],
+            [problem.machine_name(c) for c in range(len(problem.columns))],
+            shop.machine_names())
+        if added and args.json:
+            print_json({**shop_plan.to_json(), **added})
+        else:
+            print_shop_plan(shop_plan, shop, args.json)
+            if added:
+                solve_extras.print_text(added, shop_plan.to_json()["assignments"])
         record_decision(args, shop_to_dict(shop), shop_plan.to_json())
         return 0
     try:
@@ -102,10 +115,13 @@ def run(args: argparse.Namespace) -> int:
         raise CliError(f"{args.grid}: {infeasible_message(exc, table.jobs, table.machines)}",
                        EXIT_INFEASIBLE) from None
     data = plan_json(result, table.jobs, table.machines)
+    added = solve_extras.extras(result, args, table.jobs, table.machines)
     if args.json:
-        print_json(data)
+        print_json({**data, **added})
     else:
         print_plan(data)
+        if added:
+            solve_extras.print_text(added, data["assignments"])
     if args.record:  # the grid as a shop document, so every decision keeps one format
         snapshot = shop_from_grid(table.jobs, table.machines, table.values, table.allowed,
                                   name=Path(args.grid).stem)
