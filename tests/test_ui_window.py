@@ -277,3 +277,29 @@ def test_screenshot_of_the_main_window(qtbot, tmp_path, monkeypatch, samples):
     wait_plan(qtbot, window)
     out = save_shot(window, tmp_path, "main_window")
     assert out.stat().st_size > 10_000
+
+
+def test_breakdown_after_a_recorded_plan_redispatches_from_it(qtbot, tmp_path, monkeypatch, samples):
+    window = make_window(qtbot, tmp_path, monkeypatch, samples / "medium_machining_shop.dshop")
+    window.on_confirm_plan().confirm("F. Late", "shift start")
+    wait_plan(qtbot, window)
+    shop = window.doc.shop
+    assert shop.plan_in_force
+    in_force = window.plan
+    busy = next(a.machine for a in in_force.assignments if not shop.job_by_name(a.job).rush)
+    col = shop.machine_names().index(busy)
+    dialog = window.on_machine_event("down", col)
+    text = dialog.findChild(object, "proposalDiff").text()
+    assert "Re-dispatched from the plan in force" in text and "decision #1" in text
+    dialog.confirm("F. Late", "spindle fault")
+    wait_plan(qtbot, window)
+    decision = HistoryStore(tmp_path / "history.sqlite").get(2)
+    assert busy not in [a["machine"] for a in decision.plan["assignments"]]
+    assert decision.diff_from_replaced is not None and decision.diff_from_replaced.from_id == 1
+    # Jobs placed in both plans and not on the broken machine stay put unless it pays:
+    # with the shop's move penalty, every moved job must have had a reason (its machine
+    # went down, or a cheaper total); at least most placements are unchanged.
+    before = {a.job: a.machine for a in in_force.assignments}
+    after = {a["job"]: a["machine"] for a in decision.plan["assignments"]}
+    kept = sum(1 for j, m in before.items() if after.get(j) == m)
+    assert kept >= len(before) - 3

@@ -26,7 +26,8 @@ from PySide6.QtWidgets import (
     QWidget,
 )
 
-from dispatcher.history import PlanDiff, REASON_KINDS, diff_plans
+from dispatcher.history import REASON_KINDS, PlanDiff, diff_plans
+from dispatcher.shop.redispatch import ShopEvent, redispatch_shop
 from dispatcher.shop import DOWN, RUNNING, UP, WAITING, Plan, Shop, ShopError, ShopInfeasibleError
 from dispatcher.ui import palette
 from dispatcher.ui.format import fmt
@@ -56,6 +57,7 @@ class Proposal:
     job: int | None = None
     job_changes: list[tuple[int, dict]] = field(default_factory=list)
     problem: str = ""
+    move_penalties: float | None = None   # paid by the warm re-dispatch, when it was used
 
 
 def _empty_plan_json(objective: str) -> dict:
@@ -90,12 +92,48 @@ def propose(shop: Shop, event: str, objective: str, before: dict | None, *,
         title = "Put the plan shown in force"
     else:
         raise ValueError(f"unknown event {event!r}")
+    warm = _warm_redispatch(shop, event, objective, machine, job)
+    if warm is not None:
+        after = warm.shop
+        for m_new, m_old in zip(after.machines, shop.machines):
+            if m_new.state != m_old.state:
+                m_new.state_note = note
+        changes = _job_changes(shop, after)
+        diff = diff_plans(before or _empty_plan_json(objective), warm.plan.to_json())
+        return Proposal(event, title, after, warm.plan, diff, machine, job, changes, "",
+                        warm.move_penalties_paid)
     try:
         plan, note_text = solve_relaxing_rush(new, objective)
     except (ShopError, ShopInfeasibleError) as exc:
         return Proposal(event, title, new, None, None, machine, job, job_changes, str(exc))
     diff = diff_plans(before or _empty_plan_json(objective), plan.to_json())
     return Proposal(event, title, new, plan, diff, machine, job, job_changes, note_text)
+
+
+def _warm_redispatch(shop: Shop, event: str, objective: str, machine: int | None,
+                     job: int | None):
+    """The core's warm re-dispatch from the plan in force (with move penalties), or None
+    when it does not apply (no plan in force, bottleneck objective, or no feasible plan:
+    then the caller solves from scratch and explains)."""
+    if not shop.plan_in_force or objective not in ("total", "maximize") or event == EVENT_CONFIRM:
+        return None
+    name = shop.machines[machine].name if event in (EVENT_DOWN, EVENT_UP) else shop.jobs[job].name
+    try:
+        return redispatch_shop(shop, [ShopEvent(event, name)], objective=objective,
+                               move_penalty=0.0 if objective == "maximize" else None)
+    except (ShopError, ShopInfeasibleError):
+        return None
+
+
+def _job_changes(before: Shop, after: Shop) -> list[tuple[int, dict]]:
+    """Per job, the fields the event changed (state, machine, since, rush)."""
+    out = []
+    for i, (a, b) in enumerate(zip(before.jobs, after.jobs)):
+        fields = {f: getattr(b, f) for f in ("state", "machine", "since", "rush")
+                  if getattr(a, f) != getattr(b, f)}
+        if fields:
+            out.append((i, fields))
+    return out
 
 
 def diff_html(diff: PlanDiff | None, unit: str, before: dict | None = None) -> str:
@@ -162,8 +200,13 @@ class DecisionDialog(QDialog):
             if proposal.problem:
                 warn = (f"<p>{palette.MARK_RUSH} <b>Not every rush job can be placed:</b> "
                         f"{html.escape(proposal.problem)}</p>")
+            moves = ""
+            if proposal.move_penalties is not None:
+                moves = (f"<p>Re-dispatched from the plan in force; move penalties included: "
+                         f"{fmt(proposal.move_penalties)} {html.escape(unit)} (jobs dispatched but not "
+                         "started move only when the saving is larger).</p>")
             body = QLabel(warn + f"<b>Proposed changes against {html.escape(before_label)}:</b>"
-                          + diff_html(proposal.diff, unit, before))
+                          + diff_html(proposal.diff, unit, before) + moves)
         body.setObjectName("proposalDiff")
         body.setWordWrap(True)
         body.setTextFormat(Qt.TextFormat.RichText)
