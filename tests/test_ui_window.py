@@ -12,7 +12,7 @@ from dispatcher.history import HistoryStore
 from dispatcher.io.shopfile import load_shop, shop_to_dict
 from dispatcher.shop import DOWN, solve_shop
 from dispatcher.ui.decision import SAFETY_REMINDER
-from dispatcher.ui.grid_model import FIRST_MACHINE_COL, PlannedRole
+from dispatcher.ui.grid_model import COL_HOURS, FIRST_MACHINE_COL, PlannedRole
 from ui_support import activate, make_window, reference_total, save_shot, wait_plan
 
 
@@ -303,3 +303,39 @@ def test_breakdown_after_a_recorded_plan_redispatches_from_it(qtbot, tmp_path, m
     after = {a["job"]: a["machine"] for a in decision.plan["assignments"]}
     kept = sum(1 for j, m in before.items() if after.get(j) == m)
     assert kept >= len(before) - 3
+
+
+def test_whole_shift_mode_fills_machines_within_their_hours(qtbot, tmp_path, monkeypatch, samples):
+    window = make_window(qtbot, tmp_path, monkeypatch, samples / "medium_machining_shop.dshop")
+    progress = []
+    window.runner.progress.connect(progress.append)
+    window.set_mode("shift")
+    wait_plan(qtbot, window)
+    plan = window.plan
+    assert type(plan).__name__ == "ShiftFill" and plan.proven_optimal
+    shop = window.doc.shop
+    hours = shop.hours_matrix()
+    # The plan's own promise, checked from the shop's numbers: no machine over its hours.
+    for m in plan.machines:
+        k = shop.machine_names().index(m.machine)
+        used = sum(hours[shop.job_names().index(j), k] for j in m.running + m.jobs)
+        cap = shop.capacity()[k] * shop.machines[k].slots
+        assert used <= cap + 1e-9
+    assert any(len(m.jobs) > 1 for m in plan.machines)
+    assert "h used" in " ".join(window.plan_panel.tree.topLevelItem(0).child(i).text(1)
+                                for i in range(window.plan_panel.tree.topLevelItem(0).childCount()))
+    assert progress, "the whole-shift solver reports its stages"
+    window.on_confirm_plan().confirm("G. Lead", "whole shift")
+    [entry] = HistoryStore(tmp_path / "history.sqlite").list()
+    assert entry.total == pytest.approx(plan.total)
+
+
+def test_missing_run_hours_in_whole_shift_mode_say_which(qtbot, shop_window):
+    window = shop_window
+    window.set_mode("shift")
+    wait_plan(qtbot, window)
+    assert window.plan is None
+    assert "run_hours" in window.plan_panel.status.toolTip()
+    row = 0
+    assert window.model.setData(window.model.index(row, COL_HOURS), "1.5")
+    assert window.doc.shop.jobs[row].run_hours == 1.5

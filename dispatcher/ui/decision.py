@@ -31,7 +31,7 @@ from dispatcher.shop.redispatch import ShopEvent, redispatch_shop
 from dispatcher.shop import DOWN, RUNNING, UP, WAITING, Plan, Shop, ShopError, ShopInfeasibleError
 from dispatcher.ui import palette
 from dispatcher.ui.format import fmt
-from dispatcher.ui.solving import snapshot, solve_relaxing_rush
+from dispatcher.ui.solving import MODE_ROUND, snapshot, solve_for_mode
 
 SAFETY_REMINDER = (
     "\u26a0 Safety first: before anyone works on this machine, apply lockout/tagout and "
@@ -66,7 +66,8 @@ def _empty_plan_json(objective: str) -> dict:
 
 
 def propose(shop: Shop, event: str, objective: str, before: dict | None, *,
-            machine: int | None = None, job: int | None = None, note: str = "") -> Proposal:
+            machine: int | None = None, job: int | None = None, note: str = "",
+            mode: str = MODE_ROUND) -> Proposal:
     """Apply ``event`` to a copy of ``shop`` and solve it; ``before`` is the plan in force (JSON).
 
     Machine down: it takes nothing; jobs running on it go back to waiting (they need a new
@@ -92,7 +93,7 @@ def propose(shop: Shop, event: str, objective: str, before: dict | None, *,
         title = "Put the plan shown in force"
     else:
         raise ValueError(f"unknown event {event!r}")
-    warm = _warm_redispatch(shop, event, objective, machine, job)
+    warm = _warm_redispatch(shop, event, objective, machine, job) if mode == MODE_ROUND else None
     if warm is not None:
         after = warm.shop
         for m_new, m_old in zip(after.machines, shop.machines):
@@ -103,7 +104,7 @@ def propose(shop: Shop, event: str, objective: str, before: dict | None, *,
         return Proposal(event, title, after, warm.plan, diff, machine, job, changes, "",
                         warm.move_penalties_paid)
     try:
-        plan, note_text = solve_relaxing_rush(new, objective)
+        plan, note_text = solve_for_mode(new, objective, mode)
     except (ShopError, ShopInfeasibleError) as exc:
         return Proposal(event, title, new, None, None, machine, job, job_changes, str(exc))
     diff = diff_plans(before or _empty_plan_json(objective), plan.to_json())

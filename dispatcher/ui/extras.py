@@ -50,6 +50,9 @@ def _install_whatif(window) -> None:
         if plan is None:
             view.show_message("No plan yet")
             return
+        if window.mode != "round":
+            view.show_message("What-if costs are for one dispatch round (Plan menu: One round)")
+            return
         if plan.objective == "bottleneck":
             view.show_message("What-if costs are for the 'least total' and 'most value' objectives "
                               "(switch in the Plan menu)")
@@ -76,6 +79,9 @@ def _install_alternatives(window) -> None:
         plan = window.plan
         if plan is None:
             view.show_message("No plan yet")
+            return
+        if window.mode != "round":
+            view.show_message("Alternatives are ranked for one dispatch round (Plan menu: One round)")
             return
         if plan.objective == "bottleneck":
             view.show_message("Alternatives are ranked for the 'least total' and 'most value' objectives")

@@ -19,9 +19,11 @@ from dispatcher.ui.format import CellTextError, fmt, parse_cell
 
 COL_RUSH = 0
 COL_PENALTY = 1
-COL_PLAN = 2
-FIRST_MACHINE_COL = 3
-LEADING_HEADERS = {COL_RUSH: "Rush", COL_PENALTY: "Wait penalty", COL_PLAN: "Plan puts it on"}
+COL_HOURS = 2
+COL_PLAN = 3
+FIRST_MACHINE_COL = 4
+LEADING_HEADERS = {COL_RUSH: "Rush", COL_PENALTY: "Wait penalty", COL_HOURS: "Run hours",
+                   COL_PLAN: "Plan puts it on"}
 
 ValueRole = Qt.ItemDataRole.UserRole + 1      # float | None: the grid value (None = cannot run)
 PlannedRole = Qt.ItemDataRole.UserRole + 2    # bool: the plan shown uses this pair
@@ -115,6 +117,8 @@ class GridModel(QAbstractTableModel):
             return self._penalty_data(row, role)
         if column == COL_PLAN:
             return self._plan_data(row, role)
+        if column == COL_HOURS:
+            return self._hours_data(row, role)
         return self._cell_data(row, column - FIRST_MACHINE_COL, role)
 
     def _rush_data(self, row: int, role: int):
@@ -146,6 +150,22 @@ class GridModel(QAbstractTableModel):
         if role == Qt.ItemDataRole.ToolTipRole:
             return (f"Wait penalty of {job.name}: {fmt(job.wait_penalty)} "
                     f"({self._doc.shop.unit.label()}) added to the total if it is left waiting")
+        return None
+
+    def _hours_data(self, row: int, role: int):
+        job = self._doc.job_at(row)
+        if role in (Qt.ItemDataRole.DisplayRole, Qt.ItemDataRole.EditRole,
+                    Qt.ItemDataRole.AccessibleTextRole):
+            return fmt(job.run_hours)
+        if role == ValueRole:
+            return job.run_hours
+        if role == Qt.ItemDataRole.TextAlignmentRole:
+            return int(Qt.AlignmentFlag.AlignRight | Qt.AlignmentFlag.AlignVCenter)
+        if role == Qt.ItemDataRole.ToolTipRole:
+            if job.run_hours is None:
+                return f"Run hours of {job.name}: not given (needed only to fill the whole shift)"
+            return (f"Run hours of {job.name}: {fmt(job.run_hours)} h (times each machine's speed "
+                    "factor; used when filling the whole shift)")
         return None
 
     def _plan_data(self, row: int, role: int):
@@ -254,6 +274,7 @@ class GridModel(QAbstractTableModel):
                     return LEADING_HEADERS[section]
                 if role == Qt.ItemDataRole.ToolTipRole:
                     return {COL_RUSH: "Rush jobs must be placed this round",
+                            COL_HOURS: "Hours each job runs (to fill the whole shift)",
                             COL_PENALTY: f"Added to the total ({shop.unit.label()}) when the job waits",
                             COL_PLAN: "Where the plan shown puts each job"}[section]
                 return None
@@ -319,6 +340,14 @@ class GridModel(QAbstractTableModel):
         except CellTextError as exc:
             self.warning.emit(f"{job.name}: {exc}")
             return False
+        if column == COL_HOURS:
+            if number is not None and number <= 0:
+                self.warning.emit(f"{job.name}: run hours must be a number > 0 (or empty)")
+                return False
+            if number != job.run_hours:
+                stack.push(SetJobField(self._doc, row, "run_hours", number,
+                                       f"Run hours of {job.name} = {fmt(number) or 'none'}"))
+            return True
         if column == COL_PENALTY:
             if number is None:
                 self.warning.emit(f"{job.name}: the wait penalty must be a number >= 0")

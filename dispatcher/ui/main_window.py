@@ -53,7 +53,16 @@ from dispatcher.ui.grid_view import GridView
 from dispatcher.ui.messages import Messenger
 from dispatcher.ui.nonefix import keep_none_alive
 from dispatcher.ui.plan_panel import PlanPanel
-from dispatcher.ui.solving import SolveOutcome, snapshot, solve_outcome
+from dispatcher.shop.fill import ShiftFill
+from dispatcher.ui.solving import (
+    MODE_ROUND,
+    MODE_SHIFT,
+    MODES,
+    SolveOutcome,
+    plan_in_force_ids,
+    snapshot,
+    solve_outcome,
+)
 from dispatcher.ui.worker import BackgroundRunner
 
 APP_TITLE = "Dispatcher"
@@ -81,7 +90,8 @@ class MainWindow(QMainWindow):
         self.files = FileController(self.doc, self.messenger, self.settings, self)
         self.history = HistoryStore(history_path or self.settings.value("history/path") or None)
         self.objective = "total"
-        self.plan: Plan | None = None
+        self.mode = MODE_ROUND
+        self.plan: Plan | ShiftFill | None = None
         self.decision_dialog: DecisionDialog | None = None
         self._fit_columns = True
         self.last_problem = ""
@@ -190,6 +200,15 @@ class MainWindow(QMainWindow):
             self.objective_group.addAction(a)
             self.act_objectives[key] = a
         self.act_objectives["total"].setChecked(True)
+        self.mode_group = QActionGroup(self)
+        self.act_modes = {}
+        for key, label, keyseq in ((MODE_ROUND, "One &round (one job per machine)", "Ctrl+4"),
+                                   (MODE_SHIFT, "Whole &shift (several jobs per machine)", "Ctrl+5")):
+            a = self._action(label, lambda _=False, k=key: self.set_mode(k), keyseq, MODES[key],
+                             checkable=True)
+            self.mode_group.addAction(a)
+            self.act_modes[key] = a
+        self.act_modes[MODE_ROUND].setChecked(True)
 
     def _build_menus(self) -> None:
         bar = self.menuBar()
@@ -216,6 +235,9 @@ class MainWindow(QMainWindow):
             m.addAction(a)
         m = bar.addMenu("&Plan")
         for a in self.act_objectives.values():
+            m.addAction(a)
+        m.addSeparator()
+        for a in self.act_modes.values():
             m.addAction(a)
         m.addSeparator()
         for a in (self.act_resolve, self.act_cancel, self.act_confirm):
@@ -245,6 +267,8 @@ class MainWindow(QMainWindow):
         self.runner.failed.connect(self._on_solve_failed)
         self.runner.cancelled.connect(self.plan_panel.show_cancelled)
         self.plan_panel.objective_changed.connect(self.set_objective)
+        self.plan_panel.mode_changed.connect(self.set_mode)
+        self.runner.progress.connect(self.plan_panel.show_progress_text)
         self.plan_panel.cancel_requested.connect(self.runner.cancel)
         self.view.cell_menu_requested.connect(self._cell_menu)
         self.view.machine_menu_requested.connect(self._machine_menu)
@@ -275,8 +299,18 @@ class MainWindow(QMainWindow):
     def request_solve(self) -> None:
         """Re-solve the current shop in the background; older results will be discarded."""
         shop = snapshot(self.doc.shop)
-        objective = self.objective
-        self.runner.submit(lambda cancel: solve_outcome(shop, objective, cancel))
+        objective, mode = self.objective, self.mode
+        self.runner.submit(lambda cancel, report: solve_outcome(shop, objective, cancel, report, mode),
+                           "solving", with_progress=True)
+
+    def set_mode(self, mode: str) -> None:
+        """One dispatch round, or the whole shift (several jobs per machine)."""
+        if mode == self.mode:
+            return
+        self.mode = mode
+        self.act_modes[mode].setChecked(True)
+        self.plan_panel.set_mode(mode)
+        self.request_solve()
 
     def set_objective(self, objective: str) -> None:
         if objective == self.objective:
@@ -297,7 +331,8 @@ class MainWindow(QMainWindow):
         self.model.set_plan(outcome.plan)
         if self._fit_columns:
             self._fit_grid_columns()
-        self.plan_panel.show_plan(outcome.plan, self.doc.shop.unit.label(), outcome.seconds)
+        self.plan_panel.show_plan(outcome.plan, self.doc.shop.unit.label(), outcome.seconds,
+                                  self.doc.shop.machine_names())
         if outcome.problem:
             self.plan_panel.show_note(outcome.problem)
         self.plan_shown.emit(outcome.plan)
@@ -488,7 +523,7 @@ class MainWindow(QMainWindow):
 
     def _open_decision(self, shop: Shop, event: str, **where) -> DecisionDialog:
         before, label = self.plan_in_force()
-        proposal = propose(shop, event, self.objective, before, **where)
+        proposal = propose(shop, event, self.objective, before, mode=self.mode, **where)
         dialog = DecisionDialog(proposal, self.doc.shop.unit.label(),
                                 str(self.settings.value("history/supervisor", "")), self,
                                 before=before, before_label=label)
@@ -501,7 +536,7 @@ class MainWindow(QMainWindow):
     def apply_decision(self, proposal: Proposal, by: str, reason: str, note: str) -> int | None:
         """Record the decision first; only if that worked, change the document (undoable)."""
         recorded_shop = proposal.shop
-        recorded_shop.plan_in_force = proposal.plan.in_force(recorded_shop)
+        recorded_shop.plan_in_force = plan_in_force_ids(proposal.plan, recorded_shop)
         try:
             number = self.history.record(shop_to_dict(recorded_shop), proposal.plan.to_json(),
                                          by=by, reason=reason, note=note)

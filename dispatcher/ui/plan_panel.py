@@ -19,8 +19,10 @@ from PySide6.QtWidgets import (
 )
 
 from dispatcher.shop import Plan
+from dispatcher.shop.fill import ShiftFill
 from dispatcher.ui import palette
 from dispatcher.ui.format import fmt
+from dispatcher.ui.solving import MODES, machine_entries, shift_hours
 
 OBJECTIVE_LABELS = {
     "total": "Least total (setup + wait penalties)",
@@ -33,6 +35,7 @@ class PlanPanel(QWidget):
     """Shows one plan. Emits ``objective_changed(str)`` and ``cancel_requested()``."""
 
     objective_changed = Signal(str)
+    mode_changed = Signal(str)
     cancel_requested = Signal()
 
     def __init__(self, parent: QWidget | None = None):
@@ -47,6 +50,13 @@ class PlanPanel(QWidget):
         self.objective.currentIndexChanged.connect(
             lambda _: self.objective_changed.emit(self.objective.currentData()))
         form.addRow("&Objective:", self.objective)
+        self.mode = QComboBox()
+        for key, label in MODES.items():
+            self.mode.addItem(label, key)
+        self.mode.setToolTip("Plan one dispatch round, or fill each machine's whole shift "
+                             "(needs run hours; may take longer, with progress and cancel)")
+        self.mode.currentIndexChanged.connect(lambda _: self.mode_changed.emit(self.mode.currentData()))
+        form.addRow("&Mode:", self.mode)
         self.total = QLabel("-")
         self.total.setTextInteractionFlags(Qt.TextInteractionFlag.TextSelectableByMouse)
         form.addRow("Total:", self.total)
@@ -89,6 +99,16 @@ class PlanPanel(QWidget):
         self._unit = ""
 
     # ---- state ----------------------------------------------------------------------------
+    def set_mode(self, mode: str) -> None:
+        i = self.mode.findData(mode)
+        if i >= 0 and i != self.mode.currentIndex():
+            self.mode.blockSignals(True)
+            self.mode.setCurrentIndex(i)
+            self.mode.blockSignals(False)
+
+    def show_progress_text(self, text: str) -> None:
+        self.status.setText(f"Solving\u2026 {text}")
+
     def set_objective(self, objective: str) -> None:
         i = self.objective.findData(objective)
         if i >= 0 and i != self.objective.currentIndex():
@@ -107,7 +127,8 @@ class PlanPanel(QWidget):
         """The shop cannot be solved as it is: say why, keep the last plan visible but stale."""
         self.progress.setVisible(False)
         self.cancel.setVisible(False)
-        self.status.setText(f"{palette.MARK_FORBIDDEN} No plan: {message}")
+        short = message if len(message) <= 400 else message[:400] + "\u2026 (hover for all)"
+        self.status.setText(f"{palette.MARK_FORBIDDEN} No plan: {short}")
         self.status.setToolTip(message)
 
     def show_note(self, message: str) -> None:
@@ -120,7 +141,8 @@ class PlanPanel(QWidget):
         self.cancel.setVisible(False)
         self.status.setText("Solve cancelled; the plan shown is out of date (edit or F5 to re-solve)")
 
-    def show_plan(self, plan: Plan | None, unit: str, seconds: float = 0.0) -> None:
+    def show_plan(self, plan: Plan | ShiftFill | None, unit: str, seconds: float = 0.0,
+                  machine_order: list[str] | None = None) -> None:
         self._unit = unit
         self.tree.clear()
         self.progress.setVisible(False)
@@ -142,18 +164,30 @@ class PlanPanel(QWidget):
         self.counts.setText(f"{placed} dispatched, {len(plan.running)} running, "
                             f"{len(plan.waiting_jobs)} waiting")
         self.counts.setToolTip("Jobs newly dispatched this round, jobs already running, jobs waiting")
-        if plan.verified:
+        if isinstance(plan, ShiftFill):
+            if plan.proven_optimal and plan.verified:
+                self.proof.setText(f"{palette.MARK_PLANNED} optimal (proven by the MILP solver)")
+            else:
+                self.proof.setText(f"{palette.MARK_RUSH} {plan.status_text}")
+            self.proof.setToolTip(plan.status_text)
+        elif plan.verified:
             self.proof.setText(f"{palette.MARK_PLANNED} optimal (certificate checked)")
             self.proof.setToolTip("Dual potentials prove no other plan placing as many jobs "
                                   "has a better total")
         else:
             self.proof.setText(f"{palette.MARK_FORBIDDEN} certificate did NOT check")
-        if plan.bottleneck is not None:
+        if getattr(plan, "bottleneck", None) is not None:
             self.proof.setText(self.proof.text() + f"; largest value {fmt(plan.bottleneck)}")
 
-        machines = QTreeWidgetItem(self.tree, [f"Machines ({len(plan.by_machine())})", "", ""])
+        entries_by_machine = machine_entries(plan, machine_order)
+        hours = shift_hours(plan)
+        machines = QTreeWidgetItem(self.tree, [f"Machines ({len(entries_by_machine)})", "", ""])
         machines.setFirstColumnSpanned(True)
-        for machine, entries in plan.by_machine().items():
+        for machine, entries in entries_by_machine:
+            if machine in hours:
+                used, cap = hours[machine]
+                head = QTreeWidgetItem(machines, [machine, f"{fmt(used, 2)} of {fmt(cap, 2)} h used", ""])
+                head.setToolTip(1, f"Run hours planned on {machine} this shift, of the hours it has")
             for job, value, running in entries:
                 item = QTreeWidgetItem(machines, [machine, ("\u25b6 " if running else
                                                             f"{palette.MARK_PLANNED} ") + job,

@@ -29,12 +29,14 @@ PROGRESS_AFTER_MS = 500
 class _Request:
     generation: int
     label: str
-    fn: Callable[[threading.Event], Any]
+    fn: Callable[..., Any]
+    with_progress: bool = False
 
 
 class _Signals(QObject):
     done = Signal(int, object)       # generation, result (plain data)
     failed = Signal(int, object)     # generation, exception (the core's own error types)
+    progress = Signal(int, str)      # generation, short text of the stage reached
 
 
 class _Job(QRunnable):
@@ -46,8 +48,13 @@ class _Job(QRunnable):
         self._signals = signals
 
     def run(self) -> None:  # runs in a pool thread
+        request = self._request
         try:
-            result = self._request.fn(self._cancel)
+            if request.with_progress:
+                result = request.fn(self._cancel,
+                                    lambda text: self._signals.progress.emit(request.generation, str(text)))
+            else:
+                result = request.fn(self._cancel)
         except Exception as exc:  # reported to the GUI thread, never lost
             exc.__traceback_text__ = traceback.format_exc()  # type: ignore[attr-defined]
             self._signals.failed.emit(self._request.generation, exc)
@@ -60,13 +67,15 @@ class BackgroundRunner(QObject):
 
     Signals: ``started(label)``, ``slow(label)`` after :data:`PROGRESS_AFTER_MS`,
     ``finished(result)`` for the newest request only, ``failed(exception)``,
-    ``cancelled()``, ``idle()`` when nothing runs or waits.
+    ``cancelled()``, ``idle()`` when nothing runs or waits, ``progress(text)`` from
+computations submitted ``with_progress``.
     """
 
     started = Signal(str)
     slow = Signal(str)
     finished = Signal(object)
     failed = Signal(object)
+    progress = Signal(str)
     cancelled = Signal()
     idle = Signal()
 
@@ -76,6 +85,7 @@ class BackgroundRunner(QObject):
         self._signals = _Signals(self)
         self._signals.done.connect(self._on_done)
         self._signals.failed.connect(self._on_failed)
+        self._signals.progress.connect(self._on_progress)
         self._generation = 0
         self._running: _Request | None = None
         self._running_cancel: threading.Event | None = None
@@ -93,10 +103,12 @@ class BackgroundRunner(QObject):
     def is_busy(self) -> bool:
         return self._running is not None or self._pending is not None
 
-    def submit(self, fn: Callable[[threading.Event], Any], label: str = "solving") -> int:
-        """Queue ``fn(cancel_event)``; returns its generation. Older waiting requests are dropped."""
+    def submit(self, fn: Callable[..., Any], label: str = "solving", with_progress: bool = False) -> int:
+        """Queue ``fn(cancel_event)`` (or ``fn(cancel_event, report)`` with ``with_progress``,
+        where ``report(text)`` may be called from the worker); returns its generation.
+        Older waiting requests are dropped."""
         self._generation += 1
-        self._pending = _Request(self._generation, label, fn)
+        self._pending = _Request(self._generation, label, fn, with_progress)
         if self._running is None:
             self._start_pending()
         return self._generation
@@ -145,6 +157,11 @@ class BackgroundRunner(QObject):
         self._finish_running()
         if fresh:
             self.failed.emit(exc)
+
+    @Slot(int, str)
+    def _on_progress(self, generation: int, text: str) -> None:
+        if generation == self._generation:
+            self.progress.emit(text)
 
     @Slot()
     def _on_slow(self) -> None:
