@@ -295,6 +295,9 @@ def test_breakdown_after_a_recorded_plan_redispatches_from_it(qtbot, tmp_path, m
     wait_plan(qtbot, window)
     decision = HistoryStore(tmp_path / "history.sqlite").get(2)
     assert busy not in [a["machine"] for a in decision.plan["assignments"]]
+    # The window shows the plan just put in force, not a fresh solve that ignores moves.
+    assert window.plan.total == pytest.approx(decision.plan["total"])
+    assert "decision #2" in window.plan_panel.status.text()
     assert decision.diff_from_replaced is not None and decision.diff_from_replaced.from_id == 1
     # Jobs placed in both plans and not on the broken machine stay put unless it pays:
     # with the shop's move penalty, every moved job must have had a reason (its machine

@@ -297,8 +297,9 @@ class GridModel(QAbstractTableModel):
             return None
         job = self._doc.job_at(section)
         if role in (Qt.ItemDataRole.DisplayRole, Qt.ItemDataRole.AccessibleTextRole):
-            mark = {RUNNING: "\u25b6 ", DONE: "\u2713 "}.get(job.state, "")
-            return f"{mark}{job.name}"
+            if job.state == DONE:
+                return f"(done) {job.name}"
+            return f"\u25b6 {job.name}" if job.state == RUNNING else job.name
         if role == Qt.ItemDataRole.ToolTipRole:
             parts = [job.name]
             if job.work_order:

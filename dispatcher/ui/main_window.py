@@ -556,6 +556,12 @@ class MainWindow(QMainWindow):
             stack.push(SetJobsState(self.doc, proposal.job_changes, proposal.title))
         stack.push(SetPlanInForce(self.doc, recorded_shop.plan_in_force, "plan in force"))
         stack.endMacro()
+        # Show the plan just put in force (not a fresh solve of the same shop, which would
+        # ignore the move penalties the re-dispatch paid) until the next edit.
+        self.runner.discard()
+        self._on_solved(SolveOutcome(self.objective, proposal.plan, "", False, 0.0))
+        self.plan_panel.show_note(f"Plan in force: decision #{number} ({proposal.title}). "
+                                  "Any edit re-solves from scratch.")
         self.statusBar().showMessage(f"Decision #{number} recorded: {proposal.title}", 8000)
         self.decision_recorded.emit(number)
         return number

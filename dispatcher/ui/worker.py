@@ -123,6 +123,13 @@ computations submitted ``with_progress``.
             self._slow_timer.stop()
             self.cancelled.emit()
 
+    def discard(self) -> None:
+        """Drop the waiting request and ignore the running one's result, without reporting
+        a cancellation (used when the window already shows the right plan)."""
+        self._pending = None
+        self._generation += 1
+        self._slow_timer.stop()
+
     def wait_idle(self, timeout_ms: int = 30_000) -> bool:
         """Block until the pool thread is done (for tests and shutdown only)."""
         return self._pool.waitForDone(timeout_ms)
