@@ -32,11 +32,13 @@ from __future__ import annotations
 import heapq
 import itertools
 from dataclasses import dataclass, field
+from typing import Any
 
 import numpy as np
 
 from .assignment import DispatchResult, _plan_total
-from .redispatch import shortest_augmenting_path
+from .redispatch import sap_search
+from .whatif import forced_rise
 
 __all__ = ["RankedPlan", "ranked_plans"]
 
@@ -67,6 +69,9 @@ class _Node:
     v: np.ndarray
     freed: int | None = None          # pending: the row to re-place from the parent's solution
     key: float = field(default=0.0)   # square-problem cost (exact) or lower bound (pending)
+    base: float = field(default=0.0)  # pending: the parent's exact cost
+    search: Any = field(default=None, repr=False)  # pending: the paused path search
+    state: Any = field(default=None, repr=False)   # pending: the arrays it works on
 
 
 class _Ranker:
@@ -76,6 +81,10 @@ class _Ranker:
         self.base = cert.cost
         self.n_jobs, self.n_machines = result.values.shape
         self.size = self.base.shape[0]
+        # Root what-if: the best plan with row i on column j costs root key + rise[i, j];
+        # every subproblem is a restriction of the root problem, so this bounds it below.
+        self.rise = forced_rise(cert.cost, cert.col_of_row, cert.row_potential, cert.col_potential)
+        self.root_key = float(cert.cost[np.arange(self.size), cert.col_of_row].sum()) if self.size else 0.0
 
     def choice(self, col: int) -> int:
         return col if col < self.n_machines else WAIT
@@ -105,53 +114,85 @@ class _Ranker:
     def key_of(self, cost: np.ndarray, col_of_row: np.ndarray) -> float:
         return float(cost[np.arange(self.size), col_of_row].sum())
 
-    def solve_pending(self, node: _Node) -> bool:
-        """Re-place the freed row warm from the parent's potentials; False if infeasible."""
-        cost = self.matrix(node)
-        col_of_row = node.col_of_row.copy()
-        u, v = node.u.copy(), node.v.copy()
-        r = int(node.freed)
-        row_of_col = np.empty(self.size, dtype=np.int64)
-        row_of_col[col_of_row] = np.arange(self.size)
-        row_of_col[col_of_row[r]] = -1
-        col_of_row[r] = -1
-        if not shortest_augmenting_path(cost, col_of_row, row_of_col, u, v, r):
-            return False
-        node.col_of_row, node.u, node.v, node.freed = col_of_row, u, v, None
-        node.key = self.key_of(cost, col_of_row)
-        return True
+    def solve_pending(self, node: _Node, limit: float = np.inf) -> bool | None:
+        """Re-place the freed row warm from the parent's potentials.
+
+        True: solved (``node.key`` exact). False: infeasible. None: the subproblem costs
+        more than ``limit``; ``node.key`` is raised to the lower bound found.
+        """
+        try:
+            if node.search is None:
+                cost = self.matrix(node)
+                col_of_row = node.col_of_row.copy()
+                u, v = node.u.copy(), node.v.copy()
+                r = int(node.freed)
+                row_of_col = np.empty(self.size, dtype=np.int64)
+                row_of_col[col_of_row] = np.arange(self.size)
+                row_of_col[col_of_row[r]] = -1
+                col_of_row[r] = -1
+                node.search = sap_search(cost, col_of_row, row_of_col, u, v, r, limit - node.base)
+                node.state = (cost, col_of_row, u, v)
+                bound = next(node.search)
+            else:
+                bound = node.search.send(limit - node.base)
+        except StopIteration as done:
+            placed, _ = done.value
+            node.search = None
+            if not placed:
+                return False
+            cost, col_of_row, u, v = node.state
+            node.state = None
+            node.col_of_row, node.u, node.v, node.freed = col_of_row, u, v, None
+            node.key = self.key_of(cost, col_of_row)
+            return True
+        node.key = max(node.key, node.base + bound)
+        return None
 
     def children(self, node: _Node) -> list[_Node]:
-        """Murty's partition of the node's space minus its own plan, with lower bounds."""
+        """Murty's partition of the node's space minus its own plan, with lower bounds.
+
+        Child t keeps the choices of free rows 1..t-1 and forbids row t's choice. Its
+        bound is the larger of (a) the node's total plus the least reduced cost row t must
+        take elsewhere plus the least reduced cost another row must take on the freed
+        machine, and (b) the root's exact what-if cost of row t's best allowed column.
+        """
         cost = self.matrix(node)
-        nm = self.n_machines
+        nm, size = self.n_machines, self.size
+        free_rows = np.array([r for r in range(self.n_jobs) if r not in node.fixed], dtype=np.int64)
+        if free_rows.size == 0:
+            return []
         red = cost - node.u[:, None] - node.v[None, :]
         red = np.where(np.isfinite(cost), np.maximum(red, 0.0), np.inf)
-        col_of_row = node.col_of_row
-        free_rows = [r for r in range(self.n_jobs) if r not in node.fixed]
-        col_taken = np.zeros(self.size, dtype=bool)
-        row_taken = np.zeros(self.size, dtype=bool)
-        row_taken[list(node.fixed)] = True
+        q = free_rows.size
+        t = np.arange(q)
+        cols = node.col_of_row[free_rows]
+        is_wait = cols >= nm
+        # Column j is fixed for child t when a free row before t holds it.
+        col_pos = np.full(size, q, dtype=np.int64)
+        col_pos[cols] = t
+        excluded = col_pos[None, :] < t[:, None]
+        excluded[t, cols] = True
+        if is_wait.any():
+            excluded[np.ix_(np.flatnonzero(is_wait), np.arange(nm, size))] = True
+        row_slack = np.where(excluded, np.inf, red[free_rows]).min(axis=1)
+        forced = np.where(excluded, np.inf, self.rise[free_rows]).min(axis=1)
+        # Another row must take the freed machine: rows after t (or idle rows), not fixed.
+        row_pos = np.full(size, q, dtype=np.int64)
+        row_pos[list(node.fixed)] = -1
+        row_pos[free_rows] = t
+        taken = row_pos[None, :] <= t[:, None]
+        col_slack = np.where(taken, np.inf, red[:, cols].T).min(axis=1)
+        col_slack[is_wait] = 0.0
+        bound = np.maximum(node.key + row_slack + col_slack, self.root_key + forced)
         out = []
         fixed = dict(node.fixed)
-        for r in free_rows:
-            col = int(col_of_row[r])
-            choice = self.choice(col)
-            row_taken[r] = True
-            excluded = col_taken.copy()
-            if choice == WAIT:
-                excluded[nm:] = True
-                col_slack = 0.0
-            else:
-                excluded[col] = True
-                col_slack = float(np.where(row_taken, np.inf, red[:, col]).min())
-            row_slack = float(np.where(excluded, np.inf, red[r]).min())
-            bound = node.key + row_slack + col_slack
-            if np.isfinite(bound):
+        for k in range(q):
+            r, choice = int(free_rows[k]), self.choice(int(cols[k]))
+            if np.isfinite(bound[k]):
                 out.append(_Node(dict(fixed), node.forbidden + [(r, choice)],
-                                 col_of_row, node.u, node.v, freed=r, key=bound))
+                                 node.col_of_row, node.u, node.v, freed=r,
+                                 key=float(bound[k]), base=node.key))
             fixed[r] = choice
-            col_taken[col] = True
         return out
 
     def plan(self, node: _Node) -> RankedPlan:
@@ -205,7 +246,10 @@ def ranked_plans(result: DispatchResult, count: int) -> list[RankedPlan]:
     while heap and len(plans) < count:
         _, _, node = heapq.heappop(heap)
         if node.freed is not None:
-            if ranker.solve_pending(node):
+            # Solve only as far as the next entry of the queue: past it, a better bound
+            # is enough to put the subproblem back (lazy evaluation).
+            limit = heap[0][0] if heap else np.inf
+            if ranker.solve_pending(node, limit) is not False:
                 heapq.heappush(heap, (node.key, next(tick), node))
             continue
         plans.append(ranker.plan(node))

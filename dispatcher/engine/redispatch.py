@@ -70,65 +70,102 @@ def shortest_augmenting_path(cost: np.ndarray, col_of_row: np.ndarray, row_of_co
     keeps feasibility and tightness (Tomizawa 1971; Jonker and Volgenant 1987; the update
     follows Crouse 2016, Algorithm 1). O(n) per scanned row, O(n^2) per call at worst.
     """
+    placed, _ = _sap(cost, col_of_row, row_of_col, u, v, start)
+    return placed
+
+
+def _sap(cost: np.ndarray, col_of_row: np.ndarray, row_of_col: np.ndarray, u: np.ndarray,
+         v: np.ndarray, start: int, limit: float = np.inf) -> tuple[bool, float]:
+    """:func:`shortest_augmenting_path` with a distance limit.
+
+    Returns ``(True, length)`` when the row was placed, ``(False, inf)`` when no path
+    exists, and ``(False, d)`` with ``d > limit`` a lower bound on the path length when the
+    search stopped at the limit; in both failing cases nothing was changed.
+    """
+    search = sap_search(cost, col_of_row, row_of_col, u, v, start, limit)
+    try:
+        bound = next(search)
+    except StopIteration as done:
+        return done.value
+    search.close()
+    return False, bound
+
+
+def sap_search(cost: np.ndarray, col_of_row: np.ndarray, row_of_col: np.ndarray,
+               u: np.ndarray, v: np.ndarray, start: int, limit: float = np.inf):
+    """Resumable form of :func:`shortest_augmenting_path` (a generator).
+
+    Whenever the next distance would exceed ``limit`` it yields that distance (a lower
+    bound on the path length) and waits for a new limit via ``send``; it finishes with
+    ``StopIteration.value`` = ``(placed, length)``. Nothing is changed before it finishes.
+    Used to evaluate subproblems lazily (see :mod:`dispatcher.engine.ranking`).
+    """
     n = cost.shape[0]
-    cand = np.full(n, np.inf)       # tentative distances of unscanned columns
-    dist = np.zeros(n)              # final distances of scanned columns
-    blocked = np.zeros(n)           # +inf once a column is final
-    pred = np.full(n, -1, dtype=np.int64)
-    scanned_rows: list[np.ndarray] = []
-    final_cols: list[np.ndarray] = []
-    better = np.empty(n, dtype=bool)
+    cand = np.full(n, np.inf)       # tentative distances of columns not yet final
+    negv = -v                       # -v, and +inf once a column is final
+    dist = np.empty(n)              # distances of final columns
+    final_step = np.full(n, -1, dtype=np.int64)
+    steps: list[np.ndarray] = []    # rows scanned at each step
+    bases: list[float] = []         # their distance (the distance of their column)
     rows = np.array([start], dtype=np.int64)
-    base = np.zeros(1)
+    base = 0.0
     while True:
-        scanned_rows.append(rows)
+        steps.append(rows)
+        bases.append(base)
         if rows.size == 1:
-            red = cost[rows[0]] - v
-            red += base[0] - u[rows[0]]
-            arg = None
+            red = cost[rows[0]] + negv
+            red += base - u[rows[0]]
         else:
-            block = cost[rows] - v[None, :]
+            block = cost[rows] + negv[None, :]
             block += (base - u[rows])[:, None]
-            arg = block.argmin(axis=0)
-            red = block[arg, np.arange(n)]
-        red += blocked
-        np.less(red, cand, out=better)
-        np.copyto(cand, red, where=better)
-        if arg is None:
-            np.copyto(pred, rows[0], where=better)
-        else:
-            pred[better] = rows[arg[better]]
+            red = block.min(axis=0)
+        np.minimum(cand, red, out=cand)
         d = float(cand.min())
         if not np.isfinite(d):
-            return False
+            return False, d
+        while d > limit:
+            limit = yield d
         layer = np.flatnonzero(cand == d)
-        final_cols.append(layer)
         dist[layer] = d
-        blocked[layer] = np.inf
+        negv[layer] = np.inf
         cand[layer] = np.inf
-        free = layer[row_of_col[layer] < 0]
-        if free.size:
-            sink = int(free[0])
+        final_step[layer] = len(steps) - 1
+        owners = row_of_col[layer]
+        free = owners < 0
+        if free.any():
+            sink = int(layer[np.argmax(free)])
             break
-        rows = row_of_col[layer]
-        base = np.full(rows.size, d)
+        rows, base = owners, d
+    # The path, read back from the distances: a column's predecessor is a row scanned no
+    # later than the column became final that attains its distance (same float operations
+    # as above, so the minimum is met exactly).
+    scanned = np.concatenate(steps)
+    scanned_base = np.repeat(np.asarray(bases), [len(r) for r in steps])
+    upto = np.cumsum([len(r) for r in steps])
+    path = []
+    j = sink
+    while True:
+        m = upto[final_step[j]]
+        cand_rows = scanned[:m]
+        reach = cost[cand_rows, j] + (-v[j])
+        reach += scanned_base[:m] - u[cand_rows]
+        i = int(cand_rows[int(np.argmin(reach))])
+        path.append((i, j))
+        if i == start:
+            break
+        j = int(col_of_row[i])
     # Dual update (keeps cost - u - v >= 0 and tight pairs tight).
     d_sink = dist[sink]
     u[start] += d_sink
-    if len(scanned_rows) > 1:
-        rows = np.concatenate(scanned_rows[1:])
-        u[rows] += d_sink - dist[col_of_row[rows]]
-    cols = np.concatenate(final_cols)
+    if scanned.size > 1:
+        others = scanned[1:]
+        u[others] += d_sink - dist[col_of_row[others]]
+    cols = np.flatnonzero(final_step >= 0)
     v[cols] -= d_sink - dist[cols]
-    # Flip the path.
-    j = sink
-    while True:
-        i = int(pred[j])
+    for i, j in path:
         row_of_col[j] = i
-        j, col_of_row[i] = int(col_of_row[i]), j
-        if i == start:
-            break
-    return True
+        col_of_row[i] = j
+    return True, d_sink
 
 
 def _repair(cost: np.ndarray, col_of_row: np.ndarray, u: np.ndarray, v: np.ndarray,

@@ -22,7 +22,7 @@ import numpy as np
 
 from .assignment import COL_WAIT, DispatchResult
 
-__all__ = ["WhatIf", "what_if", "alternating_distances"]
+__all__ = ["WhatIf", "what_if", "forced_rise", "alternating_distances"]
 
 
 @dataclass(frozen=True)
@@ -59,6 +59,25 @@ def alternating_distances(weights: np.ndarray) -> np.ndarray:
     return dist
 
 
+def forced_rise(cost: np.ndarray, col_of_row: np.ndarray, u: np.ndarray,
+                v: np.ndarray) -> np.ndarray:
+    """Rise in total of a square assignment problem when each entry (i, j) is forced.
+
+    ``col_of_row`` is optimal with potentials ``u``, ``v``. Entry ``[i, j]`` is
+    ``r(i, j) + D(row_of(j), i)`` (see :func:`what_if`), ``inf`` where no perfect matching
+    of finite entries contains (i, j), and exactly 0 on the plan.
+    """
+    size = cost.shape[0]
+    finite = np.isfinite(cost)
+    red = np.where(finite, np.maximum(cost - u[:, None] - v[None, :], 0.0), np.inf)
+    row_of_col = np.empty(size, dtype=np.int64)
+    row_of_col[col_of_row] = np.arange(size)
+    dist = alternating_distances(red[:, col_of_row])
+    rise = red + dist[row_of_col].T
+    rise[np.arange(size), col_of_row] = 0.0  # float noise on the plan itself
+    return rise
+
+
 def what_if(result: DispatchResult) -> WhatIf:
     """Exact extra cost of every (job, machine) pair and of every job waiting.
 
@@ -93,16 +112,7 @@ def what_if(result: DispatchResult) -> WhatIf:
     if size == 0:
         empty = np.zeros((n_jobs, n_machines))
         return WhatIf(empty, np.zeros(n_jobs), np.full(n_jobs, -1), np.full(n_jobs, np.nan))
-    finite = np.isfinite(cert.cost)
-    red = np.where(finite, np.maximum(cert.reduced_costs(), 0.0), np.inf)
-    col_of_row = cert.col_of_row
-    row_of_col = np.empty(size, dtype=np.int64)
-    row_of_col[col_of_row] = np.arange(size)
-    dist = alternating_distances(red[:, col_of_row])
-    # rise[i, j] = red[i, j] + dist[row_of_col[j], i]
-    rise = red + dist[row_of_col].T
-    # Snap float noise on the plan itself to an exact zero.
-    rise[np.arange(size), col_of_row] = 0.0
+    rise = forced_rise(cert.cost, cert.col_of_row, cert.row_potential, cert.col_potential)
     extra = rise[:n_jobs, :n_machines].copy()
     extra[~np.isfinite(extra) | ~result.solved_allowed] = np.nan
     wait_cols = np.flatnonzero(cert.col_kind == COL_WAIT)
