@@ -10,6 +10,10 @@ from __future__ import annotations
 from dispatcher.engine.ranking import ranked_plans
 from dispatcher.shop import Assignment, Plan
 
+#: At most this many engine plans per shop plan asked for are ranked to find distinct shop
+#: plans (multi-slot machines repeat plans); it bounds the time on big shops.
+ENGINE_PLANS_PER_PLAN = 16
+
 
 def alternative_plans(plan: Plan, count: int) -> list[Plan]:
     """Up to ``count`` best distinct plans, best first (the first is ``plan`` itself).
@@ -23,13 +27,26 @@ def alternative_plans(plan: Plan, count: int) -> list[Plan]:
     out: list[Plan] = []
     seen: set[frozenset] = set()
     # A machine with several slots is several engine columns: plans that differ only in
-    # which slot a job takes are the same plan in the shop, so ask for more and skip those.
+    # which slot a job takes are the same plan in the shop, so rank more engine plans
+    # (growing, up to ENGINE_PLANS_PER_PLAN per plan) and skip those repeats.
     several = len(set(problem.columns)) < len(problem.columns)
-    for ranked in ranked_plans(result, count * 5 if several else count):
+    asked = count
+    while True:
+        ranked_list = ranked_plans(result, asked)
+        keys = []
+        distinct: set[frozenset] = set()
+        for ranked in ranked_list:
+            key = frozenset((n, problem.columns[c])
+                            for n, c in enumerate(ranked.machine_of_job.tolist()) if c >= 0)
+            keys.append(key)
+            distinct.add(key)
+        if (not several or len(distinct) >= count or len(ranked_list) < asked
+                or asked >= count * ENGINE_PLANS_PER_PLAN):
+            break
+        asked = min(asked * 4, count * ENGINE_PLANS_PER_PLAN)
+    for ranked, key in zip(ranked_list, keys):
         if len(out) == count:
             break
-        key = frozenset((n, problem.columns[c]) for n, c in enumerate(ranked.machine_of_job.tolist())
-                        if c >= 0)
         if key in seen:
             continue
         seen.add(key)

@@ -84,7 +84,11 @@ class AlternativesView(QWidget):
             item.setToolTip(f"Plan #{rank}: total {fmt(p.total)} {unit}; "
                             + ("the optimal plan" if rank == 1 else f"{fmt(gap)} {word} than the best"))
             self.list.addItem(item)
-        self.status.setText(f"{len(plans)} best plans, best first")
+        if len(plans) < self.count.value():
+            self.status.setText(f"{len(plans)} distinct plans found near the best (machines that "
+                                "take several jobs repeat the same plan in other slots), best first")
+        else:
+            self.status.setText(f"{len(plans)} best plans, best first")
         self.list.setCurrentRow(0)
 
     def _show(self, row: int) -> None:

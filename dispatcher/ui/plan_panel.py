@@ -188,10 +188,13 @@ class PlanPanel(QWidget):
                 used, cap = hours[machine]
                 head = QTreeWidgetItem(machines, [machine, f"{fmt(used, 2)} of {fmt(cap, 2)} h used", ""])
                 head.setToolTip(1, f"Run hours planned on {machine} this shift, of the hours it has")
-            for job, value, running in entries:
-                item = QTreeWidgetItem(machines, [machine, ("\u25b6 " if running else
-                                                            f"{palette.MARK_PLANNED} ") + job,
-                                                  fmt(value)])
+            for n, (job, value, running) in enumerate(entries, 1):
+                mark = "\u25b6 " if running else f"{palette.MARK_PLANNED} "
+                if machine in hours:   # whole shift: jobs in run order under the machine
+                    item = QTreeWidgetItem(machines, [f"   {n}.", mark + job, fmt(value)])
+                    item.setToolTip(0, f"Position {n} in {machine}'s run order")
+                else:
+                    item = QTreeWidgetItem(machines, [machine, mark + job, fmt(value)])
                 item.setTextAlignment(2, Qt.AlignmentFlag.AlignRight | Qt.AlignmentFlag.AlignVCenter)
                 item.setToolTip(2, f"Value of {job} on {machine} ({unit})"
                                 + (" - already running, not counted in the total" if running else ""))

@@ -44,7 +44,7 @@ class WhatIfModel(QAbstractTableModel):
             return None
         if orientation == Qt.Orientation.Horizontal:
             m = self.shop.machines[section]
-            return m.name if m.state == "up" else f"{m.name} ({m.state})"
+            return m.name if m.state == "up" else f"{m.name}\n{palette.MARK_DOWN} {m.state}"
         return self.shop.jobs[section].name
 
     def _word(self) -> str:
