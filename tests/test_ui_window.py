@@ -342,3 +342,42 @@ def test_missing_run_hours_in_whole_shift_mode_say_which(qtbot, shop_window):
     row = 0
     assert window.model.setData(window.model.index(row, COL_HOURS), "1.5")
     assert window.doc.shop.jobs[row].run_hours == 1.5
+
+
+def test_keyboard_only_breakdown_and_close_prompt(qtbot, shop_window, tmp_path):
+    window = shop_window
+    activate(qtbot, window)
+    col = window.doc.shop.machine_names().index("Trim bench")
+    window.view.setCurrentIndex(window.model.index(0, FIRST_MACHINE_COL + col))
+    window.view.setFocus()
+    qtbot.keyClick(window.view, Qt.Key.Key_D, Qt.KeyboardModifier.ControlModifier)
+    dialog = window.decision_dialog
+    assert dialog is not None and dialog.isVisible() and "Trim bench" in dialog.windowTitle()
+    dialog.by.setFocus()
+    qtbot.keyClicks(dialog.by, "H. Keys")
+    qtbot.keyClick(dialog, Qt.Key.Key_Return)
+    wait_plan(qtbot, window)
+    assert window.doc.shop.machines[col].state == DOWN
+    assert HistoryStore(tmp_path / "history.sqlite").count() == 1
+    # Unsaved changes: closing asks; "cancel" keeps the window and the document.
+    window.messenger.save_answer = "cancel"
+    assert not window.close()
+    assert window.isVisible() and window.doc.dirty
+
+
+def test_every_number_shown_has_a_tooltip(qtbot, shop_window):
+    window = shop_window
+    model = window.model
+    for row in range(model.rowCount()):
+        for column in range(model.columnCount()):
+            idx = model.index(row, column)
+            if any(ch.isdigit() for ch in str(idx.data() or "")):
+                assert idx.data(Qt.ItemDataRole.ToolTipRole), (row, column)
+    tree = window.plan_panel.tree
+    machines = tree.topLevelItem(0)
+    for i in range(machines.childCount()):
+        item = machines.child(i)
+        if item.text(2):
+            assert item.toolTip(2)
+    for label in (window.plan_panel.total, window.plan_panel.counts, window.plan_panel.proof):
+        assert label.toolTip()
