@@ -381,3 +381,31 @@ def test_every_number_shown_has_a_tooltip(qtbot, shop_window):
             assert item.toolTip(2)
     for label in (window.plan_panel.total, window.plan_panel.counts, window.plan_panel.proof):
         assert label.toolTip()
+
+
+@pytest.mark.parametrize("suffix", [".csv", ".xlsx"])
+def test_export_grid_reads_back_and_import_into_the_shop_is_undoable(qtbot, shop_window, tmp_path, suffix):
+    from dispatcher.io.grid import read_grid
+
+    window = shop_window
+    shop = window.doc.shop
+    out = tmp_path / f"grid{suffix}"
+    assert window.files.export_grid(out)
+    table = read_grid(out)
+    values, allowed = shop.matrix()
+    assert table.jobs == shop.job_names() and table.machines == shop.machine_names()
+    assert (table.allowed == allowed).all() and (table.values[allowed] == values[allowed]).all()
+    # A grid naming one known job and one new machine merges by name, as one edit.
+    extra = tmp_path / "more.csv"
+    extra.write_text(f"label,{shop.machines[0].name},New oven\n{shop.jobs[0].name},3,4\n", encoding="utf-8")
+    before = shop_to_dict(window.doc.shop)
+    summary = window.files.import_into(extra)
+    assert "1 machine(s) added: New oven" in summary
+    wait_plan(qtbot, window)
+    assert window.doc.n_machines() == len(before["machines"]) + 1
+    assert window.model.columnCount() == FIRST_MACHINE_COL + window.doc.n_machines()
+    window.doc.undo_stack.undo()
+    wait_plan(qtbot, window)
+    assert shop_to_dict(window.doc.shop) == before
+    plan_out = tmp_path / f"plan{suffix}"
+    assert window.files.export_plan(window.plan, plan_out) and plan_out.stat().st_size > 0

@@ -135,6 +135,13 @@ class ShopDocument(QObject):
         self.jobs_changed.emit([r for r, _ in jobs])
         self.edited.emit()
 
+    def _apply_shop(self, shop: Shop) -> None:
+        """Swap the whole shop (an import that may add jobs and machines); views rebuild."""
+        self.shop = shop
+        self._index()
+        self.reset.emit()
+        self.edited.emit()
+
     def _apply_plan_in_force(self, plan_in_force: dict[str, list[str]]) -> None:
         self.shop.plan_in_force = {k: list(v) for k, v in plan_in_force.items()}
         self.edited.emit()

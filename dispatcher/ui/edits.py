@@ -113,3 +113,19 @@ class SetPlanInForce(QUndoCommand):
 
     def undo(self) -> None:
         self._doc._apply_plan_in_force(self._old)
+
+
+class ReplaceShop(QUndoCommand):
+    """Swap in a whole new shop (a merged import); undo brings the old one back."""
+
+    def __init__(self, doc: ShopDocument, shop, text: str):
+        super().__init__(text)
+        self._doc = doc
+        self._new = shop
+        self._old = doc.shop
+
+    def redo(self) -> None:
+        self._doc._apply_shop(self._new)
+
+    def undo(self) -> None:
+        self._doc._apply_shop(self._old)

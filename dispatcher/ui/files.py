@@ -18,6 +18,7 @@ from PySide6.QtCore import QObject, QRunnable, QSettings, QStandardPaths, QThrea
 
 from dispatcher.io.grid import GRID_SUFFIXES, GridFileError, read_grid
 from dispatcher.io.shopfile import SHOP_SUFFIX, ShopFileError, load_shop, save_shop
+from dispatcher.io.spreadsheet import export_grid, export_plan, import_grid_file
 from dispatcher.shop import Shop, ShopError, shop_from_grid
 from dispatcher.ui.document import ShopDocument
 from dispatcher.ui.messages import CANCEL, SAVE, Messenger
@@ -158,15 +159,40 @@ class FileController(QObject):
         return True
 
     def export_grid(self, path: str | os.PathLike) -> bool:
-        """Write the grid (values, ``x`` for cannot run) to CSV or XLSX."""
-        from dispatcher.ui.exporting import write_grid
+        """Write the grid (values, ``x`` for cannot run) to CSV or XLSX (the grid layout)."""
         try:
-            write_grid(self.doc.shop, Path(path))
+            export_grid(self.doc.shop, Path(path))
         except (OSError, ValueError) as exc:
             self.messenger.error("Cannot export", f"{path}: {exc}")
             return False
         self.status.emit(f"Exported the grid to {path}")
         return True
+
+    def export_plan(self, plan, path: str | os.PathLike) -> bool:
+        """Write a plan to CSV or XLSX (the core's plan table)."""
+        try:
+            export_plan(plan, Path(path), self.doc.shop)
+        except (OSError, ValueError) as exc:
+            self.messenger.error("Cannot export", f"{path}: {exc}")
+            return False
+        self.status.emit(f"Exported the plan to {path}")
+        return True
+
+    def import_into(self, path: str | os.PathLike) -> str | None:
+        """Merge a grid file into the open shop by job and machine names, as one undoable
+        edit; returns the core's report (None, with a message, when the file is refused)."""
+        try:
+            report = import_grid_file(Path(path), snapshot(self.doc.shop))
+        except (GridFileError, ShopError, OSError) as exc:
+            self.messenger.error("Cannot import", str(exc))
+            self.problem.emit(str(exc))
+            return None
+        from dispatcher.ui.edits import ReplaceShop
+        self.doc.undo_stack.push(ReplaceShop(self.doc, report.shop, f"Import {Path(path).name}"))
+        summary = report.summary()
+        self.messenger.info("Grid imported", f"{path}:\n{summary}")
+        self.status.emit(f"Imported {path}")
+        return summary
 
     # ---- autosave -------------------------------------------------------------------------
     def autosave_path(self) -> Path:

@@ -150,6 +150,10 @@ class MainWindow(QMainWindow):
                                        "Start a shop from a grid file")
         self.act_export = self._action("&Export grid (CSV/XLSX)\u2026", self.on_export, None,
                                        "Write the grid to a CSV or XLSX file")
+        self.act_import_into = self._action("Import grid &into this shop\u2026", self.on_import_into, None,
+                                            "Merge a grid file into this shop by job and machine names")
+        self.act_export_plan = self._action("Export p&lan (CSV/XLSX)\u2026", self.on_export_plan, None,
+                                            "Write the plan shown to a CSV or XLSX file")
         self.act_quit = self._action("&Quit", self.close, S.Quit, "Close the app")
         self.act_undo = self.doc.undo_stack.createUndoAction(self, "&Undo")
         self.act_undo.setShortcut(S.Undo)
@@ -218,7 +222,9 @@ class MainWindow(QMainWindow):
         self.recent_menu = m.addMenu("Open &recent")
         m.addSeparator()
         m.addAction(self.act_import)
+        m.addAction(self.act_import_into)
         m.addAction(self.act_export)
+        m.addAction(self.act_export_plan)
         m.addSeparator()
         self.file_menu = m
         self._print_anchor = m.addSeparator()
@@ -384,6 +390,19 @@ class MainWindow(QMainWindow):
         path, _ = QFileDialog.getSaveFileName(self, "Export grid", self._folder(), GRID_FILTER)
         if path:
             self.files.export_grid(path)
+
+    def on_import_into(self) -> None:
+        path, _ = QFileDialog.getOpenFileName(self, "Import grid into this shop", self._folder(), GRID_FILTER)
+        if path:
+            self.files.import_into(path)
+
+    def on_export_plan(self) -> None:
+        if self.plan is None:
+            self.show_warning("there is no plan to export yet")
+            return
+        path, _ = QFileDialog.getSaveFileName(self, "Export plan", self._folder(), "Plan (*.csv *.xlsx)")
+        if path:
+            self.files.export_plan(self.plan, path)
 
     def _folder(self) -> str:
         return str(self.doc.path.parent) if self.doc.path else str(Path.cwd())
