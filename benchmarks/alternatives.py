@@ -7,7 +7,7 @@ subproblem (fixed pairs, one forbidden pair) solved from scratch by
 ``scipy.optimize.linear_sum_assignment`` on the grid with forbidden entries set to
 infinity. Both lists of totals must agree (checked, not timed).
 
-Usage: python benchmarks/alternatives.py [--n 100] [--k 10] [--seed 1] [--repeat 3]
+Usage: python benchmarks/alternatives.py [--n 100] [--k 10] [--seed 1] [--repeat 5]
 The last line printed is ``ratio <reference time / our time>`` (medians).
 """
 
@@ -74,9 +74,12 @@ def main() -> None:
     parser.add_argument("--n", type=int, default=100)
     parser.add_argument("--k", type=int, default=10)
     parser.add_argument("--seed", type=int, default=1)
-    parser.add_argument("--repeat", type=int, default=3)
+    parser.add_argument("--repeat", type=int, default=5)
     args = parser.parse_args()
     rng = np.random.default_rng(args.seed)
+    warm_up = solve(rng.integers(1, 240, (20, 20)).astype(float))
+    ranked_plans(warm_up, args.k)  # first calls pay one-time costs on both sides
+    murty_cold(warm_up.values, args.k)
     ours_t, ref_t = [], []
     for r in range(args.repeat):
         values = rng.integers(1, 240, (args.n, args.n), endpoint=True).astype(float)

@@ -72,6 +72,18 @@ class _Node:
     base: float = field(default=0.0)  # pending: the parent's exact cost
     search: Any = field(default=None, repr=False)  # pending: the paused path search
     state: Any = field(default=None, repr=False)   # pending: the arrays it works on
+    parent_cost: Any = field(default=None, repr=False)  # pending: the parent's matrix
+    blocked: Any = field(default=None, repr=False)      # pending: columns fixed since
+    skip: Any = field(default=None, repr=False)         # pending: the forbidden choice
+    more_fixed: Any = field(default=None, repr=False)   # (rows, choices) not yet in ``fixed``
+
+    def fixed_choices(self) -> dict[int, int]:
+        """All fixed choices (merged on first use: most subproblems never need them)."""
+        if self.more_fixed is not None:
+            rows, choices = self.more_fixed
+            self.fixed = {**self.fixed, **dict(zip(rows.tolist(), choices.tolist()))}
+            self.more_fixed = None
+        return self.fixed
 
 
 class _Ranker:
@@ -92,8 +104,9 @@ class _Ranker:
     def matrix(self, node: _Node) -> np.ndarray:
         m = self.base.copy()
         nm = self.n_machines
-        fixed_m = [(r, c) for r, c in node.fixed.items() if c != WAIT]
-        fixed_w = [r for r, c in node.fixed.items() if c == WAIT]
+        fixed_choices = node.fixed_choices()
+        fixed_m = [(r, c) for r, c in fixed_choices.items() if c != WAIT]
+        fixed_w = [r for r, c in fixed_choices.items() if c == WAIT]
         if fixed_m:
             rows, cols = np.array(fixed_m).T
             keep = self.base[rows, cols]
@@ -122,7 +135,9 @@ class _Ranker:
         """
         try:
             if node.search is None:
-                cost = self.matrix(node)
+                # The parent's matrix plus this node's own constraints, applied inside the
+                # search (blocked columns, the skipped choice) instead of on a copy.
+                cost = node.parent_cost
                 col_of_row = node.col_of_row.copy()
                 u, v = node.u.copy(), node.v.copy()
                 r = int(node.freed)
@@ -130,7 +145,8 @@ class _Ranker:
                 row_of_col[col_of_row] = np.arange(self.size)
                 row_of_col[col_of_row[r]] = -1
                 col_of_row[r] = -1
-                node.search = sap_search(cost, col_of_row, row_of_col, u, v, r, limit - node.base)
+                node.search = sap_search(cost, col_of_row, row_of_col, u, v, r,
+                                         limit - node.base, node.blocked, node.skip)
                 node.state = (cost, col_of_row, u, v)
                 bound = next(node.search)
             else:
@@ -140,10 +156,10 @@ class _Ranker:
             node.search = None
             if not placed:
                 return False
-            cost, col_of_row, u, v = node.state
-            node.state = None
+            _, col_of_row, u, v = node.state
+            node.state = node.parent_cost = node.blocked = node.skip = None
             node.col_of_row, node.u, node.v, node.freed = col_of_row, u, v, None
-            node.key = self.key_of(cost, col_of_row)
+            node.key = self.key_of(self.base, col_of_row)
             return True
         node.key = max(node.key, node.base + bound)
         return None
@@ -158,7 +174,9 @@ class _Ranker:
         """
         cost = self.matrix(node)
         nm, size = self.n_machines, self.size
-        free_rows = np.array([r for r in range(self.n_jobs) if r not in node.fixed], dtype=np.int64)
+        fixed_choices = node.fixed_choices()
+        free_rows = np.array([r for r in range(self.n_jobs) if r not in fixed_choices],
+                             dtype=np.int64)
         if free_rows.size == 0:
             return []
         red = cost - node.u[:, None] - node.v[None, :]
@@ -178,21 +196,22 @@ class _Ranker:
         forced = np.where(excluded, np.inf, self.rise[free_rows]).min(axis=1)
         # Another row must take the freed machine: rows after t (or idle rows), not fixed.
         row_pos = np.full(size, q, dtype=np.int64)
-        row_pos[list(node.fixed)] = -1
+        row_pos[list(fixed_choices)] = -1
         row_pos[free_rows] = t
         taken = row_pos[None, :] <= t[:, None]
         col_slack = np.where(taken, np.inf, red[:, cols].T).min(axis=1)
         col_slack[is_wait] = 0.0
         bound = np.maximum(node.key + row_slack + col_slack, self.root_key + forced)
         out = []
-        fixed = dict(node.fixed)
-        for k in range(q):
-            r, choice = int(free_rows[k]), self.choice(int(cols[k]))
-            if np.isfinite(bound[k]):
-                out.append(_Node(dict(fixed), node.forbidden + [(r, choice)],
-                                 node.col_of_row, node.u, node.v, freed=r,
-                                 key=float(bound[k]), base=node.key))
-            fixed[r] = choice
+        wait_cols = np.arange(nm, size)
+        choices = np.where(is_wait, WAIT, cols)
+        for k in np.flatnonzero(np.isfinite(bound)):
+            r, choice = int(free_rows[k]), int(choices[k])
+            out.append(_Node(fixed_choices, node.forbidden + [(r, choice)],
+                             node.col_of_row, node.u, node.v, freed=r,
+                             key=float(bound[k]), base=node.key, parent_cost=cost,
+                             blocked=cols[:k], skip=wait_cols if choice == WAIT else cols[k:k + 1],
+                             more_fixed=(free_rows[:k], choices[:k])))
         return out
 
     def plan(self, node: _Node) -> RankedPlan:

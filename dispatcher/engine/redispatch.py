@@ -22,6 +22,7 @@ linear assignment problems", Computing 38 (1987) 325-340. doi:10.1007/BF02278710
 
 from __future__ import annotations
 
+import math
 from collections.abc import Mapping, Sequence
 
 import numpy as np
@@ -92,50 +93,73 @@ def _sap(cost: np.ndarray, col_of_row: np.ndarray, row_of_col: np.ndarray, u: np
 
 
 def sap_search(cost: np.ndarray, col_of_row: np.ndarray, row_of_col: np.ndarray,
-               u: np.ndarray, v: np.ndarray, start: int, limit: float = np.inf):
+               u: np.ndarray, v: np.ndarray, start: int, limit: float = np.inf,
+               blocked: np.ndarray | None = None, skip: np.ndarray | None = None):
     """Resumable form of :func:`shortest_augmenting_path` (a generator).
 
     Whenever the next distance would exceed ``limit`` it yields that distance (a lower
     bound on the path length) and waits for a new limit via ``send``; it finishes with
     ``StopIteration.value`` = ``(placed, length)``. Nothing is changed before it finishes.
-    Used to evaluate subproblems lazily (see :mod:`dispatcher.engine.ranking`).
+    ``blocked`` columns are treated as forbidden to every row (their rows stay as they
+    are) and ``skip`` columns as forbidden to ``start``: the same search as on a copy of
+    ``cost`` with those entries set to ``inf``, without the copy. Used to evaluate
+    subproblems lazily (see :mod:`dispatcher.engine.ranking`).
     """
     n = cost.shape[0]
     cand = np.full(n, np.inf)       # tentative distances of columns not yet final
-    negv = -v                       # -v, and +inf once a column is final
+    negv = -v                       # -v, and +inf once a column is final (or blocked)
+    if blocked is not None:
+        negv[blocked] = np.inf
     dist = np.empty(n)              # distances of final columns
     final_step = np.full(n, -1, dtype=np.int64)
     steps: list[np.ndarray] = []    # rows scanned at each step
     bases: list[float] = []         # their distance (the distance of their column)
+    inf = np.inf
     rows = np.array([start], dtype=np.int64)
     base = 0.0
     while True:
         steps.append(rows)
         bases.append(base)
         if rows.size == 1:
-            red = cost[rows[0]] + negv
-            red += base - u[rows[0]]
+            i = int(rows[0])
+            red = cost[i] + negv
+            red += base - u[i]
+            if skip is not None and i == start:
+                red[skip] = np.inf
         else:
             block = cost[rows] + negv[None, :]
             block += (base - u[rows])[:, None]
             red = block.min(axis=0)
         np.minimum(cand, red, out=cand)
-        d = float(cand.min())
-        if not np.isfinite(d):
+        j = int(cand.argmin())
+        d = float(cand[j])
+        if not math.isfinite(d):
             return False, d
         while d > limit:
             limit = yield d
-        layer = np.flatnonzero(cand == d)
-        dist[layer] = d
-        negv[layer] = np.inf
-        cand[layer] = np.inf
-        final_step[layer] = len(steps) - 1
-        owners = row_of_col[layer]
-        free = owners < 0
-        if free.any():
-            sink = int(layer[np.argmax(free)])
-            break
-        rows, base = owners, d
+        step = len(steps) - 1
+        dist[j], negv[j], cand[j], final_step[j] = d, inf, inf, step
+        if cand.min() == d:
+            # Ties (common with whole-minute values): the whole layer becomes final at once.
+            layer = np.flatnonzero(cand == d)
+            dist[layer] = d
+            negv[layer] = inf
+            cand[layer] = inf
+            final_step[layer] = step
+            layer = np.concatenate((np.array([j]), layer))
+            owners = row_of_col[layer]
+            free = owners < 0
+            if free.any():
+                sink = int(layer[np.argmax(free)])
+                break
+            rows = owners
+        else:
+            owner = int(row_of_col[j])
+            if owner < 0:
+                sink = j
+                break
+            rows = np.array([owner], dtype=np.int64)
+        base = d
     # The path, read back from the distances: a column's predecessor is a row scanned no
     # later than the column became final that attains its distance (same float operations
     # as above, so the minimum is met exactly).
@@ -143,12 +167,15 @@ def sap_search(cost: np.ndarray, col_of_row: np.ndarray, row_of_col: np.ndarray,
     scanned_base = np.repeat(np.asarray(bases), [len(r) for r in steps])
     upto = np.cumsum([len(r) for r in steps])
     path = []
+    skipped = set() if skip is None else set(np.asarray(skip).tolist())
     j = sink
     while True:
         m = upto[final_step[j]]
         cand_rows = scanned[:m]
         reach = cost[cand_rows, j] + (-v[j])
         reach += scanned_base[:m] - u[cand_rows]
+        if skip is not None and j in skipped:
+            reach[cand_rows == start] = np.inf
         i = int(cand_rows[int(np.argmin(reach))])
         path.append((i, j))
         if i == start:
