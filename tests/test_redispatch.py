@@ -191,3 +191,20 @@ def test_bottleneck_plans_are_re_solved_and_match_cold():
     ref = solve(values, mask, objective="bottleneck")
     assert warm.verify()
     assert (warm.bottleneck, warm.total) == (ref.bottleneck, ref.total)
+
+
+def test_warm_path_never_calls_the_cold_solver(monkeypatch):
+    # The re-dispatch must repair the previous plan, not quietly solve from scratch.
+    rng = np.random.default_rng(12)
+    values = rng.integers(0, 50, (30, 25)).astype(float)
+    prev = solve(values, rng.random((30, 25)) < 0.8, wait_penalty=rng.integers(0, 9, 30))
+    import dispatcher.engine.assignment as assignment
+
+    def refuse(*args, **kwargs):
+        raise AssertionError("cold solve called during a warm re-dispatch")
+
+    monkeypatch.setattr(assignment, "linear_sum_assignment", refuse)
+    busy = int(prev.machine_of_job[prev.machine_of_job >= 0][0])
+    warm = redispatch(prev, machines_down=[busy], jobs_removed=[1],
+                      new_jobs=rng.integers(0, 50, (2, 25)).astype(float))
+    assert warm.verify()
