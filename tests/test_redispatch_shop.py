@@ -256,3 +256,13 @@ def test_without_penalties_matches_a_cold_solve_of_the_shop_after_the_event():
             j.move_penalty = None
         out = redispatch_shop(shop, events, move_penalty=0.0)
         assert out.plan.total == pytest.approx(ref.total)
+
+
+def test_arriving_rush_job_counts_only_after():
+    shop = small_shop()
+    shop.jobs.append(Job(id="J5", name="WO-5", wait_penalty=50.0))
+    shop.grid[("J5", "S")] = 4.0
+    out = redispatch_shop(shop, [ShopEvent("rush", "WO-5")])
+    # In force: WO-2 on B (10) + WO-3 on Saw (9) + WO-4 waits (1) = 20; WO-5 was not there.
+    assert out.total_in_force == 20
+    assert out.total_change == pytest.approx(out.plan.total - 20)

@@ -332,11 +332,11 @@ def redispatch_shop(shop: Shop, events: Sequence[ShopEvent], *,
         result, order = _warm(pre, pre_result, post)
     except InfeasibleError as exc:
         raise _infeasible(exc, after, post, columns) from None
-    return _difference(shop, after, in_force, left, post, order, columns, result)
+    return _difference(shop, after, in_force, left, arrived, post, order, columns, result)
 
 
 def _difference(shop: Shop, after: Shop, in_force: Mapping[int, int], left: set[int],
-                post: _Layout, order: list[int], columns: list[int],
+                arrived: set[int], post: _Layout, order: list[int], columns: list[int],
                 result: DispatchResult) -> ShopRedispatch:
     post_pos = {i: n for n, i in enumerate(post.rows)}
     idx = np.array([post_pos[i] for i in order], dtype=np.int64)
@@ -380,7 +380,7 @@ def _difference(shop: Shop, after: Shop, in_force: Mapping[int, int], left: set[
     values_all, _ = shop.matrix()
     total_before = 0.0
     for i, j in enumerate(shop.jobs):
-        if j.state != WAITING:
+        if j.state != WAITING or i in arrived:  # an arriving job was not in the plan in force
             continue
         k = in_force.get(i)
         total_before += j.wait_penalty if k is None else float(values_all[i, k])
