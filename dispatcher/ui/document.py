@@ -8,6 +8,7 @@ emit ``dataChanged`` for just those cells and the plan can be re-solved.
 
 from __future__ import annotations
 
+import gc
 from pathlib import Path
 
 from PySide6.QtCore import QObject, Signal, Slot
@@ -53,6 +54,10 @@ class ShopDocument(QObject):
         self.shop = shop
         self.path = Path(path) if path is not None else None
         self._index()
+        # A big shop is hundreds of thousands of long-lived objects; moving them out of the
+        # cyclic collector's reach keeps its full passes from pausing the window.
+        gc.collect()
+        gc.freeze()
         self.undo_stack.clear()
         self.undo_stack.setClean()
         self.reset.emit()

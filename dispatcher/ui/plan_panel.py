@@ -24,6 +24,9 @@ from dispatcher.ui import palette
 from dispatcher.ui.format import fmt
 from dispatcher.ui.solving import MODES, machine_entries, shift_hours
 
+#: Waiting jobs listed one by one in the panel; the rest are counted (the grid shows all).
+MAX_LISTED = 150
+
 OBJECTIVE_LABELS = {
     "total": "Least total (setup + wait penalties)",
     "maximize": "Most total value (values are gains)",
@@ -92,9 +95,10 @@ class PlanPanel(QWidget):
         self.tree.setUniformRowHeights(True)
         head = self.tree.header()
         head.setStretchLastSection(False)
-        head.setSectionResizeMode(0, QHeaderView.ResizeMode.ResizeToContents)
+        head.setResizeContentsPrecision(80)   # size columns from a sample of rows (big plans)
+        head.setSectionResizeMode(0, QHeaderView.ResizeMode.Interactive)
         head.setSectionResizeMode(1, QHeaderView.ResizeMode.Stretch)
-        head.setSectionResizeMode(2, QHeaderView.ResizeMode.ResizeToContents)
+        head.setSectionResizeMode(2, QHeaderView.ResizeMode.Interactive)
         layout.addWidget(self.tree, 1)
         self._unit = ""
 
@@ -202,7 +206,7 @@ class PlanPanel(QWidget):
         machines.setExpanded(True)
         waiting = QTreeWidgetItem(self.tree, [f"Waiting jobs ({len(plan.waiting_jobs)})", "", ""])
         waiting.setFirstColumnSpanned(True)
-        for job in plan.waiting_jobs:
+        for job in plan.waiting_jobs[:MAX_LISTED]:
             reason = plan.waiting_reasons.get(job)
             if reason and reason.machines:
                 text = (f"{len(reason.competing_jobs)} jobs compete for "
@@ -214,6 +218,11 @@ class PlanPanel(QWidget):
             item = QTreeWidgetItem(waiting, [f"\u25cb {job}", text, ""])
             item.setToolTip(1, reason.text if reason else "left waiting: cheaper overall")
             item.setToolTip(0, reason.text if reason else "")
+        if len(plan.waiting_jobs) > MAX_LISTED:
+            more = QTreeWidgetItem(waiting, [f"\u2026 and {len(plan.waiting_jobs) - MAX_LISTED} more",
+                                             "see the grid's 'Plan puts it on' column", ""])
+            more.setToolTip(0, "Long lists are cut here to keep the window quick; every job's "
+                               "place or reason is in the grid")
         waiting.setExpanded(True)
         idle = QTreeWidgetItem(self.tree, [f"Idle machines ({len(plan.idle_machines)})", "", ""])
         idle.setFirstColumnSpanned(True)
@@ -226,3 +235,5 @@ class PlanPanel(QWidget):
             for m in plan.unavailable_machines:
                 QTreeWidgetItem(down, [f"{palette.MARK_DOWN} {m}", "down or in maintenance", ""])
             down.setExpanded(True)
+        for column in (0, 2):
+            self.tree.resizeColumnToContents(column)
