@@ -409,3 +409,26 @@ def test_export_grid_reads_back_and_import_into_the_shop_is_undoable(qtbot, shop
     assert shop_to_dict(window.doc.shop) == before
     plan_out = tmp_path / f"plan{suffix}"
     assert window.files.export_plan(window.plan, plan_out) and plan_out.stat().st_size > 0
+
+
+def test_a_new_shop_is_built_by_adding_jobs_and_machines(qtbot, tmp_path, monkeypatch):
+    window = make_window(qtbot, tmp_path, monkeypatch)
+    window.files.new()
+    assert window.add_machine("Press A") and window.add_machine("Press B")
+    assert not window.add_machine("Press A")
+    for name in ("Order 1", "Order 2", "Order 3"):
+        assert window.add_job(name)
+    window.view.setCurrentIndex(window.model.index(0, FIRST_MACHINE_COL))
+    assert window.paste_text("4\t9\n2\t3\n7\t1\n")
+    wait_plan(qtbot, window)
+    values, allowed = window.doc.shop.matrix()
+    # 3 jobs, 2 machines: scipy's rectangular assignment is the reference.
+    assert window.plan.total == pytest.approx(reference_total(values, allowed))
+    assert len(window.plan.waiting_jobs) == 1
+    window.view.setCurrentIndex(window.model.index(2, FIRST_MACHINE_COL))
+    window.on_job_done()
+    wait_plan(qtbot, window)
+    assert window.doc.shop.jobs[2].state == "done" and not window.plan.waiting_jobs
+    for _ in range(6):
+        window.doc.undo_stack.undo()
+    assert window.doc.n_jobs() == 0 or window.doc.n_machines() < 2

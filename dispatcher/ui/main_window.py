@@ -26,7 +26,7 @@ from PySide6.QtWidgets import (
 
 from dispatcher.history import HistoryError, HistoryInputError, HistoryStore
 from dispatcher.io.shopfile import SHOP_SUFFIX, shop_to_dict
-from dispatcher.shop import DOWN, MAINTENANCE, MUST, MUST_NOT, UP, Plan, Shop
+from dispatcher.shop import DONE, DOWN, MAINTENANCE, MUST, MUST_NOT, UP, Job, Machine, Plan, Shop
 from dispatcher.ui import palette
 from dispatcher.ui.clipboard import PasteError, copy_block, paste_changes
 from dispatcher.ui.decision import (
@@ -40,6 +40,7 @@ from dispatcher.ui.decision import (
 )
 from dispatcher.ui.document import ShopDocument
 from dispatcher.ui.edits import (
+    ReplaceShop,
     SetJobField,
     SetJobsState,
     SetMachineFields,
@@ -68,6 +69,15 @@ from dispatcher.ui.worker import BackgroundRunner
 APP_TITLE = "Dispatcher"
 FILE_FILTER = f"Shop documents (*{SHOP_SUFFIX});;Grid files (*.csv *.tsv *.txt *.xlsx);;All files (*)"
 GRID_FILTER = "Grid files (*.csv *.tsv *.txt *.xlsx)"
+
+
+def _new_id(prefix: str, taken: list[str]) -> str:
+    """The first ``prefix<n>`` not in ``taken``."""
+    used = set(taken)
+    n = len(used) + 1
+    while f"{prefix}{n}" in used:
+        n += 1
+    return f"{prefix}{n}"
 
 
 class MainWindow(QMainWindow):
@@ -179,6 +189,12 @@ class MainWindow(QMainWindow):
                                       "Remove the pin or ban of this pair")
         self.act_rush = self._action("&Rush job arrived\u2026", self.on_rush, "Ctrl+R",
                                      "Make the current job a rush job and re-dispatch")
+        self.act_add_job = self._action("&Add job\u2026", self.on_add_job, "Ctrl+Shift+J",
+                                        "Add a job (for example a rush order that just arrived)")
+        self.act_add_machine = self._action("Add &machine\u2026", self.on_add_machine, None,
+                                            "Add a machine column")
+        self.act_done = self._action("Mark job &done", self.on_job_done, None,
+                                     "The current job is finished: it takes no part any more")
         self.act_penalty = self._action("Set &wait penalty\u2026", self.on_penalty, "Ctrl+W",
                                         "Cost of leaving the current job waiting")
         self.act_down = self._action("Machine &down\u2026", lambda: self.on_machine_event(EVENT_DOWN),
@@ -234,9 +250,12 @@ class MainWindow(QMainWindow):
                   self.act_paste, None, self.act_cannot, self.act_pin, self.act_forbid, self.act_unpin):
             m.addSeparator() if a is None else m.addAction(a)
         m = bar.addMenu("&Job")
+        m.addAction(self.act_add_job)
         m.addAction(self.act_rush)
         m.addAction(self.act_penalty)
+        m.addAction(self.act_done)
         m = bar.addMenu("&Machine")
+        m.addAction(self.act_add_machine)
         for a in (self.act_down, self.act_up, self.act_maint, self.act_slots):
             m.addAction(a)
         m = bar.addMenu("&Plan")
@@ -466,6 +485,50 @@ class MainWindow(QMainWindow):
                 None: f"Clear pin of {job.name} on {machine.name}"}[kind]
         self.doc.undo_stack.push(SetPin(self.doc, row, col, kind, text))
 
+    def on_add_job(self) -> None:
+        name, ok = QInputDialog.getText(self, "Add job", "Name of the new job (unique):")
+        if ok:
+            self.add_job(name)
+
+    def add_job(self, name: str) -> bool:
+        """Append a waiting job (every machine 'cannot run' until values are typed in)."""
+        name = name.strip()
+        if not name or name in self.doc.shop.job_names():
+            self.show_warning(f"job name {name!r} is empty or already used")
+            return False
+        shop = snapshot(self.doc.shop)
+        shop.jobs.append(Job(id=_new_id("J", [j.id for j in shop.jobs]), name=name))
+        self.doc.undo_stack.push(ReplaceShop(self.doc, shop, f"Add job {name}"))
+        self.view.setCurrentIndex(self.model.index(self.doc.n_jobs() - 1, FIRST_MACHINE_COL))
+        self.statusBar().showMessage(f"Added {name}: type its values; Ctrl+R if it is a rush job", 8000)
+        return True
+
+    def on_add_machine(self) -> None:
+        name, ok = QInputDialog.getText(self, "Add machine", "Name of the new machine (unique):")
+        if ok:
+            self.add_machine(name)
+
+    def add_machine(self, name: str) -> bool:
+        name = name.strip()
+        if not name or name in self.doc.shop.machine_names():
+            self.show_warning(f"machine name {name!r} is empty or already used")
+            return False
+        shop = snapshot(self.doc.shop)
+        shop.machines.append(Machine(id=_new_id("M", [m.id for m in shop.machines]), name=name))
+        self.doc.undo_stack.push(ReplaceShop(self.doc, shop, f"Add machine {name}"))
+        return True
+
+    def on_job_done(self) -> None:
+        row = self.view.current_row()
+        if row is None:
+            return
+        job = self.doc.job_at(row)
+        if job.state == DONE:
+            return
+        self.doc.undo_stack.push(SetJobsState(self.doc, [(row, {"state": DONE, "machine": None,
+                                                                "since": None})],
+                                              f"{job.name} done"))
+
     def on_penalty(self) -> None:
         row = self.view.current_row()
         if row is None:
@@ -592,7 +655,7 @@ class MainWindow(QMainWindow):
         menu = QMenu(self)
         for a in (self.act_pin, self.act_forbid, self.act_unpin, self.act_cannot, None,
                   self.act_copy, self.act_copy_names, self.act_paste, None,
-                  self.act_rush, self.act_penalty, None, self.act_down, self.act_up, self.act_slots):
+                  self.act_rush, self.act_penalty, self.act_done, None, self.act_down, self.act_up, self.act_slots):
             menu.addSeparator() if a is None else menu.addAction(a)
         menu.popup(pos)
 
@@ -609,4 +672,5 @@ class MainWindow(QMainWindow):
         menu = QMenu(self)
         menu.addAction(self.act_rush)
         menu.addAction(self.act_penalty)
+        menu.addAction(self.act_done)
         menu.popup(pos)
