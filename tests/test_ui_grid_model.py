@@ -7,7 +7,7 @@ import pytest
 from PySide6.QtCore import QModelIndex, Qt
 
 from dispatcher.io.shopfile import load_shop
-from dispatcher.shop import MUST, MUST_NOT, solve_shop
+from dispatcher.shop import MUST_NOT, solve_shop
 from dispatcher.ui.clipboard import PasteError, copy_block, paste_changes
 from dispatcher.ui.document import ShopDocument
 from dispatcher.ui.grid_model import (

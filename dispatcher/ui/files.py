@@ -17,7 +17,7 @@ from pathlib import Path
 from PySide6.QtCore import QObject, QRunnable, QSettings, QStandardPaths, QThreadPool, QTimer, Signal
 
 from dispatcher.io.grid import GRID_SUFFIXES, GridFileError, read_grid
-from dispatcher.io.shopfile import SHOP_SUFFIX, ShopFileError, load_shop, save_shop
+from dispatcher.io.shopfile import SHOP_SUFFIX, load_shop, save_shop
 from dispatcher.io.spreadsheet import export_grid, export_plan, import_grid_file
 from dispatcher.shop import Shop, ShopError, shop_from_grid
 from dispatcher.ui.document import ShopDocument

@@ -8,62 +8,28 @@ edits, and re-solves in the background after each edit.
 from __future__ import annotations
 
 import os
-from datetime import datetime, timezone
 from pathlib import Path
 
-from PySide6.QtCore import QSettings, Qt, QTimer, Signal
-from PySide6.QtGui import QAction, QActionGroup, QCloseEvent, QGuiApplication, QKeySequence
-from PySide6.QtWidgets import (
-    QDockWidget,
-    QFileDialog,
-    QInputDialog,
-    QLabel,
-    QMainWindow,
-    QMenu,
-    QTabWidget,
-    QWidget,
-)
+from PySide6.QtCore import QSettings, Qt, Signal
+from PySide6.QtGui import QAction, QActionGroup, QCloseEvent, QKeySequence
+from PySide6.QtWidgets import QDockWidget, QFileDialog, QLabel, QMainWindow, QMenu, QTabWidget, QWidget
 
-from dispatcher.history import HistoryError, HistoryInputError, HistoryStore
-from dispatcher.io.shopfile import SHOP_SUFFIX, shop_to_dict
-from dispatcher.shop import DONE, DOWN, MAINTENANCE, MUST, MUST_NOT, UP, Job, Machine, Plan, Shop
+from dispatcher.history import HistoryStore
+from dispatcher.io.shopfile import SHOP_SUFFIX
+from dispatcher.shop import MUST, MUST_NOT, Plan, Shop
+from dispatcher.shop.fill import ShiftFill
 from dispatcher.ui import palette
-from dispatcher.ui.clipboard import PasteError, copy_block, paste_changes
-from dispatcher.ui.decision import (
-    EVENT_CONFIRM,
-    EVENT_DOWN,
-    EVENT_RUSH,
-    EVENT_UP,
-    DecisionDialog,
-    Proposal,
-    propose,
-)
+from dispatcher.ui.decision import EVENT_DOWN, EVENT_UP, DecisionDialog
 from dispatcher.ui.document import ShopDocument
-from dispatcher.ui.edits import (
-    ReplaceShop,
-    SetJobField,
-    SetJobsState,
-    SetMachineFields,
-    SetPin,
-    SetPlanInForce,
-    SetValues,
-)
 from dispatcher.ui.files import FileController
 from dispatcher.ui.grid_model import COL_PLAN, FIRST_MACHINE_COL, GridModel
 from dispatcher.ui.grid_view import GridView
 from dispatcher.ui.messages import Messenger
 from dispatcher.ui.nonefix import keep_none_alive
 from dispatcher.ui.plan_panel import PlanPanel
-from dispatcher.shop.fill import ShiftFill
-from dispatcher.ui.solving import (
-    MODE_ROUND,
-    MODE_SHIFT,
-    MODES,
-    SolveOutcome,
-    plan_in_force_ids,
-    snapshot,
-    solve_outcome,
-)
+from dispatcher.ui.solving import MODE_ROUND, MODE_SHIFT, MODES, SolveOutcome, snapshot, solve_outcome
+from dispatcher.ui.window_decisions import DecisionFlowsMixin
+from dispatcher.ui.window_edits import GridEditsMixin
 from dispatcher.ui.worker import BackgroundRunner
 
 APP_TITLE = "Dispatcher"
@@ -71,16 +37,7 @@ FILE_FILTER = f"Shop documents (*{SHOP_SUFFIX});;Grid files (*.csv *.tsv *.txt *
 GRID_FILTER = "Grid files (*.csv *.tsv *.txt *.xlsx)"
 
 
-def _new_id(prefix: str, taken: list[str]) -> str:
-    """The first ``prefix<n>`` not in ``taken``."""
-    used = set(taken)
-    n = len(used) + 1
-    while f"{prefix}{n}" in used:
-        n += 1
-    return f"{prefix}{n}"
-
-
-class MainWindow(QMainWindow):
+class MainWindow(GridEditsMixin, DecisionFlowsMixin, QMainWindow):
     """The app window. ``plan_shown(plan)`` after each fresh plan; ``warning(str)`` for
     refused input (also shown in the status bar)."""
 
@@ -437,218 +394,6 @@ class MainWindow(QMainWindow):
         self.files.shutdown()
         self.files.discard_autosave()
         event.accept()
-
-    # ---- grid edits ---------------------------------------------------------------------------
-    def on_copy(self, with_names: bool = False) -> None:
-        rows, cols = self.view.selected_block()
-        if rows and cols:
-            QGuiApplication.clipboard().setText(copy_block(self.doc.shop, rows, cols, with_names))
-            self.statusBar().showMessage(f"Copied {len(rows)} x {len(cols)} cells", 4000)
-
-    def paste_text(self, text: str) -> bool:
-        """Paste a tab-separated block at the current cell (one undoable edit)."""
-        cell = self.view.current_cell() or (0, 0)
-        if not self.doc.n_jobs() or not self.doc.n_machines():
-            self.show_warning("nothing to paste into: the shop has no jobs or machines")
-            return False
-        try:
-            changes = paste_changes(text, self.doc.shop, *cell)
-        except PasteError as exc:
-            self.show_warning(str(exc))
-            return False
-        changes = [c for c in changes if self.doc.value_at(c[0], c[1]) != c[2]]
-        if changes:
-            self.doc.undo_stack.push(SetValues(self.doc, changes, f"Paste {len(changes)} cells"))
-        self.statusBar().showMessage(f"Pasted; {len(changes)} cells changed", 4000)
-        return True
-
-    def on_paste(self) -> None:
-        self.paste_text(QGuiApplication.clipboard().text())
-
-    def on_cannot_run(self) -> None:
-        rows, cols = self.view.selected_block()
-        changes = [(r, c, None) for r in rows for c in cols if self.doc.value_at(r, c) is not None]
-        if changes:
-            self.doc.undo_stack.push(SetValues(self.doc, changes, f"Mark {len(changes)} cells cannot run"))
-
-    def on_pin(self, kind: str | None) -> None:
-        cell = self.view.current_cell()
-        if cell is None:
-            self.show_warning("choose a cell in a machine column first")
-            return
-        row, col = cell
-        job, machine = self.doc.job_at(row), self.doc.machine_at(col)
-        if self.doc.pin_at(row, col) == kind:
-            return
-        text = {MUST: f"Pin {job.name} to {machine.name}",
-                MUST_NOT: f"Forbid {job.name} on {machine.name}",
-                None: f"Clear pin of {job.name} on {machine.name}"}[kind]
-        self.doc.undo_stack.push(SetPin(self.doc, row, col, kind, text))
-
-    def on_add_job(self) -> None:
-        name, ok = QInputDialog.getText(self, "Add job", "Name of the new job (unique):")
-        if ok:
-            self.add_job(name)
-
-    def add_job(self, name: str) -> bool:
-        """Append a waiting job (every machine 'cannot run' until values are typed in)."""
-        name = name.strip()
-        if not name or name in self.doc.shop.job_names():
-            self.show_warning(f"job name {name!r} is empty or already used")
-            return False
-        shop = snapshot(self.doc.shop)
-        shop.jobs.append(Job(id=_new_id("J", [j.id for j in shop.jobs]), name=name))
-        self.doc.undo_stack.push(ReplaceShop(self.doc, shop, f"Add job {name}"))
-        self.view.setCurrentIndex(self.model.index(self.doc.n_jobs() - 1, FIRST_MACHINE_COL))
-        self.statusBar().showMessage(f"Added {name}: type its values; Ctrl+R if it is a rush job", 8000)
-        return True
-
-    def on_add_machine(self) -> None:
-        name, ok = QInputDialog.getText(self, "Add machine", "Name of the new machine (unique):")
-        if ok:
-            self.add_machine(name)
-
-    def add_machine(self, name: str) -> bool:
-        name = name.strip()
-        if not name or name in self.doc.shop.machine_names():
-            self.show_warning(f"machine name {name!r} is empty or already used")
-            return False
-        shop = snapshot(self.doc.shop)
-        shop.machines.append(Machine(id=_new_id("M", [m.id for m in shop.machines]), name=name))
-        self.doc.undo_stack.push(ReplaceShop(self.doc, shop, f"Add machine {name}"))
-        return True
-
-    def on_job_done(self) -> None:
-        row = self.view.current_row()
-        if row is None:
-            return
-        job = self.doc.job_at(row)
-        if job.state == DONE:
-            return
-        self.doc.undo_stack.push(SetJobsState(self.doc, [(row, {"state": DONE, "machine": None,
-                                                                "since": None})],
-                                              f"{job.name} done"))
-
-    def on_penalty(self) -> None:
-        row = self.view.current_row()
-        if row is None:
-            return
-        job = self.doc.job_at(row)
-        value, ok = QInputDialog.getDouble(self, "Wait penalty", f"Cost of leaving {job.name} waiting:",
-                                           job.wait_penalty, 0.0, 1e12, 2)
-        if ok and value != job.wait_penalty:
-            self.doc.undo_stack.push(SetJobField(self.doc, row, "wait_penalty", value,
-                                                 f"Wait penalty of {job.name}"))
-
-    def on_slots(self) -> None:
-        col = self.view.current_machine()
-        if col is None:
-            self.show_warning("choose a cell in a machine column first")
-            return
-        m = self.doc.machine_at(col)
-        value, ok = QInputDialog.getInt(self, "Slots", f"Jobs {m.name} takes per round:", m.slots, 1, 100)
-        if ok:
-            self.set_slots(col, value)
-
-    def set_slots(self, col: int, slots: int) -> None:
-        m = self.doc.machine_at(col)
-        if slots != m.slots:
-            self.doc.undo_stack.push(SetMachineFields(self.doc, col, {"slots": slots},
-                                                      f"{m.name} takes {slots} job(s)"))
-
-    def on_maintenance(self) -> None:
-        col = self.view.current_machine()
-        if col is None:
-            return
-        m = self.doc.machine_at(col)
-        state = UP if m.state == MAINTENANCE else MAINTENANCE
-        self.doc.undo_stack.push(SetMachineFields(
-            self.doc, col, {"state": state, "state_changed": datetime.now(timezone.utc)},
-            f"{m.name}: {state}"))
-
-    # ---- decision flows -------------------------------------------------------------------------
-    def plan_in_force(self) -> tuple[dict | None, str]:
-        """The plan in force (JSON) and how to name it: the latest recorded decision of this
-        shop when the shop has one in force, else the plan shown (not yet recorded)."""
-        try:
-            latest = self.history.latest(self.doc.shop.name) if self.doc.shop.plan_in_force else None
-        except HistoryError:
-            latest = None
-        if latest is not None and latest.plan:
-            return latest.plan, f"the plan in force (decision #{latest.id})"
-        plan = self.plan.to_json() if self.plan is not None else None
-        return plan, "the plan shown (no decision recorded yet)"
-
-    def on_machine_event(self, event: str, col: int | None = None) -> DecisionDialog | None:
-        col = self.view.current_machine() if col is None else col
-        if col is None:
-            self.show_warning("choose a cell in a machine column first (or use the column's menu)")
-            return None
-        m = self.doc.machine_at(col)
-        if event == EVENT_DOWN and m.state == DOWN:
-            self.show_warning(f"{m.name} is already down")
-            return None
-        if event == EVENT_UP and m.state == UP:
-            self.show_warning(f"{m.name} is already up")
-            return None
-        return self._open_decision(self.doc.shop, event, machine=col)
-
-    def on_rush(self, row: int | None = None) -> DecisionDialog | None:
-        row = self.view.current_row() if row is None or row is False else row
-        if row is None:
-            return None
-        if self.doc.job_at(row).rush:
-            self.show_warning(f"{self.doc.job_at(row).name} is already a rush job")
-            return None
-        return self._open_decision(self.doc.shop, EVENT_RUSH, job=row)
-
-    def on_confirm_plan(self) -> DecisionDialog | None:
-        return self._open_decision(self.doc.shop, EVENT_CONFIRM)
-
-    def _open_decision(self, shop: Shop, event: str, **where) -> DecisionDialog:
-        before, label = self.plan_in_force()
-        proposal = propose(shop, event, self.objective, before, mode=self.mode, **where)
-        dialog = DecisionDialog(proposal, self.doc.shop.unit.label(),
-                                str(self.settings.value("history/supervisor", "")), self,
-                                before=before, before_label=label)
-        dialog.confirmed.connect(self.apply_decision)
-        dialog.setAttribute(Qt.WidgetAttribute.WA_DeleteOnClose)
-        self.decision_dialog = dialog
-        dialog.open()
-        return dialog
-
-    def apply_decision(self, proposal: Proposal, by: str, reason: str, note: str) -> int | None:
-        """Record the decision first; only if that worked, change the document (undoable)."""
-        recorded_shop = proposal.shop
-        recorded_shop.plan_in_force = plan_in_force_ids(proposal.plan, recorded_shop)
-        try:
-            number = self.history.record(shop_to_dict(recorded_shop), proposal.plan.to_json(),
-                                         by=by, reason=reason, note=note)
-        except (HistoryError, HistoryInputError, OSError) as exc:
-            self.messenger.error("Decision not recorded", f"{exc}\n\nThe plan in force is unchanged.")
-            return None
-        self.settings.setValue("history/supervisor", by)
-        stack = self.doc.undo_stack
-        stack.beginMacro(f"{proposal.title} (decision #{number})")
-        if proposal.machine is not None and proposal.event in (EVENT_DOWN, EVENT_UP):
-            m = recorded_shop.machines[proposal.machine]
-            stack.push(SetMachineFields(self.doc, proposal.machine,
-                                        {"state": m.state, "state_note": note,
-                                         "state_changed": datetime.now(timezone.utc)},
-                                        proposal.title))
-        if proposal.job_changes:
-            stack.push(SetJobsState(self.doc, proposal.job_changes, proposal.title))
-        stack.push(SetPlanInForce(self.doc, recorded_shop.plan_in_force, "plan in force"))
-        stack.endMacro()
-        # Show the plan just put in force (not a fresh solve of the same shop, which would
-        # ignore the move penalties the re-dispatch paid) until the next edit.
-        self.runner.discard()
-        self._on_solved(SolveOutcome(self.objective, proposal.plan, "", False, 0.0))
-        self.plan_panel.show_note(f"Plan in force: decision #{number} ({proposal.title}). "
-                                  "Any edit re-solves from scratch.")
-        self.statusBar().showMessage(f"Decision #{number} recorded: {proposal.title}", 8000)
-        self.decision_recorded.emit(number)
-        return number
 
     # ---- context menus ---------------------------------------------------------------------------
     def _cell_menu(self, pos) -> None:

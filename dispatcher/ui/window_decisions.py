@@ -1,0 +1,115 @@
+"""Decision flows of the main window: machine down or back up, rush job, put a plan in force.
+
+A mixin of :class:`dispatcher.ui.main_window.MainWindow`. The proposal comes from the core
+(:func:`dispatcher.ui.decision.propose`); confirming records the decision in the history
+first and only then changes the document, as one undoable step.
+"""
+
+from __future__ import annotations
+
+from datetime import datetime, timezone
+
+from PySide6.QtCore import Qt
+
+from dispatcher.history import HistoryError, HistoryInputError
+from dispatcher.io.shopfile import shop_to_dict
+from dispatcher.shop import DOWN, UP, Shop
+from dispatcher.ui.decision import (
+    EVENT_CONFIRM,
+    EVENT_DOWN,
+    EVENT_RUSH,
+    EVENT_UP,
+    DecisionDialog,
+    Proposal,
+    propose,
+)
+from dispatcher.ui.edits import SetJobsState, SetMachineFields, SetPlanInForce
+from dispatcher.ui.solving import SolveOutcome, plan_in_force_ids
+
+
+class DecisionFlowsMixin:
+    """Decision actions (needs ``doc``, ``history``, ``plan``, ``runner``, ``settings``...)."""
+
+    def plan_in_force(self) -> tuple[dict | None, str]:
+        """The plan in force (JSON) and how to name it: the latest recorded decision of this
+        shop when the shop has one in force, else the plan shown (not yet recorded)."""
+        try:
+            latest = self.history.latest(self.doc.shop.name) if self.doc.shop.plan_in_force else None
+        except HistoryError:
+            latest = None
+        if latest is not None and latest.plan:
+            return latest.plan, f"the plan in force (decision #{latest.id})"
+        plan = self.plan.to_json() if self.plan is not None else None
+        return plan, "the plan shown (no decision recorded yet)"
+
+    def on_machine_event(self, event: str, col: int | None = None) -> DecisionDialog | None:
+        col = self.view.current_machine() if col is None else col
+        if col is None:
+            self.show_warning("choose a cell in a machine column first (or use the column's menu)")
+            return None
+        m = self.doc.machine_at(col)
+        if event == EVENT_DOWN and m.state == DOWN:
+            self.show_warning(f"{m.name} is already down")
+            return None
+        if event == EVENT_UP and m.state == UP:
+            self.show_warning(f"{m.name} is already up")
+            return None
+        return self._open_decision(self.doc.shop, event, machine=col)
+
+    def on_rush(self, row: int | None = None) -> DecisionDialog | None:
+        row = self.view.current_row() if row is None or row is False else row
+        if row is None:
+            return None
+        if self.doc.job_at(row).rush:
+            self.show_warning(f"{self.doc.job_at(row).name} is already a rush job")
+            return None
+        return self._open_decision(self.doc.shop, EVENT_RUSH, job=row)
+
+    def on_confirm_plan(self) -> DecisionDialog | None:
+        return self._open_decision(self.doc.shop, EVENT_CONFIRM)
+
+    def _open_decision(self, shop: Shop, event: str, **where) -> DecisionDialog:
+        before, label = self.plan_in_force()
+        proposal = propose(shop, event, self.objective, before, mode=self.mode, **where)
+        dialog = DecisionDialog(proposal, self.doc.shop.unit.label(),
+                                str(self.settings.value("history/supervisor", "")), self,
+                                before=before, before_label=label)
+        dialog.confirmed.connect(self.apply_decision)
+        dialog.setAttribute(Qt.WidgetAttribute.WA_DeleteOnClose)
+        self.decision_dialog = dialog
+        dialog.open()
+        return dialog
+
+    def apply_decision(self, proposal: Proposal, by: str, reason: str, note: str) -> int | None:
+        """Record the decision first; only if that worked, change the document (undoable)."""
+        recorded_shop = proposal.shop
+        recorded_shop.plan_in_force = plan_in_force_ids(proposal.plan, recorded_shop)
+        try:
+            number = self.history.record(shop_to_dict(recorded_shop), proposal.plan.to_json(),
+                                         by=by, reason=reason, note=note)
+        except (HistoryError, HistoryInputError, OSError) as exc:
+            self.messenger.error("Decision not recorded", f"{exc}\n\nThe plan in force is unchanged.")
+            return None
+        self.settings.setValue("history/supervisor", by)
+        stack = self.doc.undo_stack
+        stack.beginMacro(f"{proposal.title} (decision #{number})")
+        if proposal.machine is not None and proposal.event in (EVENT_DOWN, EVENT_UP):
+            m = recorded_shop.machines[proposal.machine]
+            stack.push(SetMachineFields(self.doc, proposal.machine,
+                                        {"state": m.state, "state_note": note,
+                                         "state_changed": datetime.now(timezone.utc)},
+                                        proposal.title))
+        if proposal.job_changes:
+            stack.push(SetJobsState(self.doc, proposal.job_changes, proposal.title))
+        stack.push(SetPlanInForce(self.doc, recorded_shop.plan_in_force, "plan in force"))
+        stack.endMacro()
+        # Show the plan just put in force (not a fresh solve of the same shop, which would
+        # ignore the move penalties the re-dispatch paid) until the next edit.
+        self.runner.discard()
+        self._on_solved(SolveOutcome(self.objective, proposal.plan, "", False, 0.0))
+        self.plan_panel.show_note(f"Plan in force: decision #{number} ({proposal.title}). "
+                                  "Any edit re-solves from scratch.")
+        self.statusBar().showMessage(f"Decision #{number} recorded: {proposal.title}", 8000)
+        self.decision_recorded.emit(number)
+        return number
+

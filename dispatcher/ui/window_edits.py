@@ -1,0 +1,159 @@
+"""Grid edits of the main window: copy, paste, cannot-run, pins, jobs and machines.
+
+A mixin of :class:`dispatcher.ui.main_window.MainWindow`: every method turns a user action
+into one undoable edit on the document (see :mod:`dispatcher.ui.edits`).
+"""
+
+from __future__ import annotations
+
+from datetime import datetime, timezone
+
+from PySide6.QtGui import QGuiApplication
+from PySide6.QtWidgets import QInputDialog
+
+from dispatcher.shop import DONE, MAINTENANCE, MUST, MUST_NOT, UP, Job, Machine
+from dispatcher.ui.clipboard import PasteError, copy_block, paste_changes
+from dispatcher.ui.edits import ReplaceShop, SetJobField, SetJobsState, SetMachineFields, SetPin, SetValues
+from dispatcher.ui.grid_model import FIRST_MACHINE_COL
+from dispatcher.ui.solving import snapshot
+
+
+def _new_id(prefix: str, taken: list[str]) -> str:
+    """The first ``prefix<n>`` not in ``taken``."""
+    used = set(taken)
+    n = len(used) + 1
+    while f"{prefix}{n}" in used:
+        n += 1
+    return f"{prefix}{n}"
+
+
+class GridEditsMixin:
+    """Edit actions (needs ``doc``, ``view``, ``model``, ``show_warning``, ``statusBar``)."""
+
+    def on_copy(self, with_names: bool = False) -> None:
+        rows, cols = self.view.selected_block()
+        if rows and cols:
+            QGuiApplication.clipboard().setText(copy_block(self.doc.shop, rows, cols, with_names))
+            self.statusBar().showMessage(f"Copied {len(rows)} x {len(cols)} cells", 4000)
+
+    def paste_text(self, text: str) -> bool:
+        """Paste a tab-separated block at the current cell (one undoable edit)."""
+        cell = self.view.current_cell() or (0, 0)
+        if not self.doc.n_jobs() or not self.doc.n_machines():
+            self.show_warning("nothing to paste into: the shop has no jobs or machines")
+            return False
+        try:
+            changes = paste_changes(text, self.doc.shop, *cell)
+        except PasteError as exc:
+            self.show_warning(str(exc))
+            return False
+        changes = [c for c in changes if self.doc.value_at(c[0], c[1]) != c[2]]
+        if changes:
+            self.doc.undo_stack.push(SetValues(self.doc, changes, f"Paste {len(changes)} cells"))
+        self.statusBar().showMessage(f"Pasted; {len(changes)} cells changed", 4000)
+        return True
+
+    def on_paste(self) -> None:
+        self.paste_text(QGuiApplication.clipboard().text())
+
+    def on_cannot_run(self) -> None:
+        rows, cols = self.view.selected_block()
+        changes = [(r, c, None) for r in rows for c in cols if self.doc.value_at(r, c) is not None]
+        if changes:
+            self.doc.undo_stack.push(SetValues(self.doc, changes, f"Mark {len(changes)} cells cannot run"))
+
+    def on_pin(self, kind: str | None) -> None:
+        cell = self.view.current_cell()
+        if cell is None:
+            self.show_warning("choose a cell in a machine column first")
+            return
+        row, col = cell
+        job, machine = self.doc.job_at(row), self.doc.machine_at(col)
+        if self.doc.pin_at(row, col) == kind:
+            return
+        text = {MUST: f"Pin {job.name} to {machine.name}",
+                MUST_NOT: f"Forbid {job.name} on {machine.name}",
+                None: f"Clear pin of {job.name} on {machine.name}"}[kind]
+        self.doc.undo_stack.push(SetPin(self.doc, row, col, kind, text))
+
+    def on_add_job(self) -> None:
+        name, ok = QInputDialog.getText(self, "Add job", "Name of the new job (unique):")
+        if ok:
+            self.add_job(name)
+
+    def add_job(self, name: str) -> bool:
+        """Append a waiting job (every machine 'cannot run' until values are typed in)."""
+        name = name.strip()
+        if not name or name in self.doc.shop.job_names():
+            self.show_warning(f"job name {name!r} is empty or already used")
+            return False
+        shop = snapshot(self.doc.shop)
+        shop.jobs.append(Job(id=_new_id("J", [j.id for j in shop.jobs]), name=name))
+        self.doc.undo_stack.push(ReplaceShop(self.doc, shop, f"Add job {name}"))
+        self.view.setCurrentIndex(self.model.index(self.doc.n_jobs() - 1, FIRST_MACHINE_COL))
+        self.statusBar().showMessage(f"Added {name}: type its values; Ctrl+R if it is a rush job", 8000)
+        return True
+
+    def on_add_machine(self) -> None:
+        name, ok = QInputDialog.getText(self, "Add machine", "Name of the new machine (unique):")
+        if ok:
+            self.add_machine(name)
+
+    def add_machine(self, name: str) -> bool:
+        name = name.strip()
+        if not name or name in self.doc.shop.machine_names():
+            self.show_warning(f"machine name {name!r} is empty or already used")
+            return False
+        shop = snapshot(self.doc.shop)
+        shop.machines.append(Machine(id=_new_id("M", [m.id for m in shop.machines]), name=name))
+        self.doc.undo_stack.push(ReplaceShop(self.doc, shop, f"Add machine {name}"))
+        return True
+
+    def on_job_done(self) -> None:
+        row = self.view.current_row()
+        if row is None:
+            return
+        job = self.doc.job_at(row)
+        if job.state == DONE:
+            return
+        self.doc.undo_stack.push(SetJobsState(self.doc, [(row, {"state": DONE, "machine": None,
+                                                                "since": None})],
+                                              f"{job.name} done"))
+
+    def on_penalty(self) -> None:
+        row = self.view.current_row()
+        if row is None:
+            return
+        job = self.doc.job_at(row)
+        value, ok = QInputDialog.getDouble(self, "Wait penalty", f"Cost of leaving {job.name} waiting:",
+                                           job.wait_penalty, 0.0, 1e12, 2)
+        if ok and value != job.wait_penalty:
+            self.doc.undo_stack.push(SetJobField(self.doc, row, "wait_penalty", value,
+                                                 f"Wait penalty of {job.name}"))
+
+    def on_slots(self) -> None:
+        col = self.view.current_machine()
+        if col is None:
+            self.show_warning("choose a cell in a machine column first")
+            return
+        m = self.doc.machine_at(col)
+        value, ok = QInputDialog.getInt(self, "Slots", f"Jobs {m.name} takes per round:", m.slots, 1, 100)
+        if ok:
+            self.set_slots(col, value)
+
+    def set_slots(self, col: int, slots: int) -> None:
+        m = self.doc.machine_at(col)
+        if slots != m.slots:
+            self.doc.undo_stack.push(SetMachineFields(self.doc, col, {"slots": slots},
+                                                      f"{m.name} takes {slots} job(s)"))
+
+    def on_maintenance(self) -> None:
+        col = self.view.current_machine()
+        if col is None:
+            return
+        m = self.doc.machine_at(col)
+        state = UP if m.state == MAINTENANCE else MAINTENANCE
+        self.doc.undo_stack.push(SetMachineFields(
+            self.doc, col, {"state": state, "state_changed": datetime.now(timezone.utc)},
+            f"{m.name}: {state}"))
+
