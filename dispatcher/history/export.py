@@ -13,6 +13,8 @@ import os
 from pathlib import Path
 from typing import TYPE_CHECKING, Any
 
+from dispatcher.atomic import atomic_write
+
 from .errors import HistoryError
 
 if TYPE_CHECKING:
@@ -51,14 +53,8 @@ def export_csv(store: HistoryStore, target: str | os.PathLike, **filters: Any) -
     for column in [c for c in COLUMNS if not pd.api.types.is_numeric_dtype(frame[c])]:
         frame[column] = frame[column].map(_defuse)
     target = Path(target)
-    tmp = target.with_name(f".{target.name}.{os.getpid()}.partial")
     try:
-        frame.to_csv(tmp, index=False, encoding="utf-8")
-        os.replace(tmp, target)
+        atomic_write(target, lambda tmp: frame.to_csv(tmp, index=False, encoding="utf-8"))
     except OSError as exc:
-        try:
-            tmp.unlink()
-        except OSError:
-            pass
         raise HistoryError(f"{target}: cannot write the export: {exc.strerror or exc}") from None
     return len(frame)

@@ -22,6 +22,8 @@ from dataclasses import dataclass
 from datetime import datetime, timezone
 from pathlib import Path
 
+from dispatcher.atomic import fsync_file, fsync_folder
+
 from .errors import HistoryError
 
 #: "DSPH" as a big-endian 32-bit number: marks an SQLite file as a dispatcher history.
@@ -257,7 +259,7 @@ def create_history(path: Path, connect: Callable[[Path], sqlite3.Connection],
             conn.execute("COMMIT")
         finally:
             conn.close()
-        _fsync(tmp)
+        fsync_file(tmp)
         try:
             os.link(tmp, path)
         except FileExistsError:
@@ -265,7 +267,7 @@ def create_history(path: Path, connect: Callable[[Path], sqlite3.Connection],
         except OSError:
             if not path.exists():  # file systems without hard links
                 os.replace(tmp, path)
-        _fsync_dir(path.parent)
+        fsync_folder(path.parent)
     except sqlite3.Error as exc:
         raise store_error(path, exc, "creating the history") from None
     except OSError as exc:
@@ -301,7 +303,7 @@ def migrate(conn: sqlite3.Connection, path: Path, version: int,
             conn.backup(dest)
         finally:
             dest.close()
-        _fsync(copy)
+        fsync_file(copy)
     except (sqlite3.Error, OSError) as exc:
         raise HistoryError(f"{path}: could not write a backup to {copy} before upgrading the "
                            f"history ({exc}); nothing was changed") from None
@@ -314,26 +316,3 @@ def migrate(conn: sqlite3.Connection, path: Path, version: int,
         conn.execute("ROLLBACK")
         raise
     return copy
-
-
-def _fsync(path: Path) -> None:
-    fd = os.open(path, os.O_RDONLY)
-    try:
-        os.fsync(fd)
-    finally:
-        os.close(fd)
-
-
-def _fsync_dir(folder: Path) -> None:
-    if os.name != "posix":
-        return
-    try:
-        fd = os.open(folder, os.O_RDONLY)
-    except OSError:
-        return
-    try:
-        os.fsync(fd)
-    except OSError:
-        pass
-    finally:
-        os.close(fd)

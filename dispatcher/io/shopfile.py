@@ -16,11 +16,11 @@ from __future__ import annotations
 import json
 import math
 import os
-import tempfile
 from datetime import date, datetime, time
 from pathlib import Path
 from typing import Any
 
+from dispatcher.atomic import atomic_write_bytes
 from dispatcher.shop.model import (
     Job,
     Machine,
@@ -415,50 +415,8 @@ def save_shop(shop: Shop, path: str | os.PathLike, *, check: bool = True) -> Non
         if problems:
             raise ShopFileError(problems, source)
     text = dump_shop_text(shop).encode("utf-8")
-    folder = path.parent if str(path.parent) else Path(".")
-    tmp_name = None
     try:
-        fd, tmp_name = tempfile.mkstemp(prefix=f".{path.name}.", suffix=".tmp", dir=folder)
-        os.chmod(tmp_name, _file_mode(path))
-        with os.fdopen(fd, "wb") as fh:
-            fh.write(text)
-            fh.flush()
-            os.fsync(fh.fileno())
-        os.replace(tmp_name, path)
-        tmp_name = None
-        _fsync_folder(folder)
+        atomic_write_bytes(path, text)
     except OSError as exc:
         raise ShopFileError([Problem("", f"cannot save: {exc.strerror or exc}; the previous "
                                      "file (if any) is unchanged")], source) from None
-    finally:
-        if tmp_name is not None:
-            try:
-                os.unlink(tmp_name)
-            except OSError:
-                pass
-
-
-def _file_mode(path: Path) -> int:
-    """Keep an existing file's permissions; a new file gets the usual 0o666 minus umask."""
-    try:
-        return path.stat().st_mode & 0o777
-    except OSError:
-        mask = os.umask(0)
-        os.umask(mask)
-        return 0o666 & ~mask
-
-
-def _fsync_folder(folder: Path) -> None:
-    """Make the rename itself durable where the platform allows it (POSIX)."""
-    if os.name != "posix":
-        return
-    try:
-        fd = os.open(folder, os.O_RDONLY)
-    except OSError:
-        return
-    try:
-        os.fsync(fd)
-    except OSError:
-        pass
-    finally:
-        os.close(fd)

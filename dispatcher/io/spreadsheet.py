@@ -15,13 +15,13 @@ half-written.
 from __future__ import annotations
 
 import os
-import tempfile
 from dataclasses import dataclass, field
 from pathlib import Path
 
 import numpy as np
 import pandas as pd
 
+from dispatcher.atomic import atomic_write
 from dispatcher.io.grid import GridFileError, GridTable, parse_grid_text, read_grid
 from dispatcher.shop.model import Job, Machine, Shop, shop_from_grid
 from dispatcher.shop.plan import Plan, json_number
@@ -187,25 +187,11 @@ def _atomic_write(path: Path, write) -> None:
     if suffix not in EXPORT_SUFFIXES:
         raise ExportError(f"{path}: unsupported extension {path.suffix or '(none)'!r}; "
                           f"expected one of {', '.join(EXPORT_SUFFIXES)}")
-    folder = path.parent if str(path.parent) else Path(".")
-    tmp = None
     try:
-        fd, tmp = tempfile.mkstemp(prefix=f".{path.stem}.", suffix=suffix, dir=folder)
-        os.close(fd)
-        write(Path(tmp))
-        with open(tmp, "rb+") as fh:
-            os.fsync(fh.fileno())
-        os.replace(tmp, path)
-        tmp = None
+        atomic_write(path, write, suffix=suffix)
     except OSError as exc:
         raise ExportError(f"{path}: cannot write: {exc.strerror or exc}; any previous file is "
                           "unchanged") from None
-    finally:
-        if tmp is not None:
-            try:
-                os.unlink(tmp)
-            except OSError:
-                pass
 
 
 def export_grid(shop: Shop, path: str | os.PathLike) -> None:
