@@ -40,12 +40,16 @@ def run(path: str | None = None, history: str | None = None, on_error=None) -> i
     """
     app = make_application()
     from dispatcher.ui.main_window import MainWindow
+    from dispatcher.ui.messages import RecordingMessenger
 
-    window = MainWindow(history_path=history)
+    # The file named on the command line is opened without message boxes: a failure is
+    # reported on stderr (exit code 2) instead of waiting on a dialog.
+    window = MainWindow(history_path=history, messenger=RecordingMessenger())
+    opened = window.open_path(path) if path else True
     window.messenger = window.files.messenger = default_messenger(window)
     if not path:
         window.files.recover()
-    elif not window.open_path(path):
+    elif not opened:
         problem = window.last_problem or f"{path}: cannot be opened"
         (on_error or (lambda t: print(f"dispatcher: {t}", file=sys.stderr)))(problem)
         window.runner.cancel()
