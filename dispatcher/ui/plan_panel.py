@@ -209,8 +209,7 @@ class PlanPanel(QWidget):
         for job in plan.waiting_jobs[:MAX_LISTED]:
             reason = plan.waiting_reasons.get(job)
             if reason and reason.machines:
-                text = (f"{len(reason.competing_jobs)} jobs compete for "
-                        f"{len(reason.machines)} machine(s)")
+                text = f"{len(reason.competing_jobs)} jobs for {len(reason.machines)} machine(s)"
             elif reason:
                 text = "no available machine can run it"
             else:
