@@ -145,6 +145,10 @@ def test_wait_reasons_are_hall_witnesses(problem):
     if waiting.size == 0:
         assert result.witness() is None
         return
+    # The groups split the waiting jobs: each group's deficiency is its own waiting jobs.
+    groups = result.wait_groups()
+    assert sum(g.deficiency for g in groups) == waiting.size
+    assert all(witness_holds_by_hand(allowed, g.jobs, g.machines) for g in groups)
     overall = result.witness()
     assert overall.holds(allowed)
     assert witness_holds_by_hand(allowed, overall.jobs, overall.machines)
@@ -207,11 +211,14 @@ def test_wait_reason_by_hand_example():
     result = _solve_checked(np.array([[5, 0], [3, 0], [4, 0], [0, 2]]), allowed, None, None, "total")
     assert result.machine_of_job.tolist() == [-1, 0, -1, 1]  # cheapest of the three runs
     for job in (0, 2):
-        # The waiting job and the job holding machine 0: two jobs, one machine.
+        # Both waiting jobs and the job holding machine 0 compete for that one machine:
+        # three jobs, one machine, so two of them wait whatever the plan.
         w = result.wait_reason(job)
-        assert sorted(w.jobs.tolist()) == sorted([job, 1]) and w.machines.tolist() == [0]
-        assert w.deficiency == 1
+        assert sorted(w.jobs.tolist()) == [0, 1, 2] and w.machines.tolist() == [0]
+        assert w.deficiency == 2
         assert witness_holds_by_hand(allowed, w.jobs, w.machines)
+    # Job 3 competes with nobody, so it forms no group of its own.
+    assert len(result.wait_groups()) == 1
     overall = result.witness()
     assert sorted(overall.jobs.tolist()) == [0, 1, 2] and overall.machines.tolist() == [0]
     assert overall.deficiency == 2

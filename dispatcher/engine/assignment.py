@@ -24,7 +24,14 @@ import numpy as np
 from scipy.optimize import linear_sum_assignment
 
 from .certificate import Certificate, potentials_from_plan
-from .matching import HallWitness, alternating_reach, hall_witness, konig_cover, maximum_matching
+from .matching import (
+    HallWitness,
+    alternating_reach,
+    hall_witness,
+    hall_witness_groups,
+    konig_cover,
+    maximum_matching,
+)
 
 OBJECTIVES = ("total", "maximize", "bottleneck")
 
@@ -114,10 +121,25 @@ class DispatchResult:
         return hall_witness(self.allowed, self.machine_of_job)
 
     def wait_reason(self, job: int) -> HallWitness:
-        """Why ``job`` waits: the jobs it competes with and the machines they all can use."""
+        """Why ``job`` waits: the group of jobs it competes with and the machines they share.
+
+        The group holds every waiting job that competes for the same machines, so its
+        deficiency is the number of those jobs that must wait whatever the plan.
+        """
         if self.machine_of_job[job] >= 0:
             raise ValueError(f"job {job} is not waiting")
-        return hall_witness(self.allowed, self.machine_of_job, np.array([job]))
+        for group in self.wait_groups():
+            if job in group.jobs:
+                return group
+        raise AssertionError("a waiting job belongs to one group")  # pragma: no cover
+
+    def wait_groups(self) -> list[HallWitness]:
+        """Hall witnesses, one per group of waiting jobs competing for the same machines."""
+        cached = self.__dict__.get("_wait_groups")
+        if cached is None:
+            cached = hall_witness_groups(self.allowed, self.machine_of_job)
+            object.__setattr__(self, "_wait_groups", cached)
+        return cached
 
     def verify(self) -> bool:
         """Re-check everything the result claims: certificate, cover, totals."""

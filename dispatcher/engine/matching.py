@@ -12,8 +12,8 @@ from __future__ import annotations
 from dataclasses import dataclass
 
 import numpy as np
-from scipy.sparse import csr_matrix
-from scipy.sparse.csgraph import maximum_bipartite_matching
+from scipy.sparse import bmat, csr_matrix
+from scipy.sparse.csgraph import connected_components, maximum_bipartite_matching
 
 
 @dataclass(frozen=True)
@@ -94,6 +94,32 @@ def hall_witness(allowed: np.ndarray, machine_of_job: np.ndarray,
         return None
     jobs, machines = alternating_reach(allowed, machine_of_job, waiting)
     return HallWitness(np.flatnonzero(jobs), np.flatnonzero(machines))
+
+
+def hall_witness_groups(allowed: np.ndarray, machine_of_job: np.ndarray) -> list[HallWitness]:
+    """One Hall witness per group of waiting jobs that compete for the same machines.
+
+    The vertices reachable by alternating paths from all unmatched jobs of a *maximum*
+    matching split into connected groups (an allowed pair from a reached job always
+    leads to a reached machine, so groups never share a machine). Every reached machine
+    is matched to a reached job, so a group holding w waiting jobs has exactly w more jobs
+    than machines: its witness has deficiency w. Groups come in order of their first job.
+    """
+    waiting = np.flatnonzero(machine_of_job < 0)
+    if waiting.size == 0:
+        return []
+    jobs, machines = alternating_reach(allowed, machine_of_job, waiting)
+    job_idx, machine_idx = np.flatnonzero(jobs), np.flatnonzero(machines)
+    sub = csr_matrix(allowed[np.ix_(job_idx, machine_idx)].astype(np.int8))
+    graph = bmat([[None, sub], [sub.T, None]], format="csr") if sub.shape[1] else \
+        csr_matrix((len(job_idx), len(job_idx)), dtype=np.int8)
+    _, labels = connected_components(graph, directed=False)
+    job_labels = labels[:len(job_idx)]
+    machine_labels = labels[len(job_idx):]
+    groups = []
+    for label in dict.fromkeys(job_labels.tolist()):
+        groups.append(HallWitness(job_idx[job_labels == label], machine_idx[machine_labels == label]))
+    return groups
 
 
 def konig_cover(allowed: np.ndarray, machine_of_job: np.ndarray) -> tuple[np.ndarray, np.ndarray]:
