@@ -240,7 +240,8 @@ def test_existing_pdf_is_replaced_whole(app, tmp_path):
 
 @pytest.mark.skipif(sys.version_info >= (3, 12), reason="None is immortal from Python 3.12")
 def test_rendering_does_not_leak_references_to_none(app, tmp_path):
-    """Regression: PySide6 6.12 void methods drop a reference to None on CPython 3.11."""
+    """Regression: PySide6 6.12.0 void methods drop a reference to None on CPython 3.11
+    (why pyproject.toml keeps PySide6 below 6.12)."""
     write_pdf(make_content(3), tmp_path / "warm.pdf", paper="a4")
     before = sys.getrefcount(None)
     write_pdf(make_content(60), tmp_path / "big.pdf", paper="a4")

@@ -31,7 +31,6 @@ import datetime as dt
 import html
 import os
 import sys
-import tempfile
 from dataclasses import dataclass
 from pathlib import Path
 
@@ -48,6 +47,8 @@ from PySide6.QtGui import (
     QTextDocument,
 )
 
+from dispatcher.atomic import atomic_write
+
 from .content import (
     STATE_SHORT,
     STATE_WORDS,
@@ -57,7 +58,6 @@ from .content import (
     format_time,
     format_value,
 )
-from .refguard import none_refcount_guard
 
 __all__ = [
     "PAPER_SIZES",
@@ -388,23 +388,19 @@ def print_sheet(content: SheetContent, device: QPagedPaintDevice) -> int:
     caller owns the device; this function opens and ends its own ``QPainter``.
     """
     ensure_gui_application()
-    with none_refcount_guard():
-        body, m = _lay_out(content, device)
+    body, m = _lay_out(content, device)
     pages = body.pageCount()
     painter = QPainter()
-    with none_refcount_guard():
-        started = painter.begin(device)
+    started = painter.begin(device)
     if not started:
         raise SheetRenderError("could not start painting on the printer or file")
     try:
         for i in range(pages):
-            with none_refcount_guard():
-                if i:
-                    device.newPage()
-                _paint_page(painter, content, body, m, i, pages)
+            if i:
+                device.newPage()
+            _paint_page(painter, content, body, m, i, pages)
     finally:
-        with none_refcount_guard():
-            painter.end()
+        painter.end()
     return pages
 
 
@@ -468,28 +464,27 @@ def write_pdf(content: SheetContent, path: str | os.PathLike[str], paper: str | 
     if not folder.is_dir():
         raise SheetRenderError(f"{target}: folder {folder} does not exist")
     size = page_size_for(paper, locale)
-    fd, tmp_name = tempfile.mkstemp(prefix=".sheet-", suffix=".pdf.tmp", dir=folder)
-    os.close(fd)
-    try:
-        with none_refcount_guard():
-            writer = QPdfWriter(tmp_name)
-            writer.setResolution(resolution)
-            writer.setTitle(f"Dispatch sheet - {content.shop_name}")
-            writer.setCreator("dispatcher")
-            writer.setPageLayout(QPageLayout(size, QPageLayout.Orientation.Portrait,
-                                             QMarginsF(MARGIN_MM, MARGIN_MM, MARGIN_MM, MARGIN_MM),
-                                             QPageLayout.Unit.Millimeter))
+    pages = 0
+
+    def write(tmp: Path) -> None:
+        nonlocal pages
+        writer = QPdfWriter(str(tmp))
+        writer.setResolution(resolution)
+        writer.setTitle(f"Dispatch sheet - {content.shop_name}")
+        writer.setCreator("dispatcher")
+        writer.setPageLayout(QPageLayout(size, QPageLayout.Orientation.Portrait,
+                                         QMarginsF(MARGIN_MM, MARGIN_MM, MARGIN_MM, MARGIN_MM),
+                                         QPageLayout.Unit.Millimeter))
         try:
             pages = print_sheet(content, writer)
         except SheetRenderError as exc:
             raise SheetRenderError(f"{target}: {exc}") from None
         del writer  # flushes and closes the file
-        if os.path.getsize(tmp_name) == 0:
+        if tmp.stat().st_size == 0:
             raise SheetRenderError(f"{target}: the PDF could not be written")
-        os.replace(tmp_name, target)
+
+    try:
+        atomic_write(target, write, suffix=".pdf.tmp")
     except OSError as exc:
         raise SheetRenderError(f"{target}: cannot write the PDF ({exc.strerror or exc})") from None
-    finally:
-        if os.path.exists(tmp_name):
-            os.unlink(tmp_name)
     return pages

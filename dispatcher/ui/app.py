@@ -14,9 +14,6 @@ def make_application(argv: Sequence[str] | None = None):
     """The QApplication (created once), with names used by QSettings and autosave."""
     from PySide6.QtWidgets import QApplication
 
-    from dispatcher.ui.nonefix import keep_none_alive
-
-    keep_none_alive()
     app = QApplication.instance()
     if app is None:
         app = QApplication(list(argv or sys.argv[:1]))

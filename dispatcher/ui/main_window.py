@@ -25,7 +25,6 @@ from dispatcher.ui.files import FileController
 from dispatcher.ui.grid_model import COL_PLAN, FIRST_MACHINE_COL, GridModel
 from dispatcher.ui.grid_view import GridView
 from dispatcher.ui.messages import Messenger
-from dispatcher.ui.nonefix import keep_none_alive
 from dispatcher.ui.plan_panel import PlanPanel
 from dispatcher.ui.solving import MODE_ROUND, MODE_SHIFT, MODES, SolveOutcome, snapshot, solve_outcome
 from dispatcher.ui.window_decisions import DecisionFlowsMixin
@@ -48,7 +47,6 @@ class MainWindow(GridEditsMixin, DecisionFlowsMixin, QMainWindow):
     def __init__(self, shop: Shop | None = None, *, settings: QSettings | None = None,
                  messenger: Messenger | None = None, history_path: str | os.PathLike | None = None,
                  parent: QWidget | None = None):
-        keep_none_alive()
         super().__init__(parent)
         self.setObjectName("mainWindow")
         self.settings = settings or QSettings()
