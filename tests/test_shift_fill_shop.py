@@ -273,3 +273,18 @@ def test_cli_fill_shift_errors(press_file, capsys, extra, code, message):
 def test_cli_fill_shift_refuses_a_grid_file(samples, capsys):
     assert main(["solve", str(samples / "sheet_metal_grid.csv"), "--fill-shift"]) == 2
     assert "--fill-shift needs a shop document" in capsys.readouterr().err
+
+
+def test_cli_fill_shift_record_keeps_run_order_in_history(press_file, tmp_path, capsys):
+    # The recorded plan is the printed one: same jobs per machine, same run order.
+    from dispatcher.history import HistoryStore
+
+    history = tmp_path / "history.sqlite"
+    assert main(["solve", str(press_file), "--fill-shift", "--json", "--record",
+                 "--by", "R. Lind", "--reason", "shift-start", "--history", str(history)]) == 0
+    out = capsys.readouterr()
+    printed = json.loads(out.out)
+    assert "Recorded decision #1" in out.err
+    decision = HistoryStore(history).get(1)
+    assert decision.plan["machines"] == printed["machines"]
+    assert decision.plan["total"] == printed["total"]

@@ -11,9 +11,10 @@ from __future__ import annotations
 import argparse
 
 from dispatcher.commands.common import EXIT_INFEASIBLE, CliError, print_json
+from dispatcher.commands.history import record_decision
 from dispatcher.commands.shop_input import is_shop_document
 from dispatcher.engine import ShiftSearchError
-from dispatcher.io.shopfile import ShopFileError, load_shop
+from dispatcher.io.shopfile import ShopFileError, load_shop, shop_to_dict
 from dispatcher.shop import ShopError, ShopInfeasibleError
 from dispatcher.shop.fill import ShiftFill, fill_shop_shift
 
@@ -48,6 +49,7 @@ def run_fill_shift(args: argparse.Namespace) -> int:
         print_json(fill.to_json())
     else:
         print_fill(fill, shop.unit.label())
+    record_decision(args, shop_to_dict(shop), fill.to_json())
     return 0
 
 

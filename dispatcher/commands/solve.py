@@ -83,8 +83,6 @@ def run(args: argparse.Namespace) -> int:
     check_record_arguments(args)
     solve_extras.check_arguments(args, objective_of(args))
     if args.fill_shift:
-        if args.record:
-            raise CliError("--record cannot be combined with --fill-shift yet")
         return run_fill_shift(args)
     if is_shop_document(args.grid):
         shop = read_shop_arg(args.grid)
