@@ -77,6 +77,144 @@ def potentials_from_plan(cost: np.ndarray, col_of_row: np.ndarray) -> tuple[np.n
     return u, v
 
 
+class StructuredSquare:
+    """A dispatch problem's square cost matrix held as its parts, built densely only on demand.
+
+    Layout (the one :mod:`dispatcher.engine.assignment` builds): rows are the jobs then
+    ``n_idle`` idle rows, columns the machines then ``n_wait`` wait slots.
+
+    * job i, machine j: ``base[i, j]``, except ``inf`` on every ``blocked`` machine;
+    * job i, wait slot: ``wait[i]`` (``inf`` for a job that must run);
+    * idle row, machine: 0; idle row, wait slot: ``inf``.
+
+    Why: after a machine goes down the new square problem is the old one with one column
+    forbidden (plus an idle row and a wait slot); holding ``base`` by reference instead of
+    copying a 1000 x 1000 matrix is most of the time of a warm re-dispatch. ``base`` is
+    never written to. Indexing supports what the shortest path searches use: ``m[i]`` and
+    ``m[rows]`` (whole rows), ``m[rows, cols]`` (element-wise, numpy broadcasting, which
+    covers ``np.ix_``) and ``m[:, cols]``; :meth:`dense` gives the full matrix.
+    """
+
+    __slots__ = ("base", "blocked", "wait", "n_idle", "n_wait", "shape", "_is_blocked")
+
+    def __init__(self, base: np.ndarray, blocked: np.ndarray, wait: np.ndarray,
+                 n_idle: int, n_wait: int):
+        n_jobs, n_machines = base.shape
+        if wait.shape != (n_jobs,):
+            raise ValueError(f"wait needs {n_jobs} entries, got {wait.shape}")
+        if n_jobs + n_idle != n_machines + n_wait:
+            raise ValueError("rows (jobs + idle) and columns (machines + wait) differ")
+        self.base = base
+        self.blocked = np.unique(np.asarray(blocked, dtype=np.int64))
+        self.wait = wait
+        self.n_idle, self.n_wait = int(n_idle), int(n_wait)
+        size = n_jobs + self.n_idle
+        self.shape = (size, size)
+        self._is_blocked = np.zeros(n_machines, dtype=bool)
+        self._is_blocked[self.blocked] = True
+
+    def dense(self) -> np.ndarray:
+        """The full square matrix (a new array)."""
+        n_jobs, n_machines = self.base.shape
+        out = np.empty(self.shape)
+        out[:n_jobs, :n_machines] = self.base
+        if self.blocked.size:
+            out[:n_jobs, self.blocked] = np.inf
+        out[:n_jobs, n_machines:] = self.wait[:, None]
+        out[n_jobs:, :n_machines] = 0.0
+        out[n_jobs:, n_machines:] = np.inf
+        return out
+
+    def _row(self, i: int) -> np.ndarray:
+        n_jobs, n_machines = self.base.shape
+        out = np.empty(self.shape[1])
+        if i < n_jobs:
+            out[:n_machines] = self.base[i]
+            out[self.blocked] = np.inf
+            out[n_machines:] = self.wait[i]
+        else:
+            out[:n_machines] = 0.0
+            out[n_machines:] = np.inf
+        return out
+
+    def _rows(self, idx: np.ndarray) -> np.ndarray:
+        n_jobs, n_machines = self.base.shape
+        out = np.empty((idx.size, self.shape[1]))
+        if idx.size and idx.max() < n_jobs:
+            out[:, :n_machines] = self.base[idx]
+            out[:, n_machines:] = self.wait[idx][:, None]
+            if self.blocked.size:
+                out[:, self.blocked] = np.inf
+            return out
+        job = idx < n_jobs
+        jobs = np.flatnonzero(job)
+        out[jobs, :n_machines] = self.base[idx[jobs]]
+        out[jobs, n_machines:] = self.wait[idx[jobs]][:, None]
+        idle = np.flatnonzero(~job)
+        out[idle, :n_machines] = 0.0
+        out[idle, n_machines:] = np.inf
+        if self.blocked.size:
+            out[np.ix_(jobs, self.blocked)] = np.inf
+        return out
+
+    def _column(self, j: int) -> np.ndarray:
+        n_jobs, n_machines = self.base.shape
+        out = np.empty(self.shape[0])
+        if j < n_machines:
+            out[:n_jobs] = np.inf if self._is_blocked[j] else self.base[:, j]
+            out[n_jobs:] = 0.0
+        else:
+            out[:n_jobs] = self.wait
+            out[n_jobs:] = np.inf
+        return out
+
+    def _entries(self, rows: np.ndarray, cols: np.ndarray) -> np.ndarray:
+        n_jobs, n_machines = self.base.shape
+        if rows.ndim == 2 and rows.shape[1] == 1 and cols.ndim <= 2 and cols.size == cols.shape[-1]:
+            # Outer form (m[np.ix_(r, c)], m[:, c]): a few whole columns, then the rows.
+            r, c = rows[:, 0], cols.reshape(-1)
+            out = np.empty((r.size, c.size))
+            for k, j in enumerate(c.tolist()):
+                out[:, k] = self._column(j)[r]
+            return out
+        rows, cols = np.broadcast_arrays(rows, cols)
+        if rows.size and rows.max() < n_jobs and cols.max() < n_machines:
+            out = self.base[rows, cols]
+            if self.blocked.size:
+                out[self._is_blocked[cols]] = np.inf
+            return out
+        out = np.full(rows.shape, np.inf)
+        job, machine = rows < n_jobs, cols < n_machines
+        pick = job & machine
+        out[pick] = self.base[rows[pick], cols[pick]]
+        if self.blocked.size:
+            out[pick & self._is_blocked[np.where(machine, cols, 0)]] = np.inf
+        pick = job & ~machine
+        out[pick] = self.wait[rows[pick]]
+        out[~job & machine] = 0.0
+        return out
+
+    def __getitem__(self, key):
+        if isinstance(key, tuple):
+            rows, cols = key
+            if isinstance(rows, slice):
+                if isinstance(cols, slice) or np.ndim(cols) != 1:
+                    raise TypeError("m[:, cols] needs a 1-D array of columns")
+                rows = np.arange(self.shape[0])[rows][:, None]
+            elif isinstance(cols, slice):
+                raise TypeError("column slices are not supported")
+            rows, cols = np.asarray(rows, dtype=np.int64), np.asarray(cols, dtype=np.int64)
+            if rows.ndim == 0 and cols.ndim == 0:
+                return float(self._entries(rows[None], cols[None])[0])
+            return self._entries(rows, cols)
+        if isinstance(key, (int, np.integer)):
+            return self._row(int(key))
+        idx = np.asarray(key)
+        if idx.dtype == bool or idx.ndim != 1:
+            raise TypeError("rows are selected by an int or a 1-D array of ints")
+        return self._rows(idx.astype(np.int64, copy=False))
+
+
 @dataclass(frozen=True)
 class Certificate:
     """The square problem the engine actually solved, its plan and its dual potentials.
@@ -87,19 +225,32 @@ class Certificate:
     2. every finite entry has reduced cost ``cost - row_potential - col_potential >= -tol``
        and every planned entry has reduced cost within ``tol`` of 0.
 
-    Together these prove the plan is a minimum-cost perfect matching of ``cost``. How the
+    Together these prove the plan is a minimum-cost perfect matching of ``cost``.
+    ``square`` is that matrix as given, dense or as a :class:`StructuredSquare` (a warm
+    re-dispatch shares the previous matrix instead of copying it); ``cost`` is always the
+    dense array, built on first use. How the
     square matrix encodes the shop (dummy columns for waiting, dummy rows for idle
     machines, a fixed number of waiting slots so that the number of dispatched jobs is the
     maximum) is described by ``row_kind`` and ``col_kind``; the maximality of that number
     is proven separately by the Konig cover carried in the result.
     """
 
-    cost: np.ndarray
+    square: np.ndarray | StructuredSquare
     col_of_row: np.ndarray
     row_potential: np.ndarray
     col_potential: np.ndarray
     row_kind: np.ndarray = field(repr=False)
     col_kind: np.ndarray = field(repr=False)
+    _dense: np.ndarray | None = field(default=None, init=False, repr=False, compare=False)
+
+    @property
+    def cost(self) -> np.ndarray:
+        """The square matrix as a dense array (built once from a :class:`StructuredSquare`)."""
+        if isinstance(self.square, np.ndarray):
+            return self.square
+        if self._dense is None:
+            object.__setattr__(self, "_dense", self.square.dense())
+        return self._dense
 
     def reduced_costs(self) -> np.ndarray:
         """cost - u - v (inf on forbidden entries)."""

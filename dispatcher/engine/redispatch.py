@@ -39,10 +39,12 @@ from .assignment import (
     _plan_total,
     solve,
 )
-from .certificate import Certificate, CertificateError
+from .certificate import Certificate, CertificateError, StructuredSquare
 from .matching import konig_cover, maximum_matching
 
 __all__ = ["redispatch", "shortest_augmenting_path"]
+
+_CHUNK = 64  # rows per block in a search step (64 x 1000 floats = 512 kB)
 
 
 def shortest_augmenting_path(cost: np.ndarray, col_of_row: np.ndarray, row_of_col: np.ndarray,
@@ -127,9 +129,16 @@ def sap_search(cost: np.ndarray, col_of_row: np.ndarray, row_of_col: np.ndarray,
             if skip is not None and i == start:
                 red[skip] = np.inf
         else:
-            block = cost[rows] + negv[None, :]
-            block += (base - u[rows])[:, None]
-            red = block.min(axis=0)
+            # A tie layer can hold hundreds of rows: take them in small chunks so the
+            # temporaries stay in cache and reuse memory instead of fresh pages.
+            red = None
+            for at in range(0, rows.size, _CHUNK):
+                part = rows[at:at + _CHUNK]
+                block = cost[part]
+                block += negv
+                block += (base - u[part])[:, None]
+                least = block.min(axis=0)
+                red = least if red is None else np.minimum(red, least, out=red)
         np.minimum(cand, red, out=cand)
         j = int(cand.argmin())
         d = float(cand[j])
@@ -255,6 +264,35 @@ def _repair(cost: np.ndarray, col_of_row: np.ndarray, u: np.ndarray, v: np.ndarr
         if not shortest_augmenting_path(cost, col_of_row, row_of_col, u, v, int(r)):
             raise CertificateError("no perfect matching in the re-dispatch problem (a bug)")
         np.less(row_of_col, 0, out=free_cols)
+
+
+def _dense_square(cert: Certificate, size: int, n_old: int, n_keep: int, n_jobs: int,
+                  n_machines: int, survivors: np.ndarray, same_jobs: bool, add_cost: np.ndarray,
+                  down: np.ndarray, up_cols: list[int], up_cost: dict[int, np.ndarray],
+                  move: np.ndarray | None, before: np.ndarray,
+                  wait_cost: np.ndarray) -> np.ndarray:
+    """The new square matrix as a dense array (events that change rows or restore columns)."""
+    sq = np.empty((size, size))
+    real = sq[:n_jobs, :n_machines]
+    old_real = cert.cost[:n_old, :n_machines]
+    if n_keep == n_old:
+        real[:n_keep] = old_real
+    elif n_keep:
+        real[:n_keep] = old_real[survivors]
+    if add_cost.shape[0]:
+        real[n_keep:] = add_cost
+    if down.size:
+        real[:, down] = np.inf
+    for m in up_cols:
+        real[:, m] = up_cost[m]
+    if move is not None:
+        rows = np.flatnonzero(move > 0)
+        real[rows] += move[rows, None]
+        real[rows, before[rows]] -= move[rows]
+    sq[:n_jobs, n_machines:] = wait_cost[:, None]
+    sq[n_jobs:, :n_machines] = 0.0
+    sq[n_jobs:, n_machines:] = np.inf
+    return sq
 
 
 def _max_placed(allowed: np.ndarray, machine_of_job: np.ndarray) -> int:
@@ -405,29 +443,26 @@ def redispatch(previous: DispatchResult, *, machines_down: Sequence[int] = (),
     def cost_of(x: np.ndarray) -> np.ndarray:
         return top - x if maximize else x
 
-    sq = np.empty((size, size))
-    real = sq[:n_jobs, :n_machines]
-    old_real = cert.cost[:n_old, :n_machines]
-    if n_keep == n_old:
-        real[:n_keep] = old_real
-    elif n_keep:
-        real[:n_keep] = old_real[survivors]
-    if add_vals.shape[0]:
-        real[n_keep:] = np.where(add_mask, cost_of(add_vals), np.inf)
     touched_cols = np.union1d(down, np.asarray(up_cols, dtype=np.int64)).astype(np.int64)
-    if down.size:
-        real[:, down] = np.inf
-    for m in up_cols:
-        real[:, m] = np.where(allowed[:, m], cost_of(values[:, m]), np.inf)
     touched_rows = np.arange(n_keep, n_jobs)
-    if move is not None:
-        rows = np.flatnonzero(move > 0)
-        real[rows] += move[rows, None]
-        real[rows, before[rows]] -= move[rows]
-        touched_rows = np.union1d(touched_rows, rows)
-    sq[:n_jobs, n_machines:] = np.where(must, np.inf, penalty)[:, None]
-    sq[n_jobs:, :n_machines] = 0.0
-    sq[n_jobs:, n_machines:] = np.inf
+    wait_cost = np.where(must, np.inf, penalty)
+    if same_jobs and move is None and not up_cols:
+        # Machines going down only forbid columns: share the previous job x machine costs
+        # instead of copying them (see StructuredSquare).
+        prev_sq = cert.square
+        if isinstance(prev_sq, StructuredSquare):
+            base, blocked = prev_sq.base, np.union1d(prev_sq.blocked, down)
+        else:
+            base, blocked = cert.cost[:n_old, :n_machines], down
+        sq = StructuredSquare(base, blocked, wait_cost, idle_new, wait_new)
+    else:
+        sq = _dense_square(cert, size, n_old, n_keep, n_jobs, n_machines, survivors, same_jobs,
+                           np.where(add_mask, cost_of(add_vals), np.inf), down, up_cols,
+                           {m: np.where(allowed[:, m], cost_of(values[:, m]), np.inf)
+                            for m in up_cols},
+                           move, before, wait_cost)
+        if move is not None:
+            touched_rows = np.union1d(touched_rows, np.flatnonzero(move > 0))
 
     # Map rows, columns, potentials and planned pairs of the previous square.
     u = np.full(size, np.nan)
