@@ -1,4 +1,4 @@
-"""The decision flow: an event (machine down or back up, rush job) -> the proposed new plan
+"""The decision flow: an event (machine down or back up, rush job, job pulled) -> the proposed new plan
 shown as a difference against the plan in force -> confirmed with a reason and a name ->
 recorded in the history and put in force.
 
@@ -40,8 +40,9 @@ SAFETY_REMINDER = (
     "the site's safety rules take precedence over this plan.")
 
 EVENT_DOWN, EVENT_UP, EVENT_RUSH, EVENT_CONFIRM = "down", "up", "rush", "confirm"
+EVENT_PULL = "pulled"
 EVENT_REASON = {EVENT_DOWN: "breakdown", EVENT_UP: "repair", EVENT_RUSH: "rush-job",
-                EVENT_CONFIRM: "shift-start"}
+                EVENT_CONFIRM: "shift-start", EVENT_PULL: "manual-change"}
 
 
 @dataclass
@@ -58,6 +59,7 @@ class Proposal:
     job_changes: list[tuple[int, dict]] = field(default_factory=list)
     problem: str = ""
     move_penalties: float | None = None   # paid by the warm re-dispatch, when it was used
+    pulled_job: str = ""                  # the job this decision takes out of the shop
 
 
 def _empty_plan_json(objective: str) -> dict:
@@ -72,7 +74,11 @@ def propose(shop: Shop, event: str, objective: str, before: dict | None, *,
 
     Machine down: it takes nothing; jobs running on it go back to waiting (they need a new
     setup elsewhere). Machine up: it takes jobs again. Rush: the job becomes a rush job.
+    Pulled: the job leaves the shop (its pins and its place in the plan in force with it;
+    if it was running, its machine is free again); the history keeps the shop as it was.
     """
+    if event == EVENT_PULL:
+        return _propose_pull(shop, objective, before, job, mode)
     new = snapshot(shop)
     job_changes: list[tuple[int, dict]] = []
     if event in (EVENT_DOWN, EVENT_UP):
@@ -111,6 +117,40 @@ def propose(shop: Shop, event: str, objective: str, before: dict | None, *,
     return Proposal(event, title, new, plan, diff, machine, job, job_changes, note_text)
 
 
+def without_job(shop: Shop, index: int) -> Shop:
+    """A copy of ``shop`` without job ``index``: its grid values and run hours, its pins and
+    its place in the plan in force go too."""
+    new = snapshot(shop)
+    gone = new.jobs.pop(index)
+    new.grid = {k: v for k, v in new.grid.items() if k[0] != gone.id}
+    new.hours = {k: v for k, v in new.hours.items() if k[0] != gone.id}
+    new.pins = [p for p in new.pins if p.job != gone.id]
+    new.plan_in_force = {m: [j for j in js if j != gone.id]
+                         for m, js in new.plan_in_force.items()}
+    new.plan_in_force = {m: js for m, js in new.plan_in_force.items() if js}
+    return new
+
+
+def _propose_pull(shop: Shop, objective: str, before: dict | None, job: int, mode: str) -> Proposal:
+    """The job is pulled: re-dispatch without it (warm from the plan in force when there is
+    one, as for the other events), then take it out of the shop."""
+    name = shop.jobs[job].name
+    title = f"Job pulled: {name}"
+    warm = _warm_redispatch(shop, EVENT_PULL, objective, None, job) if mode == MODE_ROUND else None
+    if warm is not None:
+        plan, problem, moves = warm.plan, "", warm.move_penalties_paid
+    else:
+        try:
+            plan, problem = solve_for_mode(without_job(shop, job), objective, mode)
+        except (ShopError, ShopInfeasibleError) as exc:
+            return Proposal(EVENT_PULL, title, without_job(shop, job), None, None, None, job,
+                            [], str(exc), None, name)
+        moves = None
+    diff = diff_plans(before or _empty_plan_json(objective), plan.to_json())
+    return Proposal(EVENT_PULL, title, without_job(shop, job), plan, diff, None, job, [],
+                    problem, moves, name)
+
+
 def _warm_redispatch(shop: Shop, event: str, objective: str, machine: int | None,
                      job: int | None):
     """The core's warm re-dispatch from the plan in force (with move penalties), or None
@@ -137,17 +177,23 @@ def _job_changes(before: Shop, after: Shop) -> list[tuple[int, dict]]:
     return out
 
 
-def diff_html(diff: PlanDiff | None, unit: str, before: dict | None = None) -> str:
-    """The difference as a short list a supervisor reads at a glance (marks, not colour only)."""
+def diff_html(diff: PlanDiff | None, unit: str, before: dict | None = None,
+              pulled: str | None = None) -> str:
+    """The difference as a short list a supervisor reads at a glance (marks, not colour only).
+    ``pulled`` names a job taken out of the shop by this decision."""
     if diff is None:
         return "<p>No plan in force to compare with.</p>"
     e = html.escape
     items = []
+    was_on = {a["job"]: a["machine"] for a in (before or {}).get("assignments", [])}
+    if pulled is not None:
+        where = f" (frees {e(was_on[pulled])})" if pulled in was_on else ""
+        items.append(f"<li>{palette.MARK_FORBIDDEN} <b>pulled</b>: {e(pulled)} leaves the "
+                     f"shop{where}</li>")
     for m in diff.moved:
         items.append(f"<li>\u2192 <b>moves</b>: {e(m.job)} from {e(m.from_machine)} to {e(m.to_machine)}</li>")
     for j, m in diff.newly_placed:
         items.append(f"<li>{palette.MARK_PLANNED} <b>starts</b>: {e(j)} on {e(m)}</li>")
-    was_on = {a["job"]: a["machine"] for a in (before or {}).get("assignments", [])}
     for j in diff.now_waiting:
         where = f" (was on {e(was_on[j])})" if j in was_on else ""
         items.append(f"<li>\u25cb <b>now waits</b>: {e(j)}{where}</li>")
@@ -206,8 +252,9 @@ class DecisionDialog(QDialog):
                 moves = (f"<p>Re-dispatched from the plan in force; move penalties included: "
                          f"{fmt(proposal.move_penalties)} {html.escape(unit)} (jobs dispatched but not "
                          "started move only when the saving is larger).</p>")
+            pulled = proposal.pulled_job or None
             body = QLabel(warn + f"<b>Proposed changes against {html.escape(before_label)}:</b>"
-                          + diff_html(proposal.diff, unit, before) + moves)
+                          + diff_html(proposal.diff, unit, before, pulled) + moves)
         body.setObjectName("proposalDiff")
         body.setWordWrap(True)
         body.setTextFormat(Qt.TextFormat.RichText)

@@ -71,6 +71,13 @@ class FileController(QObject):
         self._pool = QThreadPool(self)
         self._pool.setMaxThreadCount(1)
 
+    def set_autosave_minutes(self, minutes: int) -> None:
+        """Autosave every ``minutes`` (from the settings; the timer restarts)."""
+        self._autosave_timer.start(max(1, int(minutes)) * 60_000)
+
+    def autosave_interval_ms(self) -> int:
+        return self._autosave_timer.interval()
+
     # ---- recent files ---------------------------------------------------------------------
     def recent(self) -> list[str]:
         value = self.settings.value(RECENT_KEY, [])

@@ -140,11 +140,15 @@ class HistoryPanel(QWidget):
         split.setSizes([650, 350])
         layout.addWidget(split, 1)
         buttons = QHBoxLayout()
+        self.where = QLabel()
+        self.where.setObjectName("historyFile")
+        self.where.setTextInteractionFlags(Qt.TextInteractionFlag.TextSelectableByMouse)
+        self.where.setToolTip("The history file these decisions come from (Edit \u25b8 Settings to change it)")
+        buttons.addWidget(self.where, 1)
         self.compare_button = QPushButton("&Compare two")
         self.compare_button.setToolTip("Select two decisions (Ctrl+click) and compare their plans")
         self.restore_button = QPushButton("Res&tore\u2026")
         self.restore_button.setToolTip("Record a new decision that puts this one's plan back in force")
-        buttons.addStretch(1)
         buttons.addWidget(self.compare_button)
         buttons.addWidget(self.restore_button)
         layout.addLayout(buttons)
@@ -156,6 +160,12 @@ class HistoryPanel(QWidget):
         self.restore_button.clicked.connect(self._restore_selected)
         self.table.selectionModel().selectionChanged.connect(lambda *_: self._show_selected())
 
+    def set_store(self, store: HistoryStore) -> None:
+        """Show another history file (chosen in the settings)."""
+        self.store = store
+        self.details.clear()
+        self.refresh()
+
     def filters(self) -> dict:
         out = {}
         text = self.text.text().strip()
@@ -166,6 +176,7 @@ class HistoryPanel(QWidget):
         return out
 
     def refresh(self) -> None:
+        self.where.setText(f"File: {self.store.path}")
         try:
             rows = self.store.list(newest_first=True, **self.filters())
         except HistoryError as exc:

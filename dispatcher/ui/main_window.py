@@ -150,6 +150,9 @@ class MainWindow(GridEditsMixin, DecisionFlowsMixin, QMainWindow):
                                             "Add a machine column")
         self.act_done = self._action("Mark job &done", self.on_job_done, None,
                                      "The current job is finished: it takes no part any more")
+        self.act_pull = self._action("Job &pulled\u2026", self.on_pull, None,
+                                     "The current job is cancelled or put on hold: re-dispatch "
+                                     "without it and take it out of the shop")
         self.act_penalty = self._action("Set &wait penalty\u2026", self.on_penalty, "Ctrl+W",
                                         "Cost of leaving the current job waiting")
         self.act_down = self._action("Machine &down\u2026", lambda: self.on_machine_event(EVENT_DOWN),
@@ -201,12 +204,14 @@ class MainWindow(GridEditsMixin, DecisionFlowsMixin, QMainWindow):
         self._print_anchor = m.addSeparator()
         m.addAction(self.act_quit)
         m = bar.addMenu("&Edit")
+        self.edit_menu = m
         for a in (self.act_undo, self.act_redo, None, self.act_copy, self.act_copy_names,
                   self.act_paste, None, self.act_cannot, self.act_pin, self.act_forbid, self.act_unpin):
             m.addSeparator() if a is None else m.addAction(a)
         m = bar.addMenu("&Job")
         m.addAction(self.act_add_job)
         m.addAction(self.act_rush)
+        m.addAction(self.act_pull)
         m.addAction(self.act_penalty)
         m.addAction(self.act_done)
         m = bar.addMenu("&Machine")
@@ -228,9 +233,10 @@ class MainWindow(GridEditsMixin, DecisionFlowsMixin, QMainWindow):
         self._fill_recent()
 
     def _extra_views(self) -> None:
-        """What-if, alternatives, history and printing, each in its own module."""
-        from dispatcher.ui import extras
+        """What-if, alternatives, history, printing and settings, each in its own module."""
+        from dispatcher.ui import extras, settings_dialog
         extras.install(self)
+        settings_dialog.install(self)
 
     def _connect(self) -> None:
         self.doc.edited.connect(self.request_solve)
@@ -398,7 +404,7 @@ class MainWindow(GridEditsMixin, DecisionFlowsMixin, QMainWindow):
         menu = QMenu(self)
         for a in (self.act_pin, self.act_forbid, self.act_unpin, self.act_cannot, None,
                   self.act_copy, self.act_copy_names, self.act_paste, None,
-                  self.act_rush, self.act_penalty, self.act_done, None, self.act_down, self.act_up, self.act_slots):
+                  self.act_rush, self.act_pull, self.act_penalty, self.act_done, None, self.act_down, self.act_up, self.act_slots):
             menu.addSeparator() if a is None else menu.addAction(a)
         menu.popup(pos)
 
@@ -414,6 +420,7 @@ class MainWindow(GridEditsMixin, DecisionFlowsMixin, QMainWindow):
         self.view.setCurrentIndex(self.model.index(row, max(self.view.currentIndex().column(), 0)))
         menu = QMenu(self)
         menu.addAction(self.act_rush)
+        menu.addAction(self.act_pull)
         menu.addAction(self.act_penalty)
         menu.addAction(self.act_done)
         menu.popup(pos)

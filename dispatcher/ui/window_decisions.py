@@ -1,4 +1,5 @@
-"""Decision flows of the main window: machine down or back up, rush job, put a plan in force.
+"""Decision flows of the main window: machine down or back up, rush job, job pulled, put a
+plan in force.
 
 A mixin of :class:`dispatcher.ui.main_window.MainWindow`. The proposal comes from the core
 (:func:`dispatcher.ui.decision.propose`); confirming records the decision in the history
@@ -13,18 +14,19 @@ from PySide6.QtCore import Qt
 
 from dispatcher.history import HistoryError, HistoryInputError
 from dispatcher.io.shopfile import shop_to_dict
-from dispatcher.shop import DOWN, UP, Shop
+from dispatcher.shop import DONE, DOWN, UP, Shop
 from dispatcher.ui.decision import (
     EVENT_CONFIRM,
     EVENT_DOWN,
+    EVENT_PULL,
     EVENT_RUSH,
     EVENT_UP,
     DecisionDialog,
     Proposal,
     propose,
 )
-from dispatcher.ui.edits import SetJobsState, SetMachineFields, SetPlanInForce
-from dispatcher.ui.solving import SolveOutcome, plan_in_force_ids
+from dispatcher.ui.edits import ReplaceShop, SetJobsState, SetMachineFields, SetPlanInForce
+from dispatcher.ui.solving import SolveOutcome, plan_in_force_ids, snapshot
 
 
 class DecisionFlowsMixin:
@@ -65,6 +67,19 @@ class DecisionFlowsMixin:
             return None
         return self._open_decision(self.doc.shop, EVENT_RUSH, job=row)
 
+    def on_pull(self, row: int | None = None) -> DecisionDialog | None:
+        """The current job is pulled (order cancelled or put on hold): propose the plan
+        without it; confirming records the decision and takes the job out of the shop."""
+        row = self.view.current_row() if row is None or row is False else row
+        if row is None:
+            self.show_warning("choose a cell in the job's row first (or use the row's menu)")
+            return None
+        job = self.doc.job_at(row)
+        if job.state == DONE:
+            self.show_warning(f"{job.name} is already done; there is nothing to pull")
+            return None
+        return self._open_decision(self.doc.shop, EVENT_PULL, job=row)
+
     def on_confirm_plan(self) -> DecisionDialog | None:
         return self._open_decision(self.doc.shop, EVENT_CONFIRM)
 
@@ -93,6 +108,8 @@ class DecisionFlowsMixin:
         self.settings.setValue("history/supervisor", by)
         stack = self.doc.undo_stack
         stack.beginMacro(f"{proposal.title} (decision #{number})")
+        if proposal.event == EVENT_PULL:
+            stack.push(ReplaceShop(self.doc, snapshot(recorded_shop), proposal.title))
         if proposal.machine is not None and proposal.event in (EVENT_DOWN, EVENT_UP):
             m = recorded_shop.machines[proposal.machine]
             stack.push(SetMachineFields(self.doc, proposal.machine,

@@ -1,0 +1,214 @@
+"""Settings of the app: the history file, the default supervisor name, the autosave interval.
+
+Stored in QSettings (``history/path``, ``history/supervisor``, ``autosave/minutes``). A
+new history file is checked with the Qt-free store before it is used (a file that is not
+a dispatcher history, cut short, read-only or written by a newer version is refused and
+the current file kept); once accepted, the open window records into it at once and the
+history panel shows its decisions. The file dialog goes through a replaceable
+:class:`FileChooser`, so tests never block on a native dialog.
+"""
+
+from __future__ import annotations
+
+import os
+from pathlib import Path
+
+from PySide6.QtGui import QKeySequence
+from PySide6.QtWidgets import (
+    QDialog,
+    QDialogButtonBox,
+    QFileDialog,
+    QFormLayout,
+    QHBoxLayout,
+    QLabel,
+    QLineEdit,
+    QPushButton,
+    QSpinBox,
+    QVBoxLayout,
+    QWidget,
+)
+
+from dispatcher.history import HistoryError, HistoryStore, default_history_path
+
+KEY_HISTORY, KEY_SUPERVISOR, KEY_AUTOSAVE = "history/path", "history/supervisor", "autosave/minutes"
+AUTOSAVE_DEFAULT_MIN, AUTOSAVE_MAX_MIN = 1, 60
+HISTORY_FILTER = "Decision histories (*.sqlite);;All files (*)"
+
+
+class FileChooser:
+    """Asks the user for a history file (existing, or a new name) with a Qt file dialog."""
+
+    def __init__(self, parent: QWidget | None = None):
+        self.parent = parent
+
+    def history_file(self, current: str) -> str | None:
+        path, _ = QFileDialog.getSaveFileName(
+            self.parent, "History file: choose an existing one or name a new one", current,
+            HISTORY_FILTER, options=QFileDialog.Option.DontConfirmOverwrite)
+        return path or None
+
+
+class ScriptedChooser(FileChooser):
+    """Answers from a list (for tests); records what it was asked."""
+
+    def __init__(self, answers: list[str | None]):
+        super().__init__(None)
+        self.answers = list(answers)
+        self.asked: list[str] = []
+
+    def history_file(self, current: str) -> str | None:
+        self.asked.append(current)
+        return self.answers.pop(0) if self.answers else None
+
+
+def usable_history(path: str | os.PathLike) -> HistoryStore:
+    """A store for ``path`` after checking decisions can be read from and recorded into it.
+
+    An existing file must be a dispatcher history this version reads (header, identity,
+    schema version and a quick integrity check, as the store does on first use; an older
+    schema is backed up and upgraded) and must be writable. A new file is created on the
+    first decision, so its folder must exist and be writable. Raises :class:`HistoryError`
+    with a message naming the file; the file is never changed by a refusal.
+    """
+    p = Path(path).expanduser()
+    if p.is_dir():
+        raise HistoryError(f"{p}: is a folder, not a history file")
+    store = HistoryStore(p)
+    if p.exists():
+        if store.read_only():
+            raise HistoryError(f"{p}: the file is read-only, so no decision could be recorded "
+                               "in it; it was left as it is. Make it writable or choose "
+                               "another file")
+        store.list(limit=1)
+    else:
+        folder = p.parent
+        if not folder.is_dir():
+            raise HistoryError(f"{p}: the folder {folder} does not exist")
+        if not os.access(folder, os.W_OK):
+            raise HistoryError(f"{p}: the folder {folder} is not writable, so the history "
+                               "cannot be created there")
+    return store
+
+
+def autosave_minutes(settings) -> int:
+    """The autosave interval stored in ``settings`` (minutes, within 1..60)."""
+    try:
+        value = int(settings.value(KEY_AUTOSAVE, AUTOSAVE_DEFAULT_MIN))
+    except (TypeError, ValueError):
+        value = AUTOSAVE_DEFAULT_MIN
+    return min(max(value, 1), AUTOSAVE_MAX_MIN)
+
+
+class SettingsDialog(QDialog):
+    """Non-blocking (``open()``); OK asks the window to apply, and stays open if it refuses."""
+
+    def __init__(self, window):
+        super().__init__(window)
+        self.setObjectName("settingsDialog")
+        self.window_ = window
+        self.setWindowTitle("Settings")
+        layout = QVBoxLayout(self)
+        form = QFormLayout()
+
+        self.history_path = QLineEdit(str(window.history.path))
+        self.history_path.setObjectName("historyPathEdit")
+        self.history_path.setToolTip("The file every confirmed decision is recorded in")
+        self.history_path.setMinimumWidth(420)
+        self.choose_button = QPushButton("&Choose\u2026")
+        self.choose_button.setToolTip("Pick an existing history file, or name a new one")
+        self.default_button = QPushButton("&Default")
+        self.default_button.setToolTip(f"The per-user file: {default_history_path()}")
+        row = QHBoxLayout()
+        row.addWidget(self.history_path, 1)
+        row.addWidget(self.choose_button)
+        row.addWidget(self.default_button)
+        form.addRow("&History file:", row)
+        hint = QLabel("Confirmed decisions are recorded in this file. Another file takes "
+                      "effect at once: the history panel then lists its decisions. A new "
+                      "name starts an empty history; nothing is copied or deleted.")
+        hint.setWordWrap(True)
+        hint.setObjectName("historyHint")
+        form.addRow("", hint)
+
+        self.supervisor = QLineEdit(str(window.settings.value(KEY_SUPERVISOR, "")))
+        self.supervisor.setObjectName("supervisorEdit")
+        self.supervisor.setPlaceholderText("for example: A. Supervisor")
+        self.supervisor.setToolTip("Filled in when you confirm a decision (you can change it there)")
+        form.addRow("Default &supervisor:", self.supervisor)
+
+        self.autosave = QSpinBox()
+        self.autosave.setObjectName("autosaveSpin")
+        self.autosave.setRange(1, AUTOSAVE_MAX_MIN)
+        self.autosave.setSuffix(" min")
+        self.autosave.setValue(autosave_minutes(window.settings))
+        self.autosave.setToolTip("How often unsaved changes are copied to the recovery folder")
+        form.addRow("&Autosave every:", self.autosave)
+        layout.addLayout(form)
+
+        self.buttons = QDialogButtonBox(QDialogButtonBox.StandardButton.Ok
+                                        | QDialogButtonBox.StandardButton.Cancel)
+        self.buttons.accepted.connect(self.apply)
+        self.buttons.rejected.connect(self.reject)
+        layout.addWidget(self.buttons)
+        self.choose_button.clicked.connect(self.choose)
+        self.default_button.clicked.connect(
+            lambda: self.history_path.setText(str(default_history_path())))
+        self.resize(max(self.sizeHint().width(), 640), self.sizeHint().height())
+
+    def choose(self) -> None:
+        path = self.window_.file_chooser.history_file(self.history_path.text())
+        if path:
+            self.history_path.setText(path)
+
+    def apply(self) -> bool:
+        """What OK does: apply through the window; close only if it accepted."""
+        ok = self.window_.apply_settings(self.history_path.text(), self.supervisor.text(),
+                                         self.autosave.value())
+        if ok:
+            self.accept()
+        return ok
+
+
+def install(window) -> None:
+    """Add *Edit ▸ Settings…* and ``open_settings`` / ``apply_settings`` to ``window``."""
+    window.file_chooser = FileChooser(window)
+    window.settings_dialog = None
+    window.files.set_autosave_minutes(autosave_minutes(window.settings))
+
+    def apply_settings(history_path: str, supervisor: str, minutes: int) -> bool:
+        text = history_path.strip()
+        if not text:
+            window.messenger.error("Settings not changed", "Choose a history file.")
+            return False
+        new = Path(text).expanduser()
+        if new.absolute() != window.history.path.absolute():
+            try:
+                store = usable_history(new)
+            except HistoryError as exc:
+                window.messenger.error(
+                    "History file not changed",
+                    f"{exc}\n\nDecisions are still recorded in {window.history.path}.")
+                return False
+            window.history = store
+            window.history_panel.set_store(store)
+            window.settings.setValue(KEY_HISTORY, str(new))
+            window.statusBar().showMessage(f"Decisions are now recorded in {new}", 8000)
+        window.settings.setValue(KEY_SUPERVISOR, supervisor.strip())
+        minutes = min(max(int(minutes), 1), AUTOSAVE_MAX_MIN)
+        window.settings.setValue(KEY_AUTOSAVE, minutes)
+        window.files.set_autosave_minutes(minutes)
+        return True
+
+    def open_settings() -> SettingsDialog:
+        dialog = SettingsDialog(window)
+        window.settings_dialog = dialog
+        dialog.open()
+        return dialog
+
+    window.apply_settings = apply_settings
+    window.open_settings = open_settings
+    act = window._action("Se&ttings\u2026", open_settings, QKeySequence.StandardKey.Preferences,
+                         "History file, default supervisor name, autosave interval")
+    window.act_settings = act
+    window.edit_menu.addSeparator()
+    window.edit_menu.addAction(act)
