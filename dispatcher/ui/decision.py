@@ -62,6 +62,15 @@ class Proposal:
     pulled_job: str = ""                  # the job this decision takes out of the shop
 
 
+NOTE_HINTS = {
+    EVENT_DOWN: "What happened (for example: hydraulic leak, waiting for fitter)",
+    EVENT_UP: "What was done (for example: seal replaced, checked by maintenance)",
+    EVENT_RUSH: "Why it is urgent (for example: customer line stopped)",
+    EVENT_PULL: "Why the job is pulled (for example: order cancelled, material not arrived)",
+    EVENT_CONFIRM: "Anything the next shift should know",
+}
+
+
 def _empty_plan_json(objective: str) -> dict:
     return {"status": "optimal", "objective": objective, "total": 0, "assignments": [],
             "waiting_jobs": [], "idle_machines": []}
@@ -253,6 +262,9 @@ class DecisionDialog(QDialog):
                          f"{fmt(proposal.move_penalties)} {html.escape(unit)} (jobs dispatched but not "
                          "started move only when the saving is larger).</p>")
             pulled = proposal.pulled_job or None
+            if pulled:
+                moves += ("<p>The job is taken out of the shop document (Undo brings it back); "
+                          "earlier decisions in the history keep it.</p>")
             body = QLabel(warn + f"<b>Proposed changes against {html.escape(before_label)}:</b>"
                           + diff_html(proposal.diff, unit, before, pulled) + moves)
         body.setObjectName("proposalDiff")
@@ -267,7 +279,7 @@ class DecisionDialog(QDialog):
         self.reason.setCurrentIndex(self.reason.findData(EVENT_REASON[proposal.event]))
         form.addRow("&Reason:", self.reason)
         self.note = QPlainTextEdit()
-        self.note.setPlaceholderText("What happened (for example: hydraulic leak, waiting for fitter)")
+        self.note.setPlaceholderText(NOTE_HINTS.get(proposal.event, NOTE_HINTS[EVENT_DOWN]))
         self.note.setMaximumHeight(70)
         self.note.setTabChangesFocus(True)
         form.addRow("&Note:", self.note)

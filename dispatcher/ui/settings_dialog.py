@@ -113,16 +113,19 @@ class SettingsDialog(QDialog):
         self.history_path = QLineEdit(str(window.history.path))
         self.history_path.setObjectName("historyPathEdit")
         self.history_path.setToolTip("The file every confirmed decision is recorded in")
-        self.history_path.setMinimumWidth(420)
+        self.history_path.setMinimumWidth(480)
+        self.history_path.setCursorPosition(0)
         self.choose_button = QPushButton("&Choose\u2026")
         self.choose_button.setToolTip("Pick an existing history file, or name a new one")
-        self.default_button = QPushButton("&Default")
+        self.default_button = QPushButton("Use &default")
         self.default_button.setToolTip(f"The per-user file: {default_history_path()}")
         row = QHBoxLayout()
         row.addWidget(self.history_path, 1)
         row.addWidget(self.choose_button)
         row.addWidget(self.default_button)
-        form.addRow("&History file:", row)
+        label = QLabel("&History file:")
+        label.setBuddy(self.history_path)
+        form.addRow(label, row)
         hint = QLabel("Confirmed decisions are recorded in this file. Another file takes "
                       "effect at once: the history panel then lists its decisions. A new "
                       "name starts an empty history; nothing is copied or deleted.")
@@ -159,6 +162,7 @@ class SettingsDialog(QDialog):
         path = self.window_.file_chooser.history_file(self.history_path.text())
         if path:
             self.history_path.setText(path)
+            self.history_path.setCursorPosition(0)
 
     def apply(self) -> bool:
         """What OK does: apply through the window; close only if it accepted."""
