@@ -98,3 +98,20 @@ def test_pull_is_in_the_menus_and_refused_for_a_done_job(qtbot, shop_window):
     with qtbot.waitSignal(window.warning) as warned:
         assert window.on_pull(0) is None
     assert "already done" in warned.args[0]
+
+
+def test_pulling_a_running_job_frees_its_machine(qtbot, tmp_path, monkeypatch, samples):
+    window = make_window(qtbot, tmp_path, monkeypatch, samples / "medium_machining_shop.dshop")
+    shop = window.doc.shop
+    row = next(i for i, j in enumerate(shop.jobs) if j.state == "running")
+    name, machine_id = shop.jobs[row].name, shop.jobs[row].machine
+    machine = shop.machine(machine_id).name
+    assert machine not in [a.machine for a in window.plan.assignments]   # busy: not offered
+    dialog = window.on_pull(row)
+    assert f"frees {machine}" in dialog.findChild(object, "proposalDiff").text()
+    dialog.confirm("R. Day", "customer cancelled the order")
+    wait_plan(qtbot, window)
+    plan = HistoryStore(tmp_path / "history.sqlite").get(1).plan
+    # The machine is free again: the new plan gives it a job or lists it idle.
+    assert machine in [a["machine"] for a in plan["assignments"]] + plan["idle_machines"]
+    assert name not in window.doc.shop.job_names()

@@ -17,7 +17,7 @@ from dispatcher.io.shopfile import shop_to_dict
 from dispatcher.ui.main_window import MainWindow
 from dispatcher.ui.messages import RecordingMessenger
 from dispatcher.ui.settings_dialog import KEY_HISTORY, KEY_SUPERVISOR, ScriptedChooser
-from ui_support import make_window, save_shot
+from ui_support import activate, make_window, save_shot
 
 
 @pytest.fixture
@@ -139,3 +139,11 @@ def test_an_unusable_history_file_is_refused_and_the_setting_kept(qtbot, window,
     else:
         assert not bad.parent.exists()
     dialog.reject()
+
+
+def test_settings_open_from_the_keyboard(qtbot, window):
+    activate(qtbot, window)
+    [keys] = window.act_settings.shortcuts()[:1]
+    qtbot.keySequence(window.view, keys)
+    qtbot.waitUntil(lambda: window.settings_dialog is not None and window.settings_dialog.isVisible())
+    window.settings_dialog.reject()

@@ -196,7 +196,9 @@ def diff_html(diff: PlanDiff | None, unit: str, before: dict | None = None,
     items = []
     was_on = {a["job"]: a["machine"] for a in (before or {}).get("assignments", [])}
     if pulled is not None:
-        where = f" (frees {e(was_on[pulled])})" if pulled in was_on else ""
+        running = {r["job"]: r["machine"] for r in (before or {}).get("running", [])}
+        was = was_on.get(pulled) or running.get(pulled)
+        where = f" (frees {e(was)})" if was else ""
         items.append(f"<li>{palette.MARK_FORBIDDEN} <b>pulled</b>: {e(pulled)} leaves the "
                      f"shop{where}</li>")
     for m in diff.moved:

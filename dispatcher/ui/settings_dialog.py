@@ -211,8 +211,11 @@ def install(window) -> None:
 
     window.apply_settings = apply_settings
     window.open_settings = open_settings
-    act = window._action("Se&ttings\u2026", open_settings, QKeySequence.StandardKey.Preferences,
+    act = window._action("Se&ttings\u2026", open_settings, None,
                          "History file, default supervisor name, autosave interval")
+    # The platform's Preferences keys; Ctrl+, where the platform defines none.
+    keys = QKeySequence.keyBindings(QKeySequence.StandardKey.Preferences) or [QKeySequence("Ctrl+,")]
+    act.setShortcuts(keys)
     window.act_settings = act
     window.edit_menu.addSeparator()
     window.edit_menu.addAction(act)
