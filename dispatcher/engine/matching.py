@@ -68,8 +68,13 @@ def alternating_reach(allowed: np.ndarray, machine_of_job: np.ndarray,
     frontier = np.asarray(start_jobs, dtype=np.int64)
     seen_jobs[frontier] = True
     while frontier.size:
-        reach = allowed[frontier].any(axis=0) & ~seen_machines
-        seen_machines |= reach
+        # Only machines not seen yet are read: after the first steps few remain, so a
+        # large frontier costs little (a 1000 x 1000 mask is not scanned again and again).
+        unseen = np.flatnonzero(~seen_machines)
+        if unseen.size == 0:
+            break
+        reach = unseen[allowed[np.ix_(frontier, unseen)].any(axis=0)]
+        seen_machines[reach] = True
         nxt = job_of_machine[reach]
         nxt = nxt[nxt >= 0]
         nxt = nxt[~seen_jobs[nxt]]

@@ -230,7 +230,9 @@ def _repair(cost: np.ndarray, col_of_row: np.ndarray, u: np.ndarray, v: np.ndarr
     matched = col_of_row >= 0
     into_touched = np.zeros(n, dtype=bool)
     if cols.size:
-        into_touched[matched] = np.isin(col_of_row[matched], cols)
+        is_touched = np.zeros(n, dtype=bool)
+        is_touched[cols] = True
+        into_touched[matched] = is_touched[col_of_row[matched]]
     rows = np.flatnonzero(~known | into_touched)
     if rows.size:
         best = (cost[rows] - v[None, :]).min(axis=1)
