@@ -129,6 +129,7 @@ def test_an_unusable_history_file_is_refused_and_the_setting_kept(qtbot, window,
     [(level, title, text)] = window.messenger.messages
     assert level == "error" and title == "History file not changed"
     assert str(bad) in text and words in text and str(current) in text
+    assert "--history" not in text   # the choice is made in this dialog, not on a command line
     assert dialog.isVisible(), "the dialog stays open so another file can be chosen"
     assert window.history.path == current
     assert window.history_panel.store.path == current

@@ -189,9 +189,12 @@ def install(window) -> None:
             try:
                 store = usable_history(new)
             except HistoryError as exc:
+                # The store's messages point command-line users to --history; here the
+                # choice is made in this dialog.
+                text = str(exc).replace(" with --history PATH", "")
                 window.messenger.error(
                     "History file not changed",
-                    f"{exc}\n\nDecisions are still recorded in {window.history.path}.")
+                    f"{text}\n\nDecisions are still recorded in {window.history.path}.")
                 return False
             window.history = store
             window.history_panel.set_store(store)
