@@ -301,8 +301,9 @@ def _max_placed(allowed: np.ndarray, machine_of_job: np.ndarray) -> int:
     """Maximum matching size, skipping Hopcroft-Karp when a known matching meets a bound."""
     placed = machine_of_job >= 0
     size = int(placed.sum())
-    bound = min(int(allowed.any(axis=1).sum()), int(allowed.any(axis=0).sum()))
-    if size == bound:
+    # A matching never exceeds the machines (or the jobs) that have an allowed pair, so
+    # meeting either count proves it maximum; the second pass is needed only if not.
+    if size == int(allowed.any(axis=0).sum()) or size == int(allowed.any(axis=1).sum()):
         return size
     return int((maximum_matching(allowed) >= 0).sum())
 
