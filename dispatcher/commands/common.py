@@ -3,13 +3,13 @@
 from __future__ import annotations
 
 import json
-import math
 import sys
 from typing import Any
 
 import numpy as np
 
 from dispatcher.engine import DispatchResult
+from dispatcher.shop.plan import json_number
 
 EXIT_OK = 0
 EXIT_INTERNAL = 1
@@ -26,10 +26,7 @@ class CliError(Exception):
         self.exit_code = exit_code
 
 
-def number(x: float) -> int | float:
-    """JSON-friendly number: whole values print without a trailing .0."""
-    x = float(x)
-    return int(x) if math.isfinite(x) and x.is_integer() and abs(x) < 2**53 else x
+number = json_number  # JSON-friendly number: whole values print without a trailing .0
 
 
 def plan_json(result: DispatchResult, jobs: list[str], machines: list[str]) -> dict[str, Any]:

@@ -31,7 +31,7 @@ import numpy as np
 from dispatcher.engine import DispatchInputError, ShiftInfeasibleError, ShiftPlan, fill_shift
 
 from .model import DONE, MUST, MUST_NOT, RUNNING, UP, Problem, Shop, ShopError
-from .plan import Assignment, RunningJob, WaitReason, json_number
+from .plan import Assignment, RunningJob, WaitReason, contract_json, json_number
 from .translate import ShopInfeasibleError
 from .validate import check_shop
 
@@ -88,32 +88,15 @@ class ShiftFill:
         return []
 
     def to_json(self) -> dict[str, Any]:
-        data: dict[str, Any] = {
-            "status": self.status,
-            "objective": self.objective,
-            "total": json_number(self.total),
-            "assignments": [{"job": a.job, "machine": a.machine, "cost": json_number(a.cost)}
-                            for a in self.assignments],
-            "waiting_jobs": list(self.waiting_jobs),
-            "idle_machines": list(self.idle_machines),
-            "bottleneck": None,
-            "waiting_reasons": {
-                j: {"competing_jobs": list(w.competing_jobs), "machines": list(w.machines),
-                    "text": w.text} for j, w in self.waiting_reasons.items()},
-            "certificate": {"verified": self.verified, "proven_optimal": self.proven_optimal,
-                            "bound": _json_float(self.bound), "gap": _json_float(self.gap),
-                            "text": self.status_text},
-            "machines": [{"machine": m.machine, "jobs": list(m.jobs),
-                          "hours_used": json_number(round(m.hours_used, 9)),
-                          "capacity": json_number(m.capacity), "running": list(m.running)}
-                         for m in self.machines],
-        }
-        if self.running:
-            data["running"] = [{"job": r.job, "machine": r.machine, "since": r.since,
-                                "cost": None if r.cost is None else json_number(r.cost)}
-                               for r in self.running]
-        if self.unavailable_machines:
-            data["unavailable_machines"] = list(self.unavailable_machines)
+        """The solve contract plus ``machines``: per machine its ordered jobs and hours."""
+        certificate = {"verified": self.verified, "proven_optimal": self.proven_optimal,
+                       "bound": _json_float(self.bound), "gap": _json_float(self.gap),
+                       "text": self.status_text}
+        data = contract_json(self, bottleneck=None, certificate=certificate)
+        data["machines"] = [{"machine": m.machine, "jobs": list(m.jobs),
+                             "hours_used": json_number(round(m.hours_used, 9)),
+                             "capacity": json_number(m.capacity), "running": list(m.running)}
+                            for m in self.machines]
         return data
 
 

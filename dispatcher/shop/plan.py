@@ -31,6 +31,36 @@ def json_number(x: float) -> int | float:
     return int(x) if math.isfinite(x) and x.is_integer() and abs(x) < 2**53 else x
 
 
+def contract_json(plan: Any, *, bottleneck: float | None, certificate: dict[str, Any]) -> dict[str, Any]:
+    """The solve output contract for any plan-like object in shop names.
+
+    ``plan`` needs ``status``, ``objective``, ``total``, ``assignments``, ``waiting_jobs``,
+    ``idle_machines``, ``waiting_reasons``, ``running`` and ``unavailable_machines``; the
+    last two keys are written only when non-empty.
+    """
+    data: dict[str, Any] = {
+        "status": plan.status,
+        "objective": plan.objective,
+        "total": json_number(plan.total),
+        "assignments": [{"job": a.job, "machine": a.machine, "cost": json_number(a.cost)}
+                        for a in plan.assignments],
+        "waiting_jobs": list(plan.waiting_jobs),
+        "idle_machines": list(plan.idle_machines),
+        "bottleneck": None if bottleneck is None else json_number(bottleneck),
+        "waiting_reasons": {
+            j: {"competing_jobs": list(w.competing_jobs), "machines": list(w.machines),
+                "text": w.text} for j, w in plan.waiting_reasons.items()},
+        "certificate": certificate,
+    }
+    if plan.running:
+        data["running"] = [{"job": r.job, "machine": r.machine, "since": r.since,
+                            "cost": None if r.cost is None else json_number(r.cost)}
+                           for r in plan.running]
+    if plan.unavailable_machines:
+        data["unavailable_machines"] = list(plan.unavailable_machines)
+    return data
+
+
 @dataclass(frozen=True)
 class Assignment:
     """Job newly dispatched to a machine, with the grid value of the pair."""
@@ -119,27 +149,7 @@ class Plan:
     # ---- JSON ---------------------------------------------------------------------------
     def to_json(self) -> dict[str, Any]:
         """The solve output contract (see the module docstring)."""
-        data: dict[str, Any] = {
-            "status": self.status,
-            "objective": self.objective,
-            "total": json_number(self.total),
-            "assignments": [{"job": a.job, "machine": a.machine, "cost": json_number(a.cost)}
-                            for a in self.assignments],
-            "waiting_jobs": list(self.waiting_jobs),
-            "idle_machines": list(self.idle_machines),
-            "bottleneck": None if self.bottleneck is None else json_number(self.bottleneck),
-            "waiting_reasons": {
-                j: {"competing_jobs": list(w.competing_jobs), "machines": list(w.machines),
-                    "text": w.text} for j, w in self.waiting_reasons.items()},
-            "certificate": dict(self.certificate),
-        }
-        if self.running:
-            data["running"] = [{"job": r.job, "machine": r.machine, "since": r.since,
-                                "cost": None if r.cost is None else json_number(r.cost)}
-                               for r in self.running]
-        if self.unavailable_machines:
-            data["unavailable_machines"] = list(self.unavailable_machines)
-        return data
+        return contract_json(self, bottleneck=self.bottleneck, certificate=dict(self.certificate))
 
     @classmethod
     def from_json(cls, data: Any, source: str = "plan") -> "Plan":
