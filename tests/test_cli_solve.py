@@ -124,12 +124,18 @@ def test_waiting_reasons_are_checkable(capsys):
     code, out, _ = run_cli(capsys, SAMPLE, "--json")
     data = json.loads(out)
     assert set(data["waiting_reasons"]) == set(data["waiting_jobs"])
-    for job, reason in data["waiting_reasons"].items():
-        assert job in reason["competing_jobs"]
-        assert len(reason["machines"]) < len(reason["competing_jobs"])
-        rows = [jobs.index(j) for j in reason["competing_jobs"]]
+    waiting_in_groups = 0
+    for group in data["wait_groups"]:
+        waiting = [j for j in group["jobs"] if j in data["waiting_jobs"]]
+        waiting_in_groups += len(waiting)
+        # Konig (1931): the group has exactly as many jobs too many as it has waiting jobs.
+        assert len(group["jobs"]) - len(group["machines"]) == len(waiting) > 0
+        rows = [jobs.index(j) for j in group["jobs"]]
         usable = {machines[k] for i in rows for k in np.flatnonzero(allowed[i])}
-        assert usable <= set(reason["machines"])
+        assert usable <= set(group["machines"])
+    assert waiting_in_groups == len(data["waiting_jobs"])
+    for job, reason in data["waiting_reasons"].items():
+        assert job in data["wait_groups"][reason["group"]]["jobs"]
         assert job in reason["text"]
 
 
@@ -294,4 +300,5 @@ def test_no_compatible_pair_everyone_waits(capsys, tmp_path):
     data = json.loads(out)
     assert data["assignments"] == [] and data["total"] == 0
     assert data["waiting_jobs"] == ["A", "B"] and data["idle_machines"] == ["M1", "M2"]
-    assert data["waiting_reasons"]["A"]["machines"] == []
+    group = data["wait_groups"][data["waiting_reasons"]["A"]["group"]]
+    assert group == {"jobs": ["A"], "machines": []}

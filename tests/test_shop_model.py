@@ -273,7 +273,8 @@ def test_plain_grid_shop_equals_engine_and_json_round_trip():
     assert plan.total == ref.total
     data = plan.to_json()
     assert set(data) == {"status", "objective", "total", "assignments", "waiting_jobs",
-                         "idle_machines", "bottleneck", "waiting_reasons", "certificate"}
+                         "idle_machines", "bottleneck", "waiting_reasons", "wait_groups",
+                         "certificate"}
     assert Plan.from_json(data) == plan
 
 
@@ -340,3 +341,16 @@ def test_plan_json_round_trip_with_running_and_unavailable():
     assert data["unavailable_machines"] == ["saw"]
     assert Plan.from_json(data) == plan
     assert plan.by_machine() == {"press": [("a", 4.0, True), ("b", 3.0, False)]}
+
+
+def test_plan_json_with_a_wrong_wait_group_is_refused_with_its_field():
+    shop = shop_from_grid(list("abc"), ["x"], np.array([[1.0], [2.0], [3.0]]),
+                          np.ones((3, 1), dtype=bool))
+    data = solve_shop(shop).to_json()
+    # two jobs wait, and they compete for the one machine with the placed job: one group
+    assert len(data["wait_groups"]) == 1 and len(data["wait_groups"][0]["jobs"]) == 3
+    data["waiting_reasons"]["c"]["group"] = 5
+    from dispatcher.shop import PlanFormatError
+
+    with pytest.raises(PlanFormatError, match=r"waiting_reasons\['c'\], field 'group'"):
+        Plan.from_json(data)

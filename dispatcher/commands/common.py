@@ -33,21 +33,23 @@ def plan_json(result: DispatchResult, jobs: list[str], machines: list[str]) -> d
     """The solve output contract for an engine result with names attached.
 
     Keys fixed by the contract: status, objective, total, assignments (job, machine, cost),
-    waiting_jobs, idle_machines. Ours: bottleneck, waiting_reasons, certificate.
+    waiting_jobs, idle_machines. Ours: bottleneck, waiting_reasons (job -> group number and
+    sentence), wait_groups (the jobs competing for the same machines, and those machines),
+    certificate.
     """
     assignments = []
     for j in np.flatnonzero(result.machine_of_job >= 0):
         m = int(result.machine_of_job[j])
         assignments.append({"job": jobs[j], "machine": machines[m],
                             "cost": number(result.values[j, m])})
-    reasons = {}
-    for j in result.waiting_jobs:
-        w = result.wait_reason(int(j))
-        reasons[jobs[j]] = {
-            "competing_jobs": [jobs[i] for i in w.jobs],
-            "machines": [machines[i] for i in w.machines],
-            "text": wait_reason_text(jobs, machines, int(j), w),
-        }
+    reasons: dict[str, dict[str, Any]] = {}
+    groups = []
+    for g, w in enumerate(result.wait_groups()):
+        groups.append({"jobs": [jobs[i] for i in w.jobs], "machines": [machines[i] for i in w.machines]})
+        for j in w.jobs[result.machine_of_job[w.jobs] < 0]:
+            reasons[jobs[j]] = {"group": g,
+                                "text": wait_reason_text(jobs, machines, int(j), w)}
+    reasons = {jobs[j]: reasons[jobs[j]] for j in result.waiting_jobs}
     return {
         "status": "optimal",
         "objective": result.objective,
@@ -57,6 +59,7 @@ def plan_json(result: DispatchResult, jobs: list[str], machines: list[str]) -> d
         "idle_machines": [machines[m] for m in result.idle_machines],
         "bottleneck": None if result.bottleneck is None else number(result.bottleneck),
         "waiting_reasons": reasons,
+        "wait_groups": groups,
         "certificate": {"verified": result.verify()},
     }
 

@@ -47,9 +47,7 @@ def contract_json(plan: Any, *, bottleneck: float | None, certificate: dict[str,
         "waiting_jobs": list(plan.waiting_jobs),
         "idle_machines": list(plan.idle_machines),
         "bottleneck": None if bottleneck is None else json_number(bottleneck),
-        "waiting_reasons": {
-            j: {"competing_jobs": list(w.competing_jobs), "machines": list(w.machines),
-                "text": w.text} for j, w in plan.waiting_reasons.items()},
+        **reasons_json(plan.waiting_reasons),
         "certificate": certificate,
     }
     if plan.running:
@@ -59,6 +57,26 @@ def contract_json(plan: Any, *, bottleneck: float | None, certificate: dict[str,
     if plan.unavailable_machines:
         data["unavailable_machines"] = list(plan.unavailable_machines)
     return data
+
+
+def reasons_json(reasons: dict[str, "WaitReason"]) -> dict[str, Any]:
+    """``waiting_reasons`` (job -> group number and sentence) and ``wait_groups``.
+
+    Jobs that compete for the same machines share one group, written once: with hundreds
+    of waiting jobs in one group, repeating the list per job would make a plan (and every
+    history record of it) grow with the square of the shop.
+    """
+    groups: list[dict[str, list[str]]] = []
+    index: dict[tuple[tuple[str, ...], tuple[str, ...]], int] = {}
+    out: dict[str, dict[str, Any]] = {}
+    for job, w in reasons.items():
+        key = (tuple(w.competing_jobs), tuple(w.machines))
+        number = index.get(key)
+        if number is None:
+            number = index[key] = len(groups)
+            groups.append({"jobs": list(w.competing_jobs), "machines": list(w.machines)})
+        out[job] = {"group": number, "text": w.text}
+    return {"waiting_reasons": out, "wait_groups": groups}
 
 
 @dataclass(frozen=True)
@@ -198,13 +216,25 @@ class Plan:
             assignments.append(Assignment(text(a["job"], f"{where}, field 'job'"),
                                           text(a["machine"], f"{where}, field 'machine'"),
                                           num(a["cost"], f"{where}, field 'cost'")))
+        groups = []
+        raw_groups = data.get("wait_groups", [])
+        if not isinstance(raw_groups, list):
+            raise fail("field 'wait_groups'", "expected a list")
+        for i, g in enumerate(raw_groups):
+            g = obj(g, f"wait_groups[{i}]")
+            groups.append((names(g.get("jobs", []), f"wait_groups[{i}], field 'jobs'"),
+                           names(g.get("machines", []), f"wait_groups[{i}], field 'machines'")))
         reasons = {}
         for job, w in obj(data.get("waiting_reasons", {}), "field 'waiting_reasons'").items():
             where = f"waiting_reasons[{job!r}]"
             w = obj(w, where)
-            reasons[job] = WaitReason(names(w.get("competing_jobs", []), f"{where}, field 'competing_jobs'"),
-                                      names(w.get("machines", []), f"{where}, field 'machines'"),
-                                      text(w.get("text", ""), f"{where}, field 'text'"))
+            number = w.get("group")
+            if isinstance(number, bool) or not isinstance(number, int) \
+                    or not 0 <= number < len(groups):
+                raise fail(f"{where}, field 'group'",
+                           f"expected a number of one of the {len(groups)} wait_groups, got {number!r}")
+            jobs, machines = groups[number]
+            reasons[job] = WaitReason(jobs, machines, text(w.get("text", ""), f"{where}, field 'text'"))
         running = []
         for i, r in enumerate(data.get("running", []) or []):
             where = f"running[{i}]"

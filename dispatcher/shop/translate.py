@@ -164,8 +164,7 @@ def plan_from_result(problem: ShopProblem, result: DispatchResult) -> Plan:
     unavailable = set(problem.unavailable)
     idle = [m.name for k, m in enumerate(shop.machines) if not busy[k] and k not in unavailable]
     waiting = [problem.job_name(int(n)) for n in result.waiting_jobs]
-    reasons = {problem.job_name(int(n)): _wait_reason(problem, result, int(n))
-               for n in result.waiting_jobs}
+    reasons = _wait_reasons(problem, result)
     return Plan(
         objective=result.objective,
         total=float(result.total),
@@ -182,22 +181,31 @@ def plan_from_result(problem: ShopProblem, result: DispatchResult) -> Plan:
     )
 
 
-def _wait_reason(problem: ShopProblem, result: DispatchResult, row: int) -> WaitReason:
-    """Hall witness of a waiting job in shop names, with a sentence a supervisor can check."""
-    w = result.wait_reason(row)
-    jobs = [problem.job_name(int(i)) for i in w.jobs]
-    machines = _unique(problem.machine_name(int(c)) for c in w.machines)
-    name = problem.job_name(row)
-    if len(w.machines) == 0:
-        text = f"{name}: no available machine can run it" + _why_no_machine(problem, row)
-    elif len(machines) == len(w.machines):
-        text = (f"{name}: {len(jobs)} jobs can only run on {len(machines)} machine(s) "
-                f"({', '.join(machines)}), so {w.deficiency} of them must wait")
-    else:
-        text = (f"{name}: {len(jobs)} jobs can only use {len(w.machines)} free slot(s) on "
-                f"{len(machines)} machine(s) ({', '.join(machines)}), so {w.deficiency} of "
-                "them must wait")
-    return WaitReason(jobs, machines, text)
+def _wait_reasons(problem: ShopProblem, result: DispatchResult) -> dict[str, WaitReason]:
+    """Hall witness of each waiting job in shop names, with a sentence a supervisor can check.
+
+    Jobs of one group share the group's name lists (built once per group).
+    """
+    by_row: dict[int, WaitReason] = {}
+    for w in result.wait_groups():
+        jobs = [problem.job_name(int(i)) for i in w.jobs]
+        machines = _unique(problem.machine_name(int(c)) for c in w.machines)
+        if len(w.machines) == 0:
+            why = None
+        elif len(machines) == len(w.machines):
+            why = (f"{len(jobs)} jobs can only run on {len(machines)} machine(s) "
+                   f"({', '.join(machines)}), so {w.deficiency} of them must wait")
+        else:
+            why = (f"{len(jobs)} jobs can only use {len(w.machines)} free slot(s) on "
+                   f"{len(machines)} machine(s) ({', '.join(machines)}), so {w.deficiency} "
+                   "of them must wait")
+        for row in w.jobs[result.machine_of_job[w.jobs] < 0]:
+            row = int(row)
+            name = problem.job_name(row)
+            text = (f"{name}: {why}" if why is not None else
+                    f"{name}: no available machine can run it" + _why_no_machine(problem, row))
+            by_row[row] = WaitReason(jobs, machines, text)
+    return {problem.job_name(int(n)): by_row[int(n)] for n in result.waiting_jobs}
 
 
 def _why_no_machine(problem: ShopProblem, row: int) -> str:

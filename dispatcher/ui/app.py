@@ -9,11 +9,19 @@ from dispatcher import __version__
 
 ORG, APP = "dispatcher", "Dispatcher"
 
+#: How long (seconds) a thread may hold Python's interpreter lock before handing it over.
+#: Solves run in worker threads and partly in Python (building the engine's matrices);
+#: every grid cell Qt paints calls back into Python on the GUI thread. With CPython's
+#: default 5 ms the painter waits behind the worker and a 1000 x 200 grid stalled for
+#: ~100 ms per repaint during a solve; 1 ms measured about half of that.
+GUI_SWITCH_INTERVAL = 0.001
+
 
 def make_application(argv: Sequence[str] | None = None):
     """The QApplication (created once), with names used by QSettings and autosave."""
     from PySide6.QtWidgets import QApplication
 
+    sys.setswitchinterval(GUI_SWITCH_INTERVAL)
     app = QApplication.instance()
     if app is None:
         app = QApplication(list(argv or sys.argv[:1]))
