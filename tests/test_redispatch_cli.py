@@ -131,3 +131,37 @@ def test_infeasible_rush_exits_3(tmp_path, capsys):
     code, _, err = run(capsys, path, "--rush", "WO-5", "--down", "Press A")
     assert code == 3
     assert "WO-5" in err and "infeasible" in err
+
+
+def test_command_line_loop_solve_in_force_then_breakdown_recorded_and_saved(shop_file, tmp_path,
+                                                                           capsys):
+    # The supervisor's loop without the app: put the morning plan in force, then a breakdown.
+    from dispatcher.history import HistoryStore
+
+    history = tmp_path / "h.sqlite"
+    record = ["--record", "--by", "M. Ortega", "--history", str(history)]
+    assert main(["solve", str(shop_file), "--json", "--in-force", *record,
+                 "--reason", "shift-start"]) == 0
+    morning = json.loads(capsys.readouterr().out)
+    saved = load_shop(shop_file)
+    # The document now holds exactly the printed plan (running jobs first).
+    assert saved.plan_in_force == solve_shop(invented_shop()).in_force(saved)
+    assert main(["redispatch", str(shop_file), "--down", "Press B", "--json", "--in-force",
+                 *record, "--reason", "breakdown", "--note", "hydraulic leak"]) == 0
+    after = json.loads(capsys.readouterr().out)
+    saved = load_shop(shop_file)
+    assert saved.machine_by_name("Press B").state == "down"
+    placed = {a["machine"] for a in after["assignments"]}
+    assert "Press B" not in placed and "B" not in saved.plan_in_force
+    store = HistoryStore(history)
+    assert [d.reason for d in store.list(newest_first=False)] == ["shift-start", "breakdown"]
+    assert store.get(2).plan["total"] == after["total"]
+    assert store.get(1).plan["total"] == morning["total"]
+
+
+def test_in_force_needs_a_shop_document(samples, capsys):
+    grid = samples / "sheet_metal_grid.csv"
+    before = grid.read_bytes()
+    assert main(["solve", str(grid), "--in-force"]) == 2
+    assert "--in-force needs a shop document" in capsys.readouterr().err
+    assert grid.read_bytes() == before

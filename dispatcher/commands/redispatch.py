@@ -13,7 +13,18 @@ import json
 from pathlib import Path
 
 from dispatcher.commands.common import EXIT_INFEASIBLE, CliError, print_json
-from dispatcher.commands.shop_input import print_shop_plan, read_shop_arg
+from dispatcher.commands.history import (
+    add_record_arguments,
+    check_record_arguments,
+    record_decision,
+)
+from dispatcher.commands.shop_input import (
+    add_in_force_argument,
+    print_shop_plan,
+    read_shop_arg,
+    save_in_force,
+)
+from dispatcher.io.shopfile import shop_to_dict
 from dispatcher.shop import Plan, PlanFormatError, ShopError, ShopInfeasibleError
 from dispatcher.shop.redispatch import ShopEvent, ShopRedispatch, redispatch_shop
 
@@ -47,6 +58,8 @@ def register(sub: argparse._SubParsersAction) -> None:
                         "(default: the shop document's plan_in_force)")
     p.add_argument("--maximize", action="store_true", help="values are gains: maximise the total")
     p.add_argument("--json", action="store_true", help="print one JSON object")
+    add_in_force_argument(p)
+    add_record_arguments(p)
     p.set_defaults(func=run)
 
 
@@ -91,6 +104,7 @@ def run(args: argparse.Namespace) -> int:
     events = _events(args)
     if not events:
         raise CliError("redispatch needs an event: --down MACHINE (or --up, --rush, --done, --pull)")
+    check_record_arguments(args)
     shop = read_shop_arg(args.shop)
     in_force = _plan_in_force(args, shop)
     try:
@@ -106,6 +120,9 @@ def run(args: argparse.Namespace) -> int:
         print_json(outcome.to_json())
     else:
         print_outcome(outcome, args)
+    record_decision(args, shop_to_dict(outcome.shop), outcome.to_json())
+    if args.in_force:
+        save_in_force(outcome.shop, outcome.plan.in_force(outcome.shop), args.shop)
     return 0
 
 

@@ -7,10 +7,11 @@ located, rush or pinned jobs that cannot all be placed exit 3.
 
 from __future__ import annotations
 
+import sys
 from pathlib import Path
 
 from dispatcher.commands.common import EXIT_INFEASIBLE, CliError, print_json, print_plan
-from dispatcher.io.shopfile import SHOP_SUFFIX, ShopFileError, load_shop
+from dispatcher.io.shopfile import SHOP_SUFFIX, ShopFileError, load_shop, save_shop
 from dispatcher.shop import Plan, Shop, ShopError, ShopInfeasibleError, solve_shop
 
 SHOP_SUFFIXES = (SHOP_SUFFIX, ".json")
@@ -27,6 +28,23 @@ def read_shop_arg(path: str) -> Shop:
         return load_shop(path)
     except ShopFileError as exc:
         raise CliError(str(exc)) from None
+
+
+def add_in_force_argument(parser) -> None:
+    """``--in-force``: write the new plan (and the shop after any event) into the document."""
+    parser.add_argument("--in-force", action="store_true",
+                        help="shop documents: save this plan into the document as the plan in "
+                        "force (with --record, only after the decision is recorded)")
+
+
+def save_in_force(shop: Shop, in_force: dict[str, list[str]], path: str) -> None:
+    """Save ``shop`` to ``path`` with ``in_force`` as its plan in force (atomic; exit 2 on failure)."""
+    shop.plan_in_force = {machine: list(jobs) for machine, jobs in in_force.items()}
+    try:
+        save_shop(shop, path)
+    except ShopFileError as exc:
+        raise CliError(f"{exc} (the document was not changed)") from None
+    print(f"Saved the plan in force into {path}", file=sys.stderr)
 
 
 def solve_shop_arg(shop: Shop, source: str, objective: str, must_run: str = "") -> Plan:

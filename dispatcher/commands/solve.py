@@ -20,9 +20,11 @@ from dispatcher.commands.history import (
 from dispatcher.commands import solve_extras
 from dispatcher.commands.shift_fill import run_fill_shift
 from dispatcher.commands.shop_input import (
+    add_in_force_argument,
     is_shop_document,
     print_shop_plan,
     read_shop_arg,
+    save_in_force,
     solve_shop_arg,
 )
 from dispatcher.engine import DispatchInputError, InfeasibleError, solve
@@ -50,6 +52,7 @@ def register(sub: argparse._SubParsersAction) -> None:
                    help="with --fill-shift: stop the solver after this many seconds and "
                    "report the best plan found with its proven gap")
     solve_extras.add_arguments(p)
+    add_in_force_argument(p)
     add_record_arguments(p)
     p.set_defaults(func=run)
 
@@ -82,6 +85,9 @@ def infeasible_message(exc: InfeasibleError, jobs: list[str], machines: list[str
 def run(args: argparse.Namespace) -> int:
     check_record_arguments(args)
     solve_extras.check_arguments(args, objective_of(args))
+    if args.in_force and (args.fill_shift or not is_shop_document(args.grid)):
+        raise CliError(f"{args.grid}: --in-force needs a shop document (.dshop) and one "
+                       "dispatch round (not --fill-shift)")
     if args.fill_shift:
         return run_fill_shift(args)
     if is_shop_document(args.grid):
@@ -99,6 +105,8 @@ def run(args: argparse.Namespace) -> int:
             if added:
                 solve_extras.print_text(added, shop_plan.to_json()["assignments"])
         record_decision(args, shop_to_dict(shop), shop_plan.to_json())
+        if args.in_force:
+            save_in_force(shop, shop_plan.in_force(shop), args.grid)
         return 0
     try:
         table = read_grid(args.grid)
