@@ -10,33 +10,20 @@ import json
 
 import pytest
 
+from helpers_shops import small_shop
+
 from dispatcher.cli import main
 from dispatcher.io.shopfile import load_shop, save_shop
-from dispatcher.shop import RUNNING, Job, Machine, Shop, solve_shop
+from dispatcher.shop import Job, solve_shop
 
 CONTRACT_KEYS = {"status", "objective", "total", "assignments", "waiting_jobs",
                  "idle_machines", "bottleneck", "waiting_reasons", "certificate"}
 
 
-def invented_shop() -> Shop:
-    shop = Shop(name="Invented test cell", move_penalty=4.0)
-    shop.machines = [Machine(id="A", name="Press A"), Machine(id="B", name="Press B"),
-                     Machine(id="S", name="Saw")]
-    shop.jobs = [Job(id="J1", name="WO-1", state=RUNNING, machine="A"),
-                 Job(id="J2", name="WO-2", wait_penalty=30.0),
-                 Job(id="J3", name="WO-3", wait_penalty=30.0),
-                 Job(id="J4", name="WO-4", wait_penalty=1.0)]
-    grid = {"J1": {"A": 5, "B": 6}, "J2": {"A": 3, "B": 10}, "J3": {"B": 2, "S": 9},
-            "J4": {"A": 8, "B": 8, "S": 8}}
-    shop.grid = {(j, m): float(v) for j, row in grid.items() for m, v in row.items()}
-    shop.plan_in_force = {"A": ["J1"], "B": ["J2"], "S": ["J3"]}
-    return shop
-
-
 @pytest.fixture
 def shop_file(tmp_path):
     path = tmp_path / "cell.dshop"
-    save_shop(invented_shop(), path)
+    save_shop(small_shop(), path)
     return path
 
 
@@ -63,7 +50,7 @@ def test_json_is_the_solve_contract_plus_changes(shop_file, capsys):
 
 
 def test_move_penalty_option(shop_file, capsys):
-    shop = invented_shop()
+    shop = small_shop()
     shop.grid[("J2", "S")] = 1.0
     save_shop(shop, shop_file)
     code, out, _ = run(capsys, shop_file, "--done", "WO-4", "--move-penalty", "0", "--json")
@@ -75,7 +62,7 @@ def test_move_penalty_option(shop_file, capsys):
 
 
 def test_plan_in_force_from_a_plan_file(tmp_path, capsys):
-    shop = invented_shop()
+    shop = small_shop()
     shop.plan_in_force = {}
     path = tmp_path / "cell.dshop"
     save_shop(shop, path)
@@ -115,7 +102,7 @@ def test_bad_plan_file(tmp_path, shop_file, capsys):
     code, _, err = run(capsys, shop_file, "--down", "Saw", "--plan", bad)
     assert code == 2 and "plan.json: line 1, column 2: not valid JSON" in err
     other = tmp_path / "other.json"
-    plan = solve_shop(invented_shop()).to_json()
+    plan = solve_shop(small_shop()).to_json()
     plan["assignments"][0]["machine"] = "Press Q"
     other.write_text(json.dumps(plan), encoding="utf-8")
     code, _, err = run(capsys, shop_file, "--down", "Saw", "--plan", other)
@@ -123,7 +110,7 @@ def test_bad_plan_file(tmp_path, shop_file, capsys):
 
 
 def test_infeasible_rush_exits_3(tmp_path, capsys):
-    shop = invented_shop()
+    shop = small_shop()
     shop.jobs.append(Job(id="J5", name="WO-5"))
     shop.grid[("J5", "A")] = 1.0
     path = tmp_path / "cell.dshop"
@@ -145,7 +132,7 @@ def test_command_line_loop_solve_in_force_then_breakdown_recorded_and_saved(shop
     morning = json.loads(capsys.readouterr().out)
     saved = load_shop(shop_file)
     # The document now holds exactly the printed plan (running jobs first).
-    assert saved.plan_in_force == solve_shop(invented_shop()).in_force(saved)
+    assert saved.plan_in_force == solve_shop(small_shop()).in_force(saved)
     assert main(["redispatch", str(shop_file), "--down", "Press B", "--json", "--in-force",
                  *record, "--reason", "breakdown", "--note", "hydraulic leak"]) == 0
     after = json.loads(capsys.readouterr().out)
