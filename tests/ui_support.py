@@ -30,11 +30,16 @@ def make_window(qtbot, tmp_path: Path, monkeypatch, path: Path | None = None) ->
 def activate(qtbot, window) -> None:
     """Show the window and make it the active one, so keyboard shortcuts reach it
     (the offscreen platform does not activate windows by itself)."""
+    import warnings
+
     from PySide6.QtWidgets import QApplication
 
     window.show()
     qtbot.waitExposed(window)
-    QApplication.setActiveWindow(window)
+    # activateWindow() has no effect offscreen; the deprecated call is the one that works.
+    with warnings.catch_warnings():
+        warnings.simplefilter("ignore", DeprecationWarning)
+        QApplication.setActiveWindow(window)
 
 
 def wait_plan(qtbot, window: MainWindow) -> None:
