@@ -92,19 +92,12 @@ def _install_alternatives(window) -> None:
             lambda cancel: ("alternatives", alternative_plans(plan, count), unit), "alternatives")
 
     def put_in_force(plan, rank: int) -> DecisionDialog:
-        before, label = window.plan_in_force()
+        before, _ = window.plan_in_force()
         shop = snapshot(window.doc.shop)
         diff = diff_plans(before, plan.to_json()) if before else None
         proposal = Proposal(EVENT_CONFIRM, f"Put plan #{rank} of the alternatives in force",
                             shop, plan, diff)
-        dialog = DecisionDialog(proposal, window.doc.shop.unit.label(),
-                                str(window.settings.value("history/supervisor", "")), window,
-                                before=before, before_label=label)
-        dialog.confirmed.connect(window.apply_decision)
-        dialog.setAttribute(Qt.WidgetAttribute.WA_DeleteOnClose)
-        window.decision_dialog = dialog
-        dialog.open()
-        return dialog
+        return window.show_decision(proposal)
 
     window.side_handlers["alternatives"] = view.show_plans
     window.find_alternatives = find

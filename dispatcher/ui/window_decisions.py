@@ -84,8 +84,13 @@ class DecisionFlowsMixin:
         return self._open_decision(self.doc.shop, EVENT_CONFIRM)
 
     def _open_decision(self, shop: Shop, event: str, **where) -> DecisionDialog:
+        before, _ = self.plan_in_force()
+        return self.show_decision(propose(shop, event, self.objective, before, mode=self.mode,
+                                          **where))
+
+    def show_decision(self, proposal: Proposal) -> DecisionDialog:
+        """Open the confirm dialog for a proposal against the plan in force."""
         before, label = self.plan_in_force()
-        proposal = propose(shop, event, self.objective, before, mode=self.mode, **where)
         dialog = DecisionDialog(proposal, self.doc.shop.unit.label(),
                                 str(self.settings.value("history/supervisor", "")), self,
                                 before=before, before_label=label)
