@@ -106,3 +106,27 @@ def test_shop_alternatives_count_a_two_slot_machine_once(tmp_path, capsys):
 def test_bad_requests_exit_2(grid_file, capsys, argv, message):
     code, out, err = run(capsys, grid_file, *argv)
     assert code == 2 and message in err and out == ""
+
+
+def test_large_sample_lists_ten_distinct_plans_over_machines(capsys):
+    # Regression: ranked over slots, the large invented sample gave 2 distinct plans for
+    # --alternatives 10 (slot copies crowded out the rest) after minutes of ranking.
+    from pathlib import Path
+    sample = Path(__file__).resolve().parent.parent / "sample_shops" / "large_print_plant.dshop"
+    code, out, _ = run(capsys, sample, "--alternatives", "10", "--json")
+    assert code == 0
+    data = json.loads(out)
+    plans = data["alternatives"]
+    keys = {frozenset((a["job"], a["machine"]) for a in p["assignments"]) for p in plans}
+    assert len(plans) == 10 and len(keys) == 10
+    totals = [p["total"] for p in plans]
+    assert totals == sorted(totals) and totals[0] == data["total"]
+    # Each total is its own setups plus the wait penalties of the round's jobs it leaves
+    # waiting, with the penalties read from the document by the json module.
+    penalty = {j["name"]: j["wait_penalty"] for j in json.loads(sample.read_text())["jobs"]}
+    round_jobs = {a["job"] for a in data["assignments"]} | set(data["waiting_jobs"])
+    for p in plans:
+        placed = {a["job"] for a in p["assignments"]}
+        assert len(placed) == len(p["assignments"])
+        assert p["total"] == pytest.approx(sum(a["cost"] for a in p["assignments"])
+                                           + sum(penalty[j] for j in round_jobs - placed))

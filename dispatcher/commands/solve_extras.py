@@ -21,8 +21,6 @@ import numpy as np
 from dispatcher.commands.common import CliError, number
 from dispatcher.engine import DispatchResult, ranked_plans, what_if
 
-#: Most plans examined when machines with several slots make slot-level plans repeat.
-MAX_RANKED = 20_000
 MAX_ALTERNATIVES = 1000
 
 
@@ -64,25 +62,15 @@ def extras(result: DispatchResult, args: argparse.Namespace, jobs: list[str],
 
 def _alternatives(result: DispatchResult, k: int, jobs: list[str],
                   columns: list[str]) -> list[dict[str, Any]]:
-    repeated = len(set(columns)) < len(columns)
-    ask = k
-    while True:
-        plans = ranked_plans(result, ask)
-        out, seen = [], set()
-        for plan in plans:
-            pairs = [(int(j), int(c)) for j, c in enumerate(plan.machine_of_job) if c >= 0]
-            key = frozenset((j, columns[c]) for j, c in pairs)
-            if key in seen:
-                continue  # the same plan on another slot of the same machine
-            seen.add(key)
-            out.append({"total": number(plan.total), "assignments": [
-                {"job": jobs[j], "machine": columns[c], "cost": number(result.values[j, c])}
-                for j, c in pairs]})
-            if len(out) == k:
-                return out
-        if not repeated or len(plans) < ask or ask >= MAX_RANKED:
-            return out
-        ask = min(ask * 4, MAX_RANKED)
+    # Columns with the same machine name are slots of one machine: ranked over machines,
+    # so plans that differ only in slots are never generated.
+    out = []
+    for plan in ranked_plans(result, k, groups=columns):
+        pairs = [(int(j), int(c)) for j, c in enumerate(plan.machine_of_job) if c >= 0]
+        out.append({"total": number(plan.total), "assignments": [
+            {"job": jobs[j], "machine": columns[c], "cost": number(result.values[j, c])}
+            for j, c in pairs]})
+    return out
 
 
 def _what_if(result: DispatchResult, jobs: list[str], columns: list[str],

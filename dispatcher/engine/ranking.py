@@ -10,7 +10,10 @@ plan ranked is a plan in the engine's sense: it places as many jobs as the allow
 permit and places every must-run job.
 
 Method: Murty's partitioning (Murty 1968) over the job rows only, each job row choosing a
-machine or "wait", which makes the partition follow the definition above. Each subproblem
+machine or "wait", which makes the partition follow the definition above. A machine that
+takes several jobs is several identical columns (slots); given ``groups``, a job row
+chooses the machine, not the slot, and the slots left are the machine's capacity in each
+subproblem, so plans differing only in slots are never generated. Each subproblem
 differs from its parent by one forbidden choice plus fixed choices, which only raise
 costs, so the parent's potentials stay feasible and one shortest augmenting path from
 the freed row solves it (Miller, Stone and Cox 1997). Subproblems are solved lazily: they
@@ -90,12 +93,25 @@ class _Node:
 
 
 class _Ranker:
-    def __init__(self, result: DispatchResult):
+    def __init__(self, result: DispatchResult, groups=None):
         cert = result.certificate
         self.result = result
         self.base = cert.cost
         self.n_jobs, self.n_machines = result.values.shape
         self.size = self.base.shape[0]
+        # Group of every square column: machine columns by ``groups`` (renumbered from 0),
+        # wait slots all in one group after them; idle rows have no choice to make.
+        if groups is None:
+            machine_group = np.arange(self.n_machines)
+        else:
+            machine_group = np.unique(np.asarray(groups), return_inverse=True)[1].reshape(-1)
+            if machine_group.shape != (self.n_machines,):
+                raise ValueError(f"groups needs one entry per machine column "
+                                 f"({self.n_machines}), got {machine_group.size}")
+        wait_group = int(machine_group.max(initial=-1)) + 1
+        self.group = np.r_[machine_group, np.full(self.size - self.n_machines, wait_group)]
+        self.machine_group = machine_group
+        self.group_cols = [np.flatnonzero(self.group == g) for g in range(wait_group + 1)]
         # Root what-if: the best plan with row i on column j costs root key + rise[i, j];
         # every subproblem is a restriction of the root problem, so this bounds it below.
         self.rise = forced_rise(cert.cost, cert.col_of_row, cert.row_potential, cert.col_potential)
@@ -118,13 +134,10 @@ class _Ranker:
             m[rows, cols] = keep
         if fixed_w:
             m[np.array(fixed_w), :nm] = np.inf
-        forb_m = [(r, c) for r, c in node.forbidden if c != WAIT]
-        forb_w = [r for r, c in node.forbidden if c == WAIT]
-        if forb_m:
-            rows, cols = np.array(forb_m).T
-            m[rows, cols] = np.inf
-        if forb_w:
-            m[np.array(forb_w), nm:] = np.inf
+        for r, c in node.forbidden:
+            # Forbidding a choice forbids every column of its group (every slot of the
+            # machine, every wait slot).
+            m[r, self.group_cols[self.group[c] if c != WAIT else -1]] = np.inf
         return m
 
     def key_of(self, cost: np.ndarray, col_of_row: np.ndarray) -> float:
@@ -192,19 +205,14 @@ class _Ranker:
         is_wait = cols >= nm
         # Partition order: rows whose cheapest other choice costs the root most come first,
         # so the children likely to be ranked next carry the most fixed rows.
-        own = np.zeros((q, size), dtype=bool)
-        own[t, cols] = True
-        own[np.ix_(np.flatnonzero(is_wait), np.arange(nm, size))] = True
+        own = self.group[None, :] == self.group[cols][:, None]
         alt = np.where(own, np.inf, self.rise[free_rows]).min(axis=1)
         order = np.argsort(-alt, kind="stable")
         free_rows, cols, is_wait = free_rows[order], cols[order], is_wait[order]
         # Column j is fixed for child t when a free row before t holds it.
         col_pos = np.full(size, q, dtype=np.int64)
         col_pos[cols] = t
-        excluded = col_pos[None, :] < t[:, None]
-        excluded[t, cols] = True
-        if is_wait.any():
-            excluded[np.ix_(np.flatnonzero(is_wait), np.arange(nm, size))] = True
+        excluded = (col_pos[None, :] < t[:, None]) | (self.group[None, :] == self.group[cols][:, None])
         row_slack = np.where(excluded, np.inf, red[free_rows]).min(axis=1)
         forced = np.where(excluded, np.inf, self.rise[free_rows]).min(axis=1)
         # Another row must take the freed machine: rows after t (or idle rows), not fixed.
@@ -216,14 +224,13 @@ class _Ranker:
         col_slack[is_wait] = 0.0
         bound = np.maximum(node.key + row_slack + col_slack, self.root_key + forced)
         out = []
-        wait_cols = np.arange(nm, size)
         choices = np.where(is_wait, WAIT, cols)
         for k in np.flatnonzero(np.isfinite(bound)):
             r, choice = int(free_rows[k]), int(choices[k])
             out.append(_Node(fixed_choices, node.forbidden + [(r, choice)],
                              node.col_of_row, node.u, node.v, freed=r,
                              key=float(bound[k]), base=node.key, parent_cost=cost,
-                             blocked=cols[:k], skip=wait_cols if choice == WAIT else cols[k:k + 1],
+                             blocked=cols[:k], skip=self.group_cols[self.group[cols[k]]],
                              more_fixed=(free_rows[:k], choices[:k])))
         return out
 
@@ -235,7 +242,7 @@ class _Ranker:
         return RankedPlan(total, machine_of_job)
 
 
-def ranked_plans(result: DispatchResult, count: int) -> list[RankedPlan]:
+def ranked_plans(result: DispatchResult, count: int, groups=None) -> list[RankedPlan]:
     """The ``count`` best distinct plans, best first; the first is ``result``'s own plan.
 
     Parameters
@@ -244,30 +251,46 @@ def ranked_plans(result: DispatchResult, count: int) -> list[RankedPlan]:
         An optimal plan with objective ``"total"`` or ``"maximize"``.
     count : int
         How many plans at most; fewer are returned when fewer plans exist.
+    groups : sequence, optional
+        One label per machine column of ``result``. Columns with the same label are
+        slots of one machine that takes several jobs (identical columns: same values,
+        same allowed jobs); plans are then distinct over (job, machine) choices, so two
+        plans that differ only in which slot of a machine a job takes are one plan and
+        only one of them is ranked. Default: every column is a machine of its own.
 
     Returns
     -------
     list of RankedPlan
         Sorted by total (ascending for ``"total"``, descending for ``"maximize"``); plans
         with equal totals may come in any order. Distinct means distinct sets of
-        (job, machine) pairs; see the module docstring for waiting jobs.
+        (job, machine) pairs, a machine being a group of columns; see the module
+        docstring for waiting jobs.
 
     Raises
     ------
     ValueError
-        for the ``"bottleneck"`` objective, or a negative count.
+        for the ``"bottleneck"`` objective, a negative count, or ``groups`` of the wrong
+        length.
 
     Notes
     -----
     Murty (1968) partitioning with warm, lazily solved subproblems (Miller, Stone and
     Cox 1997): each solved subproblem costs one shortest augmenting path,
     O(n^2) at worst, and the bound lets most subproblems never be solved.
+
+    With ``groups``, the partition runs over (job, machine) choices: a child forbids its
+    row's machine on all of that machine's slots, and fixing a row keeps it on the slot
+    it holds. Slots of one machine are interchangeable, so a fixed row on one slot stands
+    for the row on any slot of the machine, and the machine's remaining slots are its
+    remaining capacity in the subproblem. Each plan over machines is thus reached in
+    exactly one subproblem and no slot copy is ever generated (Murty's partition holds
+    for any set of solutions made of one choice per row; here a choice is a machine).
     """
     if result.objective not in ("total", "maximize"):
         raise ValueError("ranked alternatives are defined for the 'total' and 'maximize' objectives")
     if count < 0:
         raise ValueError(f"count must be >= 0, got {count}")
-    ranker = _Ranker(result)
+    ranker = _Ranker(result, groups)
     cert = result.certificate
     root = _Node({}, [], cert.col_of_row.copy(), cert.row_potential.copy(),
                  cert.col_potential.copy())

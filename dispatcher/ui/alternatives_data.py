@@ -32,7 +32,7 @@ def alternative_plans(plan: Plan, count: int) -> list[Plan]:
     several = len(set(problem.columns)) < len(problem.columns)
     asked = count
     while True:
-        ranked_list = ranked_plans(result, asked)
+        ranked_list = ranked_plans(result, asked, groups=problem.columns)
         keys = []
         distinct: set[frozenset] = set()
         for ranked in ranked_list:
