@@ -30,7 +30,7 @@ def test_pulled_job_is_proposed_confirmed_and_recorded(qtbot, shop_window, tmp_p
     window = shop_window
     row, name, machine = _ordinary_planned(window)
     count = len(window.doc.shop.jobs)
-    dialog = window.on_pull(row)
+    dialog = window.decisions.pull(row)
     assert dialog is not None and dialog.isVisible() and name in dialog.windowTitle()
     assert dialog.findChild(object, "safetyReminder") is None
     text = dialog.findChild(object, "proposalDiff").text()
@@ -61,12 +61,12 @@ def test_pulled_job_is_proposed_confirmed_and_recorded(qtbot, shop_window, tmp_p
 
 def test_pull_after_a_recorded_plan_redispatches_from_it(qtbot, tmp_path, monkeypatch, samples):
     window = make_window(qtbot, tmp_path, monkeypatch, samples / "medium_machining_shop.dshop")
-    window.on_confirm_plan().confirm("F. Late", "shift start")
+    window.decisions.confirm_plan().confirm("F. Late", "shift start")
     wait_plan(qtbot, window)
     in_force = {a.job: a.machine for a in window.plan.assignments}
     row, name, machine = _ordinary_planned(window)
     shop_before = window.doc.shop.copy()
-    dialog = window.on_pull(row)
+    dialog = window.decisions.pull(row)
     text = dialog.findChild(object, "proposalDiff").text()
     assert "Re-dispatched from the plan in force" in text and "decision #1" in text
     assert f"frees {machine}" in text
@@ -96,7 +96,7 @@ def test_pull_is_in_the_menus_and_refused_for_a_done_job(qtbot, shop_window):
     window.doc.undo_stack.push(SetJobsState(window.doc, [(0, {"state": DONE, "machine": None,
                                                               "since": None})], "done"))
     with qtbot.waitSignal(window.warning) as warned:
-        assert window.on_pull(0) is None
+        assert window.decisions.pull(0) is None
     assert "already done" in warned.args[0]
 
 
@@ -107,7 +107,7 @@ def test_pulling_a_running_job_frees_its_machine(qtbot, tmp_path, monkeypatch, s
     name, machine_id = shop.jobs[row].name, shop.jobs[row].machine
     machine = shop.machine(machine_id).name
     assert machine not in [a.machine for a in window.plan.assignments]   # busy: not offered
-    dialog = window.on_pull(row)
+    dialog = window.decisions.pull(row)
     assert f"frees {machine}" in dialog.findChild(object, "proposalDiff").text()
     dialog.confirm("R. Day", "customer cancelled the order")
     wait_plan(qtbot, window)

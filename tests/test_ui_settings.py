@@ -32,7 +32,7 @@ def _other_history(window, path: Path, by: str = "Z. Elsewhere") -> None:
 
 def _open(qtbot, window):
     window.act_settings.trigger()
-    dialog = window.settings_dialog
+    dialog = window.settings_ctl.dialog
     qtbot.waitUntil(dialog.isVisible)
     return dialog
 
@@ -46,12 +46,12 @@ def test_switching_the_history_file_takes_effect_at_once(qtbot, window, tmp_path
     other = tmp_path / "other.sqlite"
     _other_history(window, other)
     window.history_dock.show()
-    assert window.history_panel.model.rowCount() == 0
+    assert window.history_dock.panel.model.rowCount() == 0
     dialog = _open(qtbot, window)
     assert dialog.history_path.text() == str(tmp_path / "history.sqlite")
-    window.file_chooser = ScriptedChooser([str(other)])
+    window.settings_ctl.chooser = ScriptedChooser([str(other)])
     dialog.choose_button.click()
-    assert window.file_chooser.asked == [str(tmp_path / "history.sqlite")]
+    assert window.settings_ctl.chooser.asked == [str(tmp_path / "history.sqlite")]
     assert dialog.history_path.text() == str(other)
     dialog.supervisor.setText("Q. Lead")
     dialog.autosave.setValue(5)
@@ -61,21 +61,21 @@ def test_switching_the_history_file_takes_effect_at_once(qtbot, window, tmp_path
     assert window.messenger.messages == []
     assert window.history.path == other
     # The panel lists the other file's decision without being asked to refresh.
-    assert window.history_panel.model.rowCount() == 1
-    assert window.history_panel.model.decision(0).by == "Z. Elsewhere"
-    assert str(other) in window.history_panel.where.text()
-    save_shot(window.history_panel, tmp_path, "history_panel_other_file")
+    assert window.history_dock.panel.model.rowCount() == 1
+    assert window.history_dock.panel.model.decision(0).by == "Z. Elsewhere"
+    assert str(other) in window.history_dock.panel.where.text()
+    save_shot(window.history_dock.panel, tmp_path, "history_panel_other_file")
     assert window.settings.value(KEY_HISTORY) == str(other)
     assert window.settings.value(KEY_SUPERVISOR) == "Q. Lead"
     assert window.files.autosave_interval_ms() == 5 * 60_000
     # The next decision goes into the new file, with the default supervisor filled in.
-    decision = window.on_confirm_plan()
+    decision = window.decisions.confirm_plan()
     assert decision.by.text() == "Q. Lead"
     with qtbot.waitSignal(window.decision_recorded):
         decision.confirm(decision.by.text(), "shift start")
     assert HistoryStore(other).count() == 2
     assert not (tmp_path / "history.sqlite").exists()
-    assert window.history_panel.model.rowCount() == 2
+    assert window.history_dock.panel.model.rowCount() == 2
 
 
 def test_a_new_window_uses_the_stored_history_file(qtbot, tmp_path, monkeypatch):
@@ -123,7 +123,7 @@ def test_an_unusable_history_file_is_refused_and_the_setting_kept(qtbot, window,
     current = window.history.path
     stored = window.settings.value(KEY_HISTORY)
     dialog = _open(qtbot, window)
-    window.file_chooser = ScriptedChooser([str(bad)])
+    window.settings_ctl.chooser = ScriptedChooser([str(bad)])
     dialog.choose_button.click()
     _ok(dialog)
     [(level, title, text)] = window.messenger.messages
@@ -132,7 +132,7 @@ def test_an_unusable_history_file_is_refused_and_the_setting_kept(qtbot, window,
     assert "--history" not in text   # the choice is made in this dialog, not on a command line
     assert dialog.isVisible(), "the dialog stays open so another file can be chosen"
     assert window.history.path == current
-    assert window.history_panel.store.path == current
+    assert window.history_dock.panel.store.path == current
     assert window.settings.value(KEY_HISTORY) == stored
     if make is not None:
         assert hashlib.sha256(bad.read_bytes()).hexdigest() == before
@@ -146,5 +146,5 @@ def test_settings_open_from_the_keyboard(qtbot, window):
     activate(qtbot, window)
     [keys] = window.act_settings.shortcuts()[:1]
     qtbot.keySequence(window.view, keys)
-    qtbot.waitUntil(lambda: window.settings_dialog is not None and window.settings_dialog.isVisible())
-    window.settings_dialog.reject()
+    qtbot.waitUntil(lambda: window.settings_ctl.dialog is not None and window.settings_ctl.dialog.isVisible())
+    window.settings_ctl.dialog.reject()

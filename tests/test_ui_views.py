@@ -18,9 +18,11 @@ BIG = 1e9
 
 
 def _wait_side(qtbot, window) -> None:
-    qtbot.waitUntil(lambda: not window.side_runner.is_busy(), timeout=20_000)
-    window.side_runner.wait_idle()
-    qtbot.waitUntil(lambda: not window.side_runner.is_busy(), timeout=20_000)
+    runners = (window.whatif_tab.runner, window.alternatives_tab.runner)
+    qtbot.waitUntil(lambda: not any(r.is_busy() for r in runners), timeout=20_000)
+    for r in runners:
+        r.wait_idle()
+    qtbot.waitUntil(lambda: not any(r.is_busy() for r in runners), timeout=20_000)
 
 
 def _forced_total(values: np.ndarray, allowed: np.ndarray, i: int, k: int) -> float:
@@ -41,9 +43,9 @@ def test_what_if_map_matches_forced_resolves_and_explains_cells(qtbot, grid_wind
     window = grid_window
     window.resize(1200, 700)
     window.show()
-    window.tabs.setCurrentWidget(window.whatif_view)
+    window.tabs.setCurrentWidget(window.whatif_tab.view)
     _wait_side(qtbot, window)
-    model = window.whatif_view.model
+    model = window.whatif_tab.view.model
     assert model.rowCount() == window.doc.n_jobs()
     values, allowed = window.doc.shop.matrix()
     base = window.plan.total
@@ -61,29 +63,29 @@ def test_what_if_map_matches_forced_resolves_and_explains_cells(qtbot, grid_wind
                 assert extra == pytest.approx(forced - base, abs=1e-6)
                 checked += 1
     assert checked > 20
-    i = next(i for i in range(values.shape[0]) if window.whatif_view.model.grid.planned[i] >= 0)
-    k = int(window.whatif_view.model.grid.planned[i])
+    i = next(i for i in range(values.shape[0]) if window.whatif_tab.view.model.grid.planned[i] >= 0)
+    k = int(window.whatif_tab.view.model.grid.planned[i])
     other = next(c for c in range(values.shape[1]) if c != k and allowed[i, c])
     tip = model.tooltip(i, other)
     job, machines = window.doc.shop.jobs[i].name, window.doc.shop.machine_names()
     assert f"The plan puts {job} on {machines[k]}" in tip
     assert "Best other machine:" in tip and "Forcing this pair" in tip
-    save_shot(window.whatif_view, tmp_path, "whatif_view")
+    save_shot(window.whatif_tab.view, tmp_path, "whatif_view")
 
 
 def test_alternatives_are_ranked_and_one_can_be_put_in_force(qtbot, grid_window, tmp_path):
     window = grid_window
-    window.tabs.setCurrentWidget(window.alternatives_view)
-    window.find_alternatives(4)
+    window.tabs.setCurrentWidget(window.alternatives_tab.view)
+    window.alternatives_tab.find(4)
     _wait_side(qtbot, window)
-    plans = window.alternatives_view.plans
+    plans = window.alternatives_tab.view.plans
     assert len(plans) == 4
     totals = [p.total for p in plans]
     assert totals == sorted(totals) and totals[0] == pytest.approx(window.plan.total)
     # The second best is at least as dear as the cheapest plan that differs in one pair,
     # which is the least positive what-if extra (checked by forced scipy solves above).
     assert len({frozenset((a.job, a.machine) for a in p.assignments) for p in plans}) == 4
-    dialog = window.put_alternative_in_force(plans[1], 2)
+    dialog = window.alternatives_tab.put_in_force(plans[1], 2)
     dialog.confirm("D. Day", "customer asked for the laser on WO-4102")
     [entry] = HistoryStore(tmp_path / "history.sqlite").list()
     assert entry.total == pytest.approx(plans[1].total)
@@ -94,13 +96,13 @@ def test_history_panel_lists_filters_compares_and_restores(qtbot, tmp_path, monk
     window.resize(1200, 800)
     window.show()
     shop = window.doc.shop
-    window.on_confirm_plan().confirm("E. Early", "shift start")
+    window.decisions.confirm_plan().confirm("E. Early", "shift start")
     wait_plan(qtbot, window)
     first_state = shop_to_dict(window.doc.shop)
     col = shop.machine_names().index("Trim bench")
-    window.on_machine_event("down", col).confirm("E. Early", "belt torn")
+    window.decisions.machine_event("down", col).confirm("E. Early", "belt torn")
     wait_plan(qtbot, window)
-    panel = window.history_panel
+    panel = window.history_dock.panel
     window.history_dock.show()
     panel.refresh()
     assert panel.model.rowCount() == 2
@@ -118,7 +120,7 @@ def test_history_panel_lists_filters_compares_and_restores(qtbot, tmp_path, monk
     text = panel.details.toPlainText()
     assert "From decision #1 to #2" in text and "Trim bench" in text
     save_shot(window.history_dock, tmp_path, "history_panel")
-    number = window.restore_decision(1, by="E. Early")
+    number = window.history_dock.restore(1, by="E. Early")
     assert number == 3
     wait_plan(qtbot, window)
     assert window.doc.shop.machines[col].state == "up"

@@ -65,7 +65,7 @@ def test_paste_a_block_then_undo_and_redo_with_the_keyboard(qtbot, grid_window):
     shop = window.doc.shop
     original = shop_to_dict(shop)
     window.view.setCurrentIndex(window.model.index(1, FIRST_MACHINE_COL + 2))
-    assert window.paste_text("1\t2\n3\tx\n")
+    assert window.edits.paste_text("1\t2\n3\tx\n")
     wait_plan(qtbot, window)
     assert shop.value(shop.jobs[1].id, shop.machines[2].id) == 1
     assert shop.value(shop.jobs[1].id, shop.machines[3].id) == 2
@@ -93,7 +93,7 @@ def test_paste_with_names_goes_to_the_named_cells(qtbot, grid_window):
     job, machine = shop.jobs[5], shop.machines[6]
     text = f"label\t{machine.name}\n{job.name}\t7.5\n"
     window.view.setCurrentIndex(window.model.index(0, FIRST_MACHINE_COL))
-    assert window.paste_text(text)
+    assert window.edits.paste_text(text)
     assert shop.value(job.id, machine.id) == 7.5
 
 
@@ -102,7 +102,7 @@ def test_a_bad_paste_names_row_and_column_and_changes_nothing(qtbot, grid_window
     before = shop_to_dict(window.doc.shop)
     window.view.setCurrentIndex(window.model.index(0, FIRST_MACHINE_COL))
     with qtbot.waitSignal(window.warning) as blocker:
-        assert not window.paste_text("1\t2\n3\tabc\n")
+        assert not window.edits.paste_text("1\t2\n3\tabc\n")
     assert "row 2, column 2" in blocker.args[0] and "'abc' is not a number" in blocker.args[0]
     assert shop_to_dict(window.doc.shop) == before
 
@@ -114,7 +114,7 @@ def test_machine_down_confirmed_is_recorded_with_safety_reminder(qtbot, shop_win
     busy = next(a.machine for a in window.plan.assignments
                 if not shop.job_by_name(a.job).rush and not shop.pins_of(shop.job_by_name(a.job).id))
     col = shop.machine_names().index(busy)
-    dialog = window.on_machine_event("down", col)
+    dialog = window.decisions.machine_event("down", col)
     assert dialog is not None and dialog.isVisible()
     texts = " ".join(w.text() for w in dialog.findChildren(type(dialog.findChild(object, "safetyReminder"))))
     assert SAFETY_REMINDER in texts and "lockout/tagout" in SAFETY_REMINDER
@@ -144,7 +144,7 @@ def test_breakdown_that_strands_a_rush_job_still_offers_a_plan(qtbot, shop_windo
     shop = window.doc.shop
     rush_machine = next(a.machine for a in window.plan.assignments if shop.job_by_name(a.job).rush)
     col = shop.machine_names().index(rush_machine)
-    dialog = window.on_machine_event("down", col)
+    dialog = window.decisions.machine_event("down", col)
     text = dialog.findChild(object, "proposalDiff").text()
     if "Not every rush job can be placed" in text:
         assert "rush flags stay set" in text
@@ -159,7 +159,7 @@ def test_rush_job_arrival_is_recorded(qtbot, shop_window, tmp_path):
     shop = window.doc.shop
     row = shop.job_names().index(window.plan.waiting_jobs[0])
     name = shop.jobs[row].name
-    dialog = window.on_rush(row)
+    dialog = window.decisions.rush(row)
     assert dialog.findChild(object, "safetyReminder") is None
     dialog.confirm("B. Lead")
     wait_plan(qtbot, window)
@@ -174,7 +174,7 @@ def test_rush_job_arrival_is_recorded(qtbot, shop_window, tmp_path):
 def test_save_and_reopen_gives_the_identical_shop(qtbot, shop_window, tmp_path):
     window = shop_window
     _edit(qtbot, window, 0, 0, "33")
-    window.set_slots(1, 2)
+    window.edits.set_slots(1, 2)
     assert window.doc.dirty
     target = tmp_path / "saved.dshop"
     assert window.files.save_as(target)
@@ -252,12 +252,12 @@ def test_no_exception_escapes_during_a_session(qtbot, shop_window, samples, tmp_
         for objective in ("maximize", "bottleneck", "total"):
             window.set_objective(objective)
         window.view.setCurrentIndex(window.model.index(2, FIRST_MACHINE_COL + 1))
-        window.on_pin("must")
-        window.on_pin("must_not")
-        window.on_pin(None)
-        window.on_cannot_run()
-        window.on_copy(True)
-        window.paste_text("")
+        window.edits.pin("must")
+        window.edits.pin("must_not")
+        window.edits.pin(None)
+        window.edits.cannot_run()
+        window.edits.copy(True)
+        window.edits.paste_text("")
         window.doc.undo_stack.undo()
         window.doc.undo_stack.redo()
         window.request_solve()
@@ -281,14 +281,14 @@ def test_screenshot_of_the_main_window(qtbot, tmp_path, monkeypatch, samples):
 
 def test_breakdown_after_a_recorded_plan_redispatches_from_it(qtbot, tmp_path, monkeypatch, samples):
     window = make_window(qtbot, tmp_path, monkeypatch, samples / "medium_machining_shop.dshop")
-    window.on_confirm_plan().confirm("F. Late", "shift start")
+    window.decisions.confirm_plan().confirm("F. Late", "shift start")
     wait_plan(qtbot, window)
     shop = window.doc.shop
     assert shop.plan_in_force
     in_force = window.plan
     busy = next(a.machine for a in in_force.assignments if not shop.job_by_name(a.job).rush)
     col = shop.machine_names().index(busy)
-    dialog = window.on_machine_event("down", col)
+    dialog = window.decisions.machine_event("down", col)
     text = dialog.findChild(object, "proposalDiff").text()
     assert "Re-dispatched from the plan in force" in text and "decision #1" in text
     dialog.confirm("F. Late", "spindle fault")
@@ -328,7 +328,7 @@ def test_whole_shift_mode_fills_machines_within_their_hours(qtbot, tmp_path, mon
     assert "h used" in " ".join(window.plan_panel.tree.topLevelItem(0).child(i).text(1)
                                 for i in range(window.plan_panel.tree.topLevelItem(0).childCount()))
     assert progress, "the whole-shift solver reports its stages"
-    window.on_confirm_plan().confirm("G. Lead", "whole shift")
+    window.decisions.confirm_plan().confirm("G. Lead", "whole shift")
     [entry] = HistoryStore(tmp_path / "history.sqlite").list()
     assert entry.total == pytest.approx(plan.total)
 
@@ -351,7 +351,7 @@ def test_keyboard_only_breakdown_and_close_prompt(qtbot, shop_window, tmp_path):
     window.view.setCurrentIndex(window.model.index(0, FIRST_MACHINE_COL + col))
     window.view.setFocus()
     qtbot.keyClick(window.view, Qt.Key.Key_D, Qt.KeyboardModifier.ControlModifier)
-    dialog = window.decision_dialog
+    dialog = window.decisions.dialog
     assert dialog is not None and dialog.isVisible() and "Trim bench" in dialog.windowTitle()
     dialog.by.setFocus()
     qtbot.keyClicks(dialog.by, "H. Keys")
@@ -414,19 +414,19 @@ def test_export_grid_reads_back_and_import_into_the_shop_is_undoable(qtbot, shop
 def test_a_new_shop_is_built_by_adding_jobs_and_machines(qtbot, tmp_path, monkeypatch):
     window = make_window(qtbot, tmp_path, monkeypatch)
     window.files.new()
-    assert window.add_machine("Press A") and window.add_machine("Press B")
-    assert not window.add_machine("Press A")
+    assert window.edits.add_machine("Press A") and window.edits.add_machine("Press B")
+    assert not window.edits.add_machine("Press A")
     for name in ("Order 1", "Order 2", "Order 3"):
-        assert window.add_job(name)
+        assert window.edits.add_job(name)
     window.view.setCurrentIndex(window.model.index(0, FIRST_MACHINE_COL))
-    assert window.paste_text("4\t9\n2\t3\n7\t1\n")
+    assert window.edits.paste_text("4\t9\n2\t3\n7\t1\n")
     wait_plan(qtbot, window)
     values, allowed = window.doc.shop.matrix()
     # 3 jobs, 2 machines: scipy's rectangular assignment is the reference.
     assert window.plan.total == pytest.approx(reference_total(values, allowed))
     assert len(window.plan.waiting_jobs) == 1
     window.view.setCurrentIndex(window.model.index(2, FIRST_MACHINE_COL))
-    window.on_job_done()
+    window.edits.job_done()
     wait_plan(qtbot, window)
     assert window.doc.shop.jobs[2].state == "done" and not window.plan.waiting_jobs
     for _ in range(6):

@@ -9,13 +9,14 @@ from __future__ import annotations
 
 from dispatcher.engine.ranking import ranked_plans
 from dispatcher.shop import Assignment, Plan
+from dispatcher.ui.whatif_data import Cancelled
 
 #: At most this many engine plans per shop plan asked for are ranked to find distinct shop
 #: plans (multi-slot machines repeat plans); it bounds the time on big shops.
 ENGINE_PLANS_PER_PLAN = 16
 
 
-def alternative_plans(plan: Plan, count: int) -> list[Plan]:
+def alternative_plans(plan: Plan, count: int, cancel=None) -> list[Plan]:
     """Up to ``count`` best distinct plans, best first (the first is ``plan`` itself).
 
     Raises ValueError for the bottleneck objective (the engine ranks total and maximize).
@@ -33,6 +34,8 @@ def alternative_plans(plan: Plan, count: int) -> list[Plan]:
     asked = count
     while True:
         ranked_list = ranked_plans(result, asked, groups=problem.columns)
+        if cancel is not None and cancel.is_set():
+            raise Cancelled("ranking cancelled")
         keys = []
         distinct: set[frozenset] = set()
         for ranked in ranked_list:

@@ -1,8 +1,20 @@
-"""The main window: the dispatch grid, the live plan, files, and the decision flows.
+"""The main window: the dispatch grid, the live plan, its menus and keys.
 
 Every number shown comes from the Qt-free core (``dispatcher.shop``, ``dispatcher.engine``,
-``dispatcher.history``); this module arranges widgets, turns user actions into undoable
-edits, and re-solves in the background after each edit.
+``dispatcher.history``). The window owns the document, the grid and the plan (re-solved in
+the background after each edit) and creates its parts in its constructor, each with its
+own widgets, signals and worker:
+
+* ``edits`` (:class:`~dispatcher.ui.grid_edits.GridEdits`): copy, paste, pins, jobs, machines;
+* ``decisions`` (:class:`~dispatcher.ui.decision_flow.DecisionFlow`): breakdowns, repairs,
+  rush and pulled jobs, putting a plan in force;
+* ``whatif_tab``, ``alternatives_tab`` (:mod:`~dispatcher.ui.whatif_tab`,
+  :mod:`~dispatcher.ui.alternatives_tab`): the two tabs beside the grid;
+* ``history_dock`` (:class:`~dispatcher.ui.history_dock.HistoryDock`);
+* ``printing`` (:class:`~dispatcher.ui.printing.SheetPrinting`);
+* ``settings_ctl`` (:class:`~dispatcher.ui.settings_dialog.SettingsController`).
+
+The window builds every action and menu in one place and connects them to the parts.
 """
 
 from __future__ import annotations
@@ -19,16 +31,21 @@ from dispatcher.io.shopfile import SHOP_SUFFIX
 from dispatcher.shop import MUST, MUST_NOT, Plan, Shop
 from dispatcher.shop.fill import ShiftFill
 from dispatcher.ui import palette
-from dispatcher.ui.decision import EVENT_DOWN, EVENT_UP, DecisionDialog
+from dispatcher.ui.alternatives_tab import AlternativesTab
+from dispatcher.ui.decision import EVENT_DOWN, EVENT_UP
+from dispatcher.ui.decision_flow import DecisionFlow
 from dispatcher.ui.document import ShopDocument
 from dispatcher.ui.files import FileController
 from dispatcher.ui.grid_model import COL_PLAN, FIRST_MACHINE_COL, GridModel
+from dispatcher.ui.grid_edits import GridEdits
 from dispatcher.ui.grid_view import GridView
+from dispatcher.ui.history_dock import HistoryDock
 from dispatcher.ui.messages import Messenger
 from dispatcher.ui.plan_panel import PlanPanel
+from dispatcher.ui.printing import SheetPrinting
+from dispatcher.ui.settings_dialog import SettingsController
 from dispatcher.ui.solving import MODE_ROUND, MODE_SHIFT, MODES, SolveOutcome, snapshot, solve_outcome
-from dispatcher.ui.window_decisions import DecisionFlowsMixin
-from dispatcher.ui.window_edits import GridEditsMixin
+from dispatcher.ui.whatif_tab import WhatIfTab
 from dispatcher.ui.worker import BackgroundRunner
 
 APP_TITLE = "Dispatcher"
@@ -36,7 +53,7 @@ FILE_FILTER = f"Shop documents (*{SHOP_SUFFIX});;Grid files (*.csv *.tsv *.txt *
 GRID_FILTER = "Grid files (*.csv *.tsv *.txt *.xlsx)"
 
 
-class MainWindow(GridEditsMixin, DecisionFlowsMixin, QMainWindow):
+class MainWindow(QMainWindow):
     """The app window. ``plan_shown(plan)`` after each fresh plan; ``warning(str)`` for
     refused input (also shown in the status bar)."""
 
@@ -50,14 +67,13 @@ class MainWindow(GridEditsMixin, DecisionFlowsMixin, QMainWindow):
         super().__init__(parent)
         self.setObjectName("mainWindow")
         self.settings = settings or QSettings()
-        self.messenger = messenger or Messenger(self)
+        self._messenger = messenger or Messenger(self)
         self.doc = ShopDocument(shop, self)
-        self.files = FileController(self.doc, self.messenger, self.settings, self)
+        self.files = FileController(self.doc, self._messenger, self.settings, self)
         self.history = HistoryStore(history_path or self.settings.value("history/path") or None)
         self.objective = "total"
         self.mode = MODE_ROUND
         self.plan: Plan | ShiftFill | None = None
-        self.decision_dialog: DecisionDialog | None = None
         self._fit_columns = True
         self.last_problem = ""
 
@@ -83,14 +99,36 @@ class MainWindow(GridEditsMixin, DecisionFlowsMixin, QMainWindow):
         self._legend.setToolTip("What the marks in the grid mean (colours repeat them)")
         self.statusBar().addPermanentWidget(self._legend)
 
+        # The parts of the window.
+        self.edits = GridEdits(self)
+        self.decisions = DecisionFlow(self)
+        self.whatif_tab = WhatIfTab(self)
+        self.tabs.addTab(self.whatif_tab.view, "&What-if map")
+        self.alternatives_tab = AlternativesTab(self)
+        self.tabs.addTab(self.alternatives_tab.view, "&Alternatives")
+        self.history_dock = HistoryDock(self)
+        self.addDockWidget(Qt.DockWidgetArea.BottomDockWidgetArea, self.history_dock)
+        self.history_dock.hide()
+        self.printing = SheetPrinting(self)
+        self.settings_ctl = SettingsController(self)
+
         self._build_actions()
         self._build_menus()
         self._connect()
-        self._extra_views()
         self._update_title()
         self.resize(1280, 760)
         self.view.setFocus()
         self.request_solve()
+
+    @property
+    def messenger(self) -> Messenger:
+        """Where messages and questions go (tests and the command line replace it)."""
+        return self._messenger
+
+    @messenger.setter
+    def messenger(self, messenger: Messenger) -> None:
+        self._messenger = messenger
+        self.files.messenger = messenger
 
     # ---- construction ---------------------------------------------------------------------
     def _action(self, text: str, slot, shortcut=None, tip: str = "", checkable: bool = False) -> QAction:
@@ -129,44 +167,44 @@ class MainWindow(GridEditsMixin, DecisionFlowsMixin, QMainWindow):
         self.act_redo.setShortcuts(redo_keys)
         self.addAction(self.act_undo)
         self.addAction(self.act_redo)
-        self.act_copy = self._action("&Copy", self.on_copy, S.Copy, "Copy the selected values")
-        self.act_copy_names = self._action("Copy with &names", lambda: self.on_copy(True), "Ctrl+Shift+C",
+        self.act_copy = self._action("&Copy", self.edits.copy, S.Copy, "Copy the selected values")
+        self.act_copy_names = self._action("Copy with &names", lambda: self.edits.copy(True), "Ctrl+Shift+C",
                                            "Copy the selection with job and machine names")
-        self.act_paste = self._action("&Paste", self.on_paste, S.Paste,
+        self.act_paste = self._action("&Paste", self.edits.paste, S.Paste,
                                       "Paste a tab-separated block from a spreadsheet")
-        self.act_cannot = self._action("Mark &cannot run", self.on_cannot_run, S.Delete,
+        self.act_cannot = self._action("Mark &cannot run", self.edits.cannot_run, S.Delete,
                                        "The machine cannot run the job (selected cells)")
-        self.act_pin = self._action("&Pin job to this machine", lambda: self.on_pin(MUST), "Ctrl+Shift+M",
+        self.act_pin = self._action("&Pin job to this machine", lambda: self.edits.pin(MUST), "Ctrl+Shift+M",
                                     "The job must go to this machine")
-        self.act_forbid = self._action("&Forbid this pair", lambda: self.on_pin(MUST_NOT), "Ctrl+Shift+F",
+        self.act_forbid = self._action("&Forbid this pair", lambda: self.edits.pin(MUST_NOT), "Ctrl+Shift+F",
                                        "The job must not go to this machine")
-        self.act_unpin = self._action("C&lear pin", lambda: self.on_pin(None), "Ctrl+Shift+U",
+        self.act_unpin = self._action("C&lear pin", lambda: self.edits.pin(None), "Ctrl+Shift+U",
                                       "Remove the pin or ban of this pair")
-        self.act_rush = self._action("&Rush job arrived\u2026", self.on_rush, "Ctrl+R",
+        self.act_rush = self._action("&Rush job arrived\u2026", lambda: self.decisions.rush(), "Ctrl+R",
                                      "Make the current job a rush job and re-dispatch")
-        self.act_add_job = self._action("&Add job\u2026", self.on_add_job, "Ctrl+Shift+J",
+        self.act_add_job = self._action("&Add job\u2026", self.edits.ask_add_job, "Ctrl+Shift+J",
                                         "Add a job (for example a rush order that just arrived)")
-        self.act_add_machine = self._action("Add &machine\u2026", self.on_add_machine, None,
+        self.act_add_machine = self._action("Add &machine\u2026", self.edits.ask_add_machine, None,
                                             "Add a machine column")
-        self.act_done = self._action("Mark job &done", self.on_job_done, None,
+        self.act_done = self._action("Mark job &done", self.edits.job_done, None,
                                      "The current job is finished: it takes no part any more")
-        self.act_pull = self._action("Job &pulled\u2026", self.on_pull, None,
+        self.act_pull = self._action("Job &pulled\u2026", lambda: self.decisions.pull(), None,
                                      "The current job is cancelled or put on hold: re-dispatch "
                                      "without it and take it out of the shop")
-        self.act_penalty = self._action("Set &wait penalty\u2026", self.on_penalty, "Ctrl+W",
+        self.act_penalty = self._action("Set &wait penalty\u2026", self.edits.ask_penalty, "Ctrl+W",
                                         "Cost of leaving the current job waiting")
-        self.act_down = self._action("Machine &down\u2026", lambda: self.on_machine_event(EVENT_DOWN),
+        self.act_down = self._action("Machine &down\u2026", lambda: self.decisions.machine_event(EVENT_DOWN),
                                      "Ctrl+D", "Mark the current machine down and re-dispatch")
-        self.act_up = self._action("Machine back &up\u2026", lambda: self.on_machine_event(EVENT_UP),
+        self.act_up = self._action("Machine back &up\u2026", lambda: self.decisions.machine_event(EVENT_UP),
                                    "Ctrl+U", "Mark the current machine up again and re-dispatch")
-        self.act_maint = self._action("Machine in &maintenance", self.on_maintenance, None,
+        self.act_maint = self._action("Machine in &maintenance", self.edits.toggle_maintenance, None,
                                       "The current machine takes no jobs (planned maintenance)")
-        self.act_slots = self._action("Set &slots\u2026", self.on_slots, None,
+        self.act_slots = self._action("Set &slots\u2026", self.edits.ask_slots, None,
                                       "How many jobs the current machine takes per round")
-        self.act_confirm = self._action("&Put plan in force\u2026", self.on_confirm_plan, "Ctrl+Return",
+        self.act_confirm = self._action("&Put plan in force\u2026", lambda: self.decisions.confirm_plan(), "Ctrl+Return",
                                         "Record the plan shown as the decision in force")
         self.act_resolve = self._action("Re-&solve now", self.request_solve, "F5", "Solve again")
-        self.act_cancel = self._action("&Cancel solve", self.runner.cancel, "Esc",
+        self.act_cancel = self._action("&Cancel solve", self.cancel_solve, "Esc",
                                        "Stop waiting for a long solve")
         self.objective_group = QActionGroup(self)
         self.act_objectives = {}
@@ -187,6 +225,19 @@ class MainWindow(GridEditsMixin, DecisionFlowsMixin, QMainWindow):
             self.mode_group.addAction(a)
             self.act_modes[key] = a
         self.act_modes[MODE_ROUND].setChecked(True)
+        self.act_preview = self._action("Print pre&view\u2026", self.printing.preview, None,
+                                        "See the dispatch sheet as it will print")
+        self.act_print = self._action("&Print sheet\u2026", self.printing.print_now, S.Print,
+                                      "Print the dispatch sheet")
+        self.act_export_pdf = self._action("Export sheet as P&DF\u2026", self.printing.ask_export_pdf,
+                                           None, "Write the dispatch sheet to a PDF")
+        self.act_settings = self._action("Se&ttings\u2026", self.settings_ctl.open, None,
+                                         "History file, default supervisor name, autosave interval")
+        # The platform's Preferences keys; Ctrl+, where the platform defines none.
+        self.act_settings.setShortcuts(QKeySequence.keyBindings(S.Preferences)
+                                       or [QKeySequence("Ctrl+,")])
+        self.act_history = self.history_dock.toggleViewAction()
+        self.addAction(self.act_history)
 
     def _build_menus(self) -> None:
         bar = self.menuBar()
@@ -200,13 +251,16 @@ class MainWindow(GridEditsMixin, DecisionFlowsMixin, QMainWindow):
         m.addAction(self.act_export)
         m.addAction(self.act_export_plan)
         m.addSeparator()
-        self.file_menu = m
-        self._print_anchor = m.addSeparator()
+        for a in (self.act_preview, self.act_print, self.act_export_pdf):
+            m.addAction(a)
+        m.addSeparator()
         m.addAction(self.act_quit)
+        self.file_menu = m
         m = bar.addMenu("&Edit")
         self.edit_menu = m
         for a in (self.act_undo, self.act_redo, None, self.act_copy, self.act_copy_names,
-                  self.act_paste, None, self.act_cannot, self.act_pin, self.act_forbid, self.act_unpin):
+                  self.act_paste, None, self.act_cannot, self.act_pin, self.act_forbid, self.act_unpin,
+                  None, self.act_settings):
             m.addSeparator() if a is None else m.addAction(a)
         m = bar.addMenu("&Job")
         m.addAction(self.act_add_job)
@@ -230,13 +284,8 @@ class MainWindow(GridEditsMixin, DecisionFlowsMixin, QMainWindow):
         self.plan_menu = m
         self.view_menu = bar.addMenu("&View")
         self.view_menu.addAction(self.plan_dock.toggleViewAction())
+        self.view_menu.addAction(self.act_history)
         self._fill_recent()
-
-    def _extra_views(self) -> None:
-        """What-if, alternatives, history, printing and settings, each in its own module."""
-        from dispatcher.ui import extras, settings_dialog
-        extras.install(self)
-        settings_dialog.install(self)
 
     def _connect(self) -> None:
         self.doc.edited.connect(self.request_solve)
@@ -259,6 +308,11 @@ class MainWindow(GridEditsMixin, DecisionFlowsMixin, QMainWindow):
         self.view.cell_menu_requested.connect(self._cell_menu)
         self.view.machine_menu_requested.connect(self._machine_menu)
         self.view.job_menu_requested.connect(self._job_menu)
+        self.decisions.recorded.connect(self.decision_recorded)
+        self.decision_recorded.connect(lambda _: self.history_dock.refresh())
+        self.settings_ctl.history_changed.connect(self._use_history)
+        self.tabs.currentChanged.connect(lambda _: self.whatif_tab.refresh())
+        self.plan_shown.connect(lambda _: self.whatif_tab.refresh())
 
     # ---- title, status ----------------------------------------------------------------------
     def _update_title(self, *_args) -> None:
@@ -280,6 +334,11 @@ class MainWindow(GridEditsMixin, DecisionFlowsMixin, QMainWindow):
             a = self.recent_menu.addAction(f"&{n} {path}")
             a.triggered.connect(lambda _=False, p=path: self.open_path(p))
         self.recent_menu.setEnabled(bool(recent))
+
+    def _use_history(self, store: HistoryStore) -> None:
+        """Record into ``store`` from now on (accepted in the settings)."""
+        self.history = store
+        self.history_dock.set_store(store)
 
     # ---- solving ----------------------------------------------------------------------------
     def request_solve(self) -> None:
@@ -323,6 +382,17 @@ class MainWindow(GridEditsMixin, DecisionFlowsMixin, QMainWindow):
             self.plan_panel.show_note(outcome.problem)
         self.plan_shown.emit(outcome.plan)
 
+    def cancel_solve(self) -> None:
+        """Stop waiting for the solve running now (Esc, the plan panel's Cancel)."""
+        self.runner.cancel()
+
+    def show_plan_in_force(self, plan: Plan | ShiftFill, what: str) -> None:
+        """Show the plan just put in force (not a fresh solve of the same shop, which would
+        ignore the move penalties a re-dispatch paid) until the next edit."""
+        self.runner.discard()
+        self._on_solved(SolveOutcome(self.objective, plan, "", False, 0.0))
+        self.plan_panel.show_note(f"Plan in force: {what}. Any edit re-solves from scratch.")
+
     def _on_solve_failed(self, exc: Exception) -> None:
         self.plan_panel.show_problem(f"internal error while solving: {exc}")
         self.show_warning(f"Solving failed: {exc}")
@@ -349,12 +419,12 @@ class MainWindow(GridEditsMixin, DecisionFlowsMixin, QMainWindow):
         return self.files.open_path(path)
 
     def on_open(self) -> None:
-        path, _ = QFileDialog.getOpenFileName(self, "Open", self._folder(), FILE_FILTER)
+        path, _ = QFileDialog.getOpenFileName(self, "Open", self.folder(), FILE_FILTER)
         if path:
             self.open_path(path)
 
     def on_import(self) -> None:
-        path, _ = QFileDialog.getOpenFileName(self, "Import grid", self._folder(), GRID_FILTER)
+        path, _ = QFileDialog.getOpenFileName(self, "Import grid", self.folder(), GRID_FILTER)
         if path:
             self.open_path(path)
 
@@ -364,17 +434,17 @@ class MainWindow(GridEditsMixin, DecisionFlowsMixin, QMainWindow):
         return self.files.save()
 
     def on_save_as(self) -> bool:
-        path, _ = QFileDialog.getSaveFileName(self, "Save shop", self._folder(),
+        path, _ = QFileDialog.getSaveFileName(self, "Save shop", self.folder(),
                                               f"Shop documents (*{SHOP_SUFFIX})")
         return self.files.save_as(path) if path else False
 
     def on_export(self) -> None:
-        path, _ = QFileDialog.getSaveFileName(self, "Export grid", self._folder(), GRID_FILTER)
+        path, _ = QFileDialog.getSaveFileName(self, "Export grid", self.folder(), GRID_FILTER)
         if path:
             self.files.export_grid(path)
 
     def on_import_into(self) -> None:
-        path, _ = QFileDialog.getOpenFileName(self, "Import grid into this shop", self._folder(), GRID_FILTER)
+        path, _ = QFileDialog.getOpenFileName(self, "Import grid into this shop", self.folder(), GRID_FILTER)
         if path:
             self.files.import_into(path)
 
@@ -382,11 +452,11 @@ class MainWindow(GridEditsMixin, DecisionFlowsMixin, QMainWindow):
         if self.plan is None:
             self.show_warning("there is no plan to export yet")
             return
-        path, _ = QFileDialog.getSaveFileName(self, "Export plan", self._folder(), "Plan (*.csv *.xlsx)")
+        path, _ = QFileDialog.getSaveFileName(self, "Export plan", self.folder(), "Plan (*.csv *.xlsx)")
         if path:
             self.files.export_plan(self.plan, path)
 
-    def _folder(self) -> str:
+    def folder(self) -> str:
         return str(self.doc.path.parent) if self.doc.path else str(Path.cwd())
 
     def closeEvent(self, event: QCloseEvent) -> None:

@@ -4,6 +4,8 @@ The layout is the sheet package's (:func:`dispatcher.sheet.build.build_sheet` fo
 content, :mod:`dispatcher.sheet.render` for paper and PDF), so the preview, the printer and
 the PDF are the same pages. The sheet prints the decision in force when one is recorded
 for this shop, otherwise the plan shown (and says it is not recorded).
+
+:class:`SheetPrinting` is the main window's part for the File menu's three entries.
 """
 
 from __future__ import annotations
@@ -11,6 +13,8 @@ from __future__ import annotations
 import os
 from pathlib import Path
 
+from PySide6.QtCore import QObject
+from PySide6.QtWidgets import QFileDialog
 from PySide6.QtPrintSupport import QPrintDialog, QPrinter, QPrinterInfo, QPrintPreviewDialog
 
 from dispatcher.history import HistoryError
@@ -89,3 +93,27 @@ def print_now(window) -> None:
     dialog = QPrintDialog(printer, window)
     if dialog.exec() == QPrintDialog.DialogCode.Accepted:
         print_sheet(content, printer)
+
+
+class SheetPrinting(QObject):
+    """Print preview, print and PDF export for the window's shop. ``preview_dialog`` is
+    the last preview opened."""
+
+    def __init__(self, window):
+        super().__init__(window)
+        self.window = window
+        self.preview_dialog: QPrintPreviewDialog | None = None
+
+    def preview(self) -> QPrintPreviewDialog | None:
+        self.preview_dialog = preview(self.window)
+        return self.preview_dialog
+
+    def print_now(self) -> None:
+        print_now(self.window)
+
+    def ask_export_pdf(self) -> int | None:
+        path, _ = QFileDialog.getSaveFileName(self.window, "Export dispatch sheet",
+                                              self.window.folder(), "PDF (*.pdf)")
+        if not path:
+            return None
+        return export_pdf(self.window, path if path.lower().endswith(".pdf") else path + ".pdf")

@@ -13,7 +13,7 @@ from __future__ import annotations
 import os
 from pathlib import Path
 
-from PySide6.QtGui import QKeySequence
+from PySide6.QtCore import QObject, Signal
 from PySide6.QtWidgets import (
     QDialog,
     QDialogButtonBox,
@@ -100,12 +100,12 @@ def autosave_minutes(settings) -> int:
 
 
 class SettingsDialog(QDialog):
-    """Non-blocking (``open()``); OK asks the window to apply, and stays open if it refuses."""
+    """Non-blocking (``open()``); OK asks the controller to apply, and stays open if it refuses."""
 
-    def __init__(self, window):
+    def __init__(self, window, controller: SettingsController):
         super().__init__(window)
         self.setObjectName("settingsDialog")
-        self.window_ = window
+        self.controller = controller
         self.setWindowTitle("Settings")
         layout = QVBoxLayout(self)
         form = QFormLayout()
@@ -159,27 +159,46 @@ class SettingsDialog(QDialog):
         self.resize(max(self.sizeHint().width(), 640), self.sizeHint().height())
 
     def choose(self) -> None:
-        path = self.window_.file_chooser.history_file(self.history_path.text())
+        path = self.controller.chooser.history_file(self.history_path.text())
         if path:
             self.history_path.setText(path)
             self.history_path.setCursorPosition(0)
 
     def apply(self) -> bool:
-        """What OK does: apply through the window; close only if it accepted."""
-        ok = self.window_.apply_settings(self.history_path.text(), self.supervisor.text(),
+        """What OK does: apply through the controller; close only if it accepted."""
+        ok = self.controller.apply(self.history_path.text(), self.supervisor.text(),
                                          self.autosave.value())
         if ok:
             self.accept()
         return ok
 
 
-def install(window) -> None:
-    """Add *Edit ▸ Settings…* and ``open_settings`` / ``apply_settings`` to ``window``."""
-    window.file_chooser = FileChooser(window)
-    window.settings_dialog = None
-    window.files.set_autosave_minutes(autosave_minutes(window.settings))
+class SettingsController(QObject):
+    """Edit ▸ Settings: opens :class:`SettingsDialog` and applies what it asks for.
 
-    def apply_settings(history_path: str, supervisor: str, minutes: int) -> bool:
+    ``chooser`` asks for a history file (tests put a :class:`ScriptedChooser` there);
+    ``dialog`` is the last dialog opened. ``history_changed(store)`` when another history
+    file was accepted (the window records into it from then on).
+    """
+
+    history_changed = Signal(object)
+
+    def __init__(self, window):
+        super().__init__(window)
+        self.window = window
+        self.chooser: FileChooser = FileChooser(window)
+        self.dialog: SettingsDialog | None = None
+        window.files.set_autosave_minutes(autosave_minutes(window.settings))
+
+    def open(self) -> SettingsDialog:
+        dialog = SettingsDialog(self.window, self)
+        self.dialog = dialog
+        dialog.open()
+        return dialog
+
+    def apply(self, history_path: str, supervisor: str, minutes: int) -> bool:
+        """Use these settings; False (with a message, nothing changed) when refused."""
+        window = self.window
         text = history_path.strip()
         if not text:
             window.messenger.error("Settings not changed", "Choose a history file.")
@@ -196,29 +215,11 @@ def install(window) -> None:
                     "History file not changed",
                     f"{text}\n\nDecisions are still recorded in {window.history.path}.")
                 return False
-            window.history = store
-            window.history_panel.set_store(store)
             window.settings.setValue(KEY_HISTORY, str(new))
+            self.history_changed.emit(store)
             window.statusBar().showMessage(f"Decisions are now recorded in {new}", 8000)
         window.settings.setValue(KEY_SUPERVISOR, supervisor.strip())
         minutes = min(max(int(minutes), 1), AUTOSAVE_MAX_MIN)
         window.settings.setValue(KEY_AUTOSAVE, minutes)
         window.files.set_autosave_minutes(minutes)
         return True
-
-    def open_settings() -> SettingsDialog:
-        dialog = SettingsDialog(window)
-        window.settings_dialog = dialog
-        dialog.open()
-        return dialog
-
-    window.apply_settings = apply_settings
-    window.open_settings = open_settings
-    act = window._action("Se&ttings\u2026", open_settings, None,
-                         "History file, default supervisor name, autosave interval")
-    # The platform's Preferences keys; Ctrl+, where the platform defines none.
-    keys = QKeySequence.keyBindings(QKeySequence.StandardKey.Preferences) or [QKeySequence("Ctrl+,")]
-    act.setShortcuts(keys)
-    window.act_settings = act
-    window.edit_menu.addSeparator()
-    window.edit_menu.addAction(act)

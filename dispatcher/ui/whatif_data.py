@@ -18,6 +18,10 @@ from dispatcher.shop import Plan
 NOT_APPLICABLE = "n/a"
 
 
+class Cancelled(Exception):
+    """The computation was cancelled (its result would be dropped anyway)."""
+
+
 @dataclass(frozen=True)
 class WhatIfGrid:
     """``extra[i, k]``: how much worse the best plan with job i on machine k is (0 on the
@@ -42,13 +46,15 @@ class WhatIfGrid:
         return float(finite.max()) if finite.size else 0.0
 
 
-def what_if_grid(plan: Plan) -> WhatIfGrid:
+def what_if_grid(plan: Plan, cancel=None) -> WhatIfGrid:
     """Map the engine's what-if costs for ``plan`` onto its shop (raises ValueError for
     the bottleneck objective, where one number per pair does not describe the plans)."""
     problem, result = plan.problem, plan.result
     if problem is None or result is None:
         raise ValueError("this plan carries no solver result to compute what-if costs from")
     w = what_if(result)
+    if cancel is not None and cancel.is_set():
+        raise Cancelled("what-if costs cancelled")
     shop = problem.shop
     n_jobs, n_machines = len(shop.jobs), len(shop.machines)
     rows = np.asarray(problem.rows, dtype=np.int64)

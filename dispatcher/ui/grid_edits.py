@@ -1,13 +1,14 @@
-"""Grid edits of the main window: copy, paste, cannot-run, pins, jobs and machines.
+"""Grid edits: copy, paste, cannot-run, pins, jobs and machines.
 
-A mixin of :class:`dispatcher.ui.main_window.MainWindow`: every method turns a user action
-into one undoable edit on the document (see :mod:`dispatcher.ui.edits`).
+:class:`GridEdits` is a part of the main window, created in its constructor: every method
+turns a user action into one undoable edit on the document (see :mod:`dispatcher.ui.edits`).
 """
 
 from __future__ import annotations
 
 from datetime import datetime, timezone
 
+from PySide6.QtCore import QObject
 from PySide6.QtGui import QGuiApplication
 from PySide6.QtWidgets import QInputDialog
 
@@ -27,14 +28,28 @@ def _new_id(prefix: str, taken: list[str]) -> str:
     return f"{prefix}{n}"
 
 
-class GridEditsMixin:
-    """Edit actions (needs ``doc``, ``view``, ``model``, ``show_warning``, ``statusBar``)."""
+class GridEdits(QObject):
+    """The grid's edit actions. Reads the window's document, grid view and model; reports
+    refusals with ``window.show_warning`` and progress in its status bar."""
 
-    def on_copy(self, with_names: bool = False) -> None:
+    def __init__(self, window):
+        super().__init__(window)
+        self.window = window
+        self.doc = window.doc
+        self.view = window.view
+        self.model = window.model
+
+    def show_warning(self, text: str) -> None:
+        self.window.show_warning(text)
+
+    def status(self, text: str, ms: int = 4000) -> None:
+        self.window.statusBar().showMessage(text, ms)
+
+    def copy(self, with_names: bool = False) -> None:
         rows, cols = self.view.selected_block()
         if rows and cols:
             QGuiApplication.clipboard().setText(copy_block(self.doc.shop, rows, cols, with_names))
-            self.statusBar().showMessage(f"Copied {len(rows)} x {len(cols)} cells", 4000)
+            self.status(f"Copied {len(rows)} x {len(cols)} cells")
 
     def paste_text(self, text: str) -> bool:
         """Paste a tab-separated block at the current cell (one undoable edit)."""
@@ -50,19 +65,19 @@ class GridEditsMixin:
         changes = [c for c in changes if self.doc.value_at(c[0], c[1]) != c[2]]
         if changes:
             self.doc.undo_stack.push(SetValues(self.doc, changes, f"Paste {len(changes)} cells"))
-        self.statusBar().showMessage(f"Pasted; {len(changes)} cells changed", 4000)
+        self.status(f"Pasted; {len(changes)} cells changed")
         return True
 
-    def on_paste(self) -> None:
+    def paste(self) -> None:
         self.paste_text(QGuiApplication.clipboard().text())
 
-    def on_cannot_run(self) -> None:
+    def cannot_run(self) -> None:
         rows, cols = self.view.selected_block()
         changes = [(r, c, None) for r in rows for c in cols if self.doc.value_at(r, c) is not None]
         if changes:
             self.doc.undo_stack.push(SetValues(self.doc, changes, f"Mark {len(changes)} cells cannot run"))
 
-    def on_pin(self, kind: str | None) -> None:
+    def pin(self, kind: str | None) -> None:
         cell = self.view.current_cell()
         if cell is None:
             self.show_warning("choose a cell in a machine column first")
@@ -76,8 +91,8 @@ class GridEditsMixin:
                 None: f"Clear pin of {job.name} on {machine.name}"}[kind]
         self.doc.undo_stack.push(SetPin(self.doc, row, col, kind, text))
 
-    def on_add_job(self) -> None:
-        name, ok = QInputDialog.getText(self, "Add job", "Name of the new job (unique):")
+    def ask_add_job(self) -> None:
+        name, ok = QInputDialog.getText(self.window, "Add job", "Name of the new job (unique):")
         if ok:
             self.add_job(name)
 
@@ -91,11 +106,11 @@ class GridEditsMixin:
         shop.jobs.append(Job(id=_new_id("J", [j.id for j in shop.jobs]), name=name))
         self.doc.undo_stack.push(ReplaceShop(self.doc, shop, f"Add job {name}"))
         self.view.setCurrentIndex(self.model.index(self.doc.n_jobs() - 1, FIRST_MACHINE_COL))
-        self.statusBar().showMessage(f"Added {name}: type its values; Ctrl+R if it is a rush job", 8000)
+        self.status(f"Added {name}: type its values; Ctrl+R if it is a rush job", 8000)
         return True
 
-    def on_add_machine(self) -> None:
-        name, ok = QInputDialog.getText(self, "Add machine", "Name of the new machine (unique):")
+    def ask_add_machine(self) -> None:
+        name, ok = QInputDialog.getText(self.window, "Add machine", "Name of the new machine (unique):")
         if ok:
             self.add_machine(name)
 
@@ -109,7 +124,7 @@ class GridEditsMixin:
         self.doc.undo_stack.push(ReplaceShop(self.doc, shop, f"Add machine {name}"))
         return True
 
-    def on_job_done(self) -> None:
+    def job_done(self) -> None:
         row = self.view.current_row()
         if row is None:
             return
@@ -120,24 +135,24 @@ class GridEditsMixin:
                                                                 "since": None})],
                                               f"{job.name} done"))
 
-    def on_penalty(self) -> None:
+    def ask_penalty(self) -> None:
         row = self.view.current_row()
         if row is None:
             return
         job = self.doc.job_at(row)
-        value, ok = QInputDialog.getDouble(self, "Wait penalty", f"Cost of leaving {job.name} waiting:",
+        value, ok = QInputDialog.getDouble(self.window, "Wait penalty", f"Cost of leaving {job.name} waiting:",
                                            job.wait_penalty, 0.0, 1e12, 2)
         if ok and value != job.wait_penalty:
             self.doc.undo_stack.push(SetJobField(self.doc, row, "wait_penalty", value,
                                                  f"Wait penalty of {job.name}"))
 
-    def on_slots(self) -> None:
+    def ask_slots(self) -> None:
         col = self.view.current_machine()
         if col is None:
             self.show_warning("choose a cell in a machine column first")
             return
         m = self.doc.machine_at(col)
-        value, ok = QInputDialog.getInt(self, "Slots", f"Jobs {m.name} takes per round:", m.slots, 1, 100)
+        value, ok = QInputDialog.getInt(self.window, "Slots", f"Jobs {m.name} takes per round:", m.slots, 1, 100)
         if ok:
             self.set_slots(col, value)
 
@@ -147,7 +162,7 @@ class GridEditsMixin:
             self.doc.undo_stack.push(SetMachineFields(self.doc, col, {"slots": slots},
                                                       f"{m.name} takes {slots} job(s)"))
 
-    def on_maintenance(self) -> None:
+    def toggle_maintenance(self) -> None:
         col = self.view.current_machine()
         if col is None:
             return

@@ -1,16 +1,15 @@
-"""Decision flows of the main window: machine down or back up, rush job, job pulled, put a
-plan in force.
+"""Decision flows: machine down or back up, rush job, job pulled, put a plan in force.
 
-A mixin of :class:`dispatcher.ui.main_window.MainWindow`. The proposal comes from the core
-(:func:`dispatcher.ui.decision.propose`); confirming records the decision in the history
-first and only then changes the document, as one undoable step.
+:class:`DecisionFlow` is a part of the main window, created in its constructor. The
+proposal comes from :func:`dispatcher.ui.decision.propose`; confirming records the
+decision in the history first and only then changes the document, as one undoable step.
 """
 
 from __future__ import annotations
 
 from datetime import datetime, timezone
 
-from PySide6.QtCore import Qt
+from PySide6.QtCore import QObject, Qt, Signal
 
 from dispatcher.history import HistoryError, HistoryInputError
 from dispatcher.io.shopfile import shop_to_dict
@@ -26,25 +25,41 @@ from dispatcher.ui.decision import (
     propose,
 )
 from dispatcher.ui.edits import ReplaceShop, SetJobsState, SetMachineFields, SetPlanInForce
-from dispatcher.ui.solving import SolveOutcome, plan_in_force_ids, snapshot
+from dispatcher.ui.solving import plan_in_force_ids, snapshot
 
 
-class DecisionFlowsMixin:
-    """Decision actions (needs ``doc``, ``history``, ``plan``, ``runner``, ``settings``...)."""
+class DecisionFlow(QObject):
+    """Opens the confirm dialog for an event and applies a confirmed decision.
+
+    ``recorded(decision_id)`` after a decision is in the history and in the document.
+    ``dialog`` is the last confirm dialog opened (None before the first).
+    """
+
+    recorded = Signal(int)
+
+    def __init__(self, window):
+        super().__init__(window)
+        self.window = window
+        self.doc = window.doc
+        self.view = window.view
+        self.dialog: DecisionDialog | None = None
+
+    def show_warning(self, text: str) -> None:
+        self.window.show_warning(text)
 
     def plan_in_force(self) -> tuple[dict | None, str]:
         """The plan in force (JSON) and how to name it: the latest recorded decision of this
         shop when the shop has one in force, else the plan shown (not yet recorded)."""
         try:
-            latest = self.history.latest(self.doc.shop.name) if self.doc.shop.plan_in_force else None
+            latest = self.window.history.latest(self.doc.shop.name) if self.doc.shop.plan_in_force else None
         except HistoryError:
             latest = None
         if latest is not None and latest.plan:
             return latest.plan, f"the plan in force (decision #{latest.id})"
-        plan = self.plan.to_json() if self.plan is not None else None
+        plan = self.window.plan.to_json() if self.window.plan is not None else None
         return plan, "the plan shown (no decision recorded yet)"
 
-    def on_machine_event(self, event: str, col: int | None = None) -> DecisionDialog | None:
+    def machine_event(self, event: str, col: int | None = None) -> DecisionDialog | None:
         col = self.view.current_machine() if col is None else col
         if col is None:
             self.show_warning("choose a cell in a machine column first (or use the column's menu)")
@@ -56,18 +71,18 @@ class DecisionFlowsMixin:
         if event == EVENT_UP and m.state == UP:
             self.show_warning(f"{m.name} is already up")
             return None
-        return self._open_decision(self.doc.shop, event, machine=col)
+        return self._open(self.doc.shop, event, machine=col)
 
-    def on_rush(self, row: int | None = None) -> DecisionDialog | None:
+    def rush(self, row: int | None = None) -> DecisionDialog | None:
         row = self.view.current_row() if row is None or row is False else row
         if row is None:
             return None
         if self.doc.job_at(row).rush:
             self.show_warning(f"{self.doc.job_at(row).name} is already a rush job")
             return None
-        return self._open_decision(self.doc.shop, EVENT_RUSH, job=row)
+        return self._open(self.doc.shop, EVENT_RUSH, job=row)
 
-    def on_pull(self, row: int | None = None) -> DecisionDialog | None:
+    def pull(self, row: int | None = None) -> DecisionDialog | None:
         """The current job is pulled (order cancelled or put on hold): propose the plan
         without it; confirming records the decision and takes the job out of the shop."""
         row = self.view.current_row() if row is None or row is False else row
@@ -78,39 +93,39 @@ class DecisionFlowsMixin:
         if job.state == DONE:
             self.show_warning(f"{job.name} is already done; there is nothing to pull")
             return None
-        return self._open_decision(self.doc.shop, EVENT_PULL, job=row)
+        return self._open(self.doc.shop, EVENT_PULL, job=row)
 
-    def on_confirm_plan(self) -> DecisionDialog | None:
-        return self._open_decision(self.doc.shop, EVENT_CONFIRM)
+    def confirm_plan(self) -> DecisionDialog | None:
+        return self._open(self.doc.shop, EVENT_CONFIRM)
 
-    def _open_decision(self, shop: Shop, event: str, **where) -> DecisionDialog:
+    def _open(self, shop: Shop, event: str, **where) -> DecisionDialog:
         before, _ = self.plan_in_force()
-        return self.show_decision(propose(shop, event, self.objective, before, mode=self.mode,
+        return self.show(propose(shop, event, self.window.objective, before, mode=self.window.mode,
                                           **where))
 
-    def show_decision(self, proposal: Proposal) -> DecisionDialog:
+    def show(self, proposal: Proposal) -> DecisionDialog:
         """Open the confirm dialog for a proposal against the plan in force."""
         before, label = self.plan_in_force()
         dialog = DecisionDialog(proposal, self.doc.shop.unit.label(),
-                                str(self.settings.value("history/supervisor", "")), self,
+                                str(self.window.settings.value("history/supervisor", "")), self.window,
                                 before=before, before_label=label)
-        dialog.confirmed.connect(self.apply_decision)
+        dialog.confirmed.connect(self.apply)
         dialog.setAttribute(Qt.WidgetAttribute.WA_DeleteOnClose)
-        self.decision_dialog = dialog
+        self.dialog = dialog
         dialog.open()
         return dialog
 
-    def apply_decision(self, proposal: Proposal, by: str, reason: str, note: str) -> int | None:
+    def apply(self, proposal: Proposal, by: str, reason: str, note: str) -> int | None:
         """Record the decision first; only if that worked, change the document (undoable)."""
         recorded_shop = proposal.shop
         recorded_shop.plan_in_force = plan_in_force_ids(proposal.plan, recorded_shop)
         try:
-            number = self.history.record(shop_to_dict(recorded_shop), proposal.plan.to_json(),
+            number = self.window.history.record(shop_to_dict(recorded_shop), proposal.plan.to_json(),
                                          by=by, reason=reason, note=note)
         except (HistoryError, HistoryInputError, OSError) as exc:
-            self.messenger.error("Decision not recorded", f"{exc}\n\nThe plan in force is unchanged.")
+            self.window.messenger.error("Decision not recorded", f"{exc}\n\nThe plan in force is unchanged.")
             return None
-        self.settings.setValue("history/supervisor", by)
+        self.window.settings.setValue("history/supervisor", by)
         stack = self.doc.undo_stack
         stack.beginMacro(f"{proposal.title} (decision #{number})")
         if proposal.event == EVENT_PULL:
@@ -127,11 +142,8 @@ class DecisionFlowsMixin:
         stack.endMacro()
         # Show the plan just put in force (not a fresh solve of the same shop, which would
         # ignore the move penalties the re-dispatch paid) until the next edit.
-        self.runner.discard()
-        self._on_solved(SolveOutcome(self.objective, proposal.plan, "", False, 0.0))
-        self.plan_panel.show_note(f"Plan in force: decision #{number} ({proposal.title}). "
-                                  "Any edit re-solves from scratch.")
-        self.statusBar().showMessage(f"Decision #{number} recorded: {proposal.title}", 8000)
-        self.decision_recorded.emit(number)
+        self.window.show_plan_in_force(proposal.plan, f"decision #{number} ({proposal.title})")
+        self.window.statusBar().showMessage(f"Decision #{number} recorded: {proposal.title}", 8000)
+        self.recorded.emit(number)
         return number
 

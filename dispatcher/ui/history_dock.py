@@ -1,0 +1,70 @@
+"""The history dock: the decision list of :mod:`dispatcher.ui.history_panel` in a dock
+widget (View ▸ History, Ctrl+H), and *Restore…*.
+
+:class:`HistoryDock` is a part of the main window, created in its constructor.
+"""
+
+from __future__ import annotations
+
+from PySide6.QtGui import QKeySequence
+from PySide6.QtWidgets import QDockWidget, QInputDialog
+
+from dispatcher.history import HistoryError, HistoryInputError, HistoryStore
+from dispatcher.io.shopfile import ShopFileError, shop_from_dict
+from dispatcher.ui.history_panel import HistoryPanel
+
+
+class HistoryDock(QDockWidget):
+    """The dock (hidden at start) with ``panel``; its toggle action has Ctrl+H.
+
+    ``restored(decision_id)`` after a restore recorded a new decision.
+    """
+
+    def __init__(self, window):
+        super().__init__("History", window)
+        self.setObjectName("historyDock")
+        self.window_ = window
+        self.panel = HistoryPanel(window.history, self)
+        self.setWidget(self.panel)
+        self.toggleViewAction().setShortcut(QKeySequence("Ctrl+H"))
+        self.toggleViewAction().setStatusTip("Show or hide the recorded decisions")
+        self.visibilityChanged.connect(lambda visible: self.panel.refresh() if visible else None)
+        self.panel.message.connect(window.show_warning)
+        self.panel.restore_requested.connect(lambda n: self.restore(n))
+
+    def set_store(self, store: HistoryStore) -> None:
+        self.panel.set_store(store)
+
+    def refresh(self) -> None:
+        self.panel.refresh()
+
+    def restore(self, decision_id: int, by: str | None = None) -> int | None:
+        """Record "restored from #decision_id" and open that decision's shop; asks for the
+        supervisor name when ``by`` is None. Returns the new decision's number."""
+        window = self.window_
+        if by is None:
+            by = str(window.settings.value("history/supervisor", ""))
+            by, ok = QInputDialog.getText(window, "Restore decision",
+                                          f"Restore decision #{decision_id}: supervisor name", text=by)
+            if not ok or not by.strip():
+                return None
+        try:
+            decision = window.history.get(decision_id)
+            shop = shop_from_dict(decision.shop_document, f"decision #{decision_id}", check=False)
+        except (HistoryError, ShopFileError) as exc:
+            window.messenger.error("Cannot restore", str(exc))
+            return None
+        if not window.files.maybe_keep_changes():
+            return None
+        try:
+            number = window.history.restore(decision_id, by=by)
+        except (HistoryError, HistoryInputError) as exc:
+            window.messenger.error("Cannot restore", str(exc))
+            return None
+        doc = window.doc
+        doc.replace(shop, doc.path)
+        doc.undo_stack.resetClean()
+        doc.dirty_changed.emit(True)
+        window.statusBar().showMessage(f"Decision #{decision_id} restored as #{number}", 8000)
+        window.decision_recorded.emit(number)
+        return number
