@@ -58,7 +58,7 @@ def test_nothing_is_created_by_reading(tmp_path):
     store = HistoryStore(tmp_path / "sub" / "history.sqlite")
     assert store.list() == [] and store.count() == 0 and store.latest() is None
     assert not (tmp_path / "sub").exists()
-    with pytest.raises(HistoryError, match="no history file here yet"):
+    with pytest.raises(HistoryError, match="the history file does not exist, so no decision #1"):
         store.get(1)
 
 
@@ -291,7 +291,7 @@ def test_export_csv_read_back_with_the_csv_module(store, tmp_path):
 
 
 def _add_column(conn: sqlite3.Connection) -> None:
-    conn.execute("ALTER TABLE decisions ADD COLUMN station TEXT")
+    conn.execute("ALTER TABLE decisions ADD COLUMN later_column TEXT")
 
 
 def test_older_file_is_backed_up_then_migrated(tmp_path):
@@ -301,14 +301,15 @@ def test_older_file_is_backed_up_then_migrated(tmp_path):
     store = HistoryStore(path, migrations=newer)
     assert store.get(1).by == "Ana"
     backup = store.last_backup
-    assert backup is not None and backup.name.startswith("history.sqlite.backup-v1-")
+    current = MIGRATIONS[-1].version
+    assert backup is not None and backup.name.startswith(f"history.sqlite.backup-v{current}-")
     old = sqlite3.connect(backup)
-    assert old.execute("PRAGMA user_version").fetchone()[0] == 1
+    assert old.execute("PRAGMA user_version").fetchone()[0] == current
     assert old.execute("SELECT supervisor FROM decisions").fetchall() == [("Ana",)]
     old.close()
     conn = sqlite3.connect(path)
     assert conn.execute("PRAGMA user_version").fetchone()[0] == newer[-1].version
-    assert "station" in [r[1] for r in conn.execute("PRAGMA table_info(decisions)")]
+    assert "later_column" in [r[1] for r in conn.execute("PRAGMA table_info(decisions)")]
     conn.close()
     # A second open finds nothing to do and writes no second backup.
     again = HistoryStore(path, migrations=newer)
@@ -331,9 +332,9 @@ def test_failed_migration_leaves_the_file_at_its_old_version(tmp_path):
     assert store.get(1).by == "Ana"
     conn = sqlite3.connect(path)
     assert conn.execute("PRAGMA user_version").fetchone()[0] == MIGRATIONS[-1].version
-    assert "station" not in [r[1] for r in conn.execute("PRAGMA table_info(decisions)")]
+    assert "later_column" not in [r[1] for r in conn.execute("PRAGMA table_info(decisions)")]
     conn.close()
-    assert len(list(tmp_path.glob("history.sqlite.backup-v1-*"))) == 1
+    assert len(list(tmp_path.glob(f"history.sqlite.backup-v{MIGRATIONS[-1].version}-*"))) == 1
 
 
 def test_tampered_decision_is_reported_not_shown(store):
@@ -343,7 +344,7 @@ def test_tampered_decision_is_reported_not_shown(store):
     conn.execute("UPDATE decisions SET plan_json = replace(plan_json, '\"M\"', '\"X\"')")
     conn.commit()
     conn.close()
-    with pytest.raises(HistoryError, match="does not match its checksum"):
+    with pytest.raises(HistoryError, match="decision #1 no longer matches its checksum"):
         store.get(1)
 
 

@@ -3,8 +3,9 @@
 Also holds what ``dispatcher solve --record`` needs (:func:`add_record_arguments`,
 :func:`record_decision`) so the solve command only wires them in.
 
-History problems (missing, damaged, read-only, busy or full file) exit with code 4; an
-unknown decision number or reason kind is bad input (exit 2).
+History problems (missing, damaged, read-only, busy or full file, a server that cannot be
+reached) exit with code 4; an unknown decision number or reason kind is bad input (exit 2);
+a decision based on a plan another station has replaced since is refused with exit code 5.
 """
 
 from __future__ import annotations
@@ -12,6 +13,7 @@ from __future__ import annotations
 import argparse
 import sys
 from datetime import date
+from pathlib import Path
 from typing import Any
 
 from dispatcher.commands.common import (
@@ -24,22 +26,35 @@ from dispatcher.commands.common import (
 from dispatcher.history import (
     HISTORY_ENV,
     REASON_KINDS,
+    UNCHECKED,
+    DecisionConflict,
     DecisionSummary,
     HistoryError,
     HistoryInputError,
-    HistoryStore,
+    open_history,
     parse_reason_kind,
     reason_label,
 )
 
-_HISTORY_HELP = (f"history file (default: ${HISTORY_ENV}, else the per-user data folder, "
+#: A decision based on a plan in force that another station has replaced since.
+EXIT_CONFLICT = 5
+
+_HISTORY_HELP = (f"history file, or a PostgreSQL server as postgresql://... or service=NAME "
+                 f"(default: ${HISTORY_ENV}, else the per-user data folder, "
                  "e.g. ~/.local/share/dispatcher/history.sqlite)")
+
+
+def open_store(location):
+    """The history store named by ``--history`` (exit 4 if its driver is missing)."""
+    return _store_call(lambda: open_history(location))
 
 
 def _store_call(action):
     """Run ``action()`` turning history errors into CLI errors with the right exit code."""
     try:
         return action()
+    except DecisionConflict as exc:
+        raise CliError(str(exc), EXIT_CONFLICT) from None
     except HistoryInputError as exc:
         raise CliError(str(exc), EXIT_BAD_INPUT) from None
     except HistoryError as exc:
@@ -58,6 +73,26 @@ def add_record_arguments(parser: argparse.ArgumentParser) -> None:
                        help="why: " + ", ".join(REASON_KINDS))
     group.add_argument("--note", metavar="TEXT", default="", help="free text about the reason")
     group.add_argument("--history", metavar="PATH", help=_HISTORY_HELP)
+    group.add_argument("--based-on", metavar="N", type=_based_on, default=argparse.SUPPRESS,
+                       help="the decision the plan in force came from ('none' if none yet): "
+                            "refuse (exit 5) if another decision for this shop was recorded "
+                            "since")
+
+
+def _based_on(text: str) -> int | None:
+    if text.strip().lower() == "none":
+        return None
+    return _whole(text, minimum=1)
+
+
+def _whole(text: str, minimum: int = 0) -> int:
+    try:
+        value = int(text)
+    except ValueError:
+        raise argparse.ArgumentTypeError(f"expected a whole number, got {text!r}") from None
+    if value < minimum:
+        raise argparse.ArgumentTypeError(f"expected a whole number >= {minimum}, got {text}")
+    return value
 
 
 def check_record_arguments(args: argparse.Namespace) -> None:
@@ -80,10 +115,12 @@ def record_decision(args: argparse.Namespace, shop_document: Any, plan: Any) -> 
     """
     if not getattr(args, "record", False):
         return None
-    store = HistoryStore(args.history)
+    store = open_store(args.history)
+    based_on = getattr(args, "based_on", UNCHECKED)
     number = _store_call(lambda: store.record(shop_document, plan, by=args.by,
-                                              reason=args.reason, note=args.note))
-    print(f"Recorded decision #{number} in {store.path}", file=sys.stderr)
+                                              reason=args.reason, note=args.note,
+                                              based_on=based_on))
+    print(f"Recorded decision #{number} in {store.location}", file=sys.stderr)
     return number
 
 
@@ -108,7 +145,8 @@ def register(sub: argparse._SubParsersAction) -> None:
 
     q = cmds.add_parser("list", parents=[common, filters], help="list decisions")
     q.add_argument("--json", action="store_true", help="print a JSON list")
-    q.add_argument("--limit", type=int, metavar="N", help="only the newest N")
+    q.add_argument("--limit", type=lambda t: _whole(t, 1), metavar="N",
+                   help="only the newest N (N >= 1)")
     q.set_defaults(func=run_list)
 
     q = cmds.add_parser("show", parents=[common], help="show one decision")
@@ -126,6 +164,19 @@ def register(sub: argparse._SubParsersAction) -> None:
                         help="write decisions to a CSV file (one line per placement)")
     q.add_argument("target", metavar="FILE.csv")
     q.set_defaults(func=run_export)
+
+    q = cmds.add_parser("init", help="create an empty history (and its folder) explicitly")
+    q.add_argument("location", metavar="PATH",
+                   help="history file to create, or postgresql://... / service=NAME")
+    q.set_defaults(func=run_init)
+
+    q = cmds.add_parser("copy", help="copy every decision from one history to another "
+                                     "(SQLite or PostgreSQL), verifying counts and checksums")
+    q.add_argument("--from", dest="source", metavar="A", required=True)
+    q.add_argument("--to", dest="target", metavar="B", required=True)
+    q.add_argument("--append", action="store_true",
+                   help="add to a target that already holds decisions (numbers must follow)")
+    q.set_defaults(func=run_copy)
 
     q = cmds.add_parser("restore", parents=[common],
                         help="record an earlier plan again as a new decision")
@@ -158,8 +209,17 @@ def _total(x: float | int | None) -> str:
     return "-" if x is None else f"{x:g}"
 
 
+def _must_exist(store) -> None:
+    if not _store_call(store.exists):
+        raise CliError(f"{store.location}: the history does not exist (no file there); "
+                       "nothing was created. Check --history PATH or "
+                       f"${HISTORY_ENV}, or create it with: dispatcher history init PATH",
+                       EXIT_STORE)
+
+
 def run_list(args: argparse.Namespace) -> int:
-    store = HistoryStore(args.history)
+    store = open_store(args.history)
+    _must_exist(store)
     found = _store_call(lambda: store.list(**_filters(args), limit=args.limit,
                                            newest_first=args.limit is not None))
     if args.limit is not None:
@@ -168,7 +228,7 @@ def run_list(args: argparse.Namespace) -> int:
         print_json([d.to_json() for d in found])
         return 0
     if not found:
-        print(f"No decisions{' match' if _filters(args) else ' recorded yet'} ({store.path})")
+        print(f"No decisions{' match' if _filters(args) else ' recorded yet'} ({store.location})")
         return 0
     _print_table(found)
     return 0
@@ -188,7 +248,7 @@ def _print_table(found: list[DecisionSummary]) -> None:
 
 
 def run_show(args: argparse.Namespace) -> int:
-    store = HistoryStore(args.history)
+    store = open_store(args.history)
     d = _store_call(lambda: store.get(args.number))
     if args.json:
         print_json(d.to_json())
@@ -199,6 +259,8 @@ def run_show(args: argparse.Namespace) -> int:
     print(f"Reason: {reason_label(d.reason)}" + (f" - {d.note}" if d.note else ""))
     if d.shop:
         print(f"Shop: {d.shop}")
+    if d.station:
+        print(f"Station: {d.station}")
     print(f"Certificate: {d.certificate}")
     print()
     print_plan(d.plan)
@@ -213,7 +275,7 @@ def run_show(args: argparse.Namespace) -> int:
 
 
 def run_diff(args: argparse.Namespace) -> int:
-    store = HistoryStore(args.history)
+    store = open_store(args.history)
     diff = _store_call(lambda: store.diff(args.a, args.b))
     if args.json:
         print_json(diff.to_json())
@@ -225,16 +287,66 @@ def run_diff(args: argparse.Namespace) -> int:
 
 
 def run_export(args: argparse.Namespace) -> int:
-    store = HistoryStore(args.history)
-    if not store.exists():
-        raise CliError(f"{store.path}: no history file here yet; nothing to export", EXIT_STORE)
+    target = Path(args.target)
+    if target.suffix.lower() != ".csv":
+        raise CliError(f"{target}: the export is CSV text, so the file name must end in .csv "
+                       f"(got {target.suffix or 'no extension'!r})")
+    if not target.parent.is_dir():
+        raise CliError(f"{target}: the folder {target.parent} does not exist; nothing was "
+                       "written")
+    if target.is_dir():
+        raise CliError(f"{target}: is a folder; name the CSV file to write")
+    store = open_store(args.history)
+    if not _store_call(store.exists):
+        raise CliError(f"{store.location}: the history does not exist; nothing to export",
+                       EXIT_STORE)
     count = _store_call(lambda: store.export_csv(args.target, **_filters(args)))
     print(f"Wrote {count} rows to {args.target}")
     return 0
 
 
 def run_restore(args: argparse.Namespace) -> int:
-    store = HistoryStore(args.history)
+    store = open_store(args.history)
     number = _store_call(lambda: store.restore(args.number, by=args.by, note=args.note))
     print(f"Recorded decision #{number}: restored from #{args.number}")
     return 0
+
+
+def run_init(args: argparse.Namespace) -> int:
+    store = open_store(args.location)
+    made = _store_call(store.init)
+    print(f"{'Created an empty history' if made else 'A history already exists'} at "
+          f"{store.location}")
+    return 0
+
+
+def run_copy(args: argparse.Namespace) -> int:
+    source, target = open_store(args.source), open_store(args.target)
+    _must_exist(source)
+    count = _store_call(lambda: copy_history(source, target, append=args.append))
+    print(f"Copied {count} decisions from {source.location} to {target.location} "
+          "(counts and checksums verified)")
+    return 0
+
+
+def copy_history(source, target, append: bool = False) -> int:
+    """Copy every decision of ``source`` into ``target``, keeping numbers and seals.
+
+    Refuses a target that already holds decisions unless ``append``; afterwards reads the
+    target back and checks that it holds the copied decisions with the same seals.
+    """
+    items = source.all_sealed()
+    if target.exists():
+        held = target.count()
+        if held and not append:
+            raise HistoryInputError(f"{target.location}: already holds {held} decisions; "
+                                    "nothing was copied (use --append to add after them)")
+    else:
+        target.init(make_folder=False)
+    copied = target.append_sealed(items)
+    wanted = {int(v["id"]): v["seal"] for v, _ in items}
+    back = {int(v["id"]): v["seal"] for v, _ in target.all_sealed() if int(v["id"]) in wanted}
+    if back != wanted:
+        raise HistoryError(f"{target.location}: the copy does not read back as written "
+                           f"({len(back)} of {len(wanted)} decisions match)")
+    return copied

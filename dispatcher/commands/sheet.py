@@ -74,16 +74,15 @@ def _load(path: str, check: bool = True) -> Shop:
 def _recorded(shop: Shop, source: str, number: str, history: str | None) -> tuple[Shop, Plan, Any]:
     """Shop snapshot, plan and decision of a recorded decision of this shop."""
     try:
-        from dispatcher.history import HistoryError, HistoryInputError, HistoryStore
-        from dispatcher.history.location import resolve_history_path
+        from dispatcher.history import HistoryError, HistoryInputError, open_history
     except ImportError:  # pragma: no cover - only in a build without the history package
         raise CliError("--decision needs the decision history, which this installation "
                        "lacks") from None
     from dispatcher.io.shopfile import shop_from_dict
 
-    path = resolve_history_path(history)
-    store = HistoryStore(path)
     try:
+        store = open_history(history)
+        path = store.location
         if number.strip().lower() == "latest":
             decision = store.latest(shop=shop.name)
             if decision is None:

@@ -14,13 +14,27 @@ Typical use::
     store.export_csv("history.csv", by="Ana")
 """
 
-from .errors import DecisionNotFound, HistoryError, HistoryInputError
-from .location import HISTORY_ENV, data_folder, default_history_path, resolve_history_path
+from .errors import DecisionConflict, DecisionNotFound, HistoryError, HistoryInputError
+from .location import (
+    HISTORY_ENV,
+    data_folder,
+    default_history_path,
+    resolve_history_path,
+)
+from .opening import is_postgres_location, open_history
 from .plans import Move, PlanDiff, certificate_status, check_plan, diff_plans
 from .reasons import REASON_KINDS, parse_reason_kind, reason_label
 from .schema import SCHEMA_VERSION
 from .shifts import DEFAULT_SHIFTS, ShiftStart, shift_of
-from .store import LATEST, Decision, DecisionSummary, HistoryStore
+from .store import (
+    LATEST,
+    STATION_ENV,
+    UNCHECKED,
+    Decision,
+    DecisionStore,
+    DecisionSummary,
+    HistoryStore,
+)
 
 __all__ = [
     "DEFAULT_SHIFTS",
@@ -28,8 +42,12 @@ __all__ = [
     "LATEST",
     "REASON_KINDS",
     "SCHEMA_VERSION",
+    "STATION_ENV",
+    "UNCHECKED",
     "Decision",
+    "DecisionConflict",
     "DecisionNotFound",
+    "DecisionStore",
     "DecisionSummary",
     "HistoryError",
     "HistoryInputError",
@@ -42,6 +60,8 @@ __all__ = [
     "data_folder",
     "default_history_path",
     "diff_plans",
+    "is_postgres_location",
+    "open_history",
     "parse_reason_kind",
     "reason_label",
     "resolve_history_path",

@@ -22,3 +22,19 @@ class HistoryInputError(ValueError):
 
 class DecisionNotFound(HistoryInputError, LookupError):
     """No decision with the requested number exists in this history."""
+
+
+class DecisionConflict(HistoryError):
+    """Another station recorded a newer decision for the shop after the one this decision
+    was based on; nothing was recorded.
+
+    A subclass of :class:`HistoryError` so that callers which only know that family still
+    keep their document and let the supervisor retry; the command line gives it an exit
+    code of its own (5). ``newer`` is that decision (a :class:`~dispatcher.history.DecisionSummary`) and
+    ``based_on`` the number the caller started from (None: no decision yet).
+    """
+
+    def __init__(self, message: str, newer, based_on: int | None):
+        super().__init__(message)
+        self.newer = newer
+        self.based_on = based_on

@@ -8,7 +8,10 @@ Rules this module keeps:
 * ``PRAGMA application_id`` marks the file as ours; ``PRAGMA user_version`` is the schema
   version. Migrations run in order, in one transaction, after a copy of the file has been
   written beside it (``<name>.backup-v<old>-<UTC time>``).
-* Decisions are append-only: triggers abort any UPDATE or DELETE.
+* Decisions are append-only: triggers abort any UPDATE or DELETE, and any INSERT that
+  would replace an existing decision or add rows to an older one (``INSERT OR REPLACE``
+  deletes without firing delete triggers, so inserts are guarded too). Since schema 2 a
+  seal covers every stored column (:mod:`dispatcher.history.seal`).
 """
 
 from __future__ import annotations
@@ -102,9 +105,61 @@ def _run_script(sql: str) -> Callable[[sqlite3.Connection], None]:
     return apply
 
 
+_V2_TRIGGERS = """
+CREATE TRIGGER decisions_append_only_update BEFORE UPDATE ON decisions
+BEGIN SELECT RAISE(ABORT, 'the decision history is append-only: decisions cannot be changed'); END;
+CREATE TRIGGER decisions_append_only_delete BEFORE DELETE ON decisions
+BEGIN SELECT RAISE(ABORT, 'the decision history is append-only: decisions cannot be deleted'); END;
+CREATE TRIGGER decisions_append_only_replace BEFORE INSERT ON decisions
+WHEN EXISTS (SELECT 1 FROM decisions WHERE id = NEW.id)
+BEGIN SELECT RAISE(ABORT, 'the decision history is append-only: a decision with this number exists'); END;
+CREATE TRIGGER decision_rows_append_only_update BEFORE UPDATE ON decision_rows
+BEGIN SELECT RAISE(ABORT, 'the decision history is append-only: rows cannot be changed'); END;
+CREATE TRIGGER decision_rows_append_only_delete BEFORE DELETE ON decision_rows
+BEGIN SELECT RAISE(ABORT, 'the decision history is append-only: rows cannot be deleted'); END;
+CREATE TRIGGER decision_rows_append_only_insert BEFORE INSERT ON decision_rows
+WHEN EXISTS (SELECT 1 FROM decision_rows WHERE rowid = NEW.rowid)
+  OR NEW.decision_id IS NOT (SELECT max(id) FROM decisions)
+BEGIN SELECT RAISE(ABORT, 'the decision history is append-only: rows belong to the newest decision only'); END;
+"""
+
+_V1_TRIGGERS = ("decisions_append_only_update", "decisions_append_only_delete",
+                "decision_rows_append_only_update", "decision_rows_append_only_delete")
+
+
+def _seal_everything(conn: sqlite3.Connection) -> None:
+    """Schema 2: station and based-on columns, a seal over every column, stricter triggers.
+
+    Each existing decision is sealed only if it still matches its schema-1 checksum (of its
+    snapshot and plan); one that does not keeps no seal and is reported as changed outside
+    dispatcher whenever it is read, exactly as before the upgrade.
+    """
+    from .seal import SEALED_COLUMNS, content_digest, seal_of
+
+    for name in _V1_TRIGGERS:
+        conn.execute(f"DROP TRIGGER IF EXISTS {name}")
+    conn.execute("ALTER TABLE decisions ADD COLUMN station TEXT NOT NULL DEFAULT ''")
+    conn.execute("ALTER TABLE decisions ADD COLUMN based_on INTEGER")
+    conn.execute("ALTER TABLE decisions ADD COLUMN seal TEXT")
+    rows: dict[int, list[tuple]] = {}
+    for r in conn.execute("SELECT decision_id, state, machine, job, value FROM decision_rows "
+                          "ORDER BY rowid"):
+        rows.setdefault(r[0], []).append(tuple(r[1:]))
+    columns = ", ".join(SEALED_COLUMNS)
+    for r in conn.execute(f"SELECT {columns} FROM decisions ORDER BY id").fetchall():
+        values = dict(zip(SEALED_COLUMNS, r))
+        if content_digest(values["shop_json"], values["plan_json"]) != values["digest"]:
+            continue
+        conn.execute("UPDATE decisions SET seal = ? WHERE id = ?",
+                     (seal_of(values, rows.get(values["id"], [])), values["id"]))
+    _run_script(_V2_TRIGGERS)(conn)
+
+
 #: Every schema step ever released, in order. Never edit a released step: append one.
 MIGRATIONS: tuple[Migration, ...] = (
     Migration(1, "decisions, their rows, append-only triggers", _run_script(_V1)),
+    Migration(2, "station, based-on, a seal over every column, no replacing",
+              _seal_everything),
 )
 SCHEMA_VERSION = MIGRATIONS[-1].version
 
@@ -238,16 +293,24 @@ def apply_migrations(conn: sqlite3.Connection, start: int,
 
 
 def create_history(path: Path, connect: Callable[[Path], sqlite3.Connection],
-                   migrations: Sequence[Migration] = MIGRATIONS) -> None:
+                   migrations: Sequence[Migration] = MIGRATIONS,
+                   make_folder: bool = False) -> None:
     """Build a new history under a temporary name, then link it to ``path``.
 
     If another process created ``path`` meanwhile, its file wins and ours is discarded.
+    The folder is created only when ``make_folder`` (the per-user default folder, or
+    ``history init``): a mistyped folder must not split a plant's history in two.
     """
-    try:
-        path.parent.mkdir(parents=True, exist_ok=True)
-    except OSError as exc:
-        raise HistoryError(f"{path}: cannot create the folder for the history: "
-                           f"{exc.strerror}") from None
+    if make_folder:
+        try:
+            path.parent.mkdir(parents=True, exist_ok=True)
+        except OSError as exc:
+            raise HistoryError(f"{path}: cannot create the folder for the history: "
+                               f"{exc.strerror}") from None
+    elif not path.parent.is_dir():
+        raise HistoryError(f"{path}: the folder {path.parent} does not exist, so no history "
+                           "was created and nothing was recorded. Check the path, or create "
+                           "the history with: dispatcher history init PATH")
     tmp = path.with_name(f".{path.name}.{uuid.uuid4().hex}.creating")
     try:
         conn = connect(tmp)

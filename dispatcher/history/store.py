@@ -16,9 +16,9 @@ operation and closed, so no lock outlives a call.
 from __future__ import annotations
 
 import dataclasses
-import hashlib
 import json
 import os
+import socket
 import sqlite3
 import time as _time
 from collections.abc import Callable, Iterator, Sequence
@@ -29,21 +29,34 @@ from pathlib import Path
 from typing import Any, TypeVar
 
 from . import schema
-from .errors import DecisionNotFound, HistoryError, HistoryInputError
-from .location import resolve_history_path
-from .plans import PlanDiff, certificate_status, check_plan, diff_plans, json_text, plan_rows
+from .errors import DecisionConflict, DecisionNotFound, HistoryError, HistoryInputError
+from .location import HISTORY_ENV, resolve_history_path
+from .plans import (
+    PlanDiff,
+    certificate_status,
+    check_plan,
+    diff_plans,
+    json_text,
+    plan_rows,
+)
 from .reasons import parse_reason_kind
+from .seal import SEALED_COLUMNS, content_digest, seal_of
 from .shifts import DEFAULT_SHIFTS, ShiftStart, format_utc, parse_utc, shift_of, utc_now
 
 T = TypeVar("T")
+
+#: Environment variable naming this station (recorded with each decision); default: the
+#: host name.
+STATION_ENV = "DISPATCHER_STATION"
 
 #: Pass as ``replaces`` to :meth:`HistoryStore.record` to link to the latest decision of the
 #: same shop (the default).
 LATEST = "latest"
 
-_SUMMARY_COLUMNS = ("id, time_utc, shift_date, shift_label, supervisor, reason_kind, "
-                    "reason_text, shop_name, objective, total, certificate, replaces, "
-                    "restored_from")
+#: Pass as ``based_on`` to :meth:`record` to skip the concurrency check (the default).
+UNCHECKED = "unchecked"
+
+_SELECT = ", ".join(SEALED_COLUMNS) + ", seal"
 
 
 @dataclass(frozen=True)
@@ -63,6 +76,8 @@ class DecisionSummary:
     certificate: str
     replaces: int | None
     restored_from: int | None
+    station: str = ""
+    based_on: int | None = None
 
     def to_json(self) -> dict[str, Any]:
         return {
@@ -71,7 +86,8 @@ class DecisionSummary:
             "by": self.by, "reason": self.reason, "note": self.note, "shop": self.shop,
             "objective": self.objective, "total": self.total,
             "certificate": self.certificate, "replaces": self.replaces,
-            "restored_from": self.restored_from,
+            "restored_from": self.restored_from, "station": self.station,
+            "based_on": self.based_on,
         }
 
 
@@ -103,15 +119,15 @@ def _number(x: float | None) -> float | int | None:
     return int(x) if float(x).is_integer() and abs(x) < 2**53 else x
 
 
-def _digest(shop_json: str, plan_json: str) -> str:
-    return hashlib.sha256((shop_json + "\x00" + plan_json).encode("utf-8")).hexdigest()
-
-
-def _summary(row: Sequence[Any]) -> DecisionSummary:
+def _summary(v: dict[str, Any]) -> DecisionSummary:
     return DecisionSummary(
-        id=row[0], time=parse_utc(row[1]), shift_date=date.fromisoformat(row[2]),
-        shift=row[3], by=row[4], reason=row[5], note=row[6], shop=row[7], objective=row[8],
-        total=_number(row[9]), certificate=row[10], replaces=row[11], restored_from=row[12])
+        id=int(v["id"]), time=parse_utc(v["time_utc"]),
+        shift_date=date.fromisoformat(v["shift_date"]), shift=v["shift_label"],
+        by=v["supervisor"], reason=v["reason_kind"], note=v["reason_text"],
+        shop=v["shop_name"], objective=v["objective"], total=_number(v["total"]),
+        certificate=v["certificate"], replaces=v["replaces"],
+        restored_from=v["restored_from"], station=v.get("station") or "",
+        based_on=v.get("based_on"))
 
 
 def shop_name_of(shop_json: str) -> str:
@@ -127,165 +143,84 @@ def shop_name_of(shop_json: str) -> str:
     return ""
 
 
-class HistoryStore:
-    """The decision history in one SQLite file.
+def _station_default() -> str:
+    return os.environ.get(STATION_ENV, "").strip() or socket.gethostname()
 
-    Parameters
-    ----------
-    path
-        The history file; ``None`` uses :func:`dispatcher.history.default_history_path`.
-        The file is created on the first :meth:`record`, never by reading.
-    timeout
-        Seconds to keep retrying while another program holds the file busy.
-    max_pages
-        Optional cap on the file size in database pages (``PRAGMA max_page_count``);
-        a write that would exceed it fails like a full disk.
-    shifts, tz
-        The shift pattern and time zone used to label decisions (default: three shifts
-        from 06:00, local time of this computer).
-    migrations
-        The schema steps this program knows (default: all released ones); a file at an
-        older step is copied to a backup and upgraded when first opened.
 
-    Attributes
-    ----------
-    last_backup
-        The backup written by an upgrade during this store's first use, else None.
+class _Cx:
+    """A connection seen through four calls, SQL written with ``?`` marks."""
+
+    def __init__(self, conn: Any, paramstyle_percent: bool = False):
+        self.conn = conn
+        self._pct = paramstyle_percent
+
+    def _sql(self, sql: str) -> str:
+        return sql.replace("?", "%s") if self._pct else sql
+
+    def all(self, sql: str, params: Sequence[Any] = ()) -> list[tuple]:
+        return [tuple(r) for r in self.conn.execute(self._sql(sql), tuple(params)).fetchall()]
+
+    def one(self, sql: str, params: Sequence[Any] = ()) -> tuple | None:
+        row = self.conn.execute(self._sql(sql), tuple(params)).fetchone()
+        return None if row is None else tuple(row)
+
+    def run(self, sql: str, params: Sequence[Any] = ()) -> None:
+        self.conn.execute(self._sql(sql), tuple(params))
+
+    def many(self, sql: str, seq: Sequence[Sequence[Any]]) -> None:
+        if self._pct:
+            with self.conn.cursor() as cur:
+                cur.executemany(self._sql(sql), seq)
+        else:
+            self.conn.executemany(sql, seq)
+
+
+class DecisionStore:
+    """What every decision store does, whatever database keeps it.
+
+    Subclasses provide ``_read(action, doing, empty)`` and ``_write(action, doing)`` (run
+    ``action(cx)`` in a read transaction, or in one exclusive write transaction), ``exists``,
+    ``_row_order`` (the column keeping rows in their stored order) and ``location``.
     """
 
-    def __init__(self, path: str | os.PathLike | None = None, *, timeout: float = 10.0,
-                 max_pages: int | None = None,
-                 shifts: tuple[ShiftStart, ...] = DEFAULT_SHIFTS, tz: tzinfo | None = None,
-                 migrations: Sequence[schema.Migration] = schema.MIGRATIONS):
-        self.path = resolve_history_path(path)
-        self.timeout = float(timeout)
-        self.max_pages = max_pages
-        self.shifts = shifts
-        self.tz = tz
-        self._migrations = tuple(migrations)
-        self._checked = False
-        self.last_backup: Path | None = None
+    _row_order = "rowid"
+    station: str = ""
 
-    def __repr__(self) -> str:
-        return f"HistoryStore({str(self.path)!r})"
+    # ------------------------------------------------------------ hooks
+    def _read(self, action: Callable[[_Cx], T], doing: str, empty: T) -> T:
+        raise NotImplementedError
 
-    # ------------------------------------------------------------ connections
+    def _write(self, action: Callable[[_Cx], T], doing: str) -> T:
+        raise NotImplementedError
 
     def exists(self) -> bool:
-        return self.path.exists()
+        raise NotImplementedError
 
-    def read_only(self) -> bool:
-        return schema.read_only_file(self.path)
+    def _missing(self, what: str) -> HistoryError:
+        return HistoryError(f"{self.location}: there is no history here yet, so {what}")
 
-    def _connect(self, path: Path, mode: str) -> sqlite3.Connection:
-        uri = path.absolute().as_uri() + f"?mode={mode}"
-        conn = sqlite3.connect(uri, uri=True, isolation_level=None,
-                               timeout=min(self.timeout, 1.0))
-        try:
-            conn.execute(f"PRAGMA busy_timeout = {int(min(self.timeout, 1.0) * 1000)}")
-            conn.execute("PRAGMA foreign_keys = ON")
-            conn.execute("PRAGMA synchronous = FULL")
-            if self.max_pages is not None:
-                conn.execute(f"PRAGMA max_page_count = {int(self.max_pages)}")
-        except BaseException:
-            conn.close()
-            raise
-        return conn
-
-    def _retry(self, action: Callable[[], T], doing: str) -> T:
-        """Run ``action``, retrying while the file is busy, for at most ``timeout`` seconds."""
-        deadline = _time.monotonic() + self.timeout
-        delay = 0.005
-        while True:
-            try:
-                return action()
-            except sqlite3.OperationalError as exc:
-                if not schema.is_busy(exc):
-                    raise schema.store_error(self.path, exc, doing) from None
-                left = deadline - _time.monotonic()
-                if left <= 0:
-                    raise HistoryError(
-                        f"{self.path}: {doing} failed: the history file stayed busy (another "
-                        f"program was writing to it) for {self.timeout:g} s; nothing was "
-                        "changed. Try again in a moment") from None
-                _time.sleep(min(delay, left))
-                delay = min(delay * 2, 0.1)
-            except sqlite3.Error as exc:
-                raise schema.store_error(self.path, exc, doing) from None
-
-    def _prepare(self, create: bool) -> bool:
-        """Check (once) and if needed create or migrate the file; False if it does not exist."""
-        if self._checked:
-            return True
-        if not self.path.exists():
-            if not create:
-                return False
-            if self.path.parent.exists() and not os.access(self.path.parent, os.W_OK):
-                raise HistoryError(f"{self.path}: cannot create the history: the folder "
-                                   f"{self.path.parent} is not writable")
-            self._retry(lambda: schema.create_history(
-                self.path, lambda p: self._connect(p, "rwc"), self._migrations),
-                "creating the history")
-        if self.path.is_dir():
-            raise HistoryError(f"{self.path}: is a folder, not a history file")
-        schema.check_header(self.path)
-
-        def check() -> None:
-            with self._connection(write=False) as conn:
-                version = schema.check_identity(conn, self.path,
-                                                 self._migrations[-1].version)
-                schema.quick_check(conn, self.path)
-                if version < self._migrations[-1].version:
-                    if self.read_only():
-                        raise HistoryError(
-                            f"{self.path}: the history needs an upgrade (schema {version}) "
-                            "but the file is read-only; it was left as it is")
-                    self.last_backup = schema.migrate(conn, self.path, version,
-                                                      self._migrations)
-
-        self._retry(check, "opening the history")
-        self._checked = True
-        return True
-
-    @contextmanager
-    def _connection(self, write: bool) -> Iterator[sqlite3.Connection]:
-        if write and self.read_only():
-            raise HistoryError(f"{self.path}: the history file is read-only; nothing was "
-                               "recorded. Make it writable or choose another file with "
-                               "--history PATH")
-        mode = "ro" if self.read_only() else "rw"
-        conn = self._connect(self.path, mode)
-        try:
-            yield conn
-        finally:
-            conn.close()
-
-    def _read(self, action: Callable[[sqlite3.Connection], T], doing: str, empty: T) -> T:
-        if not self._prepare(create=False):
-            return empty
-
-        def run() -> T:
-            with self._connection(write=False) as conn:
-                conn.execute("BEGIN")
-                try:
-                    return action(conn)
-                finally:
-                    conn.execute("ROLLBACK")
-        return self._retry(run, doing)
+    @property
+    def location(self) -> str:
+        return str(getattr(self, "path", ""))
 
     # ------------------------------------------------------------ writing
 
     def record(self, shop: Any, plan: Any, *, by: str, reason: str, note: str = "",
                replaces: int | str | None = LATEST, time: datetime | None = None,
                shift_date: date | None = None, shift: str | None = None,
-               restored_from: int | None = None) -> int:
+               restored_from: int | None = None, station: str | None = None,
+               based_on: int | str | None = UNCHECKED) -> int:
         """Append one decision and return its number.
 
         ``shop`` is the shop document (JSON text, a dict, or an object with ``to_json()``);
         ``plan`` follows the solve JSON contract (text, dict or ``to_json()``). ``reason``
         is a kind from :data:`REASON_KINDS` (``note`` carries the free text). ``replaces``
         is the decision this one supersedes: by default the latest of the same shop.
-        When the call returns, the decision is on disk.
+        ``based_on`` is the decision of the same shop the supervisor started from (None:
+        none yet); when another decision of that shop was recorded since,
+        :class:`DecisionConflict` is raised and nothing is recorded (the default
+        :data:`UNCHECKED` skips this check). ``station`` defaults to the store's.
+        When the call returns, the decision is stored durably.
         """
         by = str(by).strip()
         if not by:
@@ -297,6 +232,8 @@ class HistoryStore:
         plan_text = json.dumps(plan_data, ensure_ascii=False, separators=(",", ":"))
         moment = utc_now() if time is None else time
         auto_date, auto_shift = shift_of(moment, self.shifts, self.tz)
+        if based_on != UNCHECKED and based_on is not None:
+            based_on = int(based_on)
         values = {
             "time_utc": format_utc(moment),
             "shift_date": (shift_date or auto_date).isoformat(),
@@ -307,56 +244,57 @@ class HistoryStore:
             "certificate": certificate_status(plan_data),
             "restored_from": restored_from,
             "shop_json": shop_text, "plan_json": plan_text,
-            "digest": _digest(shop_text, plan_text),
+            "digest": content_digest(shop_text, plan_text),
+            "station": (self.station if station is None else str(station)).strip(),
+            "based_on": None if based_on == UNCHECKED else based_on,
         }
         rows = plan_rows(plan_data)
-        self._prepare(create=True)
+        return self._write(lambda cx: self._insert(cx, values, rows, plan_data, replaces,
+                                                   based_on), "recording the decision")
 
-        def write() -> int:
-            with self._connection(write=True) as conn:
-                conn.execute("BEGIN IMMEDIATE")
-                try:
-                    new_id = self._insert(conn, values, rows, plan_data, replaces)
-                    conn.execute("COMMIT")
-                except BaseException:
-                    if conn.in_transaction:
-                        conn.execute("ROLLBACK")
-                    raise
-                return new_id
-        return self._retry(write, "recording the decision")
-
-    def _insert(self, conn: sqlite3.Connection, values: dict[str, Any],
-                rows: list[tuple[Any, ...]], plan: dict[str, Any],
-                replaces: int | str | None) -> int:
+    def _insert(self, cx: _Cx, values: dict[str, Any], rows: list[tuple[Any, ...]],
+                plan: dict[str, Any], replaces: int | str | None,
+                based_on: int | str | None) -> int:
+        latest = cx.one(f"SELECT {_SELECT} FROM decisions WHERE shop_name = ? "
+                        "ORDER BY id DESC LIMIT 1", (values["shop_name"],))
+        if based_on != UNCHECKED:
+            latest_id = None if latest is None else int(latest[0])
+            if latest_id != based_on:
+                newer = _summary(dict(zip(SEALED_COLUMNS, latest)))  # type: ignore[arg-type]
+                raise DecisionConflict(conflict_message(newer, based_on), newer, based_on)
         if replaces == LATEST:
-            row = conn.execute("SELECT id, plan_json FROM decisions WHERE shop_name = ? "
-                               "ORDER BY id DESC LIMIT 1", (values["shop_name"],)).fetchone()
+            row = None if latest is None else (latest[0], latest[SEALED_COLUMNS.index(
+                "plan_json")])
         elif replaces is None:
             row = None
         else:
-            row = conn.execute("SELECT id, plan_json FROM decisions WHERE id = ?",
-                               (int(replaces),)).fetchone()
+            row = cx.one("SELECT id, plan_json FROM decisions WHERE id = ?", (int(replaces),))
             if row is None:
-                raise DecisionNotFound(f"replaces: no decision #{replaces} in {self.path}")
-        if values["restored_from"] is not None and conn.execute(
-                "SELECT 1 FROM decisions WHERE id = ?", (values["restored_from"],)
-        ).fetchone() is None:
+                raise DecisionNotFound(f"replaces: no decision #{replaces} in {self.location}")
+        if values["restored_from"] is not None and cx.one(
+                "SELECT 1 FROM decisions WHERE id = ?", (values["restored_from"],)) is None:
             raise DecisionNotFound(f"restored_from: no decision #{values['restored_from']}")
         values = dict(values, replaces=None, diff_json=None)
         if row is not None:
-            values["replaces"] = row[0]
-            diff = diff_plans(json.loads(row[1]), plan, from_id=row[0])
+            values["replaces"] = int(row[0])
+            diff = diff_plans(json.loads(row[1]), plan, from_id=int(row[0]))
             values["diff_json"] = json.dumps(diff.to_json(), ensure_ascii=False)
+        new_id = int(cx.one("SELECT coalesce(max(id), 0) + 1 FROM decisions")[0])
+        values["id"] = new_id
+        values["seal"] = seal_of(values, rows)
         names = ", ".join(values)
-        marks = ", ".join(f":{k}" for k in values)
-        cur = conn.execute(f"INSERT INTO decisions ({names}) VALUES ({marks})", values)
-        new_id = int(cur.lastrowid)
-        conn.executemany("INSERT INTO decision_rows (decision_id, state, machine, job, value) "
-                         "VALUES (?, ?, ?, ?, ?)", [(new_id, *r) for r in rows])
+        marks = ", ".join("?" for _ in values)
+        cx.run(f"INSERT INTO decisions ({names}) VALUES ({marks})", list(values.values()))
+        self._insert_rows(cx, new_id, rows)
         return new_id
 
+    def _insert_rows(self, cx: _Cx, new_id: int, rows: list[tuple[Any, ...]]) -> None:
+        cx.many("INSERT INTO decision_rows (decision_id, state, machine, job, value) "
+                "VALUES (?, ?, ?, ?, ?)", [(new_id, *r) for r in rows])
+
     def restore(self, decision_id: int, *, by: str, note: str = "",
-                time: datetime | None = None) -> int:
+                time: datetime | None = None,
+                based_on: int | str | None = UNCHECKED) -> int:
         """Record a new decision re-using the shop snapshot and plan of ``decision_id``.
 
         Its reason is ``restored`` with the text "restored from #N" (and ``note``); nothing
@@ -365,9 +303,39 @@ class HistoryStore:
         old = self.get(decision_id)
         text = f"restored from #{old.id}" + (f": {note.strip()}" if note and note.strip() else "")
         return self.record(old.shop_json, old.plan, by=by, reason="restored", note=text,
-                           time=time, restored_from=old.id)
+                           time=time, restored_from=old.id, based_on=based_on)
 
     # ------------------------------------------------------------ reading
+
+    def _sealed(self, cx: _Cx, where: list[str], params: list[Any], order: str = "id",
+                limit: int | None = None) -> list[tuple[dict[str, Any], list[tuple]]]:
+        """Matching decisions with their rows, each checked against its seal."""
+        sql = f"SELECT {_SELECT} FROM decisions"
+        if where:
+            sql += " WHERE " + " AND ".join(where)
+        sql += f" ORDER BY {order}"
+        if limit is not None:
+            sql += " LIMIT ?"
+            params = [*params, int(limit)]
+        found = [dict(zip((*SEALED_COLUMNS, "seal"), r)) for r in cx.all(sql, params)]
+        rows: dict[int, list[tuple]] = {int(v["id"]): [] for v in found}
+        ids = list(rows)
+        for i in range(0, len(ids), 500):
+            chunk = ids[i:i + 500]
+            marks = ", ".join("?" for _ in chunk)
+            for r in cx.all("SELECT decision_id, state, machine, job, value FROM "
+                            f"decision_rows WHERE decision_id IN ({marks}) "
+                            f"ORDER BY decision_id, {self._row_order}", chunk):
+                rows[int(r[0])].append(tuple(r[1:]))
+        bad = [v["id"] for v in found if v["seal"] is None
+               or seal_of(v, rows[int(v["id"])]) != v["seal"]]
+        if bad:
+            which = ", ".join(f"#{i}" for i in bad[:10]) + (" ..." if len(bad) > 10 else "")
+            raise HistoryError(f"{self.location}: decision{'s' if len(bad) > 1 else ''} "
+                               f"{which} no longer match{'' if len(bad) > 1 else 'es'} "
+                               "its checksum (the history was changed outside dispatcher); "
+                               "nothing was shown. Restore the history from a backup")
+        return [(v, rows[int(v["id"])]) for v in found]
 
     def list(self, *, date_from: date | None = None, date_to: date | None = None,
              time_from: datetime | None = None, time_to: datetime | None = None,
@@ -379,17 +347,15 @@ class HistoryStore:
         ``date_from``/``date_to`` are shift dates (inclusive); ``time_from``/``time_to`` UTC
         instants (from inclusive, to exclusive); ``machine``/``job`` match decisions whose
         plan names them (placed, waiting or idle); ``by`` compares case-insensitively.
+        Every decision returned has been checked against its seal.
         """
+        if limit is not None and (isinstance(limit, bool) or int(limit) < 0):
+            raise HistoryInputError(f"limit: expected a whole number >= 0, got {limit!r}")
         where, params = self._filters(date_from, date_to, time_from, time_to, shift, machine,
                                       job, by, reason, shop)
-        sql = f"SELECT {_SUMMARY_COLUMNS} FROM decisions"
-        if where:
-            sql += " WHERE " + " AND ".join(where)
-        sql += " ORDER BY id DESC" if newest_first else " ORDER BY id"
-        if limit is not None:
-            sql += " LIMIT ?"
-            params.append(int(limit))
-        return self._read(lambda c: [_summary(r) for r in c.execute(sql, params)],
+        order = "id DESC" if newest_first else "id"
+        return self._read(lambda cx: [_summary(v) for v, _ in
+                                      self._sealed(cx, where, params, order, limit)],
                           "reading the history", [])
 
     @staticmethod
@@ -419,7 +385,7 @@ class HistoryStore:
             where.append("id IN (SELECT decision_id FROM decision_rows WHERE job = ?)")
             params.append(job)
         if by is not None:
-            where.append("supervisor = ? COLLATE NOCASE")
+            where.append("lower(supervisor) = lower(?)")
             params.append(by.strip())
         if reason is not None:
             where.append("reason_kind = ?")
@@ -432,33 +398,27 @@ class HistoryStore:
     def get(self, decision_id: int) -> Decision:
         """The full decision ``decision_id``; :class:`DecisionNotFound` if there is none.
 
-        The stored checksum is verified: a decision whose snapshot or plan no longer matches
-        it raises :class:`HistoryError` rather than being shown as if intact.
+        The stored seal is verified: a decision of which any stored column no longer
+        matches it raises :class:`HistoryError` rather than being shown as if intact.
         """
-        def read(conn: sqlite3.Connection) -> Decision:
-            row = conn.execute(f"SELECT {_SUMMARY_COLUMNS}, shop_json, plan_json, diff_json, "
-                               "digest FROM decisions WHERE id = ?", (int(decision_id),)
-                               ).fetchone()
-            if row is None:
-                raise DecisionNotFound(f"no decision #{decision_id} in {self.path}")
-            return self._decision(row)
-        if not self._prepare(create=False):
-            raise HistoryError(f"{self.path}: there is no history file here yet, so no "
-                               f"decision #{decision_id}")
+        def read(cx: _Cx) -> Decision:
+            found = self._sealed(cx, ["id = ?"], [int(decision_id)])
+            if not found:
+                raise DecisionNotFound(f"no decision #{decision_id} in {self.location}")
+            return self._decision(found[0][0])
+        if not self.exists():
+            raise self._missing(f"no decision #{decision_id}")
         return self._read(read, "reading the history", None)  # type: ignore[arg-type]
 
-    def _decision(self, row: Sequence[Any]) -> Decision:
-        summary = _summary(row[:13])
-        shop_text, plan_text, diff_text, digest = row[13:17]
-        if _digest(shop_text, plan_text) != digest:
-            raise HistoryError(f"{self.path}: decision #{summary.id} does not match its "
-                               "checksum (the file was changed outside dispatcher)")
+    @staticmethod
+    def _decision(v: dict[str, Any]) -> Decision:
+        summary = _summary(v)
         diff = None
-        if diff_text is not None:
-            diff = PlanDiff.from_json(json.loads(diff_text))
+        if v["diff_json"] is not None:
+            diff = PlanDiff.from_json(json.loads(v["diff_json"]))
             diff = dataclasses.replace(diff, to_id=summary.id)
-        return Decision(**summary.__dict__, shop_json=shop_text, plan=json.loads(plan_text),
-                        diff_from_replaced=diff)
+        return Decision(**summary.__dict__, shop_json=v["shop_json"],
+                        plan=json.loads(v["plan_json"]), diff_from_replaced=diff)
 
     def latest(self, shop: str | None = None) -> Decision | None:
         """The newest decision (of ``shop`` if given), or None in an empty history."""
@@ -466,7 +426,7 @@ class HistoryStore:
         return self.get(found[0].id) if found else None
 
     def count(self) -> int:
-        return self._read(lambda c: c.execute("SELECT count(*) FROM decisions").fetchone()[0],
+        return self._read(lambda c: int(c.one("SELECT count(*) FROM decisions")[0]),
                           "reading the history", 0)
 
     def diff(self, a: int, b: int) -> PlanDiff:
@@ -478,8 +438,9 @@ class HistoryStore:
         """One dict per (decision, row) for the decisions matching ``filters`` (see :meth:`list`).
 
         Keys: decision, time, shift_date, shift, by, reason, note, shop, objective, total,
-        certificate, replaces, restored_from, state (assigned/waiting/idle), machine, job,
-        value.
+        certificate, replaces, restored_from, station, based_on, state
+        (assigned/running/waiting/idle), machine, job, value. Every decision is checked
+        against its seal first.
         """
         where, params = self._filters(
             filters.pop("date_from", None), filters.pop("date_to", None),
@@ -488,29 +449,282 @@ class HistoryStore:
             filters.pop("by", None), filters.pop("reason", None), filters.pop("shop", None))
         if filters:
             raise TypeError(f"unknown filters: {', '.join(filters)}")
-        sql = (f"SELECT {', '.join('d.' + c.strip() for c in _SUMMARY_COLUMNS.split(','))}, "
-               "r.state, r.machine, r.job, r.value FROM decisions d "
-               "JOIN decision_rows r ON r.decision_id = d.id")
-        if where:
-            sql += " WHERE " + " AND ".join(w.replace("id IN", "d.id IN") for w in where)
-        sql += " ORDER BY d.id, r.rowid"
 
-        def read(conn: sqlite3.Connection) -> list[dict[str, Any]]:
+        def read(cx: _Cx) -> list[dict[str, Any]]:
             out = []
-            for r in conn.execute(sql, params):
-                s = _summary(r[:13]).to_json()
+            for v, rows in self._sealed(cx, where, params):
+                s = _summary(v).to_json()
                 s["decision"] = s.pop("id")
-                s.update(state=r[13], machine=r[14], job=r[15], value=_number(r[16]))
-                out.append(s)
+                for r in rows:
+                    out.append(dict(s, state=r[0], machine=r[1], job=r[2],
+                                    value=_number(r[3])))
             return out
         return self._read(read, "reading the history", [])
 
-    def check(self) -> list[str]:
-        """``PRAGMA integrity_check`` of the file: ``["ok"]`` when sound."""
-        return self._read(lambda c: [r[0] for r in c.execute("PRAGMA integrity_check")],
-                          "checking the history", ["ok"])
+    def all_sealed(self) -> list[tuple[dict[str, Any], list[tuple]]]:
+        """Every decision's stored columns and rows, oldest first, seals verified (copying)."""
+        return self._read(lambda cx: self._sealed(cx, [], []), "reading the history", [])
+
+    def append_sealed(self, items: Sequence[tuple[dict[str, Any], list[tuple]]]) -> int:
+        """Append decisions read by :meth:`all_sealed` of another store, keeping their
+        numbers, links and seals, in one transaction; returns how many. Each decision's
+        number must follow the last one here (so the copy keeps one total order)."""
+        def write(cx: _Cx) -> int:
+            last = int(cx.one("SELECT coalesce(max(id), 0) FROM decisions")[0])
+            for v, rows in items:
+                if int(v["id"]) <= last:
+                    raise HistoryInputError(
+                        f"decision #{v['id']}: the target already holds decisions up to "
+                        f"#{last}; decisions are copied in order after the last one")
+                names = ", ".join(v)
+                cx.run(f"INSERT INTO decisions ({names}) VALUES "
+                       f"({', '.join('?' for _ in v)})", list(v.values()))
+                self._insert_rows(cx, int(v["id"]), rows)
+                last = int(v["id"])
+            return len(items)
+        return self._write(write, "copying decisions")
 
     def export_csv(self, target: str | os.PathLike, **filters: Any) -> int:
         """Write the rows of the matching decisions to a CSV file; returns the row count."""
         from .export import export_csv
         return export_csv(self, target, **filters)
+
+
+def conflict_message(newer: DecisionSummary, based_on: int | None) -> str:
+    """'Decision #41, by ... at station B at 10:42, replaced the plan you started from ...'"""
+    where = f" at station {newer.station}" if newer.station else ""
+    started = ("the plan you started from" if based_on is None
+               else f"the plan you started from (#{based_on})")
+    return (f"Decision #{newer.id}, by {newer.by}{where} at "
+            f"{newer.time.strftime('%H:%M')} UTC, replaced {started}: review the new "
+            "proposal; nothing was recorded")
+
+
+class HistoryStore(DecisionStore):
+    """The decision history in one SQLite file.
+
+    Parameters
+    ----------
+    path
+        The history file; ``None`` uses :func:`dispatcher.history.default_history_path`.
+        The file is created on the first :meth:`record` (or by :meth:`init`), never by
+        reading, and only in a folder that exists (the per-user default folder excepted).
+    timeout
+        Seconds to keep retrying while another program holds the file busy.
+    max_pages
+        Optional cap on the file size in database pages (``PRAGMA max_page_count``);
+        a write that would exceed it fails like a full disk.
+    shifts, tz
+        The shift pattern and time zone used to label decisions (default: three shifts
+        from 06:00, local time of this computer).
+    migrations
+        The schema steps this program knows (default: all released ones); a file at an
+        older step is copied to a backup and upgraded when first opened.
+    station
+        Recorded with each decision (default: ``$DISPATCHER_STATION``, else the host name).
+
+    Attributes
+    ----------
+    last_backup
+        The backup written by an upgrade during this store's first use, else None.
+    """
+
+    kind = "sqlite"
+
+    def __init__(self, path: str | os.PathLike | None = None, *, timeout: float = 10.0,
+                 max_pages: int | None = None,
+                 shifts: tuple[ShiftStart, ...] = DEFAULT_SHIFTS, tz: tzinfo | None = None,
+                 migrations: Sequence[schema.Migration] = schema.MIGRATIONS,
+                 station: str | None = None):
+        self._default_folder = (path is None or str(path) == "") and not os.environ.get(
+            HISTORY_ENV)
+        self.path = resolve_history_path(path)
+        self.timeout = float(timeout)
+        self.max_pages = max_pages
+        self.shifts = shifts
+        self.tz = tz
+        self.station = _station_default() if station is None else station
+        self._migrations = tuple(migrations)
+        self._checked = False
+        self.last_backup: Path | None = None
+
+    def __repr__(self) -> str:
+        return f"HistoryStore({str(self.path)!r})"
+
+    # ------------------------------------------------------------ connections
+
+    def exists(self) -> bool:
+        return self.path.exists()
+
+    def _missing(self, what: str) -> HistoryError:
+        return HistoryError(f"{self.path}: the history file does not exist, so {what}; "
+                            "nothing was created. Check the path (--history PATH or "
+                            f"${HISTORY_ENV}), or record a decision first")
+
+    def read_only(self) -> bool:
+        return schema.read_only_file(self.path)
+
+    def _read_mode(self) -> str:
+        """How to open the file for reading without leaving side files behind.
+
+        ``rw`` when we may write the file and its folder (SQLite's normal WAL reading);
+        otherwise ``ro&immutable=1`` when nobody can be writing it (no write bit on the
+        file, or a folder we cannot write with no WAL side files in it), so SQLite creates
+        no ``-shm`` that would outlive the permission; else ``ro``.
+        """
+        folder_ok = os.access(self.path.parent, os.W_OK)
+        if not self.read_only() and folder_ok:
+            return "rw"
+        wal = Path(f"{self.path}-wal")
+        shm = Path(f"{self.path}-shm")
+        no_write_bits = not (self._mode() & 0o222)
+        if no_write_bits and not (wal.exists() and wal.stat().st_size > 0):
+            return "ro&immutable=1"
+        if not folder_ok and not wal.exists() and not shm.exists():
+            return "ro&immutable=1"
+        return "ro"
+
+    def _mode(self) -> int:
+        try:
+            return self.path.stat().st_mode
+        except OSError:
+            return 0
+
+    def _connect(self, path: Path, mode: str) -> sqlite3.Connection:
+        uri = path.absolute().as_uri() + f"?mode={mode}"
+        conn = sqlite3.connect(uri, uri=True, isolation_level=None,
+                               timeout=min(self.timeout, 1.0))
+        try:
+            conn.execute(f"PRAGMA busy_timeout = {int(min(self.timeout, 1.0) * 1000)}")
+            conn.execute("PRAGMA foreign_keys = ON")
+            if not mode.startswith("ro"):
+                conn.execute("PRAGMA synchronous = FULL")
+            if self.max_pages is not None:
+                conn.execute(f"PRAGMA max_page_count = {int(self.max_pages)}")
+        except BaseException:
+            conn.close()
+            raise
+        return conn
+
+    def _retry(self, action: Callable[[], T], doing: str) -> T:
+        """Run ``action``, retrying while the file is busy, for at most ``timeout`` seconds."""
+        deadline = _time.monotonic() + self.timeout
+        delay = 0.005
+        while True:
+            try:
+                return action()
+            except sqlite3.OperationalError as exc:
+                if not schema.is_busy(exc):
+                    raise self._store_error(exc, doing) from None
+                left = deadline - _time.monotonic()
+                if left <= 0:
+                    raise HistoryError(
+                        f"{self.path}: {doing} failed: the history file stayed busy (another "
+                        f"program was writing to it) for {self.timeout:g} s; nothing was "
+                        "changed. Try again in a moment") from None
+                _time.sleep(min(delay, left))
+                delay = min(delay * 2, 0.1)
+            except sqlite3.Error as exc:
+                raise self._store_error(exc, doing) from None
+
+    def _store_error(self, exc: sqlite3.Error, doing: str) -> HistoryError:
+        for side in (Path(f"{self.path}-shm"), Path(f"{self.path}-wal")):
+            if side.exists() and not os.access(side, os.W_OK) and not self.read_only():
+                return HistoryError(
+                    f"{self.path}: {doing} failed: its side file {side} is read-only (left by "
+                    "a program that read the history while it was read-only). With no "
+                    "dispatcher running, delete that side file, then try again")
+        return schema.store_error(self.path, exc, doing)
+
+    def init(self, make_folder: bool = True) -> bool:
+        """Create an empty history at :attr:`path` (and its folder, if ``make_folder``);
+        False if one exists already (it is checked, and upgraded if older)."""
+        if self.path.exists():
+            self._prepare(create=False)
+            return False
+        self._create(make_folder=make_folder)
+        self._prepare(create=False)
+        return True
+
+    def _create(self, make_folder: bool) -> None:
+        if self.path.parent.exists() and not os.access(self.path.parent, os.W_OK):
+            raise HistoryError(f"{self.path}: cannot create the history: the folder "
+                               f"{self.path.parent} is not writable")
+        self._retry(lambda: schema.create_history(
+            self.path, lambda p: self._connect(p, "rwc"), self._migrations,
+            make_folder=make_folder), "creating the history")
+
+    def _prepare(self, create: bool) -> bool:
+        """Check (once) and if needed create or migrate the file; False if it does not exist."""
+        if self._checked:
+            return True
+        if not self.path.exists():
+            if not create:
+                return False
+            self._create(make_folder=self._default_folder)
+        if self.path.is_dir():
+            raise HistoryError(f"{self.path}: is a folder, not a history file")
+        schema.check_header(self.path)
+
+        def check() -> None:
+            with self._connection(write=False) as conn:
+                version = schema.check_identity(conn, self.path,
+                                                 self._migrations[-1].version)
+                schema.quick_check(conn, self.path)
+                if version < self._migrations[-1].version:
+                    if self.read_only() or not os.access(self.path.parent, os.W_OK):
+                        raise HistoryError(
+                            f"{self.path}: the history needs an upgrade (schema {version}) "
+                            "but the file or its folder is read-only; it was left as it is")
+                    self.last_backup = schema.migrate(conn, self.path, version,
+                                                      self._migrations)
+
+        self._retry(check, "opening the history")
+        self._checked = True
+        return True
+
+    @contextmanager
+    def _connection(self, write: bool) -> Iterator[sqlite3.Connection]:
+        if write and self.read_only():
+            raise HistoryError(f"{self.path}: the history file is read-only; nothing was "
+                               "recorded. Make it writable or choose another file with "
+                               "--history PATH")
+        conn = self._connect(self.path, "rw" if write else self._read_mode())
+        try:
+            yield conn
+        finally:
+            conn.close()
+
+    def _read(self, action: Callable[[_Cx], T], doing: str, empty: T) -> T:
+        if not self._prepare(create=False):
+            return empty
+
+        def run() -> T:
+            with self._connection(write=False) as conn:
+                conn.execute("BEGIN")
+                try:
+                    return action(_Cx(conn))
+                finally:
+                    conn.execute("ROLLBACK")
+        return self._retry(run, doing)
+
+    def _write(self, action: Callable[[_Cx], T], doing: str) -> T:
+        self._prepare(create=True)
+
+        def write() -> T:
+            with self._connection(write=True) as conn:
+                conn.execute("BEGIN IMMEDIATE")
+                try:
+                    result = action(_Cx(conn))
+                    conn.execute("COMMIT")
+                except BaseException:
+                    if conn.in_transaction:
+                        conn.execute("ROLLBACK")
+                    raise
+                return result
+        return self._retry(write, doing)
+
+    def check(self) -> list[str]:
+        """``PRAGMA integrity_check`` of the file: ``["ok"]`` when sound."""
+        return self._read(lambda c: [r[0] for r in c.all("PRAGMA integrity_check")],
+                          "checking the history", ["ok"])
