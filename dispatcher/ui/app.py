@@ -5,7 +5,7 @@ from __future__ import annotations
 import sys
 from collections.abc import Sequence
 
-from dispatcher import __version__
+from dispatcher import __version__, resources
 
 ORG, APP = "dispatcher", "Dispatcher"
 
@@ -28,7 +28,27 @@ def make_application(argv: Sequence[str] | None = None):
     app.setOrganizationName(ORG)
     app.setApplicationName(APP)
     app.setApplicationVersion(__version__)
+    app.setDesktopFileName(resources.APP_ID)
+    icon = app_icon()
+    if not icon.isNull():
+        app.setWindowIcon(icon)
     return app
+
+
+def app_icon():
+    """The app icon at every installed size (empty when the installation lacks it)."""
+    from PySide6.QtGui import QIcon, QPixmap
+
+    icon = QIcon()
+    for size in resources.ICON_SIZES:
+        try:
+            data = resources.icon_png(size).read_bytes()
+        except resources.ResourceMissing:
+            continue
+        pixmap = QPixmap()
+        if pixmap.loadFromData(data, "PNG"):
+            icon.addPixmap(pixmap)
+    return icon
 
 
 def default_messenger(window):
