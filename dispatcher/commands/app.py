@@ -4,6 +4,8 @@ from __future__ import annotations
 
 import argparse
 
+from dispatcher.commands.common import EXIT_BAD_INPUT, CliError
+
 
 def register(sub: argparse._SubParsersAction) -> None:
     p = sub.add_parser("app", help="open the desktop app",
@@ -16,6 +18,12 @@ def register(sub: argparse._SubParsersAction) -> None:
 
 
 def run(args: argparse.Namespace) -> int:
+    # Before Qt starts: a missing X11 helper library would abort the process inside Qt.
+    from dispatcher.qt_platform import check_platform
+
+    problem = check_platform()
+    if problem is not None:
+        raise CliError(problem.message, EXIT_BAD_INPUT)
     from dispatcher.ui.app import run as run_app  # Qt is imported only for this command
 
     return run_app(args.shop, args.history)
