@@ -1,4 +1,4 @@
-"""What every sub-command shares: exit codes, the error type, and the plan output contract."""
+"""What every sub-command shares: exit codes, the command-line error, the plan output contract."""
 
 from __future__ import annotations
 
@@ -9,20 +9,33 @@ from typing import Any
 import numpy as np
 
 from dispatcher.engine import DispatchResult
+from dispatcher.errors import (
+    EXIT_BAD_INPUT,
+    EXIT_CONFLICT,
+    EXIT_HISTORY,
+    EXIT_INFEASIBLE,
+    EXIT_INTERNAL,
+    EXIT_OK,
+    BadInputError,
+)
 from dispatcher.shop.plan import json_number
 
-EXIT_OK = 0
-EXIT_INTERNAL = 1
-EXIT_BAD_INPUT = 2
-EXIT_INFEASIBLE = 3
-EXIT_STORE = 4
+EXIT_STORE = EXIT_HISTORY  # the name the commands used before the error root
+__all__ = ["EXIT_BAD_INPUT", "EXIT_CONFLICT", "EXIT_HISTORY", "EXIT_INFEASIBLE", "EXIT_INTERNAL", "EXIT_OK",
+           "EXIT_STORE", "CliError", "number", "plan_json", "print_json", "print_plan",
+           "wait_reason_text"]
 
 
-class CliError(Exception):
-    """A failure to report as one line on stderr with a given exit code (no traceback)."""
+class CliError(BadInputError):
+    """A command-line problem (an option, a name given on the command line) with no other
+    home in the core: one line on stderr, exit code 2 unless ``exit_code`` says otherwise.
 
-    def __init__(self, message: str, exit_code: int = EXIT_BAD_INPUT):
-        super().__init__(message)
+    Errors from the core are not wrapped in it: they carry their own exit code and
+    :func:`dispatcher.cli.main` reports them all the same way.
+    """
+
+    def __init__(self, message: str, exit_code: int = EXIT_BAD_INPUT, **where):
+        super().__init__(message, **where)
         self.exit_code = exit_code
 
 

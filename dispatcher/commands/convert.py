@@ -17,11 +17,10 @@ from pathlib import Path
 
 from dispatcher.commands.common import CliError
 from dispatcher.commands.shop_input import is_shop_document, read_shop_arg, solve_shop_arg
-from dispatcher.io.grid import GRID_SUFFIXES, GridFileError
-from dispatcher.io.shopfile import ShopFileError, save_shop
+from dispatcher.io.grid import GRID_SUFFIXES
+from dispatcher.io.shopfile import save_shop
 from dispatcher.io.spreadsheet import (
     EXPORT_SUFFIXES,
-    ExportError,
     export_grid,
     export_plan,
     import_grid_file,
@@ -54,15 +53,12 @@ def run(args: argparse.Namespace) -> int:
         if args.into:
             raise CliError("--into applies when reading a grid file into a shop document")
         shop = read_shop_arg(src)
-        try:
-            if args.plan:
-                export_plan(solve_shop_arg(shop, src, "total"), out, shop)
-            else:
-                export_grid(shop, out)
-                print("note: a grid file holds names and values only; states, pins, rush flags "
-                      "and penalties stay in the shop document", file=sys.stderr)
-        except ExportError as exc:
-            raise CliError(str(exc)) from None
+        if args.plan:
+            export_plan(solve_shop_arg(shop, src, "total"), out, shop)
+        else:
+            export_grid(shop, out)
+            print("note: a grid file holds names and values only; states, pins, rush flags "
+                  "and penalties stay in the shop document", file=sys.stderr)
         return 0
 
     if Path(src).suffix.lower() not in GRID_SUFFIXES:
@@ -73,15 +69,9 @@ def run(args: argparse.Namespace) -> int:
     if args.plan:
         raise CliError("--plan applies when reading a shop document")
     existing = read_shop_arg(args.into) if args.into else None
-    try:
-        report = import_grid_file(src, existing)
-    except GridFileError as exc:
-        raise CliError(str(exc)) from None
+    report = import_grid_file(src, existing)
     if existing is None:
         report.shop.description = f"Converted from the grid file {Path(src).name}."
-    try:
-        save_shop(report.shop, out)
-    except ShopFileError as exc:
-        raise CliError(str(exc)) from None
+    save_shop(report.shop, out)
     print(report.summary())
     return 0

@@ -18,7 +18,6 @@ from typing import Any
 
 from dispatcher.commands.common import (
     EXIT_BAD_INPUT,
-    EXIT_STORE,
     CliError,
     print_json,
     print_plan,
@@ -27,7 +26,6 @@ from dispatcher.history import (
     HISTORY_ENV,
     REASON_KINDS,
     UNCHECKED,
-    DecisionConflict,
     DecisionSummary,
     HistoryError,
     HistoryInputError,
@@ -36,9 +34,6 @@ from dispatcher.history import (
     reason_label,
 )
 
-#: A decision based on a plan in force that another station has replaced since.
-EXIT_CONFLICT = 5
-
 _HISTORY_HELP = (f"history file, or a PostgreSQL server as postgresql://... or service=NAME "
                  f"(default: ${HISTORY_ENV}, else the per-user data folder, "
                  "e.g. ~/.local/share/dispatcher/history.sqlite)")
@@ -46,19 +41,7 @@ _HISTORY_HELP = (f"history file, or a PostgreSQL server as postgresql://... or s
 
 def open_store(location):
     """The history store named by ``--history`` (exit 4 if its driver is missing)."""
-    return _store_call(lambda: open_history(location))
-
-
-def _store_call(action):
-    """Run ``action()`` turning history errors into CLI errors with the right exit code."""
-    try:
-        return action()
-    except DecisionConflict as exc:
-        raise CliError(str(exc), EXIT_CONFLICT) from None
-    except HistoryInputError as exc:
-        raise CliError(str(exc), EXIT_BAD_INPUT) from None
-    except HistoryError as exc:
-        raise CliError(str(exc), EXIT_STORE) from None
+    return open_history(location)
 
 
 # ---------------------------------------------------------------- solve --record
@@ -105,7 +88,7 @@ def check_record_arguments(args: argparse.Namespace) -> None:
         raise CliError("--record needs --by NAME (the supervisor making the decision)")
     if not args.reason:
         raise CliError("--record needs --reason KIND, one of: " + ", ".join(REASON_KINDS))
-    _store_call(lambda: parse_reason_kind(args.reason))
+    parse_reason_kind(args.reason)
 
 
 def record_decision(args: argparse.Namespace, shop_document: Any, plan: Any) -> int | None:
@@ -117,9 +100,9 @@ def record_decision(args: argparse.Namespace, shop_document: Any, plan: Any) -> 
         return None
     store = open_store(args.history)
     based_on = getattr(args, "based_on", UNCHECKED)
-    number = _store_call(lambda: store.record(shop_document, plan, by=args.by,
-                                              reason=args.reason, note=args.note,
-                                              based_on=based_on))
+    number = store.record(shop_document, plan, by=args.by,
+                          reason=args.reason, note=args.note,
+                          based_on=based_on)
     print(f"Recorded decision #{number} in {store.location}", file=sys.stderr)
     return number
 
@@ -210,18 +193,17 @@ def _total(x: float | int | None) -> str:
 
 
 def _must_exist(store) -> None:
-    if not _store_call(store.exists):
-        raise CliError(f"{store.location}: the history does not exist (no file there); "
-                       "nothing was created. Check --history PATH or "
-                       f"${HISTORY_ENV}, or create it with: dispatcher history init PATH",
-                       EXIT_STORE)
+    if not store.exists():
+        raise HistoryError(f"{store.location}: the history does not exist (no file there); "
+                           "nothing was created. Check --history PATH or "
+                           f"${HISTORY_ENV}, or create it with: dispatcher history init PATH")
 
 
 def run_list(args: argparse.Namespace) -> int:
     store = open_store(args.history)
     _must_exist(store)
-    found = _store_call(lambda: store.list(**_filters(args), limit=args.limit,
-                                           newest_first=args.limit is not None))
+    found = store.list(**_filters(args), limit=args.limit,
+                       newest_first=args.limit is not None)
     if args.limit is not None:
         found.reverse()
     if args.json:
@@ -249,7 +231,7 @@ def _print_table(found: list[DecisionSummary]) -> None:
 
 def run_show(args: argparse.Namespace) -> int:
     store = open_store(args.history)
-    d = _store_call(lambda: store.get(args.number))
+    d = store.get(args.number)
     if args.json:
         print_json(d.to_json())
         return 0
@@ -276,7 +258,7 @@ def run_show(args: argparse.Namespace) -> int:
 
 def run_diff(args: argparse.Namespace) -> int:
     store = open_store(args.history)
-    diff = _store_call(lambda: store.diff(args.a, args.b))
+    diff = store.diff(args.a, args.b)
     if args.json:
         print_json(diff.to_json())
         return 0
@@ -297,24 +279,23 @@ def run_export(args: argparse.Namespace) -> int:
     if target.is_dir():
         raise CliError(f"{target}: is a folder; name the CSV file to write")
     store = open_store(args.history)
-    if not _store_call(store.exists):
-        raise CliError(f"{store.location}: the history does not exist; nothing to export",
-                       EXIT_STORE)
-    count = _store_call(lambda: store.export_csv(args.target, **_filters(args)))
+    if not store.exists():
+        raise HistoryError(f"{store.location}: the history does not exist; nothing to export")
+    count = store.export_csv(args.target, **_filters(args))
     print(f"Wrote {count} rows to {args.target}")
     return 0
 
 
 def run_restore(args: argparse.Namespace) -> int:
     store = open_store(args.history)
-    number = _store_call(lambda: store.restore(args.number, by=args.by, note=args.note))
+    number = store.restore(args.number, by=args.by, note=args.note)
     print(f"Recorded decision #{number}: restored from #{args.number}")
     return 0
 
 
 def run_init(args: argparse.Namespace) -> int:
     store = open_store(args.location)
-    made = _store_call(store.init)
+    made = store.init()
     print(f"{'Created an empty history' if made else 'A history already exists'} at "
           f"{store.location}")
     return 0
@@ -323,7 +304,7 @@ def run_init(args: argparse.Namespace) -> int:
 def run_copy(args: argparse.Namespace) -> int:
     source, target = open_store(args.source), open_store(args.target)
     _must_exist(source)
-    count = _store_call(lambda: copy_history(source, target, append=args.append))
+    count = copy_history(source, target, append=args.append)
     print(f"Copied {count} decisions from {source.location} to {target.location} "
           "(counts and checksums verified)")
     return 0

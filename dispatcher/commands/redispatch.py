@@ -12,7 +12,7 @@ import argparse
 import json
 from pathlib import Path
 
-from dispatcher.commands.common import EXIT_INFEASIBLE, CliError, print_json
+from dispatcher.commands.common import CliError, print_json
 from dispatcher.commands.history import (
     add_record_arguments,
     check_record_arguments,
@@ -25,7 +25,7 @@ from dispatcher.commands.shop_input import (
     save_in_force,
 )
 from dispatcher.io.shopfile import shop_to_dict
-from dispatcher.shop import Plan, PlanFormatError, ShopError, ShopInfeasibleError
+from dispatcher.shop import Plan
 from dispatcher.shop.redispatch import ShopEvent, ShopRedispatch, redispatch_shop
 
 #: Largest plan file read with --plan (a plan of a very large shop is well under this).
@@ -91,11 +91,9 @@ def _plan_in_force(args: argparse.Namespace, shop) -> dict[str, list[str]]:
     except json.JSONDecodeError as exc:
         raise CliError(f"{args.plan}: line {exc.lineno}, column {exc.colno}: not valid JSON: "
                        f"{exc.msg}") from None
+    plan = Plan.from_json(data, source=args.plan)
     try:
-        plan = Plan.from_json(data, source=args.plan)
         return plan.in_force(shop)
-    except PlanFormatError as exc:
-        raise CliError(str(exc)) from None
     except KeyError as exc:
         raise CliError(f"{args.plan}: {exc.args[0]} in {args.shop}") from None
 
@@ -107,15 +105,10 @@ def run(args: argparse.Namespace) -> int:
     check_record_arguments(args)
     shop = read_shop_arg(args.shop)
     in_force = _plan_in_force(args, shop)
-    try:
-        outcome = redispatch_shop(shop, events, plan_in_force=in_force,
-                                  move_penalty=args.move_penalty,
-                                  objective="maximize" if args.maximize else "total",
-                                  source=args.shop)
-    except ShopInfeasibleError as exc:
-        raise CliError(f"{args.shop}: {exc}", EXIT_INFEASIBLE) from None
-    except ShopError as exc:
-        raise CliError(str(exc)) from None
+    outcome = redispatch_shop(shop, events, plan_in_force=in_force,
+                              move_penalty=args.move_penalty,
+                              objective="maximize" if args.maximize else "total",
+                              source=args.shop)
     if args.json:
         print_json(outcome.to_json())
     else:

@@ -17,9 +17,9 @@ import argparse
 from pathlib import Path
 from typing import Any
 
-from dispatcher.commands.common import EXIT_INFEASIBLE, EXIT_STORE, CliError
+from dispatcher.commands.common import CliError
 from dispatcher.commands.shop_input import is_shop_document, read_shop_arg, solve_shop_arg
-from dispatcher.io.grid import GridFileError, read_grid
+from dispatcher.io.grid import read_grid
 from dispatcher.io.shopfile import ShopFileError, load_shop
 from dispatcher.shop import Plan, PlanFormatError, Shop, shop_from_grid
 from dispatcher.sheet.build import build_sheet, run_order
@@ -59,14 +59,8 @@ def _load(path: str, check: bool = True) -> Shop:
     if is_shop_document(path):
         if check:
             return read_shop_arg(path)
-        try:
-            return load_shop(path, check=False)
-        except ShopFileError as exc:
-            raise CliError(str(exc)) from None
-    try:
-        table = read_grid(path)
-    except GridFileError as exc:
-        raise CliError(str(exc)) from None
+        return load_shop(path, check=False)
+    table = read_grid(path)
     return shop_from_grid(table.jobs, table.machines, table.values, table.allowed,
                           name=Path(path).stem)
 
@@ -74,36 +68,31 @@ def _load(path: str, check: bool = True) -> Shop:
 def _recorded(shop: Shop, source: str, number: str, history: str | None) -> tuple[Shop, Plan, Any]:
     """Shop snapshot, plan and decision of a recorded decision of this shop."""
     try:
-        from dispatcher.history import HistoryError, HistoryInputError, open_history
+        from dispatcher.history import HistoryError, open_history
     except ImportError:  # pragma: no cover - only in a build without the history package
         raise CliError("--decision needs the decision history, which this installation "
                        "lacks") from None
     from dispatcher.io.shopfile import shop_from_dict
 
-    try:
-        store = open_history(history)
-        path = store.location
-        if number.strip().lower() == "latest":
-            decision = store.latest(shop=shop.name)
-            if decision is None:
-                raise CliError(f"{path}: no recorded decision for shop {shop.name!r}")
-        else:
-            try:
-                wanted = int(number)
-            except ValueError:
-                raise CliError(f"--decision: expected a decision number or 'latest', "
-                               f"got {number!r}") from None
-            decision = store.get(wanted)
-    except HistoryInputError as exc:
-        raise CliError(str(exc)) from None
-    except HistoryError as exc:
-        raise CliError(str(exc), EXIT_STORE) from None
+    store = open_history(history)
+    path = store.location
+    if number.strip().lower() == "latest":
+        decision = store.latest(shop=shop.name)
+        if decision is None:
+            raise CliError(f"{path}: no recorded decision for shop {shop.name!r}")
+    else:
+        try:
+            wanted = int(number)
+        except ValueError:
+            raise CliError(f"--decision: expected a decision number or 'latest', "
+                           f"got {number!r}") from None
+        decision = store.get(wanted)
     where = f"{path}: decision #{decision.id}"
     try:
         snapshot = shop_from_dict(decision.shop_document, source=f"{where}, shop snapshot")
         plan = Plan.from_json(decision.plan, source=f"{where}, plan")
-    except (ShopFileError, PlanFormatError) as exc:
-        raise CliError(str(exc), EXIT_STORE) from None
+    except (ShopFileError, PlanFormatError) as exc:  # a stored snapshot that cannot be read
+        raise HistoryError(str(exc)) from None
     if snapshot.name != shop.name:
         raise CliError(f"{where} is for shop {snapshot.name!r}, not {shop.name!r} ({source})")
     return snapshot, plan, decision
@@ -126,8 +115,6 @@ def make_content(args: argparse.Namespace) -> SheetContent:
 
 def _filled(shop: Shop, source: str, time_limit: float | None) -> Any:
     """The filled shift of a shop document (least total), errors as for ``solve --fill-shift``."""
-    from dispatcher.engine import ShiftSearchError
-    from dispatcher.shop import ShopError, ShopInfeasibleError
     from dispatcher.shop.fill import fill_shop_shift
 
     if not is_shop_document(source):
@@ -135,14 +122,7 @@ def _filled(shop: Shop, source: str, time_limit: float | None) -> Any:
                        "and shift hours; a grid file has neither (see dispatcher convert)")
     if time_limit is not None and not time_limit > 0:
         raise CliError(f"--time-limit must be a number of seconds > 0, got {time_limit:g}")
-    try:
-        return fill_shop_shift(shop, time_limit=time_limit, source=source)
-    except ShopInfeasibleError as exc:
-        raise CliError(str(exc), EXIT_INFEASIBLE) from None
-    except ShiftSearchError as exc:
-        raise CliError(f"{source}: {exc}", EXIT_INFEASIBLE) from None
-    except ShopError as exc:
-        raise CliError(str(exc)) from None
+    return fill_shop_shift(shop, time_limit=time_limit, source=source)
 
 
 def run(args: argparse.Namespace) -> int:
@@ -150,12 +130,9 @@ def run(args: argparse.Namespace) -> int:
     if not args.pdf:
         print(sheet_text(content))
         return 0
-    from dispatcher.sheet.render import SheetRenderError, page_size_for, write_pdf
+    from dispatcher.sheet.render import page_size_for, write_pdf
 
-    try:
-        pages = write_pdf(content, args.pdf, paper=args.paper)
-    except SheetRenderError as exc:
-        raise CliError(str(exc)) from None
+    pages = write_pdf(content, args.pdf, paper=args.paper)
     paper = page_size_for(args.paper).name()
     print(f"wrote {args.pdf}: {pages} page{'s' if pages != 1 else ''}, {paper}")
     return 0

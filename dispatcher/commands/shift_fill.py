@@ -10,12 +10,10 @@ from __future__ import annotations
 
 import argparse
 
-from dispatcher.commands.common import EXIT_INFEASIBLE, CliError, print_json
+from dispatcher.commands.common import CliError, print_json
 from dispatcher.commands.history import record_decision
 from dispatcher.commands.shop_input import is_shop_document
-from dispatcher.engine import ShiftSearchError
-from dispatcher.io.shopfile import ShopFileError, load_shop, shop_to_dict
-from dispatcher.shop import ShopError, ShopInfeasibleError
+from dispatcher.io.shopfile import load_shop, shop_to_dict
 from dispatcher.shop.fill import ShiftFill, fill_shop_shift
 
 
@@ -31,20 +29,10 @@ def run_fill_shift(args: argparse.Namespace) -> int:
     limit = getattr(args, "time_limit", None)
     if limit is not None and not limit > 0:
         raise CliError(f"--time-limit must be a number of seconds > 0, got {limit:g}")
-    try:
-        shop = load_shop(path, check=False)  # fill_shop_shift checks it, with fill rules
-    except ShopFileError as exc:
-        raise CliError(str(exc)) from None
+    shop = load_shop(path, check=False)  # fill_shop_shift checks it, with fill rules
     extra = [n.strip() for n in args.must_run.split(",") if n.strip()]
-    try:
-        fill = fill_shop_shift(shop, maximize=args.maximize, extra_must_run=extra,
-                               time_limit=limit, source=path)
-    except ShopInfeasibleError as exc:
-        raise CliError(str(exc), EXIT_INFEASIBLE) from None
-    except ShiftSearchError as exc:
-        raise CliError(f"{path}: {exc}", EXIT_INFEASIBLE) from None
-    except ShopError as exc:
-        raise CliError(str(exc)) from None
+    fill = fill_shop_shift(shop, maximize=args.maximize, extra_must_run=extra,
+                           time_limit=limit, source=path)
     if args.json:
         print_json(fill.to_json())
     else:

@@ -10,9 +10,9 @@ from __future__ import annotations
 import sys
 from pathlib import Path
 
-from dispatcher.commands.common import EXIT_INFEASIBLE, CliError, print_json, print_plan
+from dispatcher.commands.common import CliError, print_json, print_plan
 from dispatcher.io.shopfile import SHOP_SUFFIX, ShopFileError, load_shop, save_shop
-from dispatcher.shop import Plan, Shop, ShopError, ShopInfeasibleError, solve_shop
+from dispatcher.shop import Plan, Shop, solve_shop
 
 SHOP_SUFFIXES = (SHOP_SUFFIX, ".json")
 
@@ -23,11 +23,8 @@ def is_shop_document(path: str) -> bool:
 
 
 def read_shop_arg(path: str) -> Shop:
-    """Load a shop document given on the command line; problems become a CliError (exit 2)."""
-    try:
-        return load_shop(path)
-    except ShopFileError as exc:
-        raise CliError(str(exc)) from None
+    """Load a shop document given on the command line (problems raise ShopFileError, exit 2)."""
+    return load_shop(path)
 
 
 def add_in_force_argument(parser) -> None:
@@ -42,7 +39,7 @@ def save_in_force(shop: Shop, in_force: dict[str, list[str]], path: str) -> None
     shop.plan_in_force = {machine: list(jobs) for machine, jobs in in_force.items()}
     try:
         save_shop(shop, path)
-    except ShopFileError as exc:
+    except ShopFileError as exc:  # the command line says what became of the document
         raise CliError(f"{exc} (the document was not changed)") from None
     print(f"Saved the plan in force into {path}", file=sys.stderr)
 
@@ -50,12 +47,7 @@ def save_in_force(shop: Shop, in_force: dict[str, list[str]], path: str) -> None
 def solve_shop_arg(shop: Shop, source: str, objective: str, must_run: str = "") -> Plan:
     """Solve a loaded shop; ``must_run`` is the comma-separated ``--must-run`` text."""
     extra = [n.strip() for n in must_run.split(",") if n.strip()]
-    try:
-        return solve_shop(shop, objective, extra_must_run=extra, source=source)
-    except ShopInfeasibleError as exc:
-        raise CliError(f"{source}: {exc}", EXIT_INFEASIBLE) from None
-    except ShopError as exc:
-        raise CliError(str(exc)) from None
+    return solve_shop(shop, objective, extra_must_run=extra, source=source)
 
 
 def print_shop_plan(plan: Plan, shop: Shop, as_json: bool) -> None:

@@ -6,7 +6,6 @@ import argparse
 from pathlib import Path
 
 from dispatcher.commands.common import (
-    EXIT_INFEASIBLE,
     CliError,
     plan_json,
     print_json,
@@ -28,7 +27,8 @@ from dispatcher.commands.shop_input import (
     solve_shop_arg,
 )
 from dispatcher.engine import DispatchInputError, InfeasibleError, solve
-from dispatcher.io.grid import GridFileError, read_grid
+from dispatcher.errors import Infeasible
+from dispatcher.io.grid import read_grid
 from dispatcher.io.shopfile import shop_to_dict
 from dispatcher.shop import shop_from_grid
 
@@ -108,18 +108,17 @@ def run(args: argparse.Namespace) -> int:
         if args.in_force:
             save_in_force(shop, shop_plan.in_force(shop), args.grid)
         return 0
-    try:
-        table = read_grid(args.grid)
-    except GridFileError as exc:
-        raise CliError(str(exc)) from None
+    table = read_grid(args.grid)
     must = parse_names(args.must_run, table.jobs, "job", args.grid)
     try:
         result = solve(table.values, table.allowed, objective=objective_of(args), must_run=must)
-    except DispatchInputError as exc:
-        raise CliError(f"{args.grid}: {exc}") from None
-    except InfeasibleError as exc:
-        raise CliError(f"{args.grid}: {infeasible_message(exc, table.jobs, table.machines)}",
-                       EXIT_INFEASIBLE) from None
+    except DispatchInputError as exc:  # the engine knows no file: name it
+        raise DispatchInputError(exc.message, source=args.grid) from None
+    except InfeasibleError as exc:  # the engine knows indices: name the jobs and machines
+        raise Infeasible(infeasible_message(exc, table.jobs, table.machines),
+                         [table.jobs[j] for j in exc.witness.jobs],
+                         [table.machines[m] for m in exc.witness.machines],
+                         source=args.grid) from None
     data = plan_json(result, table.jobs, table.machines)
     added = solve_extras.extras(result, args, table.jobs, table.machines)
     if args.json:

@@ -23,6 +23,8 @@ from dataclasses import dataclass
 import numpy as np
 from scipy.optimize import linear_sum_assignment
 
+from dispatcher.errors import BadInputError, Infeasible
+
 from .certificate import Certificate, potentials_from_plan
 from .matching import (
     HallWitness,
@@ -43,15 +45,19 @@ ROW_JOB, ROW_IDLE = 0, 1
 COL_MACHINE, COL_WAIT = 0, 1
 
 
-class DispatchInputError(ValueError):
+class DispatchInputError(BadInputError, ValueError):
     """The numbers given to the engine do not describe a dispatch problem."""
 
 
-class InfeasibleError(Exception):
-    """Must-run jobs cannot all be placed. ``witness`` names jobs and the machines they share."""
+class InfeasibleError(Infeasible):
+    """Must-run jobs cannot all be placed. ``witness`` names jobs and the machines they share.
+
+    ``jobs`` and ``machines`` (from :class:`dispatcher.errors.Infeasible`) are the
+    witness's job and machine indices.
+    """
 
     def __init__(self, message: str, witness: HallWitness):
-        super().__init__(message)
+        super().__init__(message, witness.jobs, witness.machines)
         self.witness = witness
 
 

@@ -20,11 +20,12 @@ from dataclasses import dataclass, field
 
 import numpy as np
 
+from dispatcher.errors import InternalError
 
 _BLOCK = 32  # rows per relaxation block; measured fastest at n = 300..2000
 
 
-class CertificateError(RuntimeError):
+class CertificateError(InternalError, RuntimeError):
     """The primal plan could not be certified optimal (a bug, never a user error)."""
 
 

@@ -33,6 +33,8 @@ import numpy as np
 from scipy.optimize import Bounds, LinearConstraint, milp
 from scipy.sparse import coo_array
 
+from dispatcher.errors import EXIT_INFEASIBLE, Cancelled, DispatcherError, Infeasible
+
 from .assignment import DispatchInputError, _check_inputs
 
 #: Relative gap under which HiGHS stops and the plan counts as proven optimal.
@@ -54,7 +56,7 @@ __all__ = [
 ]
 
 
-class ShiftInfeasibleError(Exception):
+class ShiftInfeasibleError(Infeasible):
     """Must-run or pinned jobs cannot all fit in the machines' hours.
 
     ``jobs`` and ``machines`` are index arrays of the jobs and machines involved. ``kind``
@@ -68,20 +70,25 @@ class ShiftInfeasibleError(Exception):
 
     def __init__(self, message: str, jobs, machines=(), *, kind: str = "proven",
                  needed: float = float("nan"), available: float = float("nan")):
-        super().__init__(message)
-        self.jobs = np.asarray(jobs, dtype=np.int64)
-        self.machines = np.asarray(machines, dtype=np.int64)
+        super().__init__(message, np.asarray(jobs, dtype=np.int64),
+                         np.asarray(machines, dtype=np.int64))
         self.kind = kind
         self.needed = needed
         self.available = available
 
 
-class ShiftCancelled(Exception):
+class ShiftCancelled(Cancelled):
     """The caller's ``cancel`` event was set; no plan is returned."""
 
 
-class ShiftSearchError(RuntimeError):
-    """The time limit ran out before any plan placing all must-run jobs was found."""
+class ShiftSearchError(DispatcherError, RuntimeError):
+    """The time limit ran out before any plan placing all must-run jobs was found.
+
+    Not a proof of infeasibility, but the command line treats it like one (exit code 3):
+    the must-run jobs could not be placed.
+    """
+
+    exit_code = EXIT_INFEASIBLE
 
 
 @dataclass(frozen=True)

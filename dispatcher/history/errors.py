@@ -7,16 +7,22 @@ Two families, because the command line and the app treat them differently:
   as it was. The command line exits with code 4.
 * :class:`HistoryInputError`: the caller passed something wrong (an unknown reason kind,
   no supervisor name, a plan that does not follow the solve contract). Exit code 2.
+
+Both come from the root in :mod:`dispatcher.errors`. A message that ends by suggesting
+another file says only "choose another file" and sets
+``hint=HINT_OTHER_HISTORY_FILE``; the command line adds how (``--history PATH``).
 """
 
 from __future__ import annotations
 
+from dispatcher.errors import EXIT_CONFLICT, BadInputError, HistoryUnusableError
 
-class HistoryError(Exception):
+
+class HistoryError(HistoryUnusableError):
     """The history file cannot be used; the message names the file and what to do."""
 
 
-class HistoryInputError(ValueError):
+class HistoryInputError(BadInputError, ValueError):
     """A value given to the history is not acceptable; the message names the field."""
 
 
@@ -33,6 +39,8 @@ class DecisionConflict(HistoryError):
     code of its own (5). ``newer`` is that decision (a :class:`~dispatcher.history.DecisionSummary`) and
     ``based_on`` the number the caller started from (None: no decision yet).
     """
+
+    exit_code = EXIT_CONFLICT
 
     def __init__(self, message: str, newer, based_on: int | None):
         super().__init__(message)

@@ -26,6 +26,7 @@ from datetime import datetime, timezone
 from pathlib import Path
 
 from dispatcher.atomic import fsync_file, fsync_folder
+from dispatcher.errors import HINT_OTHER_HISTORY_FILE
 
 from .errors import HistoryError
 
@@ -229,10 +230,11 @@ def check_header(path: Path) -> None:
     if size == 0:
         raise HistoryError(f"{path}: the file is empty (0 bytes), so it is not a dispatcher "
                            "history; it was left as it is. Move it away or choose another "
-                           "file with --history PATH")
+                           "file", hint=HINT_OTHER_HISTORY_FILE)
     if len(head) < 100 or not head.startswith(SQLITE_MAGIC):
         raise HistoryError(f"{path}: not a dispatcher history (not an SQLite database file); "
-                           "it was left as it is. Choose another file with --history PATH")
+                           "it was left as it is. Choose another file",
+                           hint=HINT_OTHER_HISTORY_FILE)
     page_size = struct.unpack(">H", head[16:18])[0]
     page_size = 65536 if page_size == 1 else page_size
     change_counter, pages = struct.unpack(">II", head[24:32])
@@ -244,7 +246,8 @@ def check_header(path: Path) -> None:
     if pages and change_counter == valid_for and not wal_has_data and size < pages * page_size:
         raise HistoryError(f"{path}: the history file is truncated ({size} bytes, its header "
                            f"says {pages * page_size}); it was left as it is. Restore it from "
-                           "a backup or choose another file with --history PATH")
+                           "a backup or choose another file",
+                           hint=HINT_OTHER_HISTORY_FILE)
 
 
 def check_identity(conn: sqlite3.Connection, path: Path, newest: int = SCHEMA_VERSION) -> int:
@@ -256,14 +259,16 @@ def check_identity(conn: sqlite3.Connection, path: Path, newest: int = SCHEMA_VE
     version = conn.execute("PRAGMA user_version").fetchone()[0]
     if app_id != APPLICATION_ID:
         raise HistoryError(f"{path}: an SQLite file, but not a dispatcher history; it was left "
-                           "as it is. Choose another file with --history PATH")
+                           "as it is. Choose another file",
+                           hint=HINT_OTHER_HISTORY_FILE)
     if version > newest:
         raise HistoryError(f"{path}: written by a newer version of dispatcher (history schema "
                            f"{version}, this version reads up to {newest}); update "
                            "dispatcher to use it. The file was left as it is")
     if version < 1:
         raise HistoryError(f"{path}: a dispatcher history without a schema; it was left as it "
-                           "is. Choose another file with --history PATH")
+                           "is. Choose another file",
+                           hint=HINT_OTHER_HISTORY_FILE)
     return version
 
 

@@ -28,6 +28,8 @@ from datetime import date, datetime, tzinfo
 from pathlib import Path
 from typing import Any, TypeVar
 
+from dispatcher.errors import HINT_OTHER_HISTORY_FILE
+
 from . import schema
 from .errors import DecisionConflict, DecisionNotFound, HistoryError, HistoryInputError
 from .location import HISTORY_ENV, resolve_history_path
@@ -687,8 +689,8 @@ class HistoryStore(DecisionStore):
     def _connection(self, write: bool) -> Iterator[sqlite3.Connection]:
         if write and self.read_only():
             raise HistoryError(f"{self.path}: the history file is read-only; nothing was "
-                               "recorded. Make it writable or choose another file with "
-                               "--history PATH")
+                               "recorded. Make it writable or choose another file",
+                               hint=HINT_OTHER_HISTORY_FILE)
         conn = self._connect(self.path, "rw" if write else self._read_mode())
         try:
             yield conn

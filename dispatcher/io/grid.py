@@ -26,6 +26,9 @@ from pathlib import Path
 
 import numpy as np
 
+from dispatcher.errors import BadInputError
+from dispatcher.errors import column_letter as column_letter  # part of this module's API
+
 #: Limits that keep a wrong file from hanging the tool. Refused before parsing the cells.
 MAX_JOBS = 10_000
 MAX_MACHINES = 2_000
@@ -36,18 +39,12 @@ CANNOT_RUN = {"", "x", "X"}
 GRID_SUFFIXES = (".csv", ".tsv", ".txt", ".xlsx")
 
 
-class GridFileError(ValueError):
+class GridFileError(BadInputError, ValueError):
     """A grid file or block could not be read. The message names file, row and column."""
 
     def __init__(self, source: str, message: str, row: int | None = None, column: int | None = None):
-        where = source
-        if row is not None:
-            where += f": row {row}"
-            if column is not None:
-                where += f", column {column} ({column_letter(column)})"
-        super().__init__(f"{where}: {message}")
-        self.source = source
-        self.row = row
+        super().__init__(message, source=source, row=row,
+                         column=column if row is not None else None)
         self.column = column
 
 
@@ -60,15 +57,6 @@ class GridTable:
     values: np.ndarray
     allowed: np.ndarray
     label: str = ""
-
-
-def column_letter(column: int) -> str:
-    """Spreadsheet letters for a 1-based column number (1 -> A, 27 -> AA)."""
-    letters = ""
-    while column > 0:
-        column, rem = divmod(column - 1, 26)
-        letters = chr(ord("A") + rem) + letters
-    return letters
 
 
 def _parse_number(text: str, decimal_comma: bool) -> float:

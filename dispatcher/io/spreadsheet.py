@@ -22,6 +22,7 @@ import numpy as np
 import pandas as pd
 
 from dispatcher.atomic import atomic_write
+from dispatcher.errors import BadInputError
 from dispatcher.io.grid import GridFileError, GridTable, parse_grid_text, read_grid
 from dispatcher.shop.model import Job, Machine, Shop, shop_from_grid
 from dispatcher.shop.plan import Plan, json_number
@@ -30,8 +31,8 @@ EXPORT_SUFFIXES = (".csv", ".xlsx")
 CANNOT_RUN_MARK = "x"
 
 
-class ExportError(OSError):
-    """A table could not be written; the message names the file."""
+class ExportError(BadInputError, OSError):
+    """A table could not be written; the message names the file (exit code 2)."""
 
 
 @dataclass

@@ -48,6 +48,7 @@ from PySide6.QtGui import (
 )
 
 from dispatcher.atomic import atomic_write
+from dispatcher.errors import BadInputError
 
 from .content import (
     STATE_SHORT,
@@ -96,8 +97,11 @@ BODY_STYLE = ("td, th {{ border: {rule}px solid black; }} "
 DOWN_SHADE = "#eeeeee"
 
 
-class SheetRenderError(RuntimeError):
-    """The sheet could not be painted or written (message names the file when there is one)."""
+class SheetRenderError(BadInputError, RuntimeError):
+    """The sheet could not be painted or written (message names the file when there is one).
+
+    Exit code 2, as for any output file the user named that cannot be written.
+    """
 
 
 def ensure_gui_application() -> QGuiApplication:

@@ -28,7 +28,13 @@ from typing import Any
 
 import numpy as np
 
-from dispatcher.engine import DispatchInputError, ShiftInfeasibleError, ShiftPlan, fill_shift
+from dispatcher.engine import (
+    DispatchInputError,
+    ShiftInfeasibleError,
+    ShiftPlan,
+    ShiftSearchError,
+    fill_shift,
+)
 
 from .model import DONE, MUST, MUST_NOT, RUNNING, UP, Problem, Shop, ShopError
 from .plan import Assignment, RunningJob, WaitReason, contract_json, json_number
@@ -126,7 +132,9 @@ def fill_shop_shift(shop: Shop, *, maximize: bool = False, extra_must_run: Itera
     jobs that must run this shift. ``time_limit``: seconds for the solver (the result
     then says whether it is proven optimal). Raises :class:`ShopError` for an
     inconsistent shop or missing run hours (every problem located) and
-    :class:`ShopInfeasibleError` when rush or pinned jobs cannot all fit. ``cancel`` (a
+    :class:`ShopInfeasibleError` when rush or pinned jobs cannot all fit, and
+    :class:`~dispatcher.engine.fill_shift.ShiftSearchError` when the time limit ran out
+    before any plan running them was found (both name ``source``). ``cancel`` (a
     ``threading.Event``) and ``progress`` (called with a short text per solver stage) are
     passed to :func:`dispatcher.engine.fill_shift`, which raises
     :class:`~dispatcher.engine.fill_shift.ShiftCancelled` when cancelled.
@@ -190,9 +198,11 @@ def fill_shop_shift(shop: Shop, *, maximize: bool = False, extra_must_run: Itera
                           must_run=must, pins=pins, rush=rush, due=due, cancel=cancel,
                           progress=progress)
     except ShiftInfeasibleError as exc:
-        raise ShopInfeasibleError(_infeasible_text(exc, names, mnames, source),
+        raise ShopInfeasibleError(_infeasible_text(exc, names, mnames),
                                   [names[i] for i in exc.jobs],
-                                  [mnames[k] for k in exc.machines]) from None
+                                  [mnames[k] for k in exc.machines], source) from None
+    except ShiftSearchError as exc:
+        raise ShiftSearchError(exc.message, source=source) from None
     except DispatchInputError as exc:
         raise ShopError([Problem("shop", str(exc))], source) from None
     return _fill_from_plan(shop, plan, rows, up, running, capacity_all, used_running)
@@ -205,8 +215,7 @@ def _no_hours(shop: Shop, i: int, k: int) -> Problem:
                    "run_hours or the pair's hours (needed to fill the shift)")
 
 
-def _infeasible_text(exc: ShiftInfeasibleError, names: list[str], mnames: list[str],
-                     source: str) -> str:
+def _infeasible_text(exc: ShiftInfeasibleError, names: list[str], mnames: list[str]) -> str:
     jobs = ", ".join(names[i] for i in exc.jobs)
     machines = ", ".join(mnames[k] for k in exc.machines) or "none"
     if exc.kind == "no_machine" and math.isnan(exc.needed):
@@ -225,7 +234,7 @@ def _infeasible_text(exc: ShiftInfeasibleError, names: list[str], mnames: list[s
     else:
         text = (f"must-run jobs {jobs} cannot all fit in the hours of their machines "
                 f"({machines}): no plan runs them all")
-    return (f"{source}: " if source else "") + "infeasible: " + text
+    return "infeasible: " + text
 
 
 def _fill_from_plan(shop: Shop, plan: ShiftPlan, rows: list[int], up: list[int],

@@ -18,6 +18,8 @@ from datetime import date, datetime, time
 
 import numpy as np
 
+from dispatcher.errors import BadInputError
+
 # Job states.
 WAITING, RUNNING, DONE = "waiting", "running", "done"
 JOB_STATES = (WAITING, RUNNING, DONE)
@@ -34,23 +36,22 @@ PIN_KINDS = (MUST, MUST_NOT)
 UNIT_KINDS = ("setup_minutes", "cost")
 
 
-class ShopError(ValueError):
+class ShopError(BadInputError, ValueError):
     """A shop that cannot be used as it is (bad references, contradictions, bad numbers).
 
-    ``problems`` lists every problem found, each a :class:`Problem` with its location.
+    ``problems`` lists every problem found, each a :class:`Problem` with its location;
+    with a single problem, ``where`` is its location (job or machine and field).
     """
 
     def __init__(self, problems: list["Problem"], source: str = ""):
         self.problems = list(problems)
-        self.source = source
-        head = f"{source}: " if source else ""
         if len(self.problems) == 1:
-            text = head + str(self.problems[0])
+            super().__init__(self.problems[0].message, source=source,
+                             where=self.problems[0].location)
         else:
-            text = (head + f"{len(self.problems)} problems: "
-                    + "; ".join(str(p) for p in self.problems[:10])
-                    + ("; ..." if len(self.problems) > 10 else ""))
-        super().__init__(text)
+            super().__init__(f"{len(self.problems)} problems: "
+                             + "; ".join(str(p) for p in self.problems[:10])
+                             + ("; ..." if len(self.problems) > 10 else ""), source=source)
 
 
 @dataclass(frozen=True)

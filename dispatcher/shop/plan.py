@@ -18,10 +18,12 @@ import math
 from dataclasses import dataclass, field
 from typing import Any
 
+from dispatcher.errors import BadInputError
+
 OBJECTIVES = ("total", "maximize", "bottleneck")
 
 
-class PlanFormatError(ValueError):
+class PlanFormatError(BadInputError, ValueError):
     """A plan object (JSON) that does not follow the solve contract; names the field."""
 
 
@@ -173,7 +175,7 @@ class Plan:
     def from_json(cls, data: Any, source: str = "plan") -> "Plan":
         """Read a solve-contract object back. Raises :class:`PlanFormatError` naming the field."""
         def fail(where: str, msg: str) -> PlanFormatError:
-            return PlanFormatError(f"{source}: {where}: {msg}")
+            return PlanFormatError(msg, source=source, where=where)
 
         def num(x: Any, where: str, optional: bool = False) -> float | None:
             if x is None and optional:

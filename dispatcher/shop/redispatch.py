@@ -243,13 +243,14 @@ def _in_force_machines(shop: Shop, plan_in_force: Mapping[str, Sequence[str]] | 
     return out
 
 
-def _infeasible(exc: InfeasibleError, shop: Shop, layout: _Layout, columns: list[int]) -> ShopInfeasibleError:
+def _infeasible(exc: InfeasibleError, shop: Shop, layout: _Layout, columns: list[int],
+                source: str = "") -> ShopInfeasibleError:
     w = exc.witness
     jobs = [shop.jobs[layout.rows[int(i)]].name for i in w.jobs]
     machines = list(dict.fromkeys(shop.machines[columns[int(c)]].name for c in w.machines))
     msg = (f"infeasible after the event: must-run jobs {', '.join(jobs)} ({len(jobs)}) compete "
            f"for only {len(w.machines)} free slot(s) on: {', '.join(machines) or 'no machine'}")
-    return ShopInfeasibleError(msg, jobs, machines)
+    return ShopInfeasibleError(msg, jobs, machines, source)
 
 
 def _warm(pre: _Layout, pre_result: DispatchResult, post: _Layout) -> tuple[DispatchResult, list[int]]:
@@ -327,11 +328,11 @@ def redispatch_shop(shop: Shop, events: Sequence[ShopEvent], *,
         pre_result = solve(pre.values, pre.allowed, wait_penalty=pre.penalty,
                            must_run=pre.must, objective=objective)
     except InfeasibleError as exc:
-        raise _infeasible(exc, shop, pre, columns) from None
+        raise _infeasible(exc, shop, pre, columns, source) from None
     try:
         result, order = _warm(pre, pre_result, post)
     except InfeasibleError as exc:
-        raise _infeasible(exc, after, post, columns) from None
+        raise _infeasible(exc, after, post, columns, source) from None
     return _difference(shop, after, in_force, left, arrived, post, order, columns, result)
 
 

@@ -20,19 +20,22 @@ from dataclasses import dataclass
 import numpy as np
 
 from dispatcher.engine import DispatchResult, InfeasibleError, solve
+from dispatcher.errors import Infeasible
 
 from .model import DONE, MUST, MUST_NOT, RUNNING, UP, Shop
 from .plan import Assignment, Plan, RunningJob, WaitReason
 from .validate import check_shop
 
 
-class ShopInfeasibleError(Exception):
-    """Must-run (rush or pinned) jobs cannot all be placed. Names jobs and machines."""
+class ShopInfeasibleError(Infeasible):
+    """Must-run (rush or pinned) jobs cannot all be placed. Names jobs and machines.
 
-    def __init__(self, message: str, jobs: list[str], machines: list[str]):
-        super().__init__(message)
-        self.jobs = jobs
-        self.machines = machines
+    ``jobs`` and ``machines`` are names; ``source`` (the shop file, when known) prefixes
+    the message.
+    """
+
+    def __init__(self, message: str, jobs: list[str], machines: list[str], source: str = ""):
+        super().__init__(message, jobs, machines, source=source)
 
 
 @dataclass
@@ -113,8 +116,9 @@ def build_problem(shop: Shop, *, extra_must_run: Iterable[str] = (), source: str
     return ShopProblem(shop, rows, columns, values, allowed, penalty, must, running, unavailable)
 
 
-def solve_problem(problem: ShopProblem, objective: str = "total") -> DispatchResult:
-    """Run the engine on a built problem; infeasible must-run jobs raise ShopInfeasibleError."""
+def solve_problem(problem: ShopProblem, objective: str = "total", source: str = "") -> DispatchResult:
+    """Run the engine on a built problem; infeasible must-run jobs raise ShopInfeasibleError
+    (its message prefixed with ``source`` when given)."""
     try:
         return solve(problem.values, problem.allowed, objective=objective,
                      wait_penalty=problem.wait_penalty, must_run=problem.must_run)
@@ -125,7 +129,7 @@ def solve_problem(problem: ShopProblem, objective: str = "total") -> DispatchRes
         slots = len(w.machines)
         msg = (f"infeasible: must-run jobs {', '.join(jobs)} ({len(jobs)}) compete for only "
                f"{slots} free slot(s) on: {', '.join(machines) or 'no machine'}")
-        raise ShopInfeasibleError(msg, jobs, machines) from None
+        raise ShopInfeasibleError(msg, jobs, machines, source) from None
 
 
 def solve_shop(shop: Shop, objective: str = "total", *, extra_must_run: Iterable[str] = (),
@@ -137,7 +141,7 @@ def solve_shop(shop: Shop, objective: str = "total", *, extra_must_run: Iterable
     :class:`ShopInfeasibleError` when rush or pinned jobs cannot all be placed.
     """
     problem = build_problem(shop, extra_must_run=extra_must_run, source=source)
-    result = solve_problem(problem, objective)
+    result = solve_problem(problem, objective, source)
     return plan_from_result(problem, result)
 
 

@@ -207,13 +207,10 @@ class SettingsController(QObject):
         if new.absolute() != window.history.path.absolute():
             try:
                 store = usable_history(new)
-            except HistoryError as exc:
-                # The store's messages point command-line users to --history; here the
-                # choice is made in this dialog.
-                text = str(exc).replace(" with --history PATH", "")
+            except HistoryError as exc:  # its message says what to do, not which option
                 window.messenger.error(
                     "History file not changed",
-                    f"{text}\n\nDecisions are still recorded in {window.history.path}.")
+                    f"{exc}\n\nDecisions are still recorded in {window.history.path}.")
                 return False
             window.settings.setValue(KEY_HISTORY, str(new))
             self.history_changed.emit(store)
