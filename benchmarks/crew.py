@@ -82,7 +82,7 @@ def main():
                          capacity=capacity, wait_penalty=penalty, rush=rush)
     t_ref, ref = timed(reference, values, allowed, qualified, capacity, penalty, rush, repeat=1)
     assert plan.verify()
-    ours = (plan.planned_count, int(plan.tier_counts[1]), plan.total)
+    ours = (plan.planned_count, int(plan.tier_counts[2]), plan.total)
     print(f"ours:      {t_ours:8.3f} s  placed {ours[0]}, rush {ours[1]}, total {ours[2]:.0f}")
     print(f"reference: {t_ref:8.3f} s  placed {ref[0]}, rush {ref[1]}, total {ref[2]:.0f}")
     if ours[:2] != ref[:2] or not np.isclose(ours[2], ref[2]):

@@ -354,3 +354,16 @@ def test_verify_refuses_a_dropped_wait_penalty():
     object.__setattr__(cheap, "wait_penalty", penalty)
     object.__setattr__(cheap, "total", 101.0)
     assert not cheap.verify()
+
+
+def test_kept_jobs_go_before_rush_jobs_and_are_never_refused():
+    """A running machine's own job (kept) outranks a rush job for the only operator, and a
+    kept job the crew cannot cover waits instead of making the plan infeasible."""
+    vals = np.zeros((2, 2))
+    allowed = np.array([[True, False], [False, True]])
+    plan = staffed_dispatch(vals, allowed, qualified=np.array([[True, True]]),
+                            keep=[True, False], rush=[False, True])
+    assert plan.machine_of_job.tolist() == [0, -1] and plan.verify()
+    nobody = staffed_dispatch(vals, allowed, qualified=np.array([[False, True]]),
+                              keep=[True, False])
+    assert nobody.machine_of_job.tolist() == [-1, 1] and nobody.verify()

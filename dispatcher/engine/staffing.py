@@ -11,8 +11,8 @@ order of aims:
 
 1. as many jobs placed as the allowed pairs *and the crew* permit;
 2. among those, as many must-run jobs as possible (all of them, or
-   :class:`~dispatcher.engine.assignment.InfeasibleError`), then as many rush jobs as
-   possible;
+   :class:`~dispatcher.engine.assignment.InfeasibleError`), then as many kept jobs (a
+   running machine's own job, never refused), then as many rush jobs as possible;
 3. among those, the cheapest (objective ``"total"``) or most valuable (``"maximize"``).
 
 The sets of jobs that can be routed to the sink together are the independent sets of a
@@ -58,9 +58,10 @@ from .matching import HallWitness, maximum_matching
 
 __all__ = ["StaffedPlan", "StaffingShortage", "restaff", "staffed_dispatch"]
 
-#: Tiers of jobs, highest priority first.
-TIER_MUST, TIER_RUSH, TIER_OTHER = 0, 1, 2
-_TIERS = 3
+#: Tiers of jobs, highest priority first: must-run, kept (placed before rush jobs but
+#: never refused: a running machine's own job), rush, the others.
+TIER_MUST, TIER_KEEP, TIER_RUSH, TIER_OTHER = 0, 1, 2, 3
+_TIERS = 4
 
 
 @dataclass(frozen=True)
@@ -90,8 +91,8 @@ class StaffedPlan:
 
     ``machine_of_job[i]``: machine of job i, -1 when it waits. ``operator_of_machine[m]``:
     operator minding machine m, -1 when m gets no job or needs nobody. ``tier_counts``:
-    jobs placed per tier (must-run, rush, other). ``cuts``: for each cumulative tier
-    (must-run; must-run and rush; all jobs) the node set of a minimum cut of the network
+    jobs placed per tier (must-run, kept, rush, other). ``cuts``: for each cumulative tier
+    (must-run; and kept; and rush; all jobs) the node set of a minimum cut of the network
     whose capacity equals the jobs placed from those tiers. ``potential``: node
     potentials with non-negative reduced cost on every residual arc of the final flow
     (``None`` for plans solved as a MILP, whose optimality is HiGHS's).
@@ -108,7 +109,7 @@ class StaffedPlan:
     needs_operator: np.ndarray
     wait_penalty: np.ndarray
     tier: np.ndarray
-    tier_counts: tuple[int, int, int]
+    tier_counts: tuple[int, ...]
     method: str
     slots: np.ndarray | None = None
     cuts: tuple = ()
@@ -247,7 +248,7 @@ class _Network:
 
     def cut_caps(self, sources, qualified, capacity) -> np.ndarray:
         """Capacities of the network fed by ``sources`` only (through the first hub)."""
-        cap = self.caps([sources.sum(), 0, 0], qualified, capacity)
+        cap = self.caps(np.r_[sources.sum(), np.zeros(_TIERS - 1, np.int64)], qualified, capacity)
         cap[self.s_job] = sources
         return cap
 
@@ -402,7 +403,7 @@ def _check_crew(n_machines, qualified, capacity, needs_operator):
 
 def staffed_dispatch(costs, allowed=None, *, qualified, capacity=None, needs_operator=None,
                      objective: str = "total", wait_penalty=None, rush=None, must_run=None,
-                     slots=None) -> StaffedPlan:
+                     keep=None, slots=None) -> StaffedPlan:
     """Certified plan in which every running machine has a present, qualified operator.
 
     Parameters
@@ -423,6 +424,10 @@ def staffed_dispatch(costs, allowed=None, *, qualified, capacity=None, needs_ope
     wait_penalty, rush, must_run : arrays (jobs), optional
         Penalty per waiting job; rush jobs are placed before others when not all can
         be; must-run jobs are never left waiting (else :class:`InfeasibleError`).
+    keep : bool array (jobs), optional
+        Jobs placed right after the must-run jobs and before rush jobs, but left
+        waiting rather than refused when the crew cannot cover them (a machine's
+        running job whose operator left).
     slots : int array (machines), optional
         Jobs a machine takes at once (default 1). Any value above 1 switches to the
         mixed-integer model.
@@ -468,6 +473,11 @@ def staffed_dispatch(costs, allowed=None, *, qualified, capacity=None, needs_ope
         if r.shape != (n_jobs,):
             raise DispatchInputError(f"rush needs {n_jobs} entries, got {r.size}")
         tier[r] = TIER_RUSH
+    if keep is not None:
+        k = np.asarray(keep, bool).reshape(-1)
+        if k.shape != (n_jobs,):
+            raise DispatchInputError(f"keep needs {n_jobs} entries, got {k.size}")
+        tier[k] = TIER_KEEP
     tier[must] = TIER_MUST
     slot = np.ones(n_machines, np.int64) if slots is None else np.asarray(slots, np.int64).reshape(-1)
     if slot.shape != (n_machines,) or (slot < 1).any():
