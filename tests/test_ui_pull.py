@@ -8,7 +8,7 @@ from PySide6.QtWidgets import QMenu
 
 from dispatcher.history import HistoryStore
 from dispatcher.shop import DONE, solve_shop
-from dispatcher.ui.decision import without_job
+from dispatcher.shop.proposal import without_job
 from dispatcher.ui.edits import SetJobsState
 from ui_support import make_window, save_shot, wait_plan
 

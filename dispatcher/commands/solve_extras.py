@@ -19,7 +19,9 @@ from typing import Any
 import numpy as np
 
 from dispatcher.commands.common import CliError, number
-from dispatcher.engine import DispatchResult, ranked_plans, what_if
+from dispatcher.engine import DispatchResult, what_if
+from dispatcher.shop.alternatives import ranked_choices
+from dispatcher.shop.whatif import machine_minimum
 
 MAX_ALTERNATIVES = 1000
 
@@ -62,30 +64,18 @@ def extras(result: DispatchResult, args: argparse.Namespace, jobs: list[str],
 
 def _alternatives(result: DispatchResult, k: int, jobs: list[str],
                   columns: list[str]) -> list[dict[str, Any]]:
-    # Columns with the same machine name are slots of one machine: ranked over machines,
-    # so plans that differ only in slots are never generated.
-    out = []
-    for plan in ranked_plans(result, k, groups=columns):
-        pairs = [(int(j), int(c)) for j, c in enumerate(plan.machine_of_job) if c >= 0]
-        out.append({"total": number(plan.total), "assignments": [
-            {"job": jobs[j], "machine": columns[c], "cost": number(result.values[j, c])}
-            for j, c in pairs]})
-    return out
+    # Columns with the same machine name are slots of one machine (ranked over machines).
+    return [{"total": number(choice.total), "assignments": [
+        {"job": jobs[j], "machine": columns[c], "cost": number(result.values[j, c])}
+        for j, c in choice.pairs]} for choice in ranked_choices(result, k, columns)]
 
 
 def _what_if(result: DispatchResult, jobs: list[str], columns: list[str],
              machines: list[str] | None) -> dict[str, dict[str, Any]]:
-    table = what_if(result).extra
     names = machines if machines is not None else list(dict.fromkeys(columns))
-    out: dict[str, dict[str, Any]] = {}
-    for j, job in enumerate(jobs):
-        best: dict[str, float] = {}
-        for c, m in enumerate(columns):
-            x = table[j, c]
-            if not np.isnan(x) and (m not in best or x < best[m]):
-                best[m] = float(x)
-        out[job] = {m: (number(best[m]) if m in best else None) for m in names}
-    return out
+    best = machine_minimum(what_if(result).extra, columns, names)
+    return {job: {m: (None if np.isnan(best[j, k]) else number(float(best[j, k])))
+                  for k, m in enumerate(names)} for j, job in enumerate(jobs)}
 
 
 def print_text(data: dict[str, Any], plan_assignments: list[dict[str, Any]]) -> None:

@@ -242,7 +242,7 @@ class _Ranker:
         return RankedPlan(total, machine_of_job)
 
 
-def ranked_plans(result: DispatchResult, count: int, groups=None) -> list[RankedPlan]:
+def ranked_plans(result: DispatchResult, count: int, groups=None, cancel=None) -> list[RankedPlan]:
     """The ``count`` best distinct plans, best first; the first is ``result``'s own plan.
 
     Parameters
@@ -257,6 +257,9 @@ def ranked_plans(result: DispatchResult, count: int, groups=None) -> list[Ranked
         same allowed jobs); plans are then distinct over (job, machine) choices, so two
         plans that differ only in which slot of a machine a job takes are one plan and
         only one of them is ranked. Default: every column is a machine of its own.
+    cancel : threading.Event, optional
+        Checked before each subproblem; once it is set the ranking stops and returns the
+        plans found so far (whoever set it drops them).
 
     Returns
     -------
@@ -299,6 +302,8 @@ def ranked_plans(result: DispatchResult, count: int, groups=None) -> list[Ranked
     heap: list[tuple[float, int, _Node]] = [(root.key, next(tick), root)]
     plans: list[RankedPlan] = []
     while heap and len(plans) < count:
+        if cancel is not None and cancel.is_set():
+            break
         _, _, node = heapq.heappop(heap)
         if node.freed is not None:
             # Solve only as far as the next entry of the queue: past it, a better bound

@@ -11,10 +11,11 @@ from __future__ import annotations
 from PySide6.QtCore import QObject
 
 from dispatcher.history import diff_plans
-from dispatcher.ui.alternatives_data import alternative_plans
+from dispatcher.shop.alternatives import alternative_plans
 from dispatcher.ui.alternatives_view import AlternativesView
-from dispatcher.ui.decision import EVENT_CONFIRM, DecisionDialog, Proposal
-from dispatcher.ui.solving import MODE_ROUND, snapshot
+from dispatcher.shop.planning import MODE_ROUND
+from dispatcher.shop.proposal import EVENT_CONFIRM, Proposal
+from dispatcher.ui.decision import DecisionDialog
 from dispatcher.ui.worker import BackgroundRunner
 
 
@@ -58,7 +59,7 @@ class AlternativesTab(QObject):
         """Open the decision dialog for alternative number ``rank``."""
         flow = self.window.decisions
         before, _ = flow.plan_in_force()
-        shop = snapshot(self.window.doc.shop)
+        shop = self.window.doc.shop.copy()
         diff = diff_plans(before, plan.to_json()) if before else None
         proposal = Proposal(EVENT_CONFIRM, f"Put plan #{rank} of the alternatives in force",
                             shop, plan, diff)

@@ -1,16 +1,15 @@
-"""The decision flow: an event (machine down or back up, rush job, job pulled) -> the proposed new plan
-shown as a difference against the plan in force -> confirmed with a reason and a name ->
-recorded in the history and put in force.
+"""The confirm dialog of a decision: an event (machine down or back up, rush job, job
+pulled) -> the proposed new plan shown as a difference against the plan in force ->
+confirmed with a reason and a name.
 
-:func:`propose` is Qt-free: it applies the event to a copy of the shop and solves it with
-the core; :class:`DecisionDialog` shows the proposal (with the safety reminder when a
-machine goes down) and is non-blocking (``open()``), so tests drive it directly.
+The proposal comes from the Qt-free core (:func:`dispatcher.shop.proposal.propose`);
+:class:`DecisionDialog` shows it (with the safety reminder when a machine goes down) and
+is non-blocking (``open()``), so tests drive it directly.
 """
 
 from __future__ import annotations
 
 import html
-from dataclasses import dataclass, field
 
 from PySide6.QtCore import Qt, Signal
 from PySide6.QtWidgets import (
@@ -26,41 +25,16 @@ from PySide6.QtWidgets import (
     QWidget,
 )
 
-from dispatcher.history import REASON_KINDS, PlanDiff, diff_plans
-from dispatcher.shop.redispatch import ShopEvent, redispatch_shop
-from dispatcher.shop import DOWN, RUNNING, UP, WAITING, Plan, Shop, ShopError, ShopInfeasibleError
+from dispatcher.history import REASON_KINDS, PlanDiff
+from dispatcher.shop.proposal import EVENT_CONFIRM, EVENT_DOWN, EVENT_PULL, EVENT_REASON, EVENT_RUSH, EVENT_UP, Proposal
 from dispatcher.ui import palette
 from dispatcher.ui.format import fmt
-from dispatcher.ui.solving import MODE_ROUND, snapshot, solve_for_mode
 
 SAFETY_REMINDER = (
     "\u26a0 Safety first: before anyone works on this machine, apply lockout/tagout and "
     "follow the site's isolation procedure. Operators run only machines they are trained "
     "and authorised for. Follow each machine's setup instructions. Local regulations and "
     "the site's safety rules take precedence over this plan.")
-
-EVENT_DOWN, EVENT_UP, EVENT_RUSH, EVENT_CONFIRM = "down", "up", "rush", "confirm"
-EVENT_PULL = "pulled"
-EVENT_REASON = {EVENT_DOWN: "breakdown", EVENT_UP: "repair", EVENT_RUSH: "rush-job",
-                EVENT_CONFIRM: "shift-start", EVENT_PULL: "manual-change"}
-
-
-@dataclass
-class Proposal:
-    """The shop after the event, its plan, and the difference from the plan in force."""
-
-    event: str
-    title: str
-    shop: Shop
-    plan: Plan | None
-    diff: PlanDiff | None
-    machine: int | None = None
-    job: int | None = None
-    job_changes: list[tuple[int, dict]] = field(default_factory=list)
-    problem: str = ""
-    move_penalties: float | None = None   # paid by the warm re-dispatch, when it was used
-    pulled_job: str = ""                  # the job this decision takes out of the shop
-
 
 NOTE_HINTS = {
     EVENT_DOWN: "What happened (for example: hydraulic leak, waiting for fitter)",
@@ -69,121 +43,6 @@ NOTE_HINTS = {
     EVENT_PULL: "Why the job is pulled (for example: order cancelled, material not arrived)",
     EVENT_CONFIRM: "Anything the next shift should know",
 }
-
-
-def _empty_plan_json(objective: str) -> dict:
-    return {"status": "optimal", "objective": objective, "total": 0, "assignments": [],
-            "waiting_jobs": [], "idle_machines": []}
-
-
-def propose(shop: Shop, event: str, objective: str, before: dict | None, *,
-            machine: int | None = None, job: int | None = None, note: str = "",
-            mode: str = MODE_ROUND) -> Proposal:
-    """Apply ``event`` to a copy of ``shop`` and solve it; ``before`` is the plan in force (JSON).
-
-    Machine down: it takes nothing; jobs running on it go back to waiting (they need a new
-    setup elsewhere). Machine up: it takes jobs again. Rush: the job becomes a rush job.
-    Pulled: the job leaves the shop (its pins and its place in the plan in force with it;
-    if it was running, its machine is free again); the history keeps the shop as it was.
-    """
-    if event == EVENT_PULL:
-        return _propose_pull(shop, objective, before, job, mode)
-    new = snapshot(shop)
-    job_changes: list[tuple[int, dict]] = []
-    if event in (EVENT_DOWN, EVENT_UP):
-        m = new.machines[machine]
-        m.state = DOWN if event == EVENT_DOWN else UP
-        m.state_note = note
-        title = f"{m.name} {'is down' if event == EVENT_DOWN else 'is back up'}"
-        if event == EVENT_DOWN:
-            for i, j in enumerate(new.jobs):
-                if j.state == RUNNING and j.machine == m.id:
-                    j.state, j.machine, j.since = WAITING, None, None
-                    job_changes.append((i, {"state": WAITING, "machine": None, "since": None}))
-    elif event == EVENT_RUSH:
-        new.jobs[job].rush = True
-        title = f"Rush job: {new.jobs[job].name}"
-        job_changes.append((job, {"rush": True}))
-    elif event == EVENT_CONFIRM:
-        title = "Put the plan shown in force"
-    else:
-        raise ValueError(f"unknown event {event!r}")
-    warm = _warm_redispatch(shop, event, objective, machine, job) if mode == MODE_ROUND else None
-    if warm is not None:
-        after = warm.shop
-        for m_new, m_old in zip(after.machines, shop.machines):
-            if m_new.state != m_old.state:
-                m_new.state_note = note
-        changes = _job_changes(shop, after)
-        diff = diff_plans(before or _empty_plan_json(objective), warm.plan.to_json())
-        return Proposal(event, title, after, warm.plan, diff, machine, job, changes, "",
-                        warm.move_penalties_paid)
-    try:
-        plan, note_text = solve_for_mode(new, objective, mode)
-    except (ShopError, ShopInfeasibleError) as exc:
-        return Proposal(event, title, new, None, None, machine, job, job_changes, str(exc))
-    diff = diff_plans(before or _empty_plan_json(objective), plan.to_json())
-    return Proposal(event, title, new, plan, diff, machine, job, job_changes, note_text)
-
-
-def without_job(shop: Shop, index: int) -> Shop:
-    """A copy of ``shop`` without job ``index``: its grid values and run hours, its pins and
-    its place in the plan in force go too."""
-    new = snapshot(shop)
-    gone = new.jobs.pop(index)
-    new.grid = {k: v for k, v in new.grid.items() if k[0] != gone.id}
-    new.hours = {k: v for k, v in new.hours.items() if k[0] != gone.id}
-    new.pins = [p for p in new.pins if p.job != gone.id]
-    new.plan_in_force = {m: [j for j in js if j != gone.id]
-                         for m, js in new.plan_in_force.items()}
-    new.plan_in_force = {m: js for m, js in new.plan_in_force.items() if js}
-    return new
-
-
-def _propose_pull(shop: Shop, objective: str, before: dict | None, job: int, mode: str) -> Proposal:
-    """The job is pulled: re-dispatch without it (warm from the plan in force when there is
-    one, as for the other events), then take it out of the shop."""
-    name = shop.jobs[job].name
-    title = f"Job pulled: {name}"
-    warm = _warm_redispatch(shop, EVENT_PULL, objective, None, job) if mode == MODE_ROUND else None
-    if warm is not None:
-        plan, problem, moves = warm.plan, "", warm.move_penalties_paid
-    else:
-        try:
-            plan, problem = solve_for_mode(without_job(shop, job), objective, mode)
-        except (ShopError, ShopInfeasibleError) as exc:
-            return Proposal(EVENT_PULL, title, without_job(shop, job), None, None, None, job,
-                            [], str(exc), None, name)
-        moves = None
-    diff = diff_plans(before or _empty_plan_json(objective), plan.to_json())
-    return Proposal(EVENT_PULL, title, without_job(shop, job), plan, diff, None, job, [],
-                    problem, moves, name)
-
-
-def _warm_redispatch(shop: Shop, event: str, objective: str, machine: int | None,
-                     job: int | None):
-    """The core's warm re-dispatch from the plan in force (with move penalties), or None
-    when it does not apply (no plan in force, bottleneck objective, or no feasible plan:
-    then the caller solves from scratch and explains)."""
-    if not shop.plan_in_force or objective not in ("total", "maximize") or event == EVENT_CONFIRM:
-        return None
-    name = shop.machines[machine].name if event in (EVENT_DOWN, EVENT_UP) else shop.jobs[job].name
-    try:
-        return redispatch_shop(shop, [ShopEvent(event, name)], objective=objective,
-                               move_penalty=0.0 if objective == "maximize" else None)
-    except (ShopError, ShopInfeasibleError):
-        return None
-
-
-def _job_changes(before: Shop, after: Shop) -> list[tuple[int, dict]]:
-    """Per job, the fields the event changed (state, machine, since, rush)."""
-    out = []
-    for i, (a, b) in enumerate(zip(before.jobs, after.jobs)):
-        fields = {f: getattr(b, f) for f in ("state", "machine", "since", "rush")
-                  if getattr(a, f) != getattr(b, f)}
-        if fields:
-            out.append((i, fields))
-    return out
 
 
 def diff_html(diff: PlanDiff | None, unit: str, before: dict | None = None,

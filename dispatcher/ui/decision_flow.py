@@ -1,7 +1,7 @@
 """Decision flows: machine down or back up, rush job, job pulled, put a plan in force.
 
 :class:`DecisionFlow` is a part of the main window, created in its constructor. The
-proposal comes from :func:`dispatcher.ui.decision.propose`; confirming records the
+proposal comes from :func:`dispatcher.shop.proposal.propose`; confirming records the
 decision in the history first and only then changes the document, as one undoable step.
 """
 
@@ -11,21 +11,21 @@ from datetime import datetime, timezone
 
 from PySide6.QtCore import QObject, Qt, Signal
 
-from dispatcher.history import HistoryError, HistoryInputError
+from dispatcher.history import HistoryError, HistoryInputError, diff_plans
 from dispatcher.io.shopfile import shop_to_dict
-from dispatcher.shop import DONE, DOWN, UP, Shop
-from dispatcher.ui.decision import (
+from dispatcher.shop import DONE, DOWN, UP, WAITING, Shop
+from dispatcher.shop.planning import plan_in_force_ids
+from dispatcher.shop.proposal import (
     EVENT_CONFIRM,
     EVENT_DOWN,
     EVENT_PULL,
     EVENT_RUSH,
     EVENT_UP,
-    DecisionDialog,
     Proposal,
     propose,
 )
+from dispatcher.ui.decision import DecisionDialog
 from dispatcher.ui.edits import ReplaceShop, SetJobsState, SetMachineFields, SetPlanInForce
-from dispatcher.ui.solving import plan_in_force_ids, snapshot
 
 
 class DecisionFlow(QObject):
@@ -77,8 +77,12 @@ class DecisionFlow(QObject):
         row = self.view.current_row() if row is None or row is False else row
         if row is None:
             return None
-        if self.doc.job_at(row).rush:
-            self.show_warning(f"{self.doc.job_at(row).name} is already a rush job")
+        job = self.doc.job_at(row)
+        if job.rush:
+            self.show_warning(f"{job.name} is already a rush job")
+            return None
+        if job.state != WAITING:
+            self.show_warning(f"{job.name} is {job.state}: only a waiting job can become a rush job")
             return None
         return self._open(self.doc.shop, EVENT_RUSH, job=row)
 
@@ -100,8 +104,13 @@ class DecisionFlow(QObject):
 
     def _open(self, shop: Shop, event: str, **where) -> DecisionDialog:
         before, _ = self.plan_in_force()
-        return self.show(propose(shop, event, self.window.objective, before, mode=self.window.mode,
-                                          **where))
+        objective = self.window.objective
+        proposal = propose(shop, event, objective, mode=self.window.mode, **where)
+        if proposal.plan is not None:
+            nothing = {"status": "optimal", "objective": objective, "total": 0,
+                       "assignments": [], "waiting_jobs": [], "idle_machines": []}
+            proposal.diff = diff_plans(before or nothing, proposal.plan.to_json())
+        return self.show(proposal)
 
     def show(self, proposal: Proposal) -> DecisionDialog:
         """Open the confirm dialog for a proposal against the plan in force."""
@@ -129,7 +138,7 @@ class DecisionFlow(QObject):
         stack = self.doc.undo_stack
         stack.beginMacro(f"{proposal.title} (decision #{number})")
         if proposal.event == EVENT_PULL:
-            stack.push(ReplaceShop(self.doc, snapshot(recorded_shop), proposal.title))
+            stack.push(ReplaceShop(self.doc, recorded_shop.copy(), proposal.title))
         if proposal.machine is not None and proposal.event in (EVENT_DOWN, EVENT_UP):
             m = recorded_shop.machines[proposal.machine]
             stack.push(SetMachineFields(self.doc, proposal.machine,

@@ -22,7 +22,6 @@ from dispatcher.io.spreadsheet import export_grid, export_plan, import_grid_file
 from dispatcher.shop import Shop, ShopError, shop_from_grid
 from dispatcher.ui.document import ShopDocument
 from dispatcher.ui.messages import CANCEL, SAVE, Messenger
-from dispatcher.ui.solving import snapshot
 
 AUTOSAVE_MS = 60_000
 MAX_RECENT = 8
@@ -189,7 +188,7 @@ class FileController(QObject):
         """Merge a grid file into the open shop by job and machine names, as one undoable
         edit; returns the core's report (None, with a message, when the file is refused)."""
         try:
-            report = import_grid_file(Path(path), snapshot(self.doc.shop))
+            report = import_grid_file(Path(path), self.doc.shop.copy())
         except (GridFileError, ShopError, OSError) as exc:
             self.messenger.error("Cannot import", str(exc))
             self.problem.emit(str(exc))
@@ -210,7 +209,7 @@ class FileController(QObject):
     def autosave_now(self, wait: bool = False) -> None:
         if not self.doc.dirty:
             return
-        self._pool.start(_AutosaveJob(snapshot(self.doc.shop), self.autosave_path()))
+        self._pool.start(_AutosaveJob(self.doc.shop.copy(), self.autosave_path()))
         if wait:
             self._pool.waitForDone(30_000)
 

@@ -16,7 +16,6 @@ from dispatcher.shop import DONE, MAINTENANCE, MUST, MUST_NOT, UP, Job, Machine
 from dispatcher.ui.clipboard import PasteError, copy_block, paste_changes
 from dispatcher.ui.edits import ReplaceShop, SetJobField, SetJobsState, SetMachineFields, SetPin, SetValues
 from dispatcher.ui.grid_model import FIRST_MACHINE_COL
-from dispatcher.ui.solving import snapshot
 
 
 def _new_id(prefix: str, taken: list[str]) -> str:
@@ -102,7 +101,7 @@ class GridEdits(QObject):
         if not name or name in self.doc.shop.job_names():
             self.show_warning(f"job name {name!r} is empty or already used")
             return False
-        shop = snapshot(self.doc.shop)
+        shop = self.doc.shop.copy()
         shop.jobs.append(Job(id=_new_id("J", [j.id for j in shop.jobs]), name=name))
         self.doc.undo_stack.push(ReplaceShop(self.doc, shop, f"Add job {name}"))
         self.view.setCurrentIndex(self.model.index(self.doc.n_jobs() - 1, FIRST_MACHINE_COL))
@@ -119,7 +118,7 @@ class GridEdits(QObject):
         if not name or name in self.doc.shop.machine_names():
             self.show_warning(f"machine name {name!r} is empty or already used")
             return False
-        shop = snapshot(self.doc.shop)
+        shop = self.doc.shop.copy()
         shop.machines.append(Machine(id=_new_id("M", [m.id for m in shop.machines]), name=name))
         self.doc.undo_stack.push(ReplaceShop(self.doc, shop, f"Add machine {name}"))
         return True

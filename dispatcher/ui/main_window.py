@@ -32,7 +32,6 @@ from dispatcher.shop import MUST, MUST_NOT, Plan, Shop
 from dispatcher.shop.fill import ShiftFill
 from dispatcher.ui import palette
 from dispatcher.ui.alternatives_tab import AlternativesTab
-from dispatcher.ui.decision import EVENT_DOWN, EVENT_UP
 from dispatcher.ui.decision_flow import DecisionFlow
 from dispatcher.ui.document import ShopDocument
 from dispatcher.ui.files import FileController
@@ -44,7 +43,9 @@ from dispatcher.ui.messages import Messenger
 from dispatcher.ui.plan_panel import PlanPanel
 from dispatcher.ui.printing import SheetPrinting
 from dispatcher.ui.settings_dialog import SettingsController
-from dispatcher.ui.solving import MODE_ROUND, MODE_SHIFT, MODES, SolveOutcome, snapshot, solve_outcome
+from dispatcher.shop.planning import MODE_ROUND, MODE_SHIFT, MODES
+from dispatcher.shop.proposal import EVENT_DOWN, EVENT_UP
+from dispatcher.ui.solving import SolveOutcome, solve_outcome
 from dispatcher.ui.whatif_tab import WhatIfTab
 from dispatcher.ui.worker import BackgroundRunner
 
@@ -343,7 +344,7 @@ class MainWindow(QMainWindow):
     # ---- solving ----------------------------------------------------------------------------
     def request_solve(self) -> None:
         """Re-solve the current shop in the background; older results will be discarded."""
-        shop = snapshot(self.doc.shop)
+        shop = self.doc.shop.copy()
         objective, mode = self.objective, self.mode
         self.runner.submit(lambda cancel, report: solve_outcome(shop, objective, cancel, report, mode),
                            "solving", with_progress=True)

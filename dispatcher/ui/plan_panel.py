@@ -22,7 +22,8 @@ from dispatcher.shop import Plan
 from dispatcher.shop.fill import ShiftFill
 from dispatcher.ui import palette
 from dispatcher.ui.format import fmt
-from dispatcher.ui.solving import MODES, machine_entries, shift_hours
+from dispatcher.shop.planning import MODES
+from dispatcher.ui.solving import machine_entries, shift_hours
 
 #: Waiting jobs listed one by one in the panel; the rest are counted (the grid shows all).
 MAX_LISTED = 150

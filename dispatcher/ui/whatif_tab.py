@@ -11,8 +11,8 @@ from __future__ import annotations
 
 from PySide6.QtCore import QObject
 
-from dispatcher.ui.solving import MODE_ROUND, snapshot
-from dispatcher.ui.whatif_data import what_if_grid
+from dispatcher.shop.planning import MODE_ROUND
+from dispatcher.shop.whatif import what_if_grid
 from dispatcher.ui.whatif_view import WhatIfView
 from dispatcher.ui.worker import BackgroundRunner
 
@@ -48,7 +48,7 @@ class WhatIfTab(QObject):
             view.show_message("What-if costs are for the 'least total' and 'most value' objectives "
                               "(switch in the Plan menu)")
             return
-        shop = snapshot(window.doc.shop)
+        shop = window.doc.shop.copy()
         unit = window.doc.shop.unit.label()
         view.status.setText("Computing\u2026")
         self.runner.submit(lambda cancel: (shop, what_if_grid(plan, cancel), unit), "what-if")

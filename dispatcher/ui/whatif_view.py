@@ -14,7 +14,7 @@ from PySide6.QtWidgets import QLabel, QTableView, QVBoxLayout, QWidget
 from dispatcher.shop import Shop
 from dispatcher.ui import palette
 from dispatcher.ui.format import fmt
-from dispatcher.ui.whatif_data import WhatIfGrid
+from dispatcher.shop.whatif import WhatIfGrid
 
 ExtraRole = Qt.ItemDataRole.UserRole + 11
 

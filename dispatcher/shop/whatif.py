@@ -1,9 +1,10 @@
-"""What-if costs of a shop plan laid out on the shop's jobs x machines (Qt-free).
+"""What-if costs per job and machine, for the app's map and ``solve --what-if``.
 
 The numbers are the engine's exact what-if costs (:func:`dispatcher.engine.whatif.what_if`)
 on the problem the plan was solved on; this module only maps the problem's rows (waiting
-jobs) and columns (machine slots) back to the shop's jobs and machines. A machine with
-several slots takes the least extra over its slots (any free slot will do).
+jobs) and columns (machine slots) back to jobs and machines. A machine with several slots
+takes the least extra over its slots (any free slot will do): :func:`machine_minimum`,
+the one place that rule is written.
 """
 
 from __future__ import annotations
@@ -13,13 +14,32 @@ from dataclasses import dataclass
 import numpy as np
 
 from dispatcher.engine.whatif import what_if
-from dispatcher.shop import Plan
+
+from .plan import Plan
+from .planning import Cancelled
 
 NOT_APPLICABLE = "n/a"
 
 
-class Cancelled(Exception):
-    """The computation was cancelled (its result would be dropped anyway)."""
+def machine_minimum(extra: np.ndarray, columns, machines) -> np.ndarray:
+    """Per row and machine, the least of ``extra`` over that machine's slot columns.
+
+    ``columns[c]`` labels the machine of engine column c (a machine with several slots
+    labels several columns); ``machines`` lists the labels to report, in order (a machine
+    with no column, for example one that is down, gets NaN). NaN where no slot allows it.
+    """
+    extra = np.asarray(extra, dtype=float)
+    labels = list(columns)
+    out = np.full((extra.shape[0], len(machines)), np.nan)
+    for k, machine in enumerate(machines):
+        slots = [c for c, label in enumerate(labels) if label == machine]
+        if not slots:
+            continue
+        block = extra[:, slots]
+        with np.errstate(all="ignore"):
+            out[:, k] = np.where(np.isnan(block).all(axis=1), np.nan,
+                                 np.nanmin(np.where(np.isnan(block), np.inf, block), axis=1))
+    return out
 
 
 @dataclass(frozen=True)
@@ -48,7 +68,8 @@ class WhatIfGrid:
 
 def what_if_grid(plan: Plan, cancel=None) -> WhatIfGrid:
     """Map the engine's what-if costs for ``plan`` onto its shop (raises ValueError for
-    the bottleneck objective, where one number per pair does not describe the plans)."""
+    the bottleneck objective, where one number per pair does not describe the plans, and
+    :class:`~dispatcher.shop.planning.Cancelled` when ``cancel`` is set)."""
     problem, result = plan.problem, plan.result
     if problem is None or result is None:
         raise ValueError("this plan carries no solver result to compute what-if costs from")
@@ -60,13 +81,7 @@ def what_if_grid(plan: Plan, cancel=None) -> WhatIfGrid:
     rows = np.asarray(problem.rows, dtype=np.int64)
     cols = np.asarray(problem.columns, dtype=np.int64)
     extra = np.full((n_jobs, n_machines), np.nan)
-    for k in np.unique(cols):
-        slots = np.flatnonzero(cols == k)
-        block = w.extra[:, slots]
-        with np.errstate(all="ignore"):
-            best = np.where(np.isnan(block).all(axis=1), np.nan, np.nanmin(
-                np.where(np.isnan(block), np.inf, block), axis=1))
-        extra[rows, k] = best
+    extra[rows] = machine_minimum(w.extra, cols.tolist(), range(n_machines))
     in_problem = np.zeros(n_jobs, dtype=bool)
     in_problem[rows] = True
     planned = np.full(n_jobs, -1, dtype=np.int64)
