@@ -12,7 +12,8 @@ Nothing here imports the engine. Each reference rests on something outside the p
 
 The references want integer values so that big-M arithmetic is exact.
 :func:`check_result` checks an engine result's claims directly, without calling its own
-``verify`` (tests call both).
+``verify`` (tests call both), on a square problem it rebuilds from the values, penalties
+and must-run flags, and against :func:`scipy_reference`.
 """
 
 from __future__ import annotations
@@ -220,14 +221,41 @@ def networkx_reference(values, allowed=None, penalty=None, must=None, objective=
 
 # --------------------------------------------------------------------------- checks
 
-def check_result(result, values, allowed=None, penalty=None, must=None) -> None:
+def square_by_hand(values, allowed, penalty, must, placed: int, objective: str,
+                   top: float = 0.0) -> np.ndarray:
+    """The square problem of the documented layout, built here from the problem itself.
+
+    Rows: the jobs, then one idle row per machine left without a job; columns: the
+    machines, then one wait slot per job that waits (``placed`` jobs are placed). A job
+    costs its value on an allowed machine (``top - value`` when maximising) and its wait
+    penalty on a wait slot (not allowed for a must-run job); an idle row costs 0 on a
+    machine and cannot wait.
+    """
+    m, n = values.shape
+    size = m + n - placed
+    square = np.full((size, size), np.inf)
+    job_cost = top - values if objective == "maximize" else values
+    square[:m, :n] = np.where(allowed, job_cost, np.inf)
+    square[:m, n:] = np.where(must, np.inf, penalty)[:, None]
+    square[m:, :n] = 0.0
+    return square
+
+
+def check_result(result, values, allowed=None, penalty=None, must=None, *,
+                 reference: Reference | None = None) -> None:
     """Assert every claim of an engine result by hand (independent of ``result.verify``).
 
     Plan: one machine per placed job, allowed pairs only, must-run jobs placed, total
-    recomputed. Certificate: reduced costs >= -tol on the pairs of the problem solved and
-    0 on planned pairs, for the potentials the result exposes and for the full square
-    certificate; LP duality (sum of potentials = cost of the plan in the square problem).
-    Konig: the cover has as many vertices as pairs and touches every allowed pair.
+    recomputed and equal to the optimum of scipy's ``linear_sum_assignment`` on the
+    encoding of :func:`scipy_reference` (built here from the values, penalties and
+    must-run flags). Certificate: the engine's square equals the square rebuilt here by
+    :func:`square_by_hand` (so a square that drops or alters part of the problem fails),
+    and the potentials have reduced costs >= -tol on that rebuilt square and 0 on the
+    plan; LP duality (sum of potentials = cost of the plan). The potentials the result
+    exposes are checked on the values too. Konig: the cover has as many vertices as pairs
+    and touches every allowed pair. ``reference``: the caller's own reference answer
+    (:func:`scipy_reference` or :func:`brute_force`) for this problem, to save computing
+    it twice or where floats of very different magnitudes defeat scipy's big-M encoding.
     """
     values, allowed, penalty, must = _as_problem(values, allowed, penalty, must)
     values = values.astype(float)
@@ -245,6 +273,14 @@ def check_result(result, values, allowed=None, penalty=None, must=None) -> None:
     waiting = float(penalty[~placed].sum())
     expect = planned - waiting if result.objective == "maximize" else planned + waiting
     assert np.isclose(result.total, expect)
+    if reference is None:
+        reference = scipy_reference(values, allowed, penalty, must, result.objective)
+    assert reference.feasible, "scipy finds no plan placing every must-run job"
+    assert reference.placed == int(placed.sum()), "not as many jobs placed as scipy places"
+    assert np.isclose(result.total, reference.total, rtol=1e-9, atol=1e-9), (
+        f"total {result.total} but scipy's optimum is {reference.total}")
+    if result.objective == "bottleneck" and placed.any():
+        assert result.bottleneck == reference.bottleneck
 
     scale = max(1.0, float(np.abs(values[allowed]).max(initial=0)), float(penalty.max(initial=0)))
     tol = 1e-9 * scale * max(1, m + n)
@@ -258,17 +294,30 @@ def check_result(result, values, allowed=None, penalty=None, must=None) -> None:
     if result.objective == "bottleneck" and placed.any():
         assert result.bottleneck == values[jobs, machines].max()
         assert (values[solved] <= result.bottleneck).all()
+        # The problem solved keeps exactly the allowed pairs up to the bottleneck value.
+        np.testing.assert_array_equal(solved, allowed & (values <= result.bottleneck))
+    elif placed.any() or m == 0 or n == 0:
+        np.testing.assert_array_equal(solved, allowed)
 
     cert = result.certificate
-    size = cert.cost.shape[0]
-    assert cert.cost.shape == (size, size)
+    size = m + n - int(placed.sum())
+    assert cert.cost.shape == (size, size), "the square is not jobs + idle rows by machines + waits"
     assert sorted(cert.col_of_row.tolist()) == list(range(size))
     if size:
+        top = 0.0
+        if result.objective == "maximize" and solved.any():
+            # Any constant works (every plan places the same number of jobs): read it off.
+            i, j = np.argwhere(solved)[0]
+            top = float(cert.cost[i, j] + values[i, j])
+        square = square_by_hand(values, solved, penalty, must, int(placed.sum()),
+                                result.objective, top)
+        np.testing.assert_array_equal(np.isinf(cert.cost), np.isinf(square))
+        finite = np.isfinite(square)
+        np.testing.assert_allclose(cert.cost[finite], square[finite], rtol=1e-12, atol=tol)
         rows = np.arange(size)
-        plan_cost = cert.cost[rows, cert.col_of_row]
+        plan_cost = square[rows, cert.col_of_row]
         assert np.isfinite(plan_cost).all()
-        red = cert.cost - cert.row_potential[:, None] - cert.col_potential[None, :]
-        finite = np.isfinite(cert.cost)
+        red = square - cert.row_potential[:, None] - cert.col_potential[None, :]
         assert (red[finite] >= -tol * 10).all()
         assert np.abs(red[rows, cert.col_of_row]).max() <= tol * 10
         # Weak duality made tight: sum(u) + sum(v) equals the plan's cost.

@@ -54,10 +54,10 @@ def problems(draw, max_jobs: int = 9, max_machines: int = 9, max_value: int = 40
     return values, allowed, penalty, must, objective
 
 
-def _solve_checked(values, allowed, penalty, must, objective):
+def _solve_checked(values, allowed, penalty, must, objective, reference=None):
     result = solve(values, allowed, objective=objective, wait_penalty=penalty, must_run=must)
     assert result.verify()
-    check_result(result, values, allowed, penalty, must)
+    check_result(result, values, allowed, penalty, must, reference=reference)
     return result
 
 
@@ -70,7 +70,8 @@ def _compare(problem, reference):
         w = info.value.witness
         assert w.holds(allowed) and witness_holds_by_hand(allowed, w.jobs, w.machines)
         return None
-    result = _solve_checked(values, allowed, penalty, must, objective)
+    result = _solve_checked(values, allowed, penalty, must, objective,
+                            expect if reference is scipy_reference else None)
     assert result.planned_count == expect.placed
     assert result.total == expect.total
     assert result.bottleneck == expect.bottleneck
@@ -253,7 +254,7 @@ def test_wide_magnitudes_against_brute_force(m, n, seed, value_exp, penalty_exp,
         with pytest.raises(InfeasibleError):
             solve(values, allowed, objective=objective, wait_penalty=penalty, must_run=must)
         return
-    result = _solve_checked(values, allowed, penalty, must, objective)
+    result = _solve_checked(values, allowed, penalty, must, objective, expect)
     assert result.planned_count == expect.placed
     assert result.total == pytest.approx(expect.total, rel=1e-9)
     assert result.bottleneck == expect.bottleneck

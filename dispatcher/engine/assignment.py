@@ -149,7 +149,7 @@ class DispatchResult:
 
     def verify(self) -> bool:
         """Re-check everything the result claims: certificate, cover, totals."""
-        if not self.certificate.verify():
+        if not self.certificate.verify() or not self._certificate_encodes_problem():
             return False
         placed = self.machine_of_job >= 0
         machines = self.machine_of_job[placed]
@@ -175,6 +175,20 @@ class DispatchResult:
             return False
         return bool(np.isclose(self.total, _plan_total(self.values, self.machine_of_job,
                                                        self.wait_penalty, self.objective)))
+
+
+    def _certificate_encodes_problem(self) -> bool:
+        """The certificate's square is this problem: values, allowed pairs, penalties, must-run.
+
+        When maximising, the square holds ``top - value`` for a constant ``top`` (any
+        constant: every plan places the same number of jobs); it is read off one pair.
+        """
+        job_cost = np.where(self.solved_allowed, self.values, np.inf)
+        if self.objective == "maximize" and self.solved_allowed.any():
+            i, j = np.argwhere(self.solved_allowed)[0]
+            top = float(self.certificate.cost[i, j]) + float(self.values[i, j])
+            job_cost = np.where(self.solved_allowed, top - self.values, np.inf)
+        return self.certificate.encodes(job_cost, np.where(self.must_run, np.inf, self.wait_penalty))
 
 
 def _plan_total(values: np.ndarray, machine_of_job: np.ndarray, wait_penalty: np.ndarray,

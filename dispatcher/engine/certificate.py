@@ -257,6 +257,34 @@ class Certificate:
         """cost - u - v (inf on forbidden entries)."""
         return self.cost - self.row_potential[:, None] - self.col_potential[None, :]
 
+    def encodes(self, job_cost: np.ndarray, wait_cost: np.ndarray) -> bool:
+        """True when ``cost`` is the dispatch layout of these jobs x machines costs.
+
+        ``job_cost`` holds the cost of each (job, machine) pair (``inf`` = not allowed),
+        ``wait_cost`` each job's cost of waiting (``inf`` = must run). The layout (see
+        :class:`StructuredSquare`): jobs then idle rows, machines then wait slots; an idle
+        row costs 0 on every machine and cannot wait. Without this check a certificate
+        only proves its plan optimal for whatever square it carries.
+        """
+        job_cost = np.asarray(job_cost, dtype=float)
+        wait_cost = np.asarray(wait_cost, dtype=float).reshape(-1)
+        n_jobs, n_machines = job_cost.shape
+        cost = self.cost
+        size = cost.shape[0]
+        if cost.shape != (size, size) or size < max(n_jobs, n_machines) or wait_cost.shape != (n_jobs,):
+            return False
+        expect = np.empty((size, size))
+        expect[:n_jobs, :n_machines] = job_cost
+        expect[:n_jobs, n_machines:] = wait_cost[:, None]
+        expect[n_jobs:, :n_machines] = 0.0
+        expect[n_jobs:, n_machines:] = np.inf
+        same_inf = np.isinf(expect) == np.isinf(cost)
+        if not same_inf.all():
+            return False
+        finite = np.isfinite(expect)
+        return bool(np.allclose(cost[finite], expect[finite], rtol=1e-12,
+                                atol=tolerance(cost) * 1e-3))
+
     def verify(self) -> bool:
         """True when the potentials prove the plan optimal for ``cost``."""
         n = self.cost.shape[0]

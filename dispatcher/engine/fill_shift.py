@@ -161,6 +161,10 @@ class ShiftPlan:
         if not np.isclose(total, self.total):
             return False
         slack = 1e-6 * max(1.0, abs(total))
+        if not np.isclose(self.gap, abs(total - self.bound) / max(abs(total), 1.0), atol=1e-9):
+            return False
+        if self.proven_optimal and abs(total - self.bound) > slack:
+            return False  # proven optimal means the solver's bound is reached
         return bool(self.bound >= total - slack if self.objective == "maximize"
                     else self.bound <= total + slack)
 
