@@ -34,3 +34,35 @@ def or_library() -> Path:
 @pytest.fixture
 def samples() -> Path:
     return SAMPLES
+
+
+@pytest.fixture(scope="session")
+def pg_server():
+    """A real PostgreSQL server for this test session (see tests/pg_server.py)."""
+    from pg_server import REQUIRE_ENV, PgServer, unavailable_reason
+
+    reason = unavailable_reason()
+    if reason:
+        if os.environ.get(REQUIRE_ENV):
+            pytest.fail(f"{REQUIRE_ENV} is set but {reason}")
+        pytest.skip(reason)
+    server = PgServer()
+    try:
+        server.init()
+    except Exception as exc:
+        server.cleanup()
+        pytest.fail(f"could not start the test PostgreSQL server: {exc} "
+                    f"{getattr(exc, 'stderr', '')}")
+    yield server
+    server.cleanup()
+
+
+@pytest.fixture
+def pg_location(pg_server, request) -> str:
+    """A fresh, empty schema on the test server for one test: its connection URI."""
+    import re
+
+    name = "t_" + re.sub(r"[^a-z0-9]+", "_", request.node.name.lower())[:40] + "_" + \
+        os.urandom(3).hex()
+    pg_server.psql(f"CREATE SCHEMA {name}")
+    return pg_server.uri(schema=name)

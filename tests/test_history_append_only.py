@@ -333,3 +333,23 @@ def test_stale_read_only_side_file_is_named(tmp_path):
         pytest.skip("running with privileges that write read-only files anyway")
     with pytest.raises(HistoryError, match="side file .*-shm is read-only"):
         HistoryStore(path).record(SHOP, PLAN, by="Supervisor A", reason="other")
+
+
+def test_history_in_a_read_only_folder_can_be_listed(tmp_path, capsys):
+    folder = tmp_path / "shared"
+    folder.mkdir()
+    path = folder / "h.sqlite"
+    record_two(path)
+    folder.chmod(0o555)
+    try:
+        if os.access(folder, os.W_OK):
+            pytest.skip("running with privileges that write read-only folders anyway")
+        store = HistoryStore(path)
+        assert [d.id for d in store.list()] == [1, 2] and store.get(2).total == 450
+        assert main(["history", "list", "--json", "--history", str(path)]) == 0
+        assert [d["id"] for d in json.loads(capsys.readouterr().out)] == [1, 2]
+        assert _side_files(path) == []
+        with pytest.raises(HistoryError, match="read-only"):
+            store.record(SHOP, PLAN, by="Supervisor A", reason="other")
+    finally:
+        folder.chmod(0o755)

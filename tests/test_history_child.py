@@ -4,6 +4,8 @@
 loop (COUNT of them, or forever) and prints ``<id> <token>`` after each record call has
 returned, flushing at once, so the parent knows exactly which calls completed. It prints
 ``ready`` once the history is open; with ``--wait-go`` it then waits for a line on stdin.
+PATH may be a PostgreSQL location. With ``--keep-going`` a failed record call (the server
+went away) prints ``error ...`` and is retried until COUNT calls have returned.
 
 The content of each decision is a pure function of its token (:func:`make_decision`), so
 the parent can check every acknowledged decision is intact.
@@ -18,7 +20,9 @@ from pathlib import Path
 if __name__ == "__main__":
     sys.path.insert(0, str(Path(__file__).resolve().parent.parent))
 
-from dispatcher.history import HistoryStore  # noqa: E402
+import time  # noqa: E402
+
+from dispatcher.history import HistoryError, open_history  # noqa: E402
 
 SHOP_NAME = "reliability-test shop (invented)"
 
@@ -51,16 +55,25 @@ def make_decision(token: str) -> tuple[dict, dict]:
 def main(argv: list[str]) -> None:
     path, run = argv[0], argv[1]
     count = int(argv[2]) if len(argv) > 2 and argv[2].isdigit() else None
-    store = HistoryStore(path, timeout=30.0)
+    store = open_history(path, timeout=30.0)
     store.count()  # open (and check) the file before saying ready
     print("ready", flush=True)
     if "--wait-go" in argv:
         sys.stdin.readline()
+    keep_going = "--keep-going" in argv
     seq = 0
     while count is None or seq < count:
         token = f"{run}-{seq}"
         shop, plan = make_decision(token)
-        number = store.record(shop, plan, by=f"supervisor {run}", reason="other", note=token)
+        try:
+            number = store.record(shop, plan, by=f"supervisor {run}", reason="other",
+                                  note=token)
+        except HistoryError as exc:
+            if not keep_going:
+                raise
+            print("error", str(exc).replace("\n", " ")[:200], flush=True)
+            time.sleep(0.1)
+            continue
         print(number, token, flush=True)
         seq += 1
 

@@ -21,6 +21,7 @@ from hypothesis import strategies as st
 from dispatcher.history import (
     LATEST,
     REASON_KINDS,
+    DecisionConflict,
     DecisionNotFound,
     HistoryError,
     HistoryInputError,
@@ -30,6 +31,7 @@ from dispatcher.history import (
     data_folder,
     default_history_path,
     diff_plans,
+    open_history,
     parse_reason_kind,
     shift_of,
 )
@@ -49,8 +51,17 @@ def plan(placed: dict[str, str], waiting=(), idle=(), total=None, objective="tot
             "idle_machines": list(idle), "certificate": {"verified": verified}}
 
 
+@pytest.fixture(params=["sqlite", "postgresql"])
+def store(request, tmp_path):
+    """The same suite against both stores: an SQLite file, and a fresh schema on a real
+    PostgreSQL server started for the session (tests/pg_server.py)."""
+    if request.param == "sqlite":
+        return HistoryStore(tmp_path / "history.sqlite", tz=UTC)
+    return open_history(request.getfixturevalue("pg_location"), tz=UTC)
+
+
 @pytest.fixture
-def store(tmp_path) -> HistoryStore:
+def sqlite_store(tmp_path) -> HistoryStore:
     return HistoryStore(tmp_path / "history.sqlite", tz=UTC)
 
 
@@ -73,6 +84,15 @@ def test_record_and_read_back(store, tmp_path):
     assert d.time == T0 and d.shift_date == date(2026, 3, 13) and d.shift == "night"
     assert d.shop_document == shop and d.plan == p
     assert (d.total, d.objective, d.certificate, d.replaces) == (10, "total", "verified", None)
+    assert [(r["state"], r["machine"], r["job"], r["value"]) for r in store.rows()] == [
+        ("assigned", "Press 1", "WO-1", 10), ("waiting", None, "WO-2", None),
+        ("idle", "Press 2", None, None)]
+
+
+def test_the_sqlite_file_seen_with_plain_sqlite3(sqlite_store):
+    store = sqlite_store
+    p = plan({"WO-1": "Press 1"}, waiting=["WO-2"], idle=["Press 2"])
+    store.record({"name": "Press shop"}, p, by="Ana", reason="other", time=T0)
     # Independent look at the file with plain sqlite3: WAL, foreign keys declared, our id.
     conn = sqlite3.connect(store.path)
     assert conn.execute("PRAGMA journal_mode").fetchone()[0] == "wal"
@@ -116,7 +136,7 @@ def test_objects_with_to_json_are_accepted(store):
 def test_bad_plans_are_refused_before_the_file_is_touched(store, bad, message):
     with pytest.raises(HistoryInputError, match=message):
         store.record({}, bad, by="Ana", reason="other")
-    assert not store.path.exists()
+    assert not store.exists()
 
 
 def test_bad_supervisor_and_reason(store):
@@ -127,7 +147,8 @@ def test_bad_supervisor_and_reason(store):
     assert {parse_reason_kind(label) for label in REASON_KINDS.values()} == set(REASON_KINDS)
 
 
-def test_history_is_append_only_even_through_raw_sql(store):
+def test_history_is_append_only_even_through_raw_sql(sqlite_store):
+    store = sqlite_store
     store.record({}, plan({"A": "M"}), by="Ana", reason="other")
     conn = sqlite3.connect(store.path)
     for sql in ("UPDATE decisions SET supervisor = 'Eve'", "DELETE FROM decisions",
@@ -337,7 +358,8 @@ def test_failed_migration_leaves_the_file_at_its_old_version(tmp_path):
     assert len(list(tmp_path.glob(f"history.sqlite.backup-v{MIGRATIONS[-1].version}-*"))) == 1
 
 
-def test_tampered_decision_is_reported_not_shown(store):
+def test_tampered_decision_is_reported_not_shown(sqlite_store):
+    store = sqlite_store
     store.record({"name": "s"}, plan({"A": "M"}), by="Ana", reason="other")
     conn = sqlite3.connect(store.path)
     conn.execute("DROP TRIGGER decisions_append_only_update")
@@ -389,3 +411,28 @@ def test_shift_uses_local_time_and_custom_pattern(tmp_path):
     m = store.record({}, plan({"A": "M"}), by="Ana", reason="other",
                      shift_date=date(2026, 1, 1), shift="special")
     assert (store.get(m).shift_date, store.get(m).shift) == (date(2026, 1, 1), "special")
+
+
+def test_decision_based_on_a_replaced_plan_is_refused(store):
+    """Optimistic concurrency on the shop's latest decision (both stores)."""
+    shop, other = {"name": "Press shop"}, {"name": "Paint shop"}
+    first = store.record(shop, plan({"A": "M"}), by="early-shift lead", reason="shift start",
+                         based_on=None, station="A", time=T0)
+    with pytest.raises(DecisionConflict) as info:
+        store.record(shop, plan({"B": "M"}), by="late-shift lead", reason="breakdown",
+                     based_on=None, station="B")
+    assert info.value.newer.id == first and info.value.based_on is None
+    assert str(info.value) == ("Decision #1, by early-shift lead at station A at 05:00 UTC, "
+                               "replaced the plan you started from: review the new "
+                               "proposal; nothing was recorded")
+    second = store.record(shop, plan({"B": "M"}), by="late-shift lead", reason="breakdown",
+                          based_on=first, station="B", time=T0)
+    with pytest.raises(DecisionConflict, match=r"Decision #2, by late-shift lead at station B"
+                                                r" .*started from \(#1\)"):
+        store.record(shop, plan({"C": "M"}), by="early-shift lead", reason="other",
+                     based_on=first)
+    assert store.record(other, plan({"C": "M"}), by="Ana", reason="other", based_on=None) == 3
+    assert store.count() == 3
+    d = store.get(second)
+    assert (d.based_on, d.replaces, d.station) == (first, first, "B")
+    assert store.get(3).to_json()["station"] != "" and store.get(first).based_on is None

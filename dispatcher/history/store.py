@@ -691,6 +691,11 @@ class HistoryStore(DecisionStore):
             raise HistoryError(f"{self.path}: the history file is read-only; nothing was "
                                "recorded. Make it writable or choose another file",
                                hint=HINT_OTHER_HISTORY_FILE)
+        if write and not os.access(self.path.parent, os.W_OK):
+            raise HistoryError(f"{self.path}: the history's folder {self.path.parent} is "
+                               "read-only (SQLite keeps its journal beside the file); nothing "
+                               "was recorded. Make the folder writable or choose another file",
+                               hint=HINT_OTHER_HISTORY_FILE)
         conn = self._connect(self.path, "rw" if write else self._read_mode())
         try:
             yield conn

@@ -11,7 +11,7 @@ from datetime import datetime, timezone
 
 from PySide6.QtCore import QObject, Qt, Signal
 
-from dispatcher.history import HistoryError, HistoryInputError, diff_plans
+from dispatcher.history import UNCHECKED, HistoryError, HistoryInputError, diff_plans
 from dispatcher.io.shopfile import shop_to_dict
 from dispatcher.shop import DONE, DOWN, UP, WAITING, Shop
 from dispatcher.shop.planning import plan_in_force_ids
@@ -43,6 +43,7 @@ class DecisionFlow(QObject):
         self.doc = window.doc
         self.view = window.view
         self.dialog: DecisionDialog | None = None
+        self.based_on: int | str | None = UNCHECKED  # the shop's latest decision at opening
 
     def show_warning(self, text: str) -> None:
         self.window.show_warning(text)
@@ -58,6 +59,15 @@ class DecisionFlow(QObject):
             return latest.plan, f"the plan in force (decision #{latest.id})"
         plan = self.window.plan.to_json() if self.window.plan is not None else None
         return plan, "the plan shown (no decision recorded yet)"
+
+    def _latest_number(self) -> int | str | None:
+        """The shop's latest decision now (None: none yet), so that confirming is refused
+        if another station records a newer one meanwhile (UNCHECKED if unreadable)."""
+        try:
+            found = self.window.history.list(shop=self.doc.shop.name, limit=1, newest_first=True)
+        except HistoryError:
+            return UNCHECKED
+        return found[0].id if found else None
 
     def machine_event(self, event: str, col: int | None = None) -> DecisionDialog | None:
         col = self.view.current_machine() if col is None else col
@@ -115,6 +125,7 @@ class DecisionFlow(QObject):
     def show(self, proposal: Proposal) -> DecisionDialog:
         """Open the confirm dialog for a proposal against the plan in force."""
         before, label = self.plan_in_force()
+        self.based_on = self._latest_number()
         dialog = DecisionDialog(proposal, self.doc.shop.unit.label(),
                                 str(self.window.settings.value("history/supervisor", "")), self.window,
                                 before=before, before_label=label)
@@ -130,7 +141,7 @@ class DecisionFlow(QObject):
         recorded_shop.plan_in_force = plan_in_force_ids(proposal.plan, recorded_shop)
         try:
             number = self.window.history.record(shop_to_dict(recorded_shop), proposal.plan.to_json(),
-                                         by=by, reason=reason, note=note)
+                                         by=by, reason=reason, note=note, based_on=self.based_on)
         except (HistoryError, HistoryInputError, OSError) as exc:
             self.window.messenger.error("Decision not recorded", f"{exc}\n\nThe plan in force is unchanged.")
             return None

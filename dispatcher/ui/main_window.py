@@ -26,7 +26,7 @@ from PySide6.QtCore import QSettings, Qt, Signal
 from PySide6.QtGui import QAction, QActionGroup, QCloseEvent, QKeySequence
 from PySide6.QtWidgets import QDockWidget, QFileDialog, QLabel, QMainWindow, QMenu, QTabWidget, QWidget
 
-from dispatcher.history import HistoryStore
+from dispatcher.history import HistoryStore, open_history
 from dispatcher.io.shopfile import SHOP_SUFFIX
 from dispatcher.shop import MUST, MUST_NOT, Plan, Shop
 from dispatcher.shop.fill import ShiftFill
@@ -71,7 +71,7 @@ class MainWindow(QMainWindow):
         self._messenger = messenger or Messenger(self)
         self.doc = ShopDocument(shop, self)
         self.files = FileController(self.doc, self._messenger, self.settings, self)
-        self.history = HistoryStore(history_path or self.settings.value("history/path") or None)
+        self.history = open_history(history_path or self.settings.value("history/path") or None)
         self.objective = "total"
         self.mode = MODE_ROUND
         self.plan: Plan | ShiftFill | None = None

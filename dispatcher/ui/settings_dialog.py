@@ -28,7 +28,13 @@ from PySide6.QtWidgets import (
     QWidget,
 )
 
-from dispatcher.history import HistoryError, HistoryStore, default_history_path
+from dispatcher.history import (
+    HistoryError,
+    HistoryStore,
+    default_history_path,
+    is_postgres_location,
+    open_history,
+)
 
 KEY_HISTORY, KEY_SUPERVISOR, KEY_AUTOSAVE = "history/path", "history/supervisor", "autosave/minutes"
 AUTOSAVE_DEFAULT_MIN, AUTOSAVE_MAX_MIN = 1, 60
@@ -68,8 +74,14 @@ def usable_history(path: str | os.PathLike) -> HistoryStore:
     schema version and a quick integrity check, as the store does on first use; an older
     schema is backed up and upgraded) and must be writable. A new file is created on the
     first decision, so its folder must exist and be writable. Raises :class:`HistoryError`
-    with a message naming the file; the file is never changed by a refusal.
+    with a message naming the file; the file is never changed by a refusal. A PostgreSQL
+    location (``postgresql://...``, ``service=NAME``) must reach its server and hold no
+    history of a newer schema.
     """
+    if is_postgres_location(path):
+        store = open_history(str(path))
+        store.list(limit=1)
+        return store
     p = Path(path).expanduser()
     if p.is_dir():
         raise HistoryError(f"{p}: is a folder, not a history file")
@@ -88,6 +100,13 @@ def usable_history(path: str | os.PathLike) -> HistoryStore:
             raise HistoryError(f"{p}: the folder {folder} is not writable, so the history "
                                "cannot be created there")
     return store
+
+
+def _same_place(a: str | os.PathLike, b: str | os.PathLike) -> bool:
+    """Whether two history locations (files or PostgreSQL locations) are the same."""
+    def key(x):
+        return str(x).strip() if isinstance(x, str) else str(Path(x).absolute())
+    return key(a) == key(b)
 
 
 def autosave_minutes(settings) -> int:
@@ -203,8 +222,8 @@ class SettingsController(QObject):
         if not text:
             window.messenger.error("Settings not changed", "Choose a history file.")
             return False
-        new = Path(text).expanduser()
-        if new.absolute() != window.history.path.absolute():
+        new = text if is_postgres_location(text) else Path(text).expanduser()
+        if not _same_place(new, window.history.path):
             try:
                 store = usable_history(new)
             except HistoryError as exc:  # its message says what to do, not which option
