@@ -33,6 +33,7 @@ class Reference:
     placed: int = 0
     total: float = 0.0
     bottleneck: float | None = None
+    rush_placed: int = 0
 
 
 def _as_problem(values, allowed, penalty, must):
@@ -82,9 +83,15 @@ def max_placed_brute(allowed: np.ndarray) -> int:
     return 0  # pragma: no cover - size 0 always has the empty plan
 
 
-def brute_force(values, allowed=None, penalty=None, must=None, objective="total") -> Reference:
-    """The definition of a plan (issue 2), applied to every plan by enumeration."""
+def brute_force(values, allowed=None, penalty=None, must=None, objective="total",
+                rush=None) -> Reference:
+    """The definition of a plan (issue 2), applied to every plan by enumeration.
+
+    ``rush`` (a mask): among the plans placing the most jobs and every must-run job, only
+    those placing the most rush jobs count (issue 11's priority), then the objective.
+    """
     values, allowed, penalty, must = _as_problem(values, allowed, penalty, must)
+    rush_rows = [] if rush is None else [i for i, r in enumerate(np.asarray(rush).tolist()) if r]
     size = max_placed_brute(allowed)
     vals = values.tolist()
     pen = penalty.tolist()
@@ -101,11 +108,14 @@ def brute_force(values, allowed=None, penalty=None, must=None, objective="total"
         else:
             total = sum(planned) + waiting
             key = (total,)
+        rush_placed = sum(1 for i in rush_rows if plan[i] >= 0)
+        key = (-rush_placed, *key)
         if best is None or key < best[0]:
-            best = (key, total, max(planned) if planned else None)
+            best = (key, total, max(planned) if planned else None, rush_placed)
     if best is None:
         return Reference(False)
-    return Reference(True, size, best[1], best[2] if objective == "bottleneck" else None)
+    return Reference(True, size, best[1], best[2] if objective == "bottleneck" else None,
+                     best[3])
 
 
 # --------------------------------------------------------------------------- scipy

@@ -56,9 +56,11 @@ def test_move_penalty_option(shop_file, capsys):
     code, out, _ = run(capsys, shop_file, "--done", "WO-4", "--move-penalty", "0", "--json")
     assert code == 0
     changes = {(c["job"], c["from"], c["to"]) for c in json.loads(out)["changes"]}
-    assert changes == {("WO-2", "Press B", "Saw"), ("WO-3", "Saw", "Press B")}
+    assert changes == {("WO-2", "Press B", "Saw"), ("WO-3", "Saw", "Press B"),
+                       ("WO-4", None, None)}
     code, out, _ = run(capsys, shop_file, "--done", "WO-4", "--move-penalty", "100", "--json")
-    assert json.loads(out)["changes"] == []
+    assert json.loads(out)["changes"] == [{"job": "WO-4", "from": None, "to": None,
+                                           "left": "done"}]
 
 
 def test_plan_in_force_from_a_plan_file(tmp_path, capsys):
@@ -109,15 +111,19 @@ def test_bad_plan_file(tmp_path, shop_file, capsys):
     assert code == 2 and "no machine named 'Press Q'" in err
 
 
-def test_infeasible_rush_exits_3(tmp_path, capsys):
+def test_rush_job_that_cannot_be_placed_still_gives_a_plan_exit_0(tmp_path, capsys):
     shop = small_shop()
     shop.jobs.append(Job(id="J5", name="WO-5"))
     shop.grid[("J5", "A")] = 1.0
     path = tmp_path / "cell.dshop"
     save_shop(shop, path)
-    code, _, err = run(capsys, path, "--rush", "WO-5", "--down", "Press A")
-    assert code == 3
-    assert "WO-5" in err and "infeasible" in err
+    code, out, _ = run(capsys, path, "--rush", "WO-5", "--down", "Press A", "--json")
+    assert code == 0
+    data = json.loads(out)
+    assert data["rush_waiting"] == ["WO-5"]
+    assert "Press A is down" in data["waiting_reasons"]["WO-5"]["text"]
+    code, out, _ = run(capsys, path, "--rush", "WO-5", "--down", "Press A")
+    assert code == 0 and "Rush jobs waiting" in out and "WO-5" in out
 
 
 def test_command_line_loop_solve_in_force_then_breakdown_recorded_and_saved(shop_file, tmp_path,

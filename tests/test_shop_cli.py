@@ -106,13 +106,28 @@ def test_bad_document_exits_2_with_location(capsys, tmp_path):
     assert f"{bad}: job 'A' (#1), field 'rush'" in err and "Traceback" not in err
 
 
-def test_rush_jobs_that_cannot_all_run_exit_3(capsys, tmp_path):
+def test_rush_jobs_that_cannot_all_run_still_give_a_plan_exit_0(capsys, tmp_path):
     shop = Shop(name="t", jobs=[Job("a", "A", rush=True), Job("b", "B", rush=True)],
                 machines=[Machine("m", "Press")])
     shop.grid = {("a", "m"): 1, ("b", "m"): 2}
     path = tmp_path / "rush.dshop"
     save_shop(shop, path)
-    assert main(["solve", str(path)]) == 3
+    assert main(["solve", str(path)]) == 0
+    out = capsys.readouterr().out
+    assert "Rush jobs waiting (1): B" in out
+    assert "2 rush jobs (A, B) can only use 1 machine(s) (Press), so 1 of them must wait" in out
+    assert "A [rush]" in out
+    code, data = run_json(capsys, "solve", str(path), "--json")
+    assert code == 0 and data["rush_waiting"] == ["B"]
+
+
+def test_must_run_on_the_command_line_stays_hard_exit_3(capsys, tmp_path):
+    shop = Shop(name="t", jobs=[Job("a", "A", rush=True), Job("b", "B", work_order="WO-2")],
+                machines=[Machine("m", "Press")])
+    shop.grid = {("a", "m"): 1, ("b", "m"): 2}
+    path = tmp_path / "rush.dshop"
+    save_shop(shop, path)
+    assert main(["solve", str(path), "--must-run", "A", "--must-run", "WO-2"]) == 3
     assert "compete for only 1 free slot(s) on: Press" in capsys.readouterr().err
 
 
@@ -135,6 +150,11 @@ def test_must_run_option_on_a_shop_document(capsys):
     assert forced["total"] >= plain["total"]  # a restriction cannot improve the optimum
     assert main(["solve", sample, "--must-run", "No such job"]) == 2
     assert "must-run job 'No such job'" in capsys.readouterr().err
-    # the clip runs only on the two small presses, which the two rush jobs need
-    assert main(["solve", sample, "--must-run", "WO-7002 clip"]) == 3
+    # the clip runs only on the two small presses, which the two rush jobs need: rush is a
+    # priority (the must-run clip takes a press from a rush job), must-run is hard
+    code, data = run_json(capsys, "solve", sample, "--json", "--must-run", "WO-7002")
+    assert code == 0 and "WO-7002 clip" in {a["job"] for a in data["assignments"]}
+    assert data["rush_waiting"]
+    assert main(["solve", sample, "--must-run", "WO-7002 clip,WO-7001 lid",
+                 "--must-run", "WO-7004 knob", "--must-run", "WO-7003"]) == 3
     assert "Press 80t" in capsys.readouterr().err

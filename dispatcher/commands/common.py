@@ -74,6 +74,7 @@ def plan_json(result: DispatchResult, jobs: list[str], machines: list[str]) -> d
         "waiting_reasons": reasons,
         "wait_groups": groups,
         "certificate": {"verified": result.verify()},
+        "rush_waiting": [],
     }
 
 
@@ -91,9 +92,15 @@ def print_json(obj: Any) -> None:
     sys.stdout.write("\n")
 
 
-def print_plan(data: dict[str, Any], unit: str = "") -> None:
-    """Readable table of a plan in the solve contract."""
-    rows = [(a["job"], a["machine"], f"{a['cost']:g}") for a in data["assignments"]]
+def print_plan(data: dict[str, Any], unit: str = "", marks: dict[str, str] | None = None) -> None:
+    """Readable table of a plan in the solve contract; ``marks`` adds a tag after a job's
+    name (rush, pinned)."""
+    marks = marks or {}
+
+    def tagged(job: str) -> str:
+        return f"{job} {marks[job]}" if job in marks else job
+
+    rows = [(tagged(a["job"]), a["machine"], f"{a['cost']:g}") for a in data["assignments"]]
     head = ("Job", "Machine", f"Value{(' (' + unit + ')') if unit else ''}")
     widths = [max(len(str(r[i])) for r in rows + [head]) for i in range(3)]
     line = "  ".join(h.ljust(w) for h, w in zip(head, widths))
@@ -106,7 +113,7 @@ def print_plan(data: dict[str, Any], unit: str = "") -> None:
         print(f"Waiting jobs ({len(data['waiting_jobs'])}):")
         for name in data["waiting_jobs"]:
             reason = data.get("waiting_reasons", {}).get(name, {}).get("text", "")
-            print(f"  {name}" + (f"  - {reason.split(': ', 1)[-1]}" if reason else ""))
+            print(f"  {tagged(name)}" + (f"  - {reason.split(': ', 1)[-1]}" if reason else ""))
     else:
         print("Waiting jobs: none")
     idle = data["idle_machines"]

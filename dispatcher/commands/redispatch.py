@@ -9,6 +9,7 @@ ids, written when a decision is recorded) or from ``--plan PLANFILE``, a plan in
 from __future__ import annotations
 
 import argparse
+import datetime as dt
 import json
 from pathlib import Path
 
@@ -20,6 +21,7 @@ from dispatcher.commands.history import (
 )
 from dispatcher.commands.shop_input import (
     add_in_force_argument,
+    job_name,
     print_shop_plan,
     read_shop_arg,
     save_in_force,
@@ -40,15 +42,17 @@ def register(sub: argparse._SubParsersAction) -> None:
                     "machines stay; a job running on a machine that goes down waits for a "
                     "new machine.")
     p.add_argument("shop", metavar="SHOP", help="shop document (.dshop)")
-    p.add_argument("--down", metavar="MACHINE", action="append", default=[],
-                   help="machine that went down (repeatable)")
-    p.add_argument("--up", metavar="MACHINE", action="append", default=[],
+    p.set_defaults(events=[])
+    p.add_argument("--down", metavar="MACHINE", action=_EventAction, dest="down", event="down",
+                   help="machine that went down (repeatable; events apply in the order given)")
+    p.add_argument("--up", metavar="MACHINE", action=_EventAction, dest="up", event="up",
                    help="machine that is back up (repeatable)")
-    p.add_argument("--rush", metavar="JOB", action="append", default=[],
-                   help="waiting job that arrived as a rush job and must run (repeatable)")
-    p.add_argument("--done", metavar="JOB", action="append", default=[],
+    p.add_argument("--rush", metavar="JOB", action=_EventAction, dest="rush", event="rush",
+                   help="waiting job that arrived as a rush job: placed first (repeatable; "
+                   "a job may be given by name or work order)")
+    p.add_argument("--done", metavar="JOB", action=_EventAction, dest="done", event="done",
                    help="job that finished (repeatable)")
-    p.add_argument("--pull", metavar="JOB", action="append", default=[],
+    p.add_argument("--pull", metavar="JOB", action=_EventAction, dest="pull", event="pulled",
                    help="job pulled from this round (repeatable)")
     p.add_argument("--move-penalty", metavar="X", type=float, default=None,
                    help="cost of moving a dispatched job that has not started "
@@ -63,13 +67,29 @@ def register(sub: argparse._SubParsersAction) -> None:
     p.set_defaults(func=run)
 
 
-def _events(args: argparse.Namespace) -> list[ShopEvent]:
-    events = [ShopEvent("down", n) for n in args.down]
-    events += [ShopEvent("up", n) for n in args.up]
-    events += [ShopEvent("rush", n) for n in args.rush]
-    events += [ShopEvent("done", n) for n in args.done]
-    events += [ShopEvent("pulled", n) for n in args.pull]
-    return events
+class _EventAction(argparse.Action):
+    """Collect events in the order they are given on the command line (``args.events``)."""
+
+    def __init__(self, option_strings, dest, event: str, **kwargs):
+        self.event = event
+        super().__init__(option_strings, dest, default=[], **kwargs)
+
+    def __call__(self, parser, namespace, values, option_string=None):
+        getattr(namespace, self.dest).append(values)
+        namespace.events = [*namespace.events, (self.event, values)]
+
+
+def _events(args: argparse.Namespace, shop) -> list[ShopEvent]:
+    """The events in command-line order; jobs by name or work order; a machine going down
+    keeps the decision note (``--note``) and the time as its down note and time."""
+    now = dt.datetime.now().replace(microsecond=0)
+    note = getattr(args, "note", None) or ""
+    out = []
+    for kind, name in args.events:
+        if kind in ("rush", "done", "pulled"):
+            name = job_name(shop, name, args.shop)
+        out.append(ShopEvent(kind, name, note if kind == "down" else "", now))
+    return out
 
 
 def _plan_in_force(args: argparse.Namespace, shop) -> dict[str, list[str]]:
@@ -99,11 +119,11 @@ def _plan_in_force(args: argparse.Namespace, shop) -> dict[str, list[str]]:
 
 
 def run(args: argparse.Namespace) -> int:
-    events = _events(args)
-    if not events:
+    if not args.events:
         raise CliError("redispatch needs an event: --down MACHINE (or --up, --rush, --done, --pull)")
     check_record_arguments(args)
     shop = read_shop_arg(args.shop)
+    events = _events(args, shop)
     in_force = _plan_in_force(args, shop)
     outcome = redispatch_shop(shop, events, plan_in_force=in_force,
                               move_penalty=args.move_penalty,
@@ -127,14 +147,18 @@ def print_outcome(outcome: ShopRedispatch, args: argparse.Namespace) -> None:
         print(f"Changes against the plan in force ({len(outcome.changes)}):")
         width = max(len(c.job) for c in outcome.changes)
         for c in outcome.changes:
-            print(f"  {c.job.ljust(width)}  {c.before or 'waiting'} -> {c.after or 'waiting'}")
+            after = c.left or c.after or "waiting"
+            print(f"  {c.job.ljust(width)}  {c.before or 'waiting'} -> {after}")
     else:
         print("Changes against the plan in force: none")
     if outcome.machines_now_idle:
         print("Machines now idle: " + ", ".join(outcome.machines_now_idle))
+    print(f"Total in force (on the shop after the event): {outcome.total_in_force:g}")
     print(f"Change in total: {outcome.total_change:+g}"
           + (f" (plus move penalties paid: {outcome.move_penalties_paid:g})"
              if outcome.move_penalties_paid else ""))
-    for name in args.down:
-        print(f"Caution: {name} is down. Apply lockout/tagout and the site's isolation "
-              "procedure before any work on it.")
+    named = {ev[1] for ev in args.events if ev[0] in ("down", "up")}
+    for name in outcome.machines_down:
+        if name in named:
+            print(f"Caution: {name} is down. Apply lockout/tagout and the site's isolation "
+                  "procedure before any work on it.")

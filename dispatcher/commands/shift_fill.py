@@ -12,7 +12,7 @@ import argparse
 
 from dispatcher.commands.common import CliError, print_json
 from dispatcher.commands.history import record_decision
-from dispatcher.commands.shop_input import is_shop_document
+from dispatcher.commands.shop_input import is_shop_document, job_name, must_run_names
 from dispatcher.io.shopfile import load_shop, shop_to_dict
 from dispatcher.shop.fill import ShiftFill, fill_shop_shift
 
@@ -30,7 +30,7 @@ def run_fill_shift(args: argparse.Namespace) -> int:
     if limit is not None and not limit > 0:
         raise CliError(f"--time-limit must be a number of seconds > 0, got {limit:g}")
     shop = load_shop(path, check=False)  # fill_shop_shift checks it, with fill rules
-    extra = [n.strip() for n in args.must_run.split(",") if n.strip()]
+    extra = [job_name(shop, n, path) for n in must_run_names(shop, args.must_run)]
     fill = fill_shop_shift(shop, maximize=args.maximize, extra_must_run=extra,
                            time_limit=limit, source=path)
     if args.json:

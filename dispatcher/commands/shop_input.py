@@ -44,10 +44,49 @@ def save_in_force(shop: Shop, in_force: dict[str, list[str]], path: str) -> None
     print(f"Saved the plan in force into {path}", file=sys.stderr)
 
 
-def solve_shop_arg(shop: Shop, source: str, objective: str, must_run: str = "") -> Plan:
-    """Solve a loaded shop; ``must_run`` is the comma-separated ``--must-run`` text."""
-    extra = [n.strip() for n in must_run.split(",") if n.strip()]
-    return solve_shop(shop, objective, extra_must_run=extra, source=source)
+def job_name(shop: Shop, given: str, source: str) -> str:
+    """The job's name for a job given on the command line by name or by work order."""
+    names = {j.name for j in shop.jobs}
+    if given in names:
+        return given
+    by_order = [j.name for j in shop.jobs if j.work_order and j.work_order == given]
+    if len(by_order) == 1:
+        return by_order[0]
+    if by_order:
+        raise CliError(f"{source}: work order {given!r} names several jobs "
+                       f"({', '.join(by_order)}); give the job's name")
+    return given  # unknown: the core names the event that does not fit
+
+
+def split_names(values: str | list[str]) -> list[str]:
+    """Names from ``--must-run``: repeat the option for a name containing a comma, or give
+    several comma-separated names in one option."""
+    if isinstance(values, str):
+        values = [values]
+    out: list[str] = []
+    for text in values:
+        out += [n.strip() for n in text.split(",") if n.strip()]
+    return out
+
+
+def solve_shop_arg(shop: Shop, source: str, objective: str, must_run: str | list[str] = "") -> Plan:
+    """Solve a loaded shop; ``must_run`` is the ``--must-run`` text (or texts, if repeated)."""
+    return solve_shop(shop, objective, extra_must_run=must_run_names(shop, must_run),
+                      source=source)
+
+
+def must_run_names(shop: Shop, must_run: str | list[str]) -> list[str]:
+    """``--must-run`` names: a whole option naming a job (even with a comma in its name)
+    is that job; otherwise the option is split at commas."""
+    texts = [must_run] if isinstance(must_run, str) else list(must_run)
+    known = {j.name for j in shop.jobs} | {j.work_order for j in shop.jobs if j.work_order}
+    out: list[str] = []
+    for text in texts:
+        if text.strip() in known:
+            out.append(text.strip())
+        else:
+            out += split_names(text)
+    return out
 
 
 def print_shop_plan(plan: Plan, shop: Shop, as_json: bool) -> None:
@@ -56,12 +95,27 @@ def print_shop_plan(plan: Plan, shop: Shop, as_json: bool) -> None:
     if as_json:
         print_json(data)
         return
-    print_plan(data, shop.unit.label())
+    print_plan(data, shop.unit.label(), marks=_marks(shop))
+    if plan.rush_groups:
+        print(f"Rush jobs waiting ({len(plan.rush_waiting)}): " + ", ".join(plan.rush_waiting))
+        for g in plan.rush_groups:
+            print(f"  {g.text}")
     if plan.running:
         print("Already running (stay): " + ", ".join(f"{r.job} on {r.machine}" for r in plan.running))
     if plan.unavailable_machines:
         print("Not available: " + ", ".join(
             f"{m} ({shop.machine_by_name(m).state})" for m in plan.unavailable_machines))
+
+
+def _marks(shop: Shop) -> dict[str, str]:
+    """Job name -> its mark in text output: [rush], [pinned] or both."""
+    pinned = {p.job for p in shop.pins if p.kind == "must"}
+    out = {}
+    for j in shop.jobs:
+        tags = (["rush"] if j.rush else []) + (["pinned"] if j.id in pinned else [])
+        if tags:
+            out[j.name] = "[" + ", ".join(tags) + "]"
+    return out
 
 
 def run_shop(path: str, objective: str, must_run: str, as_json: bool) -> int:

@@ -25,6 +25,7 @@ from dispatcher.commands.shop_input import (
     read_shop_arg,
     save_in_force,
     solve_shop_arg,
+    split_names,
 )
 from dispatcher.engine import DispatchInputError, InfeasibleError, solve
 from dispatcher.errors import Infeasible
@@ -42,8 +43,10 @@ def register(sub: argparse._SubParsersAction) -> None:
     mode.add_argument("--maximize", action="store_true", help="values are gains: maximise the total")
     mode.add_argument("--bottleneck", action="store_true",
                       help="minimise the largest single value, then the total")
-    p.add_argument("--must-run", metavar="JOB,JOB...", default="",
-                   help="jobs that must not wait (comma-separated names)")
+    p.add_argument("--must-run", metavar="JOB,JOB...", action="append", default=[],
+                   help="jobs that must not wait: a hard constraint (exit 3 if impossible). "
+                   "Comma-separated names or work orders; repeat the option for a name "
+                   "containing a comma")
     p.add_argument("--json", action="store_true", help="print one JSON object")
     p.add_argument("--fill-shift", action="store_true",
                    help="shop documents: plan the whole shift, several jobs per machine "
@@ -65,10 +68,13 @@ def objective_of(args: argparse.Namespace) -> str:
     return "total"
 
 
-def parse_names(text: str, known: list[str], what: str, source: str) -> list[int]:
-    """Indices of comma-separated names; unknown names are bad input."""
-    names = [n.strip() for n in text.split(",") if n.strip()]
+def parse_names(text: str | list[str], known: list[str], what: str, source: str) -> list[int]:
+    """Indices of the names given (each option a whole name, else comma-separated names);
+    unknown names are bad input."""
     index = {n: i for i, n in enumerate(known)}
+    names: list[str] = []
+    for part in ([text] if isinstance(text, str) else text):
+        names += [part.strip()] if part.strip() in index else split_names(part)
     unknown = [n for n in names if n not in index]
     if unknown:
         raise CliError(f"{source}: unknown {what} {', '.join(map(repr, unknown))}")

@@ -6,6 +6,11 @@ What a plan is (the definition every test checks against):
   is proven maximal by a Konig vertex cover of the same size;
 * must-run jobs are always placed (if no maximum matching places them all, the problem
   is infeasible and :class:`InfeasibleError` names a Hall witness among them);
+* rush jobs are a priority, not a constraint: among the maximum matchings that place
+  every must-run job, the plan places as many rush jobs as possible. By the matroid
+  property of matchings (Mendelsohn and Dulmage 1958) both maxima are reached by one
+  plan; the rush count is proven maximal by a Konig cover of the rush rows' own grid, and
+  the rush jobs left waiting are explained by Hall witnesses among rush jobs;
 * among those plans it minimises ``sum(planned values) + sum(wait penalties of waiting
   jobs)`` (objective ``"total"``), maximises ``sum(planned values) - sum(wait penalties)``
   (``"maximize"``), or first minimises the largest planned value and then the total
@@ -88,6 +93,32 @@ class DispatchResult:
     cover_jobs: np.ndarray
     cover_machines: np.ndarray
     bottleneck: float | None
+    rush: np.ndarray | None = None
+    rush_cover_jobs: np.ndarray | None = None
+    rush_cover_machines: np.ndarray | None = None
+
+    @property
+    def priority(self) -> np.ndarray:
+        """Jobs placed first: must-run and rush jobs (boolean mask)."""
+        return self.must_run if self.rush is None else (self.must_run | self.rush)
+
+    @property
+    def rush_waiting(self) -> np.ndarray:
+        """Indices of rush jobs that wait (no plan placing as many jobs places more rush jobs)."""
+        if self.rush is None:
+            return np.zeros(0, dtype=np.int64)
+        return np.flatnonzero(self.rush & (self.machine_of_job < 0))
+
+    def rush_wait_groups(self) -> list[HallWitness]:
+        """Hall witnesses among rush (and must-run) jobs: per group of rush jobs left waiting,
+        the rush jobs that compete for the same machines and those machines (fewer)."""
+        cached = self.__dict__.get("_rush_wait_groups")
+        if cached is None:
+            rows = np.flatnonzero(self.priority)
+            cached = [HallWitness(rows[w.jobs], w.machines) for w in
+                      hall_witness_groups(self.allowed[rows], self.machine_of_job[rows])]
+            object.__setattr__(self, "_rush_wait_groups", cached)
+        return cached
 
     @property
     def waiting_jobs(self) -> np.ndarray:
@@ -164,6 +195,8 @@ class DispatchResult:
         covered = self.cover_jobs[:, None] | self.cover_machines[None, :]
         if not cover_ok or (self.allowed & ~covered).any():
             return False
+        if not self._rush_count_proven():
+            return False
         red = self.reduced_costs()
         # Potentials carry the wait penalties too, so the slack scales with both.
         scale = max(1.0, float(np.abs(self.values[self.allowed]).max(initial=0)),
@@ -176,7 +209,6 @@ class DispatchResult:
         return bool(np.isclose(self.total, _plan_total(self.values, self.machine_of_job,
                                                        self.wait_penalty, self.objective)))
 
-
     def _certificate_encodes_problem(self) -> bool:
         """The certificate's square is this problem: values, allowed pairs, penalties, must-run.
 
@@ -188,7 +220,43 @@ class DispatchResult:
             i, j = np.argwhere(self.solved_allowed)[0]
             top = float(self.certificate.cost[i, j]) + float(self.values[i, j])
             job_cost = np.where(self.solved_allowed, top - self.values, np.inf)
-        return self.certificate.encodes(job_cost, np.where(self.must_run, np.inf, self.wait_penalty))
+        # Rush jobs wait only in the last wait slots, as many as rush jobs wait (none:
+        # they cannot wait, as must-run jobs); ordinary jobs only in the others.
+        rush = self.rush & ~self.must_run if self.rush is not None else np.zeros_like(self.must_run)
+        n_rush_wait = int((rush & (self.machine_of_job < 0)).sum())
+        return self.certificate.encodes(
+            job_cost, np.where(self.must_run | rush, np.inf, self.wait_penalty),
+            np.where(rush, self.wait_penalty, np.inf), n_rush_wait)
+
+    def _rush_count_proven(self) -> bool:
+        """Konig on the rush rows: a cover of the priority rows' pairs as large as the number
+        of priority jobs placed proves no plan places more of them."""
+        if self.rush is None or not self.rush.any():
+            return True
+        if self.rush_cover_jobs is None or self.rush_cover_machines is None:
+            return False
+        prio = self.priority
+        placed = int((prio & (self.machine_of_job >= 0)).sum())
+        if (self.rush_cover_jobs & ~prio).any():
+            return False
+        size = int(self.rush_cover_jobs.sum() + self.rush_cover_machines.sum())
+        covered = self.rush_cover_jobs[:, None] | self.rush_cover_machines[None, :]
+        return size == placed and not (self.allowed[prio] & ~covered[prio]).any()
+
+
+def rush_cover(allowed: np.ndarray, machine_of_job: np.ndarray,
+               priority: np.ndarray) -> tuple[np.ndarray, np.ndarray]:
+    """Konig cover of the priority rows' pairs from the plan restricted to those rows.
+
+    The restriction must be a maximum matching of the priority rows' grid; the cover then
+    has as many vertices as priority jobs placed (Konig 1931), which proves the count
+    maximal. Returns (job mask over all jobs, machine mask).
+    """
+    rows = np.flatnonzero(priority)
+    cover_jobs = np.zeros(len(machine_of_job), dtype=bool)
+    sub_jobs, sub_machines = konig_cover(allowed[rows], machine_of_job[rows])
+    cover_jobs[rows] = sub_jobs
+    return cover_jobs, sub_machines
 
 
 def _plan_total(values: np.ndarray, machine_of_job: np.ndarray, wait_penalty: np.ndarray,
@@ -238,19 +306,35 @@ def _check_inputs(costs, allowed, wait_penalty, must_run):
             raise DispatchInputError(f"wait_penalty needs {n_jobs} entries, got {penalty.size}")
         if not np.isfinite(penalty).all() or (penalty < 0).any():
             raise DispatchInputError("wait penalties must be finite numbers >= 0")
-    must = np.zeros(n_jobs, dtype=bool)
-    if must_run is not None:
-        arr = np.asarray(must_run)
-        if arr.dtype == bool:
-            if arr.shape != (n_jobs,):
-                raise DispatchInputError(f"must_run mask needs {n_jobs} entries, got {arr.size}")
-            must = arr.copy()
-        else:
-            idx = arr.astype(np.int64).reshape(-1)
-            if idx.size and (idx.min() < 0 or idx.max() >= n_jobs):
-                raise DispatchInputError(f"must_run names a job outside 0..{n_jobs - 1}")
-            must[idx] = True
+    must = job_mask(must_run, n_jobs, "must_run")
     return values, mask, penalty, must
+
+
+def job_mask(jobs, n_jobs: int, what: str) -> np.ndarray:
+    """A boolean mask over ``n_jobs`` jobs from a mask or from job indices (None: empty)."""
+    out = np.zeros(n_jobs, dtype=bool)
+    if jobs is None:
+        return out
+    arr = np.asarray(jobs)
+    if arr.dtype == bool:
+        if arr.shape != (n_jobs,):
+            raise DispatchInputError(f"{what} mask needs {n_jobs} entries, got {arr.size}")
+        return arr.copy()
+    idx = arr.astype(np.int64).reshape(-1)
+    if idx.size and (idx.min() < 0 or idx.max() >= n_jobs):
+        raise DispatchInputError(f"{what} names a job outside 0..{n_jobs - 1}")
+    out[idx] = True
+    return out
+
+
+def rush_waits(mask: np.ndarray, priority: np.ndarray) -> int:
+    """How many priority (must-run or rush) jobs wait in every maximum plan: the rows of
+    ``priority`` minus the largest matching of their own grid (Mendelsohn and Dulmage
+    1958: a maximum matching reaches that many priority jobs placed)."""
+    rows = np.flatnonzero(priority)
+    if rows.size == 0:
+        return 0
+    return int(rows.size - (maximum_matching(mask[rows]) >= 0).sum())
 
 
 def _check_must_run(mask: np.ndarray, must: np.ndarray) -> None:
@@ -275,8 +359,14 @@ def _check_must_run(mask: np.ndarray, must: np.ndarray) -> None:
 
 
 def _solve_min(cost: np.ndarray, mask: np.ndarray, penalty: np.ndarray, must: np.ndarray,
-               k: int) -> tuple[np.ndarray, Certificate]:
-    """Cheapest plan placing exactly k jobs (k = maximum matching size) on the square matrix."""
+               k: int, rush: np.ndarray | None = None,
+               rush_wait: int = 0) -> tuple[np.ndarray, Certificate]:
+    """Cheapest plan placing exactly k jobs (k = maximum matching size) on the square matrix.
+
+    With ``rush_wait`` > 0, the last ``rush_wait`` wait slots take only rush jobs and the
+    others only ordinary jobs, so exactly that many rush jobs wait (the fewest possible).
+    With ``rush_wait`` == 0, rush jobs take no wait slot, as must-run jobs.
+    """
     n_jobs, n_machines = cost.shape
     n_wait = n_jobs - k
     n_idle = n_machines - k
@@ -287,7 +377,11 @@ def _solve_min(cost: np.ndarray, mask: np.ndarray, penalty: np.ndarray, must: np
     else:
         square = np.full((size, size), np.inf)
         square[:n_jobs, :n_machines] = cost if full else np.where(mask, cost, np.inf)
-        square[:n_jobs, n_machines:] = np.where(must, np.inf, penalty)[:, None]
+        rush = np.zeros(n_jobs, dtype=bool) if rush is None else rush & ~must
+        square[:n_jobs, n_machines:] = np.where(must | rush, np.inf, penalty)[:, None]
+        if rush_wait:
+            first = n_machines + n_wait - rush_wait
+            square[:n_jobs, first:] = np.where(rush, penalty, np.inf)[:, None]
         square[n_jobs:, :n_machines] = 0.0
     if size:
         rows, cols = linear_sum_assignment(square)
@@ -304,8 +398,10 @@ def _solve_min(cost: np.ndarray, mask: np.ndarray, penalty: np.ndarray, must: np
     return machine_of_job, cert
 
 
-def _bottleneck_mask(values: np.ndarray, mask: np.ndarray, must: np.ndarray, k: int) -> np.ndarray:
-    """Smallest threshold t such that pairs with value <= t still allow k placed jobs."""
+def _bottleneck_mask(values: np.ndarray, mask: np.ndarray, must: np.ndarray, k: int,
+                     priority: np.ndarray | None = None, rush_wait: int = 0) -> np.ndarray:
+    """Smallest threshold t such that pairs with value <= t still allow k placed jobs (and
+    as many rush jobs placed as without a threshold)."""
     levels = np.unique(values[mask])
     lo, hi = 0, len(levels) - 1
     must_rows = np.flatnonzero(must)
@@ -315,6 +411,8 @@ def _bottleneck_mask(values: np.ndarray, mask: np.ndarray, must: np.ndarray, k: 
         ok = int((maximum_matching(sub) >= 0).sum()) == k
         if ok and must_rows.size:
             ok = bool((maximum_matching(sub[must_rows]) >= 0).all())
+        if ok and priority is not None and priority.any():
+            ok = rush_waits(sub, priority) == rush_wait
         if ok:
             hi = mid
         else:
@@ -323,7 +421,7 @@ def _bottleneck_mask(values: np.ndarray, mask: np.ndarray, must: np.ndarray, k: 
 
 
 def solve(costs, allowed=None, *, maximize: bool = False, objective: str | None = None,
-          wait_penalty=None, must_run=None) -> DispatchResult:
+          wait_penalty=None, must_run=None, rush=None) -> DispatchResult:
     """Certified dispatch plan for a jobs x machines grid.
 
     ``costs``: jobs x machines values (finite, >= 0 wherever allowed). ``allowed``:
@@ -331,7 +429,10 @@ def solve(costs, allowed=None, *, maximize: bool = False, objective: str | None 
     ``maximize=True`` is shorthand for ``objective="maximize"``. ``objective`` is one of
     ``"total"``, ``"maximize"``, ``"bottleneck"``. ``wait_penalty``: one number >= 0 per
     job, counted against any plan that leaves the job waiting. ``must_run``: boolean mask
-    or indices of jobs that must never wait.
+    or indices of jobs that must never wait. ``rush``: boolean mask or indices of jobs
+    placed first: the plan places as many of them as any plan placing the most jobs (and
+    every must-run job) can, then optimises the objective; the rush jobs left waiting are
+    ``result.rush_waiting``, explained by ``result.rush_wait_groups()``.
 
     Raises :class:`DispatchInputError` for bad numbers and :class:`InfeasibleError` when
     must-run jobs cannot all be placed.
@@ -343,19 +444,22 @@ def solve(costs, allowed=None, *, maximize: bool = False, objective: str | None 
     if objective not in OBJECTIVES:
         raise DispatchInputError(f"objective must be one of {', '.join(OBJECTIVES)}, got {objective!r}")
     values, mask, penalty, must = _check_inputs(costs, allowed, wait_penalty, must_run)
+    rush_mask = job_mask(rush, values.shape[0], "rush")
     _check_must_run(mask, must)
     k = min(mask.shape) if mask.all() else int((maximum_matching(mask) >= 0).sum())
+    priority = must | rush_mask
+    n_rush_wait = rush_waits(mask, priority) if rush_mask.any() else 0
 
     solve_mask = mask
     if objective == "bottleneck":
-        solve_mask = _bottleneck_mask(values, mask, must, k)
+        solve_mask = _bottleneck_mask(values, mask, must, k, priority, n_rush_wait)
     if objective == "maximize":
         top = float(values[mask].max()) if mask.any() else 0.0
         cost = top - values
     else:
         top = 0.0
         cost = values
-    machine_of_job, cert = _solve_min(cost, solve_mask, penalty, must, k)
+    machine_of_job, cert = _solve_min(cost, solve_mask, penalty, must, k, rush_mask, n_rush_wait)
 
     n_jobs, n_machines = values.shape
     u = cert.row_potential[:n_jobs]
@@ -366,6 +470,9 @@ def solve(costs, allowed=None, *, maximize: bool = False, objective: str | None 
     placed = machine_of_job >= 0
     bottleneck = (float(values[np.flatnonzero(placed), machine_of_job[placed]].max())
                   if objective == "bottleneck" and placed.any() else None)
+    rush_jobs = rush_machines = None
+    if rush_mask.any():
+        rush_jobs, rush_machines = rush_cover(mask, machine_of_job, priority)
     return DispatchResult(
         machine_of_job=machine_of_job,
         total=_plan_total(values, machine_of_job, penalty, objective),
@@ -381,4 +488,7 @@ def solve(costs, allowed=None, *, maximize: bool = False, objective: str | None 
         cover_jobs=cover_jobs,
         cover_machines=cover_machines,
         bottleneck=bottleneck,
+        rush=rush_mask,
+        rush_cover_jobs=rush_jobs,
+        rush_cover_machines=rush_machines,
     )

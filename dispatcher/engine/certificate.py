@@ -257,11 +257,13 @@ class Certificate:
         """cost - u - v (inf on forbidden entries)."""
         return self.cost - self.row_potential[:, None] - self.col_potential[None, :]
 
-    def encodes(self, job_cost: np.ndarray, wait_cost: np.ndarray) -> bool:
+    def encodes(self, job_cost: np.ndarray, wait_cost: np.ndarray,
+                last_wait_cost: np.ndarray | None = None, n_last: int = 0) -> bool:
         """True when ``cost`` is the dispatch layout of these jobs x machines costs.
 
         ``job_cost`` holds the cost of each (job, machine) pair (``inf`` = not allowed),
-        ``wait_cost`` each job's cost of waiting (``inf`` = must run). The layout (see
+        ``wait_cost`` each job's cost of waiting (``inf`` = must run); the last ``n_last``
+        wait slots cost ``last_wait_cost`` instead (slots kept for rush jobs). The layout (see
         :class:`StructuredSquare`): jobs then idle rows, machines then wait slots; an idle
         row costs 0 on every machine and cannot wait. Without this check a certificate
         only proves its plan optimal for whatever square it carries.
@@ -276,6 +278,10 @@ class Certificate:
         expect = np.empty((size, size))
         expect[:n_jobs, :n_machines] = job_cost
         expect[:n_jobs, n_machines:] = wait_cost[:, None]
+        if n_last:
+            if size - n_last < n_machines:
+                return False
+            expect[:n_jobs, size - n_last:] = np.asarray(last_wait_cost, dtype=float)[:, None]
         expect[n_jobs:, :n_machines] = 0.0
         expect[n_jobs:, n_machines:] = np.inf
         same_inf = np.isinf(expect) == np.isinf(cost)

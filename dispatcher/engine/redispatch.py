@@ -24,6 +24,7 @@ from __future__ import annotations
 
 import math
 from collections.abc import Mapping, Sequence
+from dataclasses import dataclass
 
 import numpy as np
 
@@ -37,6 +38,9 @@ from .assignment import (
     _check_inputs,
     _check_must_run,
     _plan_total,
+    job_mask,
+    rush_cover,
+    rush_waits,
     solve,
 )
 from .certificate import Certificate, CertificateError, StructuredSquare
@@ -308,66 +312,59 @@ def _max_placed(allowed: np.ndarray, machine_of_job: np.ndarray) -> int:
     return int((maximum_matching(allowed) >= 0).sum())
 
 
-def redispatch(previous: DispatchResult, *, machines_down: Sequence[int] = (),
-               machines_up: Mapping[int, tuple[np.ndarray, np.ndarray]] | None = None,
-               jobs_removed: Sequence[int] = (), new_jobs=None, new_allowed=None,
-               new_wait_penalty=None, new_must_run=None,
-               move_penalty=None) -> DispatchResult:
-    """The optimal plan after an event, repaired warm from ``previous``.
+@dataclass
+class _After:
+    """The problem after the event, in the row order of the result: surviving jobs of the
+    previous plan, then new jobs. ``before`` is each row's machine in the previous plan
+    (-1 for new rows or rows that waited); ``move`` the move penalties (None if none)."""
 
-    Parameters
-    ----------
-    previous : DispatchResult
-        An optimal plan with its potentials (from :func:`~.assignment.solve` or from an
-        earlier call of this function).
-    machines_down : machine indices that can no longer run any job (their column becomes
-        forbidden; machine indices never shift).
-    machines_up : ``{machine: (values_column, allowed_column)}``, one entry per job of the
-        new problem: the machine's column is replaced (a machine coming back).
-    jobs_removed : indices (in ``previous``) of jobs that finished or were pulled.
-    new_jobs, new_allowed, new_wait_penalty, new_must_run : rows appended after the
-        surviving jobs (a rush job is a new job with ``new_must_run`` True).
-    move_penalty : one number >= 0 per job of the new problem. A job that ``previous``
-        placed on machine m pays it once if the new plan puts it anywhere else, including
-        waiting. The returned ``values`` and ``total`` include these penalties.
+    survivors: np.ndarray
+    n_keep: int
+    add_vals: np.ndarray
+    add_mask: np.ndarray
+    values: np.ndarray
+    allowed: np.ndarray
+    penalty: np.ndarray
+    must: np.ndarray
+    rush: np.ndarray
+    down: np.ndarray
+    up_cols: list[int]
+    before: np.ndarray
+    same_jobs: bool = False  # no row removed or added: arrays are shared where unchanged
+    move: np.ndarray | None = None
 
-    Returns
-    -------
-    DispatchResult
-        Jobs in the order: surviving jobs of ``previous`` (in order), then ``new_jobs``.
-        Identical in total to ``solve()`` of the modified problem, and certified.
+    @property
+    def n_jobs(self) -> int:
+        return self.values.shape[0]
 
-    Raises
-    ------
-    DispatchInputError
-        bad indices or numbers; :class:`~.assignment.InfeasibleError` when the must-run
-        jobs can no longer all be placed.
 
-    Notes
-    -----
-    Only rows and columns the event touched are re-placed, by shortest augmenting paths
-    on reduced costs (see the module references). The ``"bottleneck"`` objective changes
-    its threshold with the event, so it is re-solved cold.
-    """
+def _rows_after(previous: DispatchResult, jobs_removed, new_jobs, new_allowed,
+                new_wait_penalty, new_must_run, new_rush):
+    """Surviving rows of ``previous`` and the checked new rows."""
     n_old, n_machines = previous.values.shape
     removed = np.unique(np.asarray(jobs_removed, dtype=np.int64))
     if removed.size and (removed.min() < 0 or removed.max() >= n_old):
         raise DispatchInputError(f"jobs_removed names a job outside 0..{n_old - 1}")
     survivors = np.setdiff1d(np.arange(n_old), removed) if removed.size else np.arange(n_old)
-    n_keep = survivors.size
-    # New rows.
     if new_jobs is None:
-        add_vals = np.zeros((0, n_machines))
-        add_mask = np.zeros((0, n_machines), dtype=bool)
-        add_pen = np.zeros(0)
-        add_must = np.zeros(0, dtype=bool)
-    else:
-        add_vals, add_mask, add_pen, add_must = _check_inputs(
-            np.atleast_2d(np.asarray(new_jobs, dtype=float)), new_allowed,
-            new_wait_penalty, new_must_run)
-        if add_vals.shape[1] != n_machines:
-            raise DispatchInputError(
-                f"new jobs have {add_vals.shape[1]} machine values, the plan has {n_machines} machines")
+        return (survivors, np.zeros((0, n_machines)), np.zeros((0, n_machines), dtype=bool),
+                np.zeros(0), np.zeros(0, dtype=bool), np.zeros(0, dtype=bool))
+    add_vals, add_mask, add_pen, add_must = _check_inputs(
+        np.atleast_2d(np.asarray(new_jobs, dtype=float)), new_allowed,
+        new_wait_penalty, new_must_run)
+    if add_vals.shape[1] != n_machines:
+        raise DispatchInputError(
+            f"new jobs have {add_vals.shape[1]} machine values, the plan has {n_machines} machines")
+    add_rush = job_mask(new_rush, add_vals.shape[0], "new_rush")
+    return survivors, add_vals, add_mask, add_pen, add_must, add_rush
+
+
+def _problem_after(previous: DispatchResult, rows, machines_down, machines_up) -> _After:
+    """The new problem, sharing arrays with the previous one where nothing changed:
+    machines going down lose their column, machines coming up get theirs replaced."""
+    survivors, add_vals, add_mask, add_pen, add_must, add_rush = rows
+    n_old, n_machines = previous.values.shape
+    n_keep = survivors.size
     n_jobs = n_keep + add_vals.shape[0]
     down = np.unique(np.asarray(machines_down, dtype=np.int64))
     up = dict(machines_up or {})
@@ -376,14 +373,11 @@ def redispatch(previous: DispatchResult, *, machines_down: Sequence[int] = (),
             raise DispatchInputError(f"machine {m} is outside 0..{n_machines - 1}")
     if set(down.tolist()) & set(up):
         raise DispatchInputError("a machine cannot go down and come up in the same event")
-
-    # The new problem, sharing arrays with the previous one where nothing changed.
     same_jobs = n_keep == n_old and add_vals.shape[0] == 0
     values = previous.values if same_jobs else np.vstack([previous.values[survivors], add_vals])
     allowed = np.vstack([previous.allowed[survivors], add_mask]) if not same_jobs \
         else previous.allowed.copy()
-    penalty = np.r_[previous.wait_penalty[survivors], add_pen]
-    must = np.r_[previous.must_run[survivors], add_must]
+    old_rush = previous.rush if previous.rush is not None else np.zeros(n_old, dtype=bool)
     up_cols = sorted(int(m) for m in up)
     if up_cols and values is previous.values:
         values = values.copy()
@@ -401,116 +395,230 @@ def redispatch(previous: DispatchResult, *, machines_down: Sequence[int] = (),
     allowed[:, down] = False
     before = np.full(n_jobs, -1, dtype=np.int64)
     before[:n_keep] = previous.machine_of_job[survivors]
-    move = None
-    if move_penalty is not None:
-        move = np.asarray(move_penalty, dtype=float).reshape(-1)
-        if move.shape != (n_jobs,) or not np.isfinite(move).all() or (move < 0).any():
-            raise DispatchInputError(f"move_penalty needs {n_jobs} numbers >= 0")
-        move = np.where(before >= 0, move, 0.0)
-        if move.any() and previous.objective != "total":
-            raise DispatchInputError("move penalties apply to the 'total' objective only")
-        if move.any():
-            rows = np.flatnonzero(move > 0)
-            values = values.copy() if values is previous.values else values
-            values[rows] += move[rows, None]
-            values[rows, before[rows]] -= move[rows]
-            penalty = penalty.copy()
-            penalty[rows] += move[rows]
-        else:
-            move = None
+    return _After(survivors, n_keep, add_vals, add_mask, values, allowed,
+                  np.r_[previous.wait_penalty[survivors], add_pen],
+                  np.r_[previous.must_run[survivors], add_must],
+                  np.r_[old_rush[survivors], add_rush], down, up_cols, before, same_jobs)
 
-    _check_must_run(allowed, must)
+
+def _charge_moves(previous: DispatchResult, after: _After, move_penalty) -> None:
+    """Add each moved job's penalty to its other machines and to waiting (in place)."""
+    if move_penalty is None:
+        return
+    n_jobs = after.n_jobs
+    move = np.asarray(move_penalty, dtype=float).reshape(-1)
+    if move.shape != (n_jobs,) or not np.isfinite(move).all() or (move < 0).any():
+        raise DispatchInputError(f"move_penalty needs {n_jobs} numbers >= 0")
+    move = np.where(after.before >= 0, move, 0.0)
+    if not move.any():
+        return
     if previous.objective == "bottleneck":
-        return solve(values, allowed, objective="bottleneck", wait_penalty=penalty, must_run=must)
+        raise DispatchInputError("move penalties apply to the 'total' and 'maximize' objectives")
+    rows = np.flatnonzero(move > 0)
+    values = after.values.copy() if after.values is previous.values else after.values
+    # A move penalty is added to a cost, and counts against a value when maximising
+    # (values are gains); either way the square's cost of every other choice rises by it.
+    sign = -1.0 if previous.objective == "maximize" else 1.0
+    values[rows] += sign * move[rows, None]
+    values[rows, after.before[rows]] -= sign * move[rows]
+    after.values = values
+    after.penalty = after.penalty.copy()
+    after.penalty[rows] += move[rows]
+    after.move = move
 
+
+def _cold(after: _After, objective: str) -> DispatchResult:
+    return solve(after.values, after.allowed, objective=objective,
+                 wait_penalty=after.penalty, must_run=after.must, rush=after.rush)
+
+
+def _needs_cold(previous: DispatchResult, after: _After) -> bool:
+    """Warm repair keeps the previous square's wait slots; rush jobs left waiting split
+    them (see :func:`~.assignment.solve`), so such plans, before or after, are solved cold,
+    as is the bottleneck objective, whose threshold moves with the event."""
+    if previous.objective == "bottleneck":
+        return True
+    if previous.rush_waiting.size:
+        return True
+    return bool(after.rush.any()) and rush_waits(after.allowed, after.must | after.rush) > 0
+
+
+def _top(previous: DispatchResult) -> float:
+    """The constant the maximising square subtracts values from (0 when minimising)."""
+    if previous.objective != "maximize":
+        return 0.0
+    ij = np.argwhere(previous.solved_allowed)
+    if not len(ij):
+        return 0.0
+    i, j = ij[0]
+    return float(previous.certificate.cost[i, j] + previous.values[i, j])
+
+
+def _square_after(previous: DispatchResult, after: _After, top: float, idle_new: int,
+                  wait_new: int):
+    """The new square problem: shared with the previous one when machines only went down."""
     cert = previous.certificate
+    n_old, n_machines = previous.values.shape
+    n_jobs = after.n_jobs
     maximize = previous.objective == "maximize"
-    top = 0.0
-    if maximize:
-        ij = np.argwhere(previous.solved_allowed)
-        if len(ij):
-            i, j = ij[0]
-            top = float(cert.cost[i, j] + previous.values[i, j])
-
-    # Previous square layout.
-    k_old = n_old - (cert.col_kind == COL_WAIT).sum()
-    idle_old = n_machines - k_old
-    wait_old = n_old - k_old
-    # New layout.
-    still = before >= 0
-    still[still] = allowed[np.flatnonzero(still), before[still]]
-    k = _max_placed(allowed, np.where(still, before, -1))
-    idle_new, wait_new = n_machines - k, n_jobs - k
-    size = n_jobs + idle_new
 
     def cost_of(x: np.ndarray) -> np.ndarray:
         return top - x if maximize else x
 
-    touched_cols = np.union1d(down, np.asarray(up_cols, dtype=np.int64)).astype(np.int64)
-    touched_rows = np.arange(n_keep, n_jobs)
-    wait_cost = np.where(must, np.inf, penalty)
-    if same_jobs and move is None and not up_cols:
+    # Rush jobs that can all be placed are placed in every plan: as must-run jobs here.
+    wait_cost = np.where(after.must | after.rush, np.inf, after.penalty)
+    if after.same_jobs and after.move is None and not after.up_cols:
         # Machines going down only forbid columns: share the previous job x machine costs
         # instead of copying them (see StructuredSquare).
         prev_sq = cert.square
         if isinstance(prev_sq, StructuredSquare):
-            base, blocked = prev_sq.base, np.union1d(prev_sq.blocked, down)
+            base, blocked = prev_sq.base, np.union1d(prev_sq.blocked, after.down)
         else:
-            base, blocked = cert.cost[:n_old, :n_machines], down
-        sq = StructuredSquare(base, blocked, wait_cost, idle_new, wait_new)
-    else:
-        sq = _dense_square(cert, size, n_old, n_keep, n_jobs, n_machines, survivors, same_jobs,
-                           np.where(add_mask, cost_of(add_vals), np.inf), down, up_cols,
-                           {m: np.where(allowed[:, m], cost_of(values[:, m]), np.inf)
-                            for m in up_cols},
-                           move, before, wait_cost)
-        if move is not None:
-            touched_rows = np.union1d(touched_rows, np.flatnonzero(move > 0))
+            base, blocked = cert.cost[:n_old, :n_machines], after.down
+        return StructuredSquare(base, blocked, wait_cost, idle_new, wait_new)
+    size = n_jobs + idle_new
+    return _dense_square(cert, size, n_old, after.n_keep, n_jobs, n_machines, after.survivors,
+                         after.same_jobs,
+                         np.where(after.add_mask, cost_of(after.add_vals), np.inf), after.down,
+                         after.up_cols,
+                         {m: np.where(after.allowed[:, m], cost_of(after.values[:, m]), np.inf)
+                          for m in after.up_cols},
+                         after.move, after.before, wait_cost)
 
-    # Map rows, columns, potentials and planned pairs of the previous square.
+
+def _carry_over(previous: DispatchResult, after: _After, sq, idle_new: int, wait_new: int):
+    """Potentials and planned pairs of the previous square mapped onto the new one (NaN /
+    -1 where a row or column is new or its pair is no longer allowed)."""
+    cert = previous.certificate
+    n_old, n_machines = previous.values.shape
+    n_jobs = after.n_jobs
+    size = n_jobs + idle_new
+    k_old = n_old - (cert.col_kind == COL_WAIT).sum()
+    idle_old, wait_old = n_machines - k_old, n_old - k_old
     u = np.full(size, np.nan)
     v = np.full(size, np.nan)
     col_of_row = np.full(size, -1, dtype=np.int64)
-    old_cols = cert.col_of_row
     keep_idle = min(idle_old, idle_new)
     keep_wait = min(wait_old, wait_new)
-    old_rows = np.r_[survivors, n_old + np.arange(keep_idle)]
-    new_rows = np.r_[np.arange(n_keep), n_jobs + np.arange(keep_idle)]
+    old_rows = np.r_[after.survivors, n_old + np.arange(keep_idle)]
+    new_rows = np.r_[np.arange(after.n_keep), n_jobs + np.arange(keep_idle)]
     u[new_rows] = cert.row_potential[old_rows]
     v[:n_machines] = cert.col_potential[:n_machines]
     v[n_machines:n_machines + keep_wait] = cert.col_potential[n_machines:n_machines + keep_wait]
-    c = old_cols[old_rows]
+    c = cert.col_of_row[old_rows]
     c = np.where(c < n_machines + keep_wait, c, -1)
     ok = c >= 0
     ok[ok] = np.isfinite(sq[new_rows[ok], c[ok]])
     col_of_row[new_rows[ok]] = c[ok]
+    touched_cols = np.union1d(after.down, np.asarray(after.up_cols, dtype=np.int64)).astype(np.int64)
     if wait_new > wait_old:
         touched_cols = np.union1d(touched_cols, n_machines + np.arange(wait_old, wait_new))
+    touched_rows = np.arange(after.n_keep, n_jobs)
+    if after.move is not None:
+        touched_rows = np.union1d(touched_rows, np.flatnonzero(after.move > 0))
+    return u, v, col_of_row, touched_rows.astype(np.int64), touched_cols
 
-    _repair(sq, col_of_row, u, v, touched_rows.astype(np.int64), touched_cols)
 
+def _result_after(previous: DispatchResult, after: _After, sq, col_of_row, u, v, top: float,
+                  idle_new: int, wait_new: int) -> DispatchResult:
+    """The repaired square read back as a certified DispatchResult."""
+    n_machines = previous.values.shape[1]
+    n_jobs = after.n_jobs
     row_kind = np.r_[np.full(n_jobs, ROW_JOB), np.full(idle_new, ROW_IDLE)]
     col_kind = np.r_[np.full(n_machines, COL_MACHINE), np.full(wait_new, COL_WAIT)]
     certificate = Certificate(sq, col_of_row, u, v, row_kind, col_kind)
     job_cols = col_of_row[:n_jobs]
     machine_of_job = np.where(job_cols < n_machines, job_cols, -1)
     ju, mv = u[:n_jobs], v[:n_machines]
-    if maximize:
+    if previous.objective == "maximize":
         ju, mv = top - ju, -mv
-    cover_jobs, cover_machines = konig_cover(allowed, machine_of_job)
+    cover_jobs, cover_machines = konig_cover(after.allowed, machine_of_job)
+    rush_jobs = rush_machines = None
+    if after.rush.any():
+        rush_jobs, rush_machines = rush_cover(after.allowed, machine_of_job, after.must | after.rush)
     return DispatchResult(
         machine_of_job=machine_of_job,
-        total=_plan_total(values, machine_of_job, penalty, previous.objective),
+        total=_plan_total(after.values, machine_of_job, after.penalty, previous.objective),
         objective=previous.objective,
-        values=values,
-        allowed=allowed,
-        solved_allowed=allowed,
+        values=after.values,
+        allowed=after.allowed,
+        solved_allowed=after.allowed,
         job_potential=ju,
         machine_potential=mv,
-        wait_penalty=penalty,
-        must_run=must,
+        wait_penalty=after.penalty,
+        must_run=after.must,
         certificate=certificate,
         cover_jobs=cover_jobs,
         cover_machines=cover_machines,
         bottleneck=None,
+        rush=after.rush,
+        rush_cover_jobs=rush_jobs,
+        rush_cover_machines=rush_machines,
     )
+
+
+def redispatch(previous: DispatchResult, *, machines_down: Sequence[int] = (),
+               machines_up: Mapping[int, tuple[np.ndarray, np.ndarray]] | None = None,
+               jobs_removed: Sequence[int] = (), new_jobs=None, new_allowed=None,
+               new_wait_penalty=None, new_must_run=None, new_rush=None,
+               move_penalty=None) -> DispatchResult:
+    """The optimal plan after an event, repaired warm from ``previous``.
+
+    Parameters
+    ----------
+    previous : DispatchResult
+        An optimal plan with its potentials (from :func:`~.assignment.solve` or from an
+        earlier call of this function).
+    machines_down : machine indices that can no longer run any job (their column becomes
+        forbidden; machine indices never shift).
+    machines_up : ``{machine: (values_column, allowed_column)}``, one entry per job of the
+        new problem: the machine's column is replaced (a machine coming back).
+    jobs_removed : indices (in ``previous``) of jobs that finished or were pulled.
+    new_jobs, new_allowed, new_wait_penalty, new_must_run, new_rush : rows appended after
+        the surviving jobs (a rush job that arrives is a new job with ``new_rush`` True).
+    move_penalty : one number >= 0 per job of the new problem. A job that ``previous``
+        placed on machine m pays it once if the new plan puts it anywhere else, including
+        waiting (counted against its value when maximising). The returned ``values`` and
+        ``total`` include these penalties.
+
+    Returns
+    -------
+    DispatchResult
+        Jobs in the order: surviving jobs of ``previous`` (in order), then ``new_jobs``.
+        Identical in total to ``solve()`` of the modified problem, and certified.
+
+    Raises
+    ------
+    DispatchInputError
+        bad indices or numbers; :class:`~.assignment.InfeasibleError` when the must-run
+        jobs can no longer all be placed.
+
+    Notes
+    -----
+    Steps: the rows after the event (:func:`_rows_after`), the new problem
+    (:func:`_problem_after`), move penalties (:func:`_charge_moves`), the new square
+    (:func:`_square_after`), the previous potentials and pairs carried over
+    (:func:`_carry_over`), the repair (:func:`_repair`) and the certified result
+    (:func:`_result_after`). Only rows and columns the event touched are re-placed, by
+    shortest augmenting paths on reduced costs (see the module references). The
+    ``"bottleneck"`` objective, and plans with rush jobs left waiting, are re-solved cold.
+    """
+    rows = _rows_after(previous, jobs_removed, new_jobs, new_allowed, new_wait_penalty,
+                       new_must_run, new_rush)
+    after = _problem_after(previous, rows, machines_down, machines_up)
+    _charge_moves(previous, after, move_penalty)
+    _check_must_run(after.allowed, after.must)
+    if _needs_cold(previous, after):
+        return _cold(after, previous.objective)
+
+    n_machines = previous.values.shape[1]
+    still = after.before >= 0
+    still[still] = after.allowed[np.flatnonzero(still), after.before[still]]
+    k = _max_placed(after.allowed, np.where(still, after.before, -1))
+    idle_new, wait_new = n_machines - k, after.n_jobs - k
+    top = _top(previous)
+    sq = _square_after(previous, after, top, idle_new, wait_new)
+    u, v, col_of_row, touched_rows, touched_cols = _carry_over(previous, after, sq, idle_new,
+                                                               wait_new)
+    _repair(sq, col_of_row, u, v, touched_rows, touched_cols)
+    return _result_after(previous, after, sq, col_of_row, u, v, top, idle_new, wait_new)

@@ -31,7 +31,7 @@ from .model import (
     Unit,
     shop_from_grid,
 )
-from .plan import Assignment, Plan, PlanFormatError, RunningJob, WaitReason
+from .plan import Assignment, Plan, PlanFormatError, RunningJob, RushGroup, WaitReason
 from .translate import (
     ShopInfeasibleError,
     ShopProblem,
@@ -46,7 +46,7 @@ __all__ = [
     "DONE", "DOWN", "JOB_STATES", "MACHINE_STATES", "MAINTENANCE", "MUST", "MUST_NOT",
     "PIN_KINDS", "RUNNING", "UNIT_KINDS", "UP", "WAITING",
     "Assignment", "Job", "Machine", "Pin", "Plan", "PlanFormatError", "Problem",
-    "RunningJob", "Shift", "Shop", "ShopError", "ShopInfeasibleError", "ShopProblem",
+    "RunningJob", "RushGroup", "Shift", "Shop", "ShopError", "ShopInfeasibleError", "ShopProblem",
     "Unit", "WaitReason",
     "build_problem", "check_shop", "plan_from_result", "shop_from_grid", "shop_problems",
     "solve_problem", "solve_shop",

@@ -8,6 +8,11 @@ the grid prints: ``running`` (jobs already running, which stay where they are:
 ``{"job", "machine", "since", "cost"}``) and ``unavailable_machines`` (down or under
 maintenance). :meth:`Plan.from_json` reads that object back, checking every field.
 
+``rush_waiting`` (always written) lists rush and pinned jobs left waiting because no plan
+placing as many jobs places more of them; ``rush_groups`` (written when that list is not
+empty) names per group the rush jobs competing for the same machines, those machines, the
+ones that wait and a sentence: ``{"jobs", "machines", "waiting", "text"}``.
+
 ``assignments`` are the jobs newly dispatched in this round; ``total`` counts them and the
 wait penalties of waiting jobs (running jobs are not counted: their setup is done).
 """
@@ -51,7 +56,12 @@ def contract_json(plan: Any, *, bottleneck: float | None, certificate: dict[str,
         "bottleneck": None if bottleneck is None else json_number(bottleneck),
         **reasons_json(plan.waiting_reasons),
         "certificate": certificate,
+        "rush_waiting": list(getattr(plan, "rush_waiting", [])),
     }
+    rush_groups = getattr(plan, "rush_groups", [])
+    if rush_groups:
+        data["rush_groups"] = [{"jobs": list(g.jobs), "machines": list(g.machines),
+                                "waiting": list(g.waiting), "text": g.text} for g in rush_groups]
     if plan.running:
         data["running"] = [{"job": r.job, "machine": r.machine, "since": r.since,
                             "cost": None if r.cost is None else json_number(r.cost)}
@@ -109,6 +119,17 @@ class WaitReason:
     text: str
 
 
+@dataclass(frozen=True)
+class RushGroup:
+    """Rush jobs competing for fewer machines than they are (a Hall witness among rush
+    jobs): ``waiting`` of them wait in every plan placing as many jobs."""
+
+    jobs: list[str]
+    machines: list[str]
+    waiting: list[str]
+    text: str
+
+
 @dataclass
 class Plan:
     """Per machine its job(s) and value, waiting jobs with reasons, idle machines, totals.
@@ -127,6 +148,8 @@ class Plan:
     waiting_reasons: dict[str, WaitReason] = field(default_factory=dict)
     certificate: dict[str, Any] = field(default_factory=lambda: {"verified": False})
     status: str = "optimal"
+    rush_waiting: list[str] = field(default_factory=list)
+    rush_groups: list[RushGroup] = field(default_factory=list)
     running: list[RunningJob] = field(default_factory=list)
     unavailable_machines: list[str] = field(default_factory=list)
     result: Any = field(default=None, repr=False, compare=False)
@@ -247,6 +270,17 @@ class Plan:
             running.append(RunningJob(text(r.get("job"), f"{where}, field 'job'"),
                                       text(r.get("machine"), f"{where}, field 'machine'"),
                                       since, num(r.get("cost"), f"{where}, field 'cost'", True)))
+        rush_groups = []
+        raw = data.get("rush_groups", [])
+        if not isinstance(raw, list):
+            raise fail("field 'rush_groups'", "expected a list")
+        for i, g in enumerate(raw):
+            where = f"rush_groups[{i}]"
+            g = obj(g, where)
+            rush_groups.append(RushGroup(names(g.get("jobs", []), f"{where}, field 'jobs'"),
+                                         names(g.get("machines", []), f"{where}, field 'machines'"),
+                                         names(g.get("waiting", []), f"{where}, field 'waiting'"),
+                                         text(g.get("text", ""), f"{where}, field 'text'")))
         cert = obj(data.get("certificate", {"verified": False}), "field 'certificate'")
         return cls(
             status=text(data["status"], "field 'status'"),
@@ -258,6 +292,8 @@ class Plan:
             bottleneck=num(data.get("bottleneck"), "field 'bottleneck'", True),
             waiting_reasons=reasons,
             certificate=dict(cert),
+            rush_waiting=names(data.get("rush_waiting", []), "field 'rush_waiting'"),
+            rush_groups=rush_groups,
             running=running,
             unavailable_machines=names(data.get("unavailable_machines", []),
                                        "field 'unavailable_machines'"),

@@ -30,24 +30,20 @@ class Cancelled(Exception):
 
 
 def solve_relaxing_rush(shop: Shop, objective: str) -> tuple[Plan, str]:
-    """The plan for ``shop``; if its rush jobs cannot all be placed, the plan that treats
-    the rush jobs named by the core's witness as ordinary jobs, with a sentence saying so.
+    """The plan for ``shop`` and, when rush jobs cannot all be placed, a sentence naming
+    the rush jobs left waiting and the machines they compete for (the core places as many
+    rush jobs as possible; their rush flags stay set). Raises :class:`ShopError` for an
+    inconsistent shop."""
+    plan = solve_shop(shop, objective)
+    return plan, rush_note(plan)
 
-    Raises :class:`ShopInfeasibleError` when that does not help (pinned jobs collide) and
-    :class:`ShopError` for an inconsistent shop.
-    """
-    try:
-        return solve_shop(shop, objective), ""
-    except ShopInfeasibleError as exc:
-        relaxed = [n for n in exc.jobs if shop.job_by_name(n).rush]
-        if not relaxed:
-            raise
-        trial = shop.copy()
-        for n in relaxed:
-            trial.job_by_name(n).rush = False
-        plan = solve_shop(trial, objective)
-        return plan, (f"{exc}. The plan shown treats rush job(s) {', '.join(relaxed)} as "
-                      "ordinary jobs for this round; their rush flags stay set.")
+
+def rush_note(plan: Plan) -> str:
+    """One sentence per group of rush jobs left waiting ('' when every rush job is placed)."""
+    if not plan.rush_groups:
+        return ""
+    return (f"rush job(s) {', '.join(plan.rush_waiting)} wait: "
+            + "; ".join(g.text for g in plan.rush_groups) + ". Their rush flags stay set.")
 
 
 def solve_for_mode(shop: Shop, objective: str, mode: str = MODE_ROUND,

@@ -18,7 +18,7 @@ from typing import Any
 from .fill import ShiftFill
 from .model import Shop, ShopError
 from .plan import Plan
-from .planning import MODE_ROUND, solve_for_mode
+from .planning import MODE_ROUND, rush_note, solve_for_mode
 from .redispatch import ShopEvent, ShopRedispatch, apply_events, redispatch_shop
 from .translate import ShopInfeasibleError
 
@@ -62,7 +62,8 @@ def _title(shop: Shop, event: str, machine: int | None, job: int | None) -> str:
 
 
 def propose(shop: Shop, event: str, objective: str, *, machine: int | None = None,
-            job: int | None = None, note: str = "", mode: str = MODE_ROUND) -> Proposal:
+            job: int | None = None, note: str = "", mode: str = MODE_ROUND,
+            before: dict | None = None) -> Proposal:
     """Apply ``event`` to a copy of ``shop`` and plan it. ``shop`` is never changed.
 
     ``machine`` (down, up) and ``job`` (rush, pulled) are indices into the shop. The event
@@ -70,7 +71,9 @@ def propose(shop: Shop, event: str, objective: str, *, machine: int | None = Non
     the shop document (its grid values, pins and place in the plan in force with it), and
     a machine whose state changed gets ``note`` as its state note. An event that does not
     fit the shop, or a shop with no possible plan, gives a proposal without a plan whose
-    ``problem`` says why.
+    ``problem`` says why. The plan starts from the plan in force: the document's, else
+    ``before`` (the plan shown, in the solve JSON), so a dispatched job keeps its machine
+    unless its move penalty is worth paying.
     """
     title = _title(shop, event, machine, job)
     name = ""
@@ -83,10 +86,11 @@ def propose(shop: Shop, event: str, objective: str, *, machine: int | None = Non
         except ShopError as exc:
             return Proposal(event, title, shop.copy(), None, None, machine, job, [], str(exc))
     pulled = name if event == EVENT_PULL else ""
-    warm = _warm_redispatch(shop, event, objective, name) if mode == MODE_ROUND else None
+    warm = _warm_redispatch(shop, event, objective, name, before) if mode == MODE_ROUND else None
     moves = None
     if warm is not None:
-        after, plan, problem, moves = warm.shop, warm.plan, "", warm.move_penalties_paid
+        after, plan, moves = warm.shop, warm.plan, warm.move_penalties_paid
+        problem = rush_note(plan)
     _note_machines(shop, after, note)
     if pulled:
         after = without_job(after, job)
@@ -114,17 +118,32 @@ def without_job(shop: Shop, index: int) -> Shop:
     return new
 
 
-def _warm_redispatch(shop: Shop, event: str, objective: str, name: str) -> ShopRedispatch | None:
-    """The core's warm re-dispatch from the plan in force (with move penalties), or None
-    when it does not apply (no plan in force, bottleneck objective, or no feasible plan:
-    then the caller solves from scratch and explains)."""
-    if not shop.plan_in_force or objective not in ("total", "maximize") or event == EVENT_CONFIRM:
+def _warm_redispatch(shop: Shop, event: str, objective: str, name: str,
+                     before: dict | None = None) -> ShopRedispatch | None:
+    """The core's re-dispatch from the plan in force (the document's, else ``before``),
+    with move penalties in both objectives, or None when it does not apply (no plan in
+    force, bottleneck objective, an inconsistent shop: then the caller solves from scratch
+    and explains)."""
+    if objective not in ("total", "maximize") or event == EVENT_CONFIRM:
+        return None
+    in_force = shop.plan_in_force or _in_force_of(shop, before)
+    if not in_force:
         return None
     try:
         return redispatch_shop(shop, [ShopEvent(event, name)], objective=objective,
-                               move_penalty=0.0 if objective == "maximize" else None)
+                               plan_in_force=in_force)
     except (ShopError, ShopInfeasibleError):
         return None
+
+
+def _in_force_of(shop: Shop, before: dict | None) -> dict[str, list[str]]:
+    """A plan in the solve JSON as machine id -> job ids, or {} if it does not fit the shop."""
+    if not before:
+        return {}
+    try:
+        return Plan.from_json(before).in_force(shop)
+    except (ValueError, KeyError):
+        return {}
 
 
 def _note_machines(before: Shop, after: Shop, note: str) -> None:

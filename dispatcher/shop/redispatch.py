@@ -7,11 +7,17 @@ pulled. Rules (the definition the tests check):
 * a job running on a machine that goes down becomes waiting (it needs a new setup
   elsewhere, which its grid values already price);
 * a job finishing or pulled leaves the round; if it was running, its slot becomes free;
-* a rush job that arrives (already added to the shop, named in the event) must run;
+* a rush job that arrives (already added to the shop, named in the event) is placed first,
+  as every rush or pinned job: the plan places as many jobs as possible, among those as
+  many rush jobs as possible (see :func:`dispatcher.engine.solve`); rush jobs that cannot
+  all be placed wait, named with the machines they compete for. A breakdown never leaves
+  the supervisor without a plan;
+* events apply in the order given; a machine's caution is due when it ends down;
 * a job dispatched by the plan in force but not started pays a *move penalty* (its own
   ``move_penalty``, else the shop's, unless overridden) if the new plan puts it anywhere
-  else, waiting included, so the new plan moves only what the costs justify. No penalty
-  is due when its machine went down: that move is forced.
+  else, waiting included, so the new plan moves only what the costs justify (added to the
+  cost, or counted against the value when maximising). No penalty is due when its
+  machine went down: that move is forced.
 
 Warm start: both the state before the event and the state after it are laid out on the
 same columns (every slot of every machine; slots not free in a state are forbidden), so
@@ -19,16 +25,21 @@ the event becomes a change of some rows and columns. The state before is solved 
 then :func:`dispatcher.engine.redispatch` re-places only what changed, from that plan's
 dual potentials (shortest augmenting paths; see that module). The result is certified.
 
-The difference reported is against the plan in force: moved jobs (from, to), jobs newly
-dispatched, jobs now waiting, machines now idle, and the change in total (the new plan's
-total including move penalties paid, minus the plan in force's total; both count grid
-values of dispatched jobs that have not started and wait penalties of waiting jobs).
+The difference reported is against the plan in force: every change (moved jobs, jobs
+newly dispatched, jobs now waiting, jobs that left the round as done or pulled), machines
+now idle, and the change in total. The *total in force* is the plan in force evaluated on
+the shop after the event with the objective's own rule: a job keeps its machine in force
+if that machine can still take it, else it waits; grid values of dispatched jobs that
+have not started and wait penalties of waiting jobs (added for "total", subtracted for
+"maximize"). The change is the new plan's total (move penalties not included; they are
+reported apart) minus the total in force. Feasibility is judged after the events only.
 """
 
 from __future__ import annotations
 
 from collections.abc import Mapping, Sequence
 from dataclasses import dataclass, field, replace
+from datetime import datetime
 from typing import Any
 
 import numpy as np
@@ -37,7 +48,7 @@ from dispatcher.engine import DispatchResult, InfeasibleError, redispatch, solve
 
 from .model import DONE, DOWN, MUST, MUST_NOT, RUNNING, UP, WAITING, Problem, Shop, ShopError
 from .plan import Assignment, Plan, json_number
-from .translate import ShopInfeasibleError, ShopProblem, plan_from_result
+from .translate import ShopProblem, plan_from_result
 from .validate import check_shop
 
 EVENT_KINDS = ("down", "up", "rush", "done", "pulled")
@@ -45,19 +56,29 @@ EVENT_KINDS = ("down", "up", "rush", "done", "pulled")
 
 @dataclass(frozen=True)
 class ShopEvent:
-    """One event: ``kind`` in :data:`EVENT_KINDS`, ``name`` of the machine or job."""
+    """One event: ``kind`` in :data:`EVENT_KINDS`, ``name`` of the machine or job.
+
+    ``note`` and ``time`` are kept on a machine that goes down or comes back up (its
+    ``state_note`` and ``state_changed``), so the sheet can say "DOWN since 10:40: leak".
+    """
 
     kind: str
     name: str
+    note: str = ""
+    time: datetime | None = None
 
 
 @dataclass(frozen=True)
 class Change:
-    """A job whose machine differs from the plan in force (None = waiting / not in the round)."""
+    """A job whose machine differs from the plan in force (None = waiting / not in the round).
+
+    ``left`` is ``"done"`` or ``"pulled"`` for a job that left the round (``after`` None).
+    """
 
     job: str
     before: str | None
     after: str | None
+    left: str | None = None
 
 
 @dataclass
@@ -75,16 +96,20 @@ class ShopRedispatch:
     total_change: float
     move_penalties_paid: float
     result: DispatchResult = field(repr=False)
+    left_round: list[Change] = field(default_factory=list)
+    machines_down: list[str] = field(default_factory=list)
 
     def to_json(self) -> dict[str, Any]:
         """The solve contract of the new plan plus ``changes`` and ``difference``."""
         data = self.plan.to_json()
-        data["changes"] = [{"job": c.job, "from": c.before, "to": c.after} for c in self.changes]
+        data["changes"] = [_change_json(c) for c in self.changes]
         data["difference"] = {
             "moved": [{"job": c.job, "from": c.before, "to": c.after} for c in self.moved],
             "newly_dispatched": list(self.newly_dispatched),
             "now_waiting": list(self.now_waiting),
+            "left_round": [_change_json(c) for c in self.left_round],
             "machines_now_idle": list(self.machines_now_idle),
+            "machines_down": list(self.machines_down),
             "total_in_force": json_number(self.total_in_force),
             "total_change": json_number(self.total_change),
             "move_penalties_paid": json_number(self.move_penalties_paid),
@@ -92,18 +117,26 @@ class ShopRedispatch:
         return data
 
 
+def _change_json(c: Change) -> dict[str, Any]:
+    out: dict[str, Any] = {"job": c.job, "from": c.before, "to": c.after}
+    if c.left:
+        out["left"] = c.left
+    return out
+
+
 @dataclass
 class _Layout:
     """Rows (job indices) and slot columns of one state, with the engine arrays."""
 
     rows: list[int]
-    values: np.ndarray      # grid values plus move penalties
+    values: np.ndarray      # grid values with move penalties
     grid: np.ndarray        # grid values only
     allowed: np.ndarray
-    penalty: np.ndarray     # wait penalty plus move penalty
+    penalty: np.ndarray     # wait penalty (plus move penalty when minimising)
     wait: np.ndarray        # wait penalty only
-    must: np.ndarray
+    rush: np.ndarray        # rush or pinned: placed first
     move: np.ndarray        # move penalty due when the row leaves its machine in force
+    shift: float = 0.0      # constant the engine total exceeds the true one by (maximize)
 
 
 def apply_events(shop: Shop, events: Sequence[ShopEvent], source: str = "") -> tuple[Shop, set[int], set[int]]:
@@ -127,6 +160,10 @@ def apply_events(shop: Shop, events: Sequence[ShopEvent], source: str = "") -> t
                 problems.append(Problem(where, f"no machine named {ev.name!r}"))
                 continue
             machine = after.machines[mpos[ev.name]]
+            new_state = DOWN if ev.kind == "down" else UP
+            if machine.state != new_state or ev.note:
+                machine.state_note = ev.note if new_state == DOWN else ""
+                machine.state_changed = ev.time or machine.state_changed
             if ev.kind == "down":
                 machine.state = DOWN
                 for job in after.jobs:
@@ -165,8 +202,14 @@ def _columns(shop: Shop) -> list[int]:
 
 
 def _layout(shop: Shop, rows: list[int], columns: list[int], in_force: Mapping[int, int],
-            move_default: float | None) -> _Layout:
-    """Engine arrays of ``shop`` for ``rows`` on the common slot ``columns``."""
+            move_default: float | None, maximize: bool = False) -> _Layout:
+    """Engine arrays of ``shop`` for ``rows`` on the common slot ``columns``.
+
+    A move penalty p of a row whose machine in force is k: minimising, every other choice
+    (waiting included) costs p more; maximising, staying on k is worth p more, which ranks
+    the same plans (every plan's value rises by p, kept in ``shift``, against p less for
+    every plan that moves the job) and keeps the engine's values >= 0.
+    """
     values_all, allowed_all = shop.matrix()
     cols = np.asarray(columns, dtype=np.int64)
     running = np.zeros(len(shop.machines), dtype=int)
@@ -186,7 +229,7 @@ def _layout(shop: Shop, rows: list[int], columns: list[int], in_force: Mapping[i
     grid = values_all[np.ix_(r, cols)] if len(rows) and len(columns) else np.zeros((len(rows), len(columns)))
     allowed = (allowed_all[np.ix_(r, cols)] & free[None, :]) if len(rows) and len(columns) \
         else np.zeros(grid.shape, dtype=bool)
-    must = np.array([shop.jobs[i].rush for i in rows], dtype=bool)
+    rush = np.array([shop.jobs[i].rush for i in rows], dtype=bool)
     row_of = {shop.jobs[i].id: n for n, i in enumerate(rows)}
     for p in shop.pins:
         n = row_of.get(p.job)
@@ -195,7 +238,7 @@ def _layout(shop: Shop, rows: list[int], columns: list[int], in_force: Mapping[i
         on = cols == mindex[p.machine]
         if p.kind == MUST:
             allowed[n] &= on
-            must[n] = True
+            rush[n] = True
         elif p.kind == MUST_NOT:
             allowed[n] &= ~on
     grid = np.where(allowed, grid, 0.0)
@@ -211,10 +254,14 @@ def _layout(shop: Shop, rows: list[int], columns: list[int], in_force: Mapping[i
             move_default if move_default is not None else shop.move_penalty)
         if p > 0:
             move[n] = p
-            values[n, cols != k] += p
-            penalty[n] += p
+            if maximize:
+                values[n, cols == k] += p
+            else:
+                values[n, cols != k] += p
+                penalty[n] += p
     values = np.where(allowed, values, 0.0)
-    return _Layout(list(rows), values, grid, allowed, penalty, wait, must, move)
+    shift = float(move.sum()) if maximize else 0.0
+    return _Layout(list(rows), values, grid, allowed, penalty, wait, rush, move, shift)
 
 
 def _in_force_machines(shop: Shop, plan_in_force: Mapping[str, Sequence[str]] | None,
@@ -243,16 +290,6 @@ def _in_force_machines(shop: Shop, plan_in_force: Mapping[str, Sequence[str]] | 
     return out
 
 
-def _infeasible(exc: InfeasibleError, shop: Shop, layout: _Layout, columns: list[int],
-                source: str = "") -> ShopInfeasibleError:
-    w = exc.witness
-    jobs = [shop.jobs[layout.rows[int(i)]].name for i in w.jobs]
-    machines = list(dict.fromkeys(shop.machines[columns[int(c)]].name for c in w.machines))
-    msg = (f"infeasible after the event: must-run jobs {', '.join(jobs)} ({len(jobs)}) compete "
-           f"for only {len(w.machines)} free slot(s) on: {', '.join(machines) or 'no machine'}")
-    return ShopInfeasibleError(msg, jobs, machines, source)
-
-
 def _warm(pre: _Layout, pre_result: DispatchResult, post: _Layout) -> tuple[DispatchResult, list[int]]:
     """Post-event result by warm re-dispatch from ``pre_result``; returns it and its row order.
 
@@ -263,7 +300,7 @@ def _warm(pre: _Layout, pre_result: DispatchResult, post: _Layout) -> tuple[Disp
     """
     post_pos = {i: n for n, i in enumerate(post.rows)}
     cand = [n for n, i in enumerate(pre.rows)
-            if i in post_pos and pre.must[n] == post.must[post_pos[i]]
+            if i in post_pos and pre.rush[n] == post.rush[post_pos[i]]
             and pre.penalty[n] == post.penalty[post_pos[i]]]
     s = np.array(cand, dtype=np.int64)
     ks = np.array([post_pos[pre.rows[n]] for n in cand], dtype=np.int64)
@@ -290,7 +327,7 @@ def _warm(pre: _Layout, pre_result: DispatchResult, post: _Layout) -> tuple[Disp
         new_jobs=post.values[nidx] if fresh else None,
         new_allowed=post.allowed[nidx] if fresh else None,
         new_wait_penalty=post.penalty[nidx] if fresh else None,
-        new_must_run=post.must[nidx] if fresh else None)
+        new_rush=post.rush[nidx] if fresh else None)
     return result, order
 
 
@@ -298,54 +335,94 @@ def redispatch_shop(shop: Shop, events: Sequence[ShopEvent], *,
                     plan_in_force: Mapping[str, Sequence[str]] | None = None,
                     move_penalty: float | None = None, objective: str = "total",
                     source: str = "") -> ShopRedispatch:
-    """Re-dispatch ``shop`` after ``events``, starting from the plan in force.
+    """Re-dispatch ``shop`` after ``events`` (in that order), starting from the plan in force.
 
     ``plan_in_force``: machine id -> job ids (default: ``shop.plan_in_force``).
     ``move_penalty`` overrides the shop's default (a job's own value still wins).
     ``objective``: ``"total"`` or ``"maximize"``. Raises :class:`ShopError` for an
-    inconsistent shop or event and :class:`ShopInfeasibleError` when must-run jobs can no
-    longer all be placed. The shop passed in is never modified.
+    inconsistent shop or event. Rush and pinned jobs that cannot all be placed wait and
+    are named in ``plan.rush_waiting``: a plan is always produced. The shop passed in is
+    never modified.
     """
     if objective not in ("total", "maximize"):
         raise ShopError([Problem("objective", "re-dispatch supports 'total' and 'maximize'")], source)
     if move_penalty is not None and not (np.isfinite(move_penalty) and move_penalty >= 0):
         raise ShopError([Problem("move penalty", f"must be a number >= 0, got {move_penalty!r}")], source)
-    if objective == "maximize" and move_penalty:
-        raise ShopError([Problem("move penalty", "applies to the 'total' objective only")], source)
     check_shop(shop, source)
     in_force = _in_force_machines(shop, plan_in_force, source)
     after, left, arrived = apply_events(shop, events, source)
+    left_how = _left_how(events, after)
     columns = _columns(shop)
+    maximize = objective == "maximize"
     pre_rows = [i for i, j in enumerate(shop.jobs) if j.state == WAITING and i not in arrived]
     post_rows = [i for i, j in enumerate(after.jobs) if j.state == WAITING and i not in left]
-    pre = _layout(shop, pre_rows, columns, in_force, move_penalty)
-    post = _layout(after, post_rows, columns, in_force, move_penalty)
-    if objective == "maximize":
-        pre.values, pre.penalty = pre.grid, pre.wait
-        post.values, post.penalty = post.grid, post.wait
-        post.move[:] = 0.0
+    pre = _layout(shop, pre_rows, columns, in_force, move_penalty, maximize)
+    post = _layout(after, post_rows, columns, in_force, move_penalty, maximize)
+    result, order = _solve_after(pre, post, objective)
+    return _difference(shop, after, in_force, left, left_how, post, order, columns, result,
+                       objective)
+
+
+def _solve_after(pre: _Layout, post: _Layout, objective: str) -> tuple[DispatchResult, list[int]]:
+    """The plan after the event: warm from the state before when that state solves (it
+    always does unless the document itself is inconsistent), else cold. Only the state
+    after the event is judged."""
     try:
-        pre_result = solve(pre.values, pre.allowed, wait_penalty=pre.penalty,
-                           must_run=pre.must, objective=objective)
-    except InfeasibleError as exc:
-        raise _infeasible(exc, shop, pre, columns, source) from None
-    try:
-        result, order = _warm(pre, pre_result, post)
-    except InfeasibleError as exc:
-        raise _infeasible(exc, after, post, columns, source) from None
-    return _difference(shop, after, in_force, left, arrived, post, order, columns, result)
+        pre_result = solve(pre.values, pre.allowed, wait_penalty=pre.penalty, rush=pre.rush,
+                           objective=objective)
+    except InfeasibleError:
+        pre_result = None
+    if pre_result is not None:
+        return _warm(pre, pre_result, post)
+    return solve(post.values, post.allowed, wait_penalty=post.penalty, rush=post.rush,
+                 objective=objective), list(post.rows)
+
+
+def _left_how(events: Sequence[ShopEvent], after: Shop) -> dict[int, str]:
+    """Job index -> "done" or "pulled" for jobs that left the round (the last event wins)."""
+    pos = {j.name: i for i, j in enumerate(after.jobs)}
+    out: dict[int, str] = {}
+    for ev in events:
+        if ev.kind in ("done", "pulled") and ev.name in pos:
+            out[pos[ev.name]] = ev.kind
+    return out
+
+
+def total_in_force(shop: Shop, in_force: Mapping[int, int], rows: Sequence[int],
+                   maximize: bool) -> float:
+    """The plan in force evaluated on ``shop`` (the shop after the event) for the jobs in
+    ``rows`` (waiting jobs of the round): a job whose machine in force is up and can run it
+    counts its grid value, every other job its wait penalty (subtracted when maximising).
+    Free slots are not re-checked: the plan in force already fitted its machines, and the
+    event only takes slots away from machines that go down."""
+    values_all, allowed_all = shop.matrix()
+    pinned_away = {(p.job, p.machine) for p in shop.pins if p.kind == MUST_NOT}
+    pinned_to = {p.job: p.machine for p in shop.pins if p.kind == MUST}
+    total = 0.0
+    for i in rows:
+        job = shop.jobs[i]
+        k = in_force.get(i)
+        ok = k is not None and shop.machines[k].state == UP and bool(allowed_all[i, k]) \
+            and (job.id, shop.machines[k].id) not in pinned_away \
+            and pinned_to.get(job.id, shop.machines[k].id) == shop.machines[k].id
+        if ok:
+            total += float(values_all[i, k])
+        else:
+            total += -job.wait_penalty if maximize else job.wait_penalty
+    return total
 
 
 def _difference(shop: Shop, after: Shop, in_force: Mapping[int, int], left: set[int],
-                arrived: set[int], post: _Layout, order: list[int], columns: list[int],
-                result: DispatchResult) -> ShopRedispatch:
+                left_how: Mapping[int, str], post: _Layout, order: list[int],
+                columns: list[int], result: DispatchResult, objective: str) -> ShopRedispatch:
     post_pos = {i: n for n, i in enumerate(post.rows)}
     idx = np.array([post_pos[i] for i in order], dtype=np.int64)
     mindex = {m.id: k for k, m in enumerate(after.machines)}
     running = [(i, mindex[j.machine]) for i, j in enumerate(after.jobs) if j.state == RUNNING]
     unavailable = [k for k, m in enumerate(after.machines) if m.state != UP]
     problem = ShopProblem(after, list(order), list(columns), post.grid[idx], post.allowed[idx],
-                          post.wait[idx], post.must[idx], running, unavailable)
+                          post.wait[idx], np.zeros(len(order), dtype=bool), running, unavailable,
+                          post.rush[idx])
     plan = plan_from_result(problem, result)
     # Assignment values are grid values (the engine's include move penalties).
     plan = replace(plan, assignments=[
@@ -358,11 +435,14 @@ def _difference(shop: Shop, after: Shop, in_force: Mapping[int, int], left: set[
         now[i] = k
     name_j = lambda i: after.jobs[i].name  # noqa: E731
     name_m = lambda k: None if k is None else machines[k].name  # noqa: E731
-    changes, moved, newly, waiting = [], [], [], []
-    for i in sorted(set(in_force) | set(now)):
-        if i in left or after.jobs[i].state == DONE:
-            continue
+    changes, moved, newly, waiting, gone = [], [], [], [], []
+    for i in sorted(set(in_force) | set(now) | set(left)):
         b, a = in_force.get(i), now.get(i)
+        if i in left:
+            ch = Change(name_j(i), name_m(b), None, left_how.get(i, "pulled"))
+            changes.append(ch)
+            gone.append(ch)
+            continue
         if b == a:
             continue
         ch = Change(name_j(i), name_m(b), name_m(a))
@@ -377,22 +457,18 @@ def _difference(shop: Shop, after: Shop, in_force: Mapping[int, int], left: set[
     busy_now = set(now.values())
     idle_now = [m.name for k, m in enumerate(machines)
                 if k in busy_before and k not in busy_now and m.state == UP]
-    # Totals in the same terms: grid values of dispatched-not-started jobs + wait penalties.
-    values_all, _ = shop.matrix()
-    total_before = 0.0
-    for i, j in enumerate(shop.jobs):
-        if j.state != WAITING or i in arrived:  # an arriving job was not in the plan in force
-            continue
-        k = in_force.get(i)
-        total_before += j.wait_penalty if k is None else float(values_all[i, k])
+    maximize = objective == "maximize"
     move_paid = 0.0
     for n, i in enumerate(order):
         if post.move[idx[n]] > 0 and now.get(i) != in_force.get(i):
             move_paid += float(post.move[idx[n]])
-    plan = replace(plan, total=float(result.total) - move_paid)
-    total_after = plan.total
+    # The engine's total includes the move penalties paid (and, maximising, the shift).
+    total = float(result.total) - post.shift + (move_paid if maximize else -move_paid)
+    plan = replace(plan, total=total)
+    before = total_in_force(after, in_force, post.rows, maximize)
     return ShopRedispatch(plan=plan, shop=after, changes=changes, moved=moved,
                           newly_dispatched=newly, now_waiting=waiting,
-                          machines_now_idle=idle_now, total_in_force=total_before,
-                          total_change=total_after - total_before,
-                          move_penalties_paid=move_paid, result=result)
+                          machines_now_idle=idle_now, total_in_force=before,
+                          total_change=total - before,
+                          move_penalties_paid=move_paid, result=result, left_round=gone,
+                          machines_down=[m.name for m in machines if m.state == DOWN])

@@ -5,8 +5,12 @@ The rules (the definition the tests check by brute force):
 * done jobs take no part; running jobs stay on their machine and use up one of its slots;
 * only machines that are ``up`` take jobs; an up machine with ``slots`` k and r running jobs
   offers k - r identical columns (a machine that can take several jobs at once);
-* a ``must`` pin restricts the job to that machine's columns and makes it must-run; a
-  ``must_not`` pin removes the pair; rush jobs are must-run;
+* a ``must`` pin restricts the job to that machine's columns and makes it a priority job,
+  as a rush job; a ``must_not`` pin removes the pair;
+* rush (and pinned) jobs are a priority, not a constraint: the plan places as many jobs
+  as possible, among those as many rush jobs as possible, then the best total; the rush
+  jobs left waiting are named with the machines they compete for. Only jobs named as
+  must-run (``--must-run`` on the command line) are a hard constraint;
 * every waiting job's ``wait_penalty`` is the value of leaving it waiting;
 * the engine (:func:`dispatcher.engine.solve`) then places as many of the waiting jobs as
   those columns permit, all must-run jobs among them, at the best total.
@@ -22,13 +26,13 @@ import numpy as np
 from dispatcher.engine import DispatchResult, InfeasibleError, solve
 from dispatcher.errors import Infeasible
 
-from .model import DONE, MUST, MUST_NOT, RUNNING, UP, Shop
-from .plan import Assignment, Plan, RunningJob, WaitReason
+from .model import DONE, MUST, MUST_NOT, RUNNING, UP, Problem, Shop, ShopError
+from .plan import Assignment, Plan, RushGroup, RunningJob, WaitReason
 from .validate import check_shop
 
 
 class ShopInfeasibleError(Infeasible):
-    """Must-run (rush or pinned) jobs cannot all be placed. Names jobs and machines.
+    """Jobs named as must-run cannot all be placed. Names jobs and machines.
 
     ``jobs`` and ``machines`` are names; ``source`` (the shop file, when known) prefixes
     the message.
@@ -57,6 +61,7 @@ class ShopProblem:
     must_run: np.ndarray
     running: list[tuple[int, int]]
     unavailable: list[int]
+    rush: np.ndarray | None = None
 
     def machine_name(self, column: int) -> str:
         return self.shop.machines[self.columns[column]].name
@@ -64,11 +69,15 @@ class ShopProblem:
     def job_name(self, row: int) -> str:
         return self.shop.jobs[self.rows[row]].name
 
+    def job_name_to_row(self, name: str) -> int:
+        return next(n for n, i in enumerate(self.rows) if self.shop.jobs[i].name == name)
+
 
 def build_problem(shop: Shop, *, extra_must_run: Iterable[str] = (), source: str = "") -> ShopProblem:
     """The engine problem for ``shop`` (checked first: raises :class:`ShopError`).
 
-    ``extra_must_run`` names further jobs (by name) that must not wait this round.
+    ``extra_must_run`` names further jobs (by name, or by work order) that must not
+    wait this round: a hard constraint, unlike the rush flag.
     """
     check_shop(shop, source)
     values_all, allowed_all = shop.matrix()
@@ -88,12 +97,7 @@ def build_problem(shop: Shop, *, extra_must_run: Iterable[str] = (), source: str
             continue
         columns.extend([k] * max(m.slots - int(used[k]), 0))
     rows = [i for i, j in enumerate(shop.jobs) if j.state not in (RUNNING, DONE)]
-    extra = set(extra_must_run)
-    unknown = extra - {shop.jobs[i].name for i in rows}
-    if unknown:
-        from .model import Problem, ShopError
-        raise ShopError([Problem(f"must-run job {n!r}", "is not a waiting job of this shop")
-                         for n in sorted(unknown)], source)
+    extra = _must_run_names(shop, rows, extra_must_run, source)
 
     cols = np.array(columns, dtype=np.int64)
     r = np.array(rows, dtype=np.int64)
@@ -101,7 +105,8 @@ def build_problem(shop: Shop, *, extra_must_run: Iterable[str] = (), source: str
     allowed = allowed_all[np.ix_(r, cols)] if len(rows) and len(columns) else np.zeros(values.shape, dtype=bool)
     allowed = allowed.copy()
     row_of = {shop.jobs[i].id: n for n, i in enumerate(rows)}
-    must = np.array([shop.jobs[i].rush or shop.jobs[i].name in extra for i in rows], dtype=bool)
+    must = np.array([shop.jobs[i].name in extra for i in rows], dtype=bool)
+    rush = np.array([shop.jobs[i].rush for i in rows], dtype=bool)
     for p in shop.pins:
         n = row_of.get(p.job)
         if n is None:
@@ -109,11 +114,38 @@ def build_problem(shop: Shop, *, extra_must_run: Iterable[str] = (), source: str
         on_machine = cols == mindex[p.machine]
         if p.kind == MUST:
             allowed[n] &= on_machine
-            must[n] = True
+            rush[n] = True
         elif p.kind == MUST_NOT:
             allowed[n] &= ~on_machine
     penalty = np.array([shop.jobs[i].wait_penalty for i in rows], dtype=float)
-    return ShopProblem(shop, rows, columns, values, allowed, penalty, must, running, unavailable)
+    return ShopProblem(shop, rows, columns, values, allowed, penalty, must, running, unavailable,
+                       rush & ~must)
+
+
+def _must_run_names(shop: Shop, rows: list[int], names: Iterable[str], source: str) -> set[str]:
+    """Job names of the must-run jobs given by name or work order; unknown ones refused."""
+    waiting = [shop.jobs[i] for i in rows]
+    by_name = {j.name: j.name for j in waiting}
+    by_order: dict[str, list[str]] = {}
+    for j in waiting:
+        if j.work_order:
+            by_order.setdefault(j.work_order, []).append(j.name)
+    out: set[str] = set()
+    problems = []
+    for n in names:
+        if n in by_name:
+            out.add(n)
+        elif len(by_order.get(n, [])) == 1:
+            out.add(by_order[n][0])
+        elif n in by_order:
+            problems.append(Problem(f"must-run job {n!r}", "names several jobs by work order ("
+                                    + ", ".join(by_order[n]) + "); give the job's name"))
+        else:
+            problems.append(Problem(f"must-run job {n!r}", "is not a waiting job of this shop "
+                                    "(give its name or its work order)"))
+    if problems:
+        raise ShopError(problems, source)
+    return out
 
 
 def solve_problem(problem: ShopProblem, objective: str = "total", source: str = "") -> DispatchResult:
@@ -121,7 +153,8 @@ def solve_problem(problem: ShopProblem, objective: str = "total", source: str = 
     (its message prefixed with ``source`` when given)."""
     try:
         return solve(problem.values, problem.allowed, objective=objective,
-                     wait_penalty=problem.wait_penalty, must_run=problem.must_run)
+                     wait_penalty=problem.wait_penalty, must_run=problem.must_run,
+                     rush=problem.rush)
     except InfeasibleError as exc:
         w = exc.witness
         jobs = [problem.job_name(int(i)) for i in w.jobs]
@@ -138,7 +171,9 @@ def solve_shop(shop: Shop, objective: str = "total", *, extra_must_run: Iterable
 
     ``objective`` is ``"total"`` (least setup plus wait penalties), ``"maximize"`` (values
     are gains) or ``"bottleneck"``. Raises :class:`ShopError` for an inconsistent shop and
-    :class:`ShopInfeasibleError` when rush or pinned jobs cannot all be placed.
+    :class:`ShopInfeasibleError` when jobs named in ``extra_must_run`` cannot all be
+    placed (rush and pinned jobs that cannot all be placed wait and are named in
+    ``plan.rush_waiting`` with their reasons).
     """
     problem = build_problem(shop, extra_must_run=extra_must_run, source=source)
     result = solve_problem(problem, objective, source)
@@ -178,6 +213,8 @@ def plan_from_result(problem: ShopProblem, result: DispatchResult) -> Plan:
         bottleneck=result.bottleneck,
         waiting_reasons=reasons,
         certificate={"verified": bool(result.verify())},
+        rush_waiting=[problem.job_name(int(n)) for n in result.rush_waiting],
+        rush_groups=_rush_groups(problem, result),
         running=running,
         unavailable_machines=[shop.machines[k].name for k in problem.unavailable],
         result=result,
@@ -210,6 +247,29 @@ def _wait_reasons(problem: ShopProblem, result: DispatchResult) -> dict[str, Wai
                     f"{name}: no available machine can run it" + _why_no_machine(problem, row))
             by_row[row] = WaitReason(jobs, machines, text)
     return {problem.job_name(int(n)): by_row[int(n)] for n in result.waiting_jobs}
+
+
+def _rush_groups(problem: ShopProblem, result: DispatchResult) -> list[RushGroup]:
+    """Per group of rush (or pinned) jobs left waiting: the rush jobs competing for the same
+    machines, those machines, and a sentence (a Hall witness among rush jobs)."""
+    out = []
+    for w in result.rush_wait_groups():
+        jobs = [problem.job_name(int(i)) for i in w.jobs]
+        waiting = [problem.job_name(int(i)) for i in w.jobs if result.machine_of_job[i] < 0]
+        machines = _unique(problem.machine_name(int(c)) for c in w.machines)
+        if not machines:
+            why = (f"rush job(s) {', '.join(jobs)}: no available machine can run "
+                   f"{'it' if len(jobs) == 1 else 'them'}"
+                   + "".join(_why_no_machine(problem, problem.job_name_to_row(n)) for n in jobs[:1]))
+        else:
+            slots = (f"{len(w.machines)} free slot(s) on " if len(w.machines) != len(machines)
+                     else "")
+            kind = "rush or must-run" if problem.must_run[w.jobs].any() else "rush"
+            why = (f"{len(jobs)} {kind} jobs ({', '.join(jobs)}) can only use {slots}"
+                   f"{len(machines)} machine(s) ({', '.join(machines)}), so {w.deficiency} of "
+                   "them must wait")
+        out.append(RushGroup(jobs, machines, waiting, why))
+    return out
 
 
 def _why_no_machine(problem: ShopProblem, row: int) -> str:

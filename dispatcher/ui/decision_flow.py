@@ -115,7 +115,7 @@ class DecisionFlow(QObject):
     def _open(self, shop: Shop, event: str, **where) -> DecisionDialog:
         before, _ = self.plan_in_force()
         objective = self.window.objective
-        proposal = propose(shop, event, objective, mode=self.window.mode, **where)
+        proposal = propose(shop, event, objective, mode=self.window.mode, before=before, **where)
         if proposal.plan is not None:
             nothing = {"status": "optimal", "objective": objective, "total": 0,
                        "assignments": [], "waiting_jobs": [], "idle_machines": []}
