@@ -158,3 +158,116 @@ def test_in_force_needs_a_shop_document(samples, capsys):
     assert main(["solve", str(grid), "--in-force"]) == 2
     assert "--in-force needs a shop document" in capsys.readouterr().err
     assert grid.read_bytes() == before
+
+
+def test_up_then_down_leaves_the_machine_down_and_events_apply_in_the_order_given(shop_file,
+                                                                                  capsys):
+    # Regression: every --down was applied before every --up, whatever the order given.
+    code, out, _ = run(capsys, shop_file, "--up", "Press A", "--down", "Press A", "--json")
+    data = json.loads(out)
+    assert code == 0 and "Press A" in data["unavailable_machines"]
+    code, out, _ = run(capsys, shop_file, "--down", "Press A", "--up", "Press A")
+    assert code == 0 and "Caution: Press A is down" not in out
+    assert "Not available" not in out
+    code, out, _ = run(capsys, shop_file, "--up", "Press A", "--down", "Press A")
+    assert "Caution: Press A is down" in out
+
+
+def test_done_job_leaving_its_machine_is_listed_in_the_text(shop_file, capsys):
+    # Regression: a job done or pulled was missing from the changes and the text.
+    code, out, _ = run(capsys, shop_file, "--pull", "WO-3")
+    assert code == 0 and "WO-3  Saw -> pulled" in out
+
+
+def test_rush_by_work_order_and_breakdown_note_kept_on_the_machine(tmp_path, capsys):
+    shop = small_shop()
+    shop.jobs[3].work_order = "WO-4104"
+    path = tmp_path / "cell.dshop"
+    save_shop(shop, path)
+    code, out, _ = run(capsys, path, "--rush", "WO-4104", "--down", "Saw", "--json",
+                       "--in-force", "--note", "hydraulic leak")
+    assert code == 0
+    saved = load_shop(path)
+    saw = saved.machine("S")
+    assert saw.state == "down" and saw.state_note == "hydraulic leak"
+    assert saw.state_changed is not None
+    assert saved.job("J4").rush
+
+
+def test_maximize_counts_the_move_penalty_against_the_value(tmp_path, capsys):
+    # Regression: with --maximize the move penalty was ignored (and --move-penalty refused).
+    # One press in force for J1 (value 10); a second press comes up where J1 is worth 12.
+    # Moving gains 2 and costs the penalty: with 5 it stays, with 1 it moves.
+    from dispatcher.shop import DOWN, Machine, Shop
+
+    shop = Shop(name="invented", move_penalty=5.0)
+    shop.machines = [Machine(id="P", name="P1"), Machine(id="Q", name="P2", state=DOWN)]
+    shop.jobs = [Job(id="J1", name="J1")]
+    shop.grid = {("J1", "P"): 10.0, ("J1", "Q"): 12.0}
+    shop.plan_in_force = {"P": ["J1"]}
+    path = tmp_path / "max.dshop"
+    save_shop(shop, path)
+    code, out, _ = run(capsys, path, "--up", "P2", "--maximize", "--json")
+    assert code == 0 and json.loads(out)["changes"] == []
+    code, out, _ = run(capsys, path, "--up", "P2", "--maximize", "--move-penalty", "1", "--json")
+    data = json.loads(out)
+    assert code == 0 and data["changes"] == [{"job": "J1", "from": "P1", "to": "P2"}]
+    assert data["total"] == 12 and data["difference"]["move_penalties_paid"] == 1
+    assert data["difference"]["total_in_force"] == 10
+
+
+def test_maximize_total_in_force_subtracts_wait_penalties(tmp_path, capsys):
+    # Regression: one job placed at 10, one waiting with penalty 4: total 6, and the total
+    # in force was 14 (penalties added) with a change of -8 and no changes.
+    from dispatcher.shop import Machine, Shop
+
+    shop = Shop(name="invented")
+    shop.machines = [Machine(id="P", name="P1"), Machine(id="S", name="Saw")]
+    shop.jobs = [Job(id="J1", name="J1"), Job(id="J2", name="J2", wait_penalty=4.0),
+                 Job(id="J3", name="J3")]
+    shop.grid = {("J1", "P"): 10.0, ("J2", "P"): 1.0, ("J3", "S"): 3.0}
+    shop.plan_in_force = {"P": ["J1"], "S": ["J3"]}
+    path = tmp_path / "max.dshop"
+    save_shop(shop, path)
+    code, out, _ = run(capsys, path, "--done", "J3", "--maximize", "--json")
+    data = json.loads(out)
+    assert code == 0 and data["total"] == 6
+    assert data["difference"]["total_in_force"] == 6 and data["difference"]["total_change"] == 0
+
+
+def test_event_that_fixes_an_infeasible_document_is_planned(tmp_path, capsys):
+    # Regression: a document whose rush jobs could not all be placed was refused (exit 3)
+    # even when the event (a press back up) fixed it. Only the state after is judged.
+    from dispatcher.shop import DOWN, Machine, Shop
+
+    shop = Shop(name="invented")
+    shop.machines = [Machine(id="P", name="P1"), Machine(id="Q", name="P2", state=DOWN)]
+    shop.jobs = [Job(id="A", name="A", rush=True), Job(id="B", name="B", rush=True)]
+    shop.grid = {("A", "P"): 1.0, ("B", "P"): 1.0, ("B", "Q"): 2.0}
+    shop.plan_in_force = {"P": ["A"]}
+    path = tmp_path / "fix.dshop"
+    save_shop(shop, path)
+    code, out, _ = run(capsys, path, "--up", "P2", "--json")
+    data = json.loads(out)
+    assert code == 0 and data["rush_waiting"] == []
+    assert {a["job"]: a["machine"] for a in data["assignments"]} == {"A": "P1", "B": "P2"}
+    assert data["changes"] == [{"job": "B", "from": None, "to": "P2"}]
+
+
+def test_rush_total_in_force_includes_the_arriving_jobs_wait_penalty(tmp_path, capsys):
+    # Regression: "--rush J" reported no changes and +5 because the total in force left out
+    # the rush job's wait penalty (2 instead of 7 in a three-job shop).
+    from dispatcher.shop import Machine, Shop
+
+    shop = Shop(name="invented")
+    shop.machines = [Machine(id="P", name="P1"), Machine(id="S", name="Saw")]
+    shop.jobs = [Job(id="J1", name="J1"), Job(id="J2", name="J2"),
+                 Job(id="J3", name="J3", wait_penalty=5.0)]
+    shop.grid = {("J1", "P"): 1.0, ("J2", "S"): 1.0, ("J3", "P"): 9.0}
+    shop.plan_in_force = {"P": ["J1"], "S": ["J2"]}
+    path = tmp_path / "r.dshop"
+    save_shop(shop, path)
+    code, out, _ = run(capsys, path, "--rush", "J3", "--json")
+    data = json.loads(out)
+    assert code == 0 and data["difference"]["total_in_force"] == 7
+    assert data["changes"]  # the rush job takes P1
