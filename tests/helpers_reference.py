@@ -232,27 +232,31 @@ def networkx_reference(values, allowed=None, penalty=None, must=None, objective=
 # --------------------------------------------------------------------------- checks
 
 def square_by_hand(values, allowed, penalty, must, placed: int, objective: str,
-                   top: float = 0.0) -> np.ndarray:
+                   top: float = 0.0, rush=None, rush_wait: int = 0) -> np.ndarray:
     """The square problem of the documented layout, built here from the problem itself.
 
     Rows: the jobs, then one idle row per machine left without a job; columns: the
     machines, then one wait slot per job that waits (``placed`` jobs are placed). A job
     costs its value on an allowed machine (``top - value`` when maximising) and its wait
     penalty on a wait slot (not allowed for a must-run job); an idle row costs 0 on a
-    machine and cannot wait.
+    machine and cannot wait. Rush jobs (``rush``, not must-run) wait only on the last
+    ``rush_wait`` wait slots, ordinary jobs only on the others.
     """
     m, n = values.shape
     size = m + n - placed
     square = np.full((size, size), np.inf)
     job_cost = top - values if objective == "maximize" else values
     square[:m, :n] = np.where(allowed, job_cost, np.inf)
-    square[:m, n:] = np.where(must, np.inf, penalty)[:, None]
+    rush = np.zeros(m, dtype=bool) if rush is None else np.asarray(rush, dtype=bool) & ~must
+    square[:m, n:] = np.where(must | rush, np.inf, penalty)[:, None]
+    if rush_wait:
+        square[:m, size - rush_wait:] = np.where(rush, penalty, np.inf)[:, None]
     square[m:, :n] = 0.0
     return square
 
 
 def check_result(result, values, allowed=None, penalty=None, must=None, *,
-                 reference: Reference | None = None) -> None:
+                 reference: Reference | None = None, rush=None) -> None:
     """Assert every claim of an engine result by hand (independent of ``result.verify``).
 
     Plan: one machine per placed job, allowed pairs only, must-run jobs placed, total
@@ -319,8 +323,9 @@ def check_result(result, values, allowed=None, penalty=None, must=None, *,
             # Any constant works (every plan places the same number of jobs): read it off.
             i, j = np.argwhere(solved)[0]
             top = float(cert.cost[i, j] + values[i, j])
+        rush_wait = 0 if rush is None else int((np.asarray(rush) & ~must & ~placed).sum())
         square = square_by_hand(values, solved, penalty, must, int(placed.sum()),
-                                result.objective, top)
+                                result.objective, top, rush, rush_wait)
         np.testing.assert_array_equal(np.isinf(cert.cost), np.isinf(square))
         finite = np.isfinite(square)
         np.testing.assert_allclose(cert.cost[finite], square[finite], rtol=1e-12, atol=tol)

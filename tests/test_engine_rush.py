@@ -54,7 +54,7 @@ def test_rush_priority_matches_brute_force(objective):
         result = solve(values, allowed, objective=objective, wait_penalty=penalty,
                        must_run=must, rush=rush)
         assert result.verify()
-        check_result(result, values, allowed, penalty, must)
+        check_result(result, values, allowed, penalty, must, reference=ref, rush=rush)
         placed = result.machine_of_job >= 0
         assert int(placed.sum()) == ref.placed
         assert int((placed & rush).sum()) == ref.rush_placed

@@ -171,7 +171,9 @@ def test_one_round_infeasible_names_the_file_once(tmp_path, capsys):
     shop.grid = {("J1", "M1"): 1.0, ("J2", "M1"): 2.0}
     path = tmp_path / "cell.dshop"
     save_shop(shop, path)
-    assert main(["solve", str(path)]) == 3
+    assert main(["solve", str(path)]) == 0  # rush is a priority: WO-2 waits, named
+    capsys.readouterr()
+    assert main(["solve", str(path), "--must-run", "WO-1,WO-2"]) == 3
     err = capsys.readouterr().err
     assert err.count(str(path)) == 1 and err.startswith(f"dispatcher: {path}: infeasible: ")
     assert "WO-1, WO-2" in err
