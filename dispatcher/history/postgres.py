@@ -27,7 +27,7 @@ so that no password ends up in settings or scripts. Driver: psycopg 3, installed
 from __future__ import annotations
 
 import re
-import time as _time
+import threading
 from collections.abc import Callable, Sequence
 from dataclasses import dataclass
 from datetime import tzinfo
@@ -45,6 +45,14 @@ WRITE_LOCK = 0x44535048
 
 _MISSING_DRIVER = ("a PostgreSQL history needs the psycopg driver, which is not installed; "
                    "install it with: pip install 'dispatcher[postgres]'")
+
+
+class _Stale(Exception):
+    """A kept connection turned out dead before anything was sent."""
+
+    def __init__(self, error: Exception):
+        super().__init__(str(error))
+        self.error = error
 
 
 @dataclass(frozen=True)
@@ -177,6 +185,7 @@ class PostgresStore(DecisionStore):
         self.station = _station_default() if station is None else station
         self._migrations = tuple(migrations)
         self._checked = False
+        self._local = threading.local()
         self.last_backup = None
         self._check_no_password()
         self.path = self.location  # what the app shows as "File:"
@@ -242,20 +251,55 @@ class PostgresStore(DecisionStore):
             why = "the server reported an error"
         return HistoryError(f"{self.location}: {doing} failed: {why} [postgresql: {text}]")
 
-    def _run(self, body: Callable[[Any], T], doing: str) -> T:
+    def _run(self, body: Callable[[Any], T], doing: str, retry: bool = True) -> T:
+        """Run ``body(conn)`` on this thread's open connection (opened when needed).
+
+        A connection kept from an earlier call may have died since (server restarted);
+        ``body`` signals that with :class:`_Stale` before sending anything that changes
+        data, and reads may always be repeated: then it runs once more on a new connection.
+        """
         psycopg = _psycopg()
-        conn = self._connect()
+        conn, fresh = self._conn()
         try:
             return body(conn)
+        except _Stale as stale:
+            self._drop()
+            if fresh or not retry:
+                raise self._fault(stale.error, doing) from None
         except (HistoryError, HistoryInputError):
+            if conn.broken:
+                self._drop()
             raise
+        except psycopg.OperationalError as exc:
+            self._drop()
+            if fresh or not retry:
+                raise self._fault(exc, doing) from None
         except psycopg.Error as exc:
+            if conn.broken:
+                self._drop()
             raise self._fault(exc, doing) from None
-        finally:
+        return self._run(body, doing, retry=False)
+
+    def _conn(self):
+        conn = getattr(self._local, "conn", None)
+        if conn is not None and not conn.closed and not conn.broken:
+            return conn, False
+        conn = self._connect()
+        self._local.conn = conn
+        return conn, True
+
+    def _drop(self) -> None:
+        conn = getattr(self._local, "conn", None)
+        self._local.conn = None
+        if conn is not None:
             try:
                 conn.close()
             except Exception:  # noqa: BLE001 - a dead connection cannot be closed cleanly
                 pass
+
+    def close(self) -> None:
+        """Close this thread's connection (the next call opens a new one)."""
+        self._drop()
 
     # ------------------------------------------------------------ schema
 
@@ -320,21 +364,37 @@ class PostgresStore(DecisionStore):
     # ------------------------------------------------------------ the two hooks
 
     def _read(self, action: Callable[[_Cx], T], doing: str, empty: T) -> T:
+        # No transaction needed: a decision and its rows are committed together, so rows
+        # read after their decision are all there (READ COMMITTED), and reads may repeat.
         def body(conn) -> T:
             if not self._prepare(conn, create=False):
                 return empty
-            with conn.transaction():
-                conn.execute("SET TRANSACTION ISOLATION LEVEL REPEATABLE READ READ ONLY")
-                return action(_Cx(conn, paramstyle_percent=True))
+            return action(_Cx(conn, paramstyle_percent=True))
         return self._run(body, doing)
 
     def _write(self, action: Callable[[_Cx], T], doing: str) -> T:
+        psycopg = _psycopg()
+
         def body(conn) -> T:
-            self._prepare(conn, create=True)
-            with conn.transaction():
+            try:
+                self._prepare(conn, create=True)
+                conn.execute("BEGIN")
+            except psycopg.OperationalError as exc:
+                raise _Stale(exc) from None  # nothing of this decision was sent yet
+            try:
                 conn.execute("SELECT pg_advisory_xact_lock(%s)", (WRITE_LOCK,))
                 result = action(_Cx(conn, paramstyle_percent=True))
                 conn.execute(f"NOTIFY {CHANNEL}")
+                conn.execute("COMMIT")
+            except BaseException as exc:
+                if not conn.broken and not conn.closed:
+                    try:
+                        conn.execute("ROLLBACK")
+                    except psycopg.Error:
+                        pass
+                if isinstance(exc, psycopg.Error):  # never repeated: it may have committed
+                    raise self._fault(exc, doing) from None
+                raise
             return result
         return self._run(body, doing)
 
@@ -355,11 +415,15 @@ class PostgresStore(DecisionStore):
 
     def wait_for_news(self, seconds: float) -> bool:
         """Block up to ``seconds`` for another station's decision (LISTEN/NOTIFY)."""
-        def body(conn) -> bool:
+        psycopg = _psycopg()
+        conn = self._connect()  # its own connection: notifications queue up on it
+        try:
             conn.execute(f"LISTEN {CHANNEL}")
-            deadline = _time.monotonic() + seconds
-            for _ in conn.notifies(timeout=max(0.0, deadline - _time.monotonic())):
+            for _ in conn.notifies(timeout=max(0.0, seconds)):
                 return True
             return False
-        return self._run(body, "waiting for new decisions")
+        except psycopg.Error as exc:
+            raise self._fault(exc, "waiting for new decisions") from None
+        finally:
+            conn.close()
 
