@@ -66,3 +66,16 @@ def pg_location(pg_server, request) -> str:
         os.urandom(3).hex()
     pg_server.psql(f"CREATE SCHEMA {name}")
     return pg_server.uri(schema=name)
+
+
+@pytest.fixture
+def open_window(qtbot, tmp_path, monkeypatch):
+    """Open the app's main window: ``open_window("small_moulding_cell.dshop")`` on a sample
+    shop, ``open_window()`` empty; each with its own settings, history file and autosave
+    folder under the test's tmp_path, its plan shown."""
+    from ui_support import make_window
+
+    def _open(name: str | None = None):
+        return make_window(qtbot, tmp_path, monkeypatch, SAMPLES / name if name else None)
+
+    return _open

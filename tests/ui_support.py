@@ -11,8 +11,6 @@ from scipy.optimize import linear_sum_assignment
 from dispatcher.ui.main_window import MainWindow
 from dispatcher.ui.messages import RecordingMessenger
 
-SHOTS = Path("/tmp/ui_shots")
-
 
 def make_window(qtbot, tmp_path: Path, monkeypatch, path: Path | None = None) -> MainWindow:
     """A main window with its own settings file, history file and autosave folder."""
@@ -61,13 +59,34 @@ def reference_total(values: np.ndarray, allowed: np.ndarray) -> float:
 
 
 def save_shot(widget, tmp_path: Path, name: str) -> Path:
-    """Render ``widget`` to PNG in tmp_path and keep a copy in /tmp/ui_shots for review."""
+    """Render ``widget`` to PNG in the test's tmp_path (look at it when a view changes)."""
     image = widget.grab()
     out = tmp_path / f"{name}.png"
     assert image.save(str(out)), f"could not write {out}"
-    try:
-        SHOTS.mkdir(parents=True, exist_ok=True)
-        image.save(str(SHOTS / f"{name}.png"))
-    except OSError:
-        pass
     return out
+
+
+def answer_next_dialog(fill) -> None:
+    """Answer the next modal dialog (QInputDialog.getText/getInt/getDouble) the app opens:
+    ``fill(dialog)`` sets its value, then it is accepted, as a user pressing OK would."""
+    from PySide6.QtCore import QTimer
+    from PySide6.QtWidgets import QApplication
+
+    def attempt() -> None:
+        dialog = QApplication.activeModalWidget()
+        if dialog is None:
+            QTimer.singleShot(10, attempt)
+            return
+        fill(dialog)
+        dialog.accept()
+
+    QTimer.singleShot(0, attempt)
+
+
+def press(qtbot, window, key, modifiers=None) -> None:
+    """Send a key press to the grid of the window, made the active window first (a closed
+    dialog leaves no active window offscreen, and shortcuts need one)."""
+    from PySide6.QtCore import Qt
+
+    activate(qtbot, window)
+    qtbot.keyClick(window.view, key, modifiers or Qt.KeyboardModifier.NoModifier)

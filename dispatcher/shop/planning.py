@@ -9,6 +9,8 @@ from __future__ import annotations
 
 import threading
 
+from dispatcher.errors import Cancelled
+
 from .fill import ShiftFill, fill_shop_shift
 from .model import Problem, Shop, ShopError
 from .plan import Plan
@@ -24,9 +26,8 @@ MODES = {MODE_ROUND: "One round: one job per free machine slot",
 #: proven gap) instead of a proven optimum.
 SHIFT_TIME_LIMIT = 30.0
 
-
-class Cancelled(Exception):
-    """A computation was stopped by its cancel event (its result is not wanted)."""
+__all__ = ["MODES", "MODE_ROUND", "MODE_SHIFT", "SHIFT_TIME_LIMIT", "Cancelled",
+           "plan_in_force_ids", "solve_for_mode", "solve_relaxing_rush"]
 
 
 def solve_relaxing_rush(shop: Shop, objective: str) -> tuple[Plan, str]:

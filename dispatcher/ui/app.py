@@ -58,29 +58,42 @@ def default_messenger(window):
     return Messenger(window)
 
 
-def run(path: str | None = None, history: str | None = None, on_error=None) -> int:
-    """Open the main window (on ``path`` if given) and run the event loop.
+def start(path: str | None = None, history: str | None = None, on_error=None, settings=None):
+    """The main window as ``dispatcher app [SHOP] [--history PATH]`` opens it, shown, or
+    None when ``path`` cannot be opened (reported on stderr, or to ``on_error``).
 
-    A file that cannot be opened is reported (stderr, or ``on_error``) and gives exit code 2.
+    Without ``path`` the window offers to recover work autosaved by a session that did
+    not close normally.
     """
-    app = make_application()
+    make_application()
     from dispatcher.ui.main_window import MainWindow
     from dispatcher.ui.messages import RecordingMessenger
 
     # The file named on the command line is opened without message boxes: a failure is
     # reported on stderr (exit code 2) instead of waiting on a dialog.
-    window = MainWindow(history_path=history, messenger=RecordingMessenger())
+    window = MainWindow(history_path=history, messenger=RecordingMessenger(), settings=settings)
     opened = window.open_path(path) if path else True
-    window.messenger = window.files.messenger = default_messenger(window)
+    window.messenger = default_messenger(window)
     if not path:
         window.files.recover()
     elif not opened:
         problem = window.last_problem or f"{path}: cannot be opened"
         (on_error or (lambda t: print(f"dispatcher: {t}", file=sys.stderr)))(problem)
-        window.runner.cancel()
-        window.runner.wait_idle()
+        for runner in window.runners():
+            runner.shutdown()
         window.files.shutdown()
         window.deleteLater()
-        return 2
+        return None
     window.show()
-    return app.exec()
+    return window
+
+
+def run(path: str | None = None, history: str | None = None, on_error=None) -> int:
+    """Open the main window (on ``path`` if given) and run the event loop.
+
+    A file that cannot be opened is reported (stderr, or ``on_error``) and gives exit code 2.
+    """
+    window = start(path, history, on_error)
+    if window is None:
+        return 2
+    return make_application().exec()

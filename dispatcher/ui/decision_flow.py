@@ -25,7 +25,7 @@ from dispatcher.shop.proposal import (
     propose,
 )
 from dispatcher.ui.decision import DecisionDialog
-from dispatcher.ui.edits import ReplaceShop, SetJobsState, SetMachineFields, SetPlanInForce
+from dispatcher.ui.edits import RemoveJob, SetJobsState, SetMachineFields, SetPlanInForce
 
 
 class DecisionFlow(QObject):
@@ -132,8 +132,13 @@ class DecisionFlow(QObject):
         dialog.confirmed.connect(self.apply)
         dialog.setAttribute(Qt.WidgetAttribute.WA_DeleteOnClose)
         self.dialog = dialog
+        dialog.destroyed.connect(lambda *_: self._forget(dialog))
         dialog.open()
         return dialog
+
+    def _forget(self, dialog) -> None:
+        if self.dialog is dialog:
+            self.dialog = None
 
     def apply(self, proposal: Proposal, by: str, reason: str, note: str) -> int | None:
         """Record the decision first; only if that worked, change the document (undoable)."""
@@ -149,7 +154,7 @@ class DecisionFlow(QObject):
         stack = self.doc.undo_stack
         stack.beginMacro(f"{proposal.title} (decision #{number})")
         if proposal.event == EVENT_PULL:
-            stack.push(ReplaceShop(self.doc, recorded_shop.copy(), proposal.title))
+            stack.push(RemoveJob(self.doc, proposal.job, proposal.title))
         if proposal.machine is not None and proposal.event in (EVENT_DOWN, EVENT_UP):
             m = recorded_shop.machines[proposal.machine]
             stack.push(SetMachineFields(self.doc, proposal.machine,

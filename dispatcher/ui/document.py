@@ -8,13 +8,25 @@ emit ``dataChanged`` for just those cells and the plan can be re-solved.
 
 from __future__ import annotations
 
-import gc
+from dataclasses import dataclass, field
 from pathlib import Path
 
 from PySide6.QtCore import QObject, Signal, Slot
 from PySide6.QtGui import QUndoStack
 
-from dispatcher.shop.model import MUST, MUST_NOT, Pin, Shop
+from dispatcher.shop.model import MUST, MUST_NOT, Job, Machine, Pin, Shop
+
+
+@dataclass
+class RemovedRecord:
+    """A job or machine taken out of the document with what belonged to it only (so that
+    undo puts exactly that back, without keeping a copy of the whole shop)."""
+
+    record: Job | Machine
+    grid: dict = field(default_factory=dict)
+    hours: dict = field(default_factory=dict)
+    pins: list = field(default_factory=list)
+    plan_in_force: dict | None = None
 
 
 class ShopDocument(QObject):
@@ -35,6 +47,16 @@ class ShopDocument(QObject):
     edited = Signal()
     path_changed = Signal()
     dirty_changed = Signal(bool)
+    # Before and after a job row or machine column is inserted or removed (the index), so
+    # that models can call beginInsertRows/endInsertRows and keep selection and scroll.
+    job_inserting = Signal(int)
+    job_inserted = Signal(int)
+    job_removing = Signal(int)
+    job_removed = Signal(int)
+    machine_inserting = Signal(int)
+    machine_inserted = Signal(int)
+    machine_removing = Signal(int)
+    machine_removed = Signal(int)
 
     def __init__(self, shop: Shop | None = None, parent: QObject | None = None):
         super().__init__(parent)
@@ -54,10 +76,6 @@ class ShopDocument(QObject):
         self.shop = shop
         self.path = Path(path) if path is not None else None
         self._index()
-        # A big shop is hundreds of thousands of long-lived objects; moving them out of the
-        # cyclic collector's reach keeps its full passes from pausing the window.
-        gc.collect()
-        gc.freeze()
         self.undo_stack.clear()
         self.undo_stack.setClean()
         self.reset.emit()
@@ -139,6 +157,66 @@ class ShopDocument(QObject):
                 setattr(self.shop.jobs[row], name, value)
         self.jobs_changed.emit([r for r, _ in jobs])
         self.edited.emit()
+
+    def _insert_job(self, row: int, saved: RemovedRecord) -> None:
+        """Put a job back at ``row`` with its grid values, run hours, pins and the plan in
+        force it had (what :meth:`_remove_job` returned), or add a new one."""
+        self.job_inserting.emit(row)
+        self.shop.jobs.insert(row, saved.record)
+        self._restore(saved)
+        self._index()
+        self.job_inserted.emit(row)
+        self.edited.emit()
+
+    def _remove_job(self, row: int) -> RemovedRecord:
+        self.job_removing.emit(row)
+        job = self.shop.jobs.pop(row)
+        saved = self._take(job, lambda key: key[0] == job.id, lambda p: p.job == job.id)
+        self._index()
+        self.job_removed.emit(row)
+        self.edited.emit()
+        return saved
+
+    def _insert_machine(self, col: int, saved: RemovedRecord) -> None:
+        self.machine_inserting.emit(col)
+        self.shop.machines.insert(col, saved.record)
+        self._restore(saved)
+        self._index()
+        self.machine_inserted.emit(col)
+        self.edited.emit()
+
+    def _remove_machine(self, col: int) -> RemovedRecord:
+        self.machine_removing.emit(col)
+        machine = self.shop.machines.pop(col)
+        saved = self._take(machine, lambda key: key[1] == machine.id, lambda p: p.machine == machine.id)
+        self._index()
+        self.machine_removed.emit(col)
+        self.edited.emit()
+        return saved
+
+    def _take(self, record, key_of_record, pin_of_record) -> RemovedRecord:
+        shop = self.shop
+        grid = {k: v for k, v in shop.grid.items() if key_of_record(k)}
+        hours = {k: v for k, v in shop.hours.items() if key_of_record(k)}
+        for k in grid:
+            del shop.grid[k]
+        for k in hours:
+            del shop.hours[k]
+        pins = [p for p in shop.pins if pin_of_record(p)]
+        shop.pins = [p for p in shop.pins if not pin_of_record(p)]
+        in_force = {m: list(js) for m, js in shop.plan_in_force.items()}
+        rid = record.id
+        shop.plan_in_force = {m: [j for j in js if j != rid] for m, js in shop.plan_in_force.items()
+                              if m != rid}
+        shop.plan_in_force = {m: js for m, js in shop.plan_in_force.items() if js}
+        return RemovedRecord(record, grid, hours, pins, in_force)
+
+    def _restore(self, saved: RemovedRecord) -> None:
+        self.shop.grid.update(saved.grid)
+        self.shop.hours.update(saved.hours)
+        self.shop.pins.extend(saved.pins)
+        if saved.plan_in_force is not None:
+            self.shop.plan_in_force = {m: list(js) for m, js in saved.plan_in_force.items()}
 
     def _apply_shop(self, shop: Shop) -> None:
         """Swap the whole shop (an import that may add jobs and machines); views rebuild."""

@@ -10,7 +10,7 @@ from typing import Any
 
 from PySide6.QtGui import QUndoCommand
 
-from dispatcher.ui.document import ShopDocument
+from dispatcher.ui.document import RemovedRecord, ShopDocument
 
 
 class SetValues(QUndoCommand):
@@ -129,3 +129,52 @@ class ReplaceShop(QUndoCommand):
 
     def undo(self) -> None:
         self._doc._apply_shop(self._old)
+
+
+class AddJob(QUndoCommand):
+    """Append a job row (the grid model inserts the row; selection and scroll stay)."""
+
+    def __init__(self, doc: ShopDocument, job, text: str):
+        super().__init__(text)
+        self._doc = doc
+        self._saved = RemovedRecord(job)
+        self._row = doc.n_jobs()
+
+    def redo(self) -> None:
+        self._doc._insert_job(self._row, self._saved)
+
+    def undo(self) -> None:
+        self._saved = self._doc._remove_job(self._row)
+
+
+class AddMachine(QUndoCommand):
+    """Append a machine column."""
+
+    def __init__(self, doc: ShopDocument, machine, text: str):
+        super().__init__(text)
+        self._doc = doc
+        self._saved = RemovedRecord(machine)
+        self._col = doc.n_machines()
+
+    def redo(self) -> None:
+        self._doc._insert_machine(self._col, self._saved)
+
+    def undo(self) -> None:
+        self._saved = self._doc._remove_machine(self._col)
+
+
+class RemoveJob(QUndoCommand):
+    """Take job ``row`` out of the shop with its values, pins and place in the plan in
+    force; undo puts back exactly those (a pulled job)."""
+
+    def __init__(self, doc: ShopDocument, row: int, text: str):
+        super().__init__(text)
+        self._doc = doc
+        self._row = row
+        self._saved: RemovedRecord | None = None
+
+    def redo(self) -> None:
+        self._saved = self._doc._remove_job(self._row)
+
+    def undo(self) -> None:
+        self._doc._insert_job(self._row, self._saved)

@@ -14,7 +14,7 @@ from PySide6.QtWidgets import QInputDialog
 
 from dispatcher.shop import DONE, MAINTENANCE, MUST, MUST_NOT, UP, Job, Machine
 from dispatcher.ui.clipboard import PasteError, copy_block, paste_changes
-from dispatcher.ui.edits import ReplaceShop, SetJobField, SetJobsState, SetMachineFields, SetPin, SetValues
+from dispatcher.ui.edits import AddJob, AddMachine, SetJobField, SetJobsState, SetMachineFields, SetPin, SetValues
 from dispatcher.ui.grid_model import FIRST_MACHINE_COL
 
 
@@ -101,9 +101,8 @@ class GridEdits(QObject):
         if not name or name in self.doc.shop.job_names():
             self.show_warning(f"job name {name!r} is empty or already used")
             return False
-        shop = self.doc.shop.copy()
-        shop.jobs.append(Job(id=_new_id("J", [j.id for j in shop.jobs]), name=name))
-        self.doc.undo_stack.push(ReplaceShop(self.doc, shop, f"Add job {name}"))
+        job = Job(id=_new_id("J", [j.id for j in self.doc.shop.jobs]), name=name)
+        self.doc.undo_stack.push(AddJob(self.doc, job, f"Add job {name}"))
         self.view.setCurrentIndex(self.model.index(self.doc.n_jobs() - 1, FIRST_MACHINE_COL))
         self.status(f"Added {name}: type its values; Ctrl+R if it is a rush job", 8000)
         return True
@@ -118,9 +117,8 @@ class GridEdits(QObject):
         if not name or name in self.doc.shop.machine_names():
             self.show_warning(f"machine name {name!r} is empty or already used")
             return False
-        shop = self.doc.shop.copy()
-        shop.machines.append(Machine(id=_new_id("M", [m.id for m in shop.machines]), name=name))
-        self.doc.undo_stack.push(ReplaceShop(self.doc, shop, f"Add machine {name}"))
+        machine = Machine(id=_new_id("M", [m.id for m in self.doc.shop.machines]), name=name)
+        self.doc.undo_stack.push(AddMachine(self.doc, machine, f"Add machine {name}"))
         return True
 
     def job_done(self) -> None:

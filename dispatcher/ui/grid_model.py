@@ -59,6 +59,16 @@ class GridModel(QAbstractTableModel):
         doc.cells_changed.connect(self._on_cells)
         doc.jobs_changed.connect(self._on_jobs)
         doc.machines_changed.connect(self._on_machines)
+        doc.job_inserting.connect(lambda r: self.beginInsertRows(QModelIndex(), r, r))
+        doc.job_inserted.connect(lambda r: self._after_rows(r, +1))
+        doc.job_removing.connect(lambda r: self.beginRemoveRows(QModelIndex(), r, r))
+        doc.job_removed.connect(lambda r: self._after_rows(r, -1))
+        doc.machine_inserting.connect(lambda k: self.beginInsertColumns(
+            QModelIndex(), FIRST_MACHINE_COL + k, FIRST_MACHINE_COL + k))
+        doc.machine_inserted.connect(lambda k: self._after_columns(k, +1))
+        doc.machine_removing.connect(lambda k: self.beginRemoveColumns(
+            QModelIndex(), FIRST_MACHINE_COL + k, FIRST_MACHINE_COL + k))
+        doc.machine_removed.connect(lambda k: self._after_columns(k, -1))
 
     # ---- shape ----------------------------------------------------------------------------
     def rowCount(self, parent: QModelIndex | QPersistentModelIndex = QModelIndex()) -> int:
@@ -367,6 +377,31 @@ class GridModel(QAbstractTableModel):
         return True
 
     # ---- document signals -----------------------------------------------------------------
+    def _after_rows(self, row: int, step: int) -> None:
+        """Shift the plan marks past an inserted (+1) or removed (-1) job row, then end the
+        insert or remove (the next solve brings the new plan)."""
+        def moved(r: int) -> int:
+            return r + step if r >= row else r
+        gone = row if step < 0 else -1
+        self._planned = {moved(r): c for r, c in self._planned.items() if r != gone}
+        self._running = {moved(r): c for r, c in self._running.items() if r != gone}
+        self._waiting = {moved(r) for r in self._waiting if r != gone}
+        if step > 0:
+            self.endInsertRows()
+        else:
+            self.endRemoveRows()
+
+    def _after_columns(self, col: int, step: int) -> None:
+        def moved(c: int) -> int:
+            return c + step if c >= col else c
+        gone = col if step < 0 else -1
+        self._planned = {r: moved(c) for r, c in self._planned.items() if c != gone}
+        self._running = {r: moved(c) for r, c in self._running.items() if c != gone}
+        if step > 0:
+            self.endInsertColumns()
+        else:
+            self.endRemoveColumns()
+
     def _on_reset(self) -> None:
         self.beginResetModel()
         self._plan, self._planned, self._running, self._waiting = None, {}, {}, set()

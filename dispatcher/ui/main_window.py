@@ -305,7 +305,7 @@ class MainWindow(QMainWindow):
         self.plan_panel.objective_changed.connect(self.set_objective)
         self.plan_panel.mode_changed.connect(self.set_mode)
         self.runner.progress.connect(self.plan_panel.show_progress_text)
-        self.plan_panel.cancel_requested.connect(self.runner.cancel)
+        self.plan_panel.cancel_requested.connect(self.cancel_solve)
         self.view.cell_menu_requested.connect(self._cell_menu)
         self.view.machine_menu_requested.connect(self._machine_menu)
         self.view.job_menu_requested.connect(self._job_menu)
@@ -383,9 +383,15 @@ class MainWindow(QMainWindow):
             self.plan_panel.show_note(outcome.problem)
         self.plan_shown.emit(outcome.plan)
 
+    def runners(self) -> list[BackgroundRunner]:
+        """The background runners of the window and its parts."""
+        return [self.runner, self.whatif_tab.runner, self.alternatives_tab.runner]
+
     def cancel_solve(self) -> None:
-        """Stop waiting for the solve running now (Esc, the plan panel's Cancel)."""
-        self.runner.cancel()
+        """Stop the solve running now, and the what-if and ranking jobs (Esc, the plan
+        panel's Cancel)."""
+        for runner in self.runners():
+            runner.cancel()
 
     def show_plan_in_force(self, plan: Plan | ShiftFill, what: str) -> None:
         """Show the plan just put in force (not a fresh solve of the same shop, which would
@@ -464,34 +470,35 @@ class MainWindow(QMainWindow):
         if not self.files.maybe_keep_changes():
             event.ignore()
             return
-        self.runner.cancel()
-        self.runner.wait_idle()
+        # Every runner stops at once; a job still finishing emits into nothing (see
+        # worker.BackgroundRunner), so closing never waits for a long solve.
+        for runner in self.runners():
+            runner.shutdown()
         self.files.shutdown()
         self.files.discard_autosave()
         event.accept()
 
     # ---- context menus ---------------------------------------------------------------------------
-    def _cell_menu(self, pos) -> None:
+    def _popup(self, actions, pos) -> QMenu:
+        """A context menu of ``actions`` (None: separator), deleted once it closes."""
         menu = QMenu(self)
-        for a in (self.act_pin, self.act_forbid, self.act_unpin, self.act_cannot, None,
-                  self.act_copy, self.act_copy_names, self.act_paste, None,
-                  self.act_rush, self.act_pull, self.act_penalty, self.act_done, None, self.act_down, self.act_up, self.act_slots):
+        menu.setAttribute(Qt.WidgetAttribute.WA_DeleteOnClose)
+        for a in actions:
             menu.addSeparator() if a is None else menu.addAction(a)
         menu.popup(pos)
+        return menu
 
-    def _machine_menu(self, col: int, pos) -> None:
+    def _cell_menu(self, pos) -> QMenu:
+        return self._popup((self.act_pin, self.act_forbid, self.act_unpin, self.act_cannot, None,
+                            self.act_copy, self.act_copy_names, self.act_paste, None,
+                            self.act_rush, self.act_pull, self.act_penalty, self.act_done, None,
+                            self.act_down, self.act_up, self.act_slots), pos)
+
+    def _machine_menu(self, col: int, pos) -> QMenu:
         self.view.setCurrentIndex(self.model.index(max(self.view.current_row() or 0, 0),
                                                     FIRST_MACHINE_COL + col))
-        menu = QMenu(self)
-        for a in (self.act_down, self.act_up, self.act_maint, self.act_slots):
-            menu.addAction(a)
-        menu.popup(pos)
+        return self._popup((self.act_down, self.act_up, self.act_maint, self.act_slots), pos)
 
-    def _job_menu(self, row: int, pos) -> None:
+    def _job_menu(self, row: int, pos) -> QMenu:
         self.view.setCurrentIndex(self.model.index(row, max(self.view.currentIndex().column(), 0)))
-        menu = QMenu(self)
-        menu.addAction(self.act_rush)
-        menu.addAction(self.act_pull)
-        menu.addAction(self.act_penalty)
-        menu.addAction(self.act_done)
-        menu.popup(pos)
+        return self._popup((self.act_rush, self.act_pull, self.act_penalty, self.act_done), pos)

@@ -7,7 +7,9 @@ not the newest is discarded, so a slow, stale solve can never overwrite a newer 
 
 Cancellation is explicit: :meth:`BackgroundRunner.cancel` sets the running job's cancel
 event (computations that look at it stop early), discards its result and reports
-``cancelled``. Long computations (over :data:`PROGRESS_AFTER_MS`) report ``slow`` so the
+``cancelled``. A newer request also sets the running job's cancel event (its result would
+be discarded anyway), so a superseded whole-shift solve or ranking stops early instead of
+holding the pool thread. :meth:`BackgroundRunner.shutdown` cancels without waiting. Long computations (over :data:`PROGRESS_AFTER_MS`) report ``slow`` so the
 window can show progress and a cancel button.
 """
 
@@ -82,7 +84,9 @@ computations submitted ``with_progress``.
     def __init__(self, parent: QObject | None = None, pool: QThreadPool | None = None):
         super().__init__(parent)
         self._pool = pool or QThreadPool.globalInstance()
-        self._signals = _Signals(self)
+        # No Qt parent: each job keeps a reference, so a job finishing after the runner
+        # (and its window) is gone emits on a live object that nobody listens to.
+        self._signals = _Signals()
         self._signals.done.connect(self._on_done)
         self._signals.failed.connect(self._on_failed)
         self._signals.progress.connect(self._on_progress)
@@ -109,6 +113,8 @@ computations submitted ``with_progress``.
         Older waiting requests are dropped."""
         self._generation += 1
         self._pending = _Request(self._generation, label, fn, with_progress)
+        if self._running_cancel is not None:
+            self._running_cancel.set()   # superseded: its result would be dropped
         if self._running is None:
             self._start_pending()
         return self._generation
@@ -130,8 +136,20 @@ computations submitted ``with_progress``.
         self._generation += 1
         self._slow_timer.stop()
 
+    def shutdown(self) -> None:
+        """Cancel the running job and drop the waiting one, reporting nothing (closing).
+        The runner is idle at once; the cancelled job's result, if it still comes, is
+        dropped."""
+        self._pending = None
+        if self._running_cancel is not None:
+            self._running_cancel.set()
+        self._running = None
+        self._running_cancel = None
+        self._generation += 1
+        self._slow_timer.stop()
+
     def wait_idle(self, timeout_ms: int = 30_000) -> bool:
-        """Block until the pool thread is done (for tests and shutdown only)."""
+        """Block until the pool thread is done (for tests only)."""
         return self._pool.waitForDone(timeout_ms)
 
     def _start_pending(self) -> None:
