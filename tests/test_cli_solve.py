@@ -93,7 +93,8 @@ def test_sample_plain_output(capsys):
     expect = scipy_reference(values.astype(int), allowed)  # reference: scipy
     lines = out.splitlines()
     assert lines[0].split() == ["Job", "Machine", "Value"]
-    assert f"Total: {expect.total:g}" in lines
+    # The total says what it is made of (no wait penalties in a plain grid).
+    assert f"Total: {expect.total:g} (setups {expect.total:g} + wait penalties 0)" in lines
     assert any(line.startswith("Waiting jobs (4):") for line in lines)  # 12 jobs, 8 machines
     assert "Idle machines: none" in lines
     planned_rows = lines[2:lines.index("")]  # the table ends at the first blank line

@@ -301,7 +301,7 @@ def test_plain_grid_shop_equals_engine_and_json_round_trip():
     data = plan.to_json()
     assert set(data) == {"status", "objective", "total", "assignments", "waiting_jobs",
                          "idle_machines", "bottleneck", "waiting_reasons", "wait_groups",
-                         "certificate", "rush_waiting"}
+                         "certificate", "rush_waiting", "total_parts"}
     assert Plan.from_json(data) == plan
 
 

@@ -75,16 +75,45 @@ def plan_json(result: DispatchResult, jobs: list[str], machines: list[str]) -> d
         "wait_groups": groups,
         "certificate": {"verified": result.verify()},
         "rush_waiting": [],
+        "total_parts": _grid_parts(result),
     }
+
+
+def _grid_parts(result: DispatchResult) -> dict[str, Any]:
+    placed = result.machine_of_job >= 0
+    planned = float(result.values[np.flatnonzero(placed), result.machine_of_job[placed]].sum())
+    return {"planned": number(planned), "wait_penalties": number(result.wait_penalty[~placed].sum()),
+            "move_penalties": 0}
 
 
 def wait_reason_text(jobs: list[str], machines: list[str], job: int, witness) -> str:
     """One sentence a supervisor can check by hand."""
     if len(witness.machines) == 0:
         return f"{jobs[job]}: no available machine can run it"
+    if len(witness.machines) == len(machines) and len(witness.jobs) == len(jobs):
+        return (f"{jobs[job]}: more jobs than free machine slots ({len(jobs)} jobs, "
+                f"{len(machines)} free slots), so {witness.deficiency} of them must wait")
     names = ", ".join(machines[m] for m in witness.machines)
     return (f"{jobs[job]}: {len(witness.jobs)} jobs can only run on {len(witness.machines)} "
             f"machine(s) ({names}), so {witness.deficiency} of them must wait")
+
+
+def parts_word(objective: str, unit: str = "") -> str:
+    """What the planned values are called: setups, costs or values."""
+    if objective == "maximize":
+        return "values"
+    return "costs" if "cost" in unit.lower() or (unit and "min" not in unit and "setup" not in unit) \
+        else "setups"
+
+
+def parts_text(data: dict[str, Any], unit: str = "") -> str:
+    """`` (setups 208 + wait penalties 210)``: what a plan's total is made of."""
+    parts = data.get("total_parts")
+    if not parts:
+        return ""
+    sign = "-" if data["objective"] == "maximize" else "+"
+    return (f" ({parts_word(data['objective'], unit)} {parts['planned']:g} {sign} wait "
+            f"penalties {parts['wait_penalties']:g})")
 
 
 def print_json(obj: Any) -> None:
@@ -111,15 +140,19 @@ def print_plan(data: dict[str, Any], unit: str = "", marks: dict[str, str] | Non
     print()
     if data["waiting_jobs"]:
         print(f"Waiting jobs ({len(data['waiting_jobs'])}):")
+        # One sentence per reason: jobs of one group share it (the sheet does the same).
+        by_reason: dict[str, list[str]] = {}
         for name in data["waiting_jobs"]:
             reason = data.get("waiting_reasons", {}).get(name, {}).get("text", "")
-            print(f"  {tagged(name)}" + (f"  - {reason.split(': ', 1)[-1]}" if reason else ""))
+            by_reason.setdefault(reason.split(": ", 1)[-1] if reason else "", []).append(name)
+        for why, names in by_reason.items():
+            print("  " + ", ".join(tagged(n) for n in names) + (f"  - {why}" if why else ""))
     else:
         print("Waiting jobs: none")
     idle = data["idle_machines"]
     print(f"Idle machines: {', '.join(idle) if idle else 'none'}")
     label = {"total": "Total", "maximize": "Total value", "bottleneck": "Total"}[data["objective"]]
-    print(f"{label}: {data['total']:g}")
+    print(f"{label}: {data['total']:g}" + parts_text(data, unit))
     if data.get("bottleneck") is not None:
         print(f"Largest single value: {data['bottleneck']:g}")
     cert = data.get("certificate", {})

@@ -4,7 +4,8 @@
 * ``convert GRID.csv SHOP.dshop --into OLD.dshop``: merge the grid into an existing shop,
   matching jobs and machines by name, and report what was added, changed and unmatched;
 * ``convert SHOP.dshop GRID.csv|.xlsx``: the shop's grid as a grid file;
-* ``convert SHOP.dshop PLAN.csv|.xlsx --plan``: the shop's solved plan as a table.
+* ``convert SHOP.dshop PLAN.csv|.xlsx --plan``: the shop's plan in force as a table (its
+  best plan, marked as a draft on stderr, when the document holds none).
 
 Nothing is written when the input has a problem; files are replaced in one step.
 """
@@ -25,6 +26,7 @@ from dispatcher.io.spreadsheet import (
     export_plan,
     import_grid_file,
 )
+from dispatcher.shop.in_force import plan_in_force
 
 
 def register(sub: argparse._SubParsersAction) -> None:
@@ -37,7 +39,8 @@ def register(sub: argparse._SubParsersAction) -> None:
     p.add_argument("--into", metavar="SHOP", default=None,
                    help="merge the grid into this existing shop document (names matched)")
     p.add_argument("--plan", action="store_true",
-                   help="from a shop document: write its solved plan instead of its grid")
+                   help="from a shop document: write its plan in force (else its best plan) "
+                   "instead of its grid")
     p.set_defaults(func=run)
 
 
@@ -54,7 +57,12 @@ def run(args: argparse.Namespace) -> int:
             raise CliError("--into applies when reading a grid file into a shop document")
         shop = read_shop_arg(src)
         if args.plan:
-            export_plan(solve_shop_arg(shop, src, "total"), out, shop)
+            # The plan in force is the plan; a document without one gets its best plan.
+            plan = plan_in_force(shop, source=src) or solve_shop_arg(shop, src, "total")
+            export_plan(plan, out, shop)
+            what = ("the plan in force" if plan.status == "in force"
+                    else "the best plan (draft: the document holds no plan in force)")
+            print(f"note: wrote {what}", file=sys.stderr)
         else:
             export_grid(shop, out)
             print("note: a grid file holds names and values only; states, pins, rush flags "

@@ -13,7 +13,7 @@ import datetime as dt
 import json
 from pathlib import Path
 
-from dispatcher.commands.common import CliError, print_json
+from dispatcher.commands.common import CliError, parts_word, print_json
 from dispatcher.commands.history import (
     add_record_arguments,
     check_record_arguments,
@@ -153,9 +153,15 @@ def print_outcome(outcome: ShopRedispatch, args: argparse.Namespace) -> None:
         print("Changes against the plan in force: none")
     if outcome.machines_now_idle:
         print("Machines now idle: " + ", ".join(outcome.machines_now_idle))
-    print(f"Total in force (on the shop after the event): {outcome.total_in_force:g}")
-    print(f"Change in total: {outcome.total_change:+g}"
-          + (f" (plus move penalties paid: {outcome.move_penalties_paid:g})"
+    word = parts_word(outcome.plan.objective, outcome.shop.unit.label())
+    planned, waits = outcome.in_force_parts
+    sign = "-" if outcome.plan.objective == "maximize" else "+"
+    print(f"Total in force (on the shop after the event): {outcome.total_in_force:g} "
+          f"({word} {planned:g} {sign} wait penalties {waits:g})")
+    parts = outcome.change_parts()
+    print(f"Change in total: {outcome.total_change:+g} ({word} {parts['planned']:+g}, wait "
+          f"penalties {parts['wait_penalties']:+g})"
+          + (f"; move penalties paid apart: {outcome.move_penalties_paid:g}"
              if outcome.move_penalties_paid else ""))
     named = {ev[1] for ev in args.events if ev[0] in ("down", "up")}
     for name in outcome.machines_down:

@@ -3,8 +3,11 @@
 ``dispatcher sheet SHOP [--decision N|latest] [--history PATH] [--pdf OUT.pdf]
 [--paper a4|letter] [--fill-shift [--time-limit SECONDS]]``
 
-Without ``--decision`` the shop is solved now (least total; one round, or with
-``--fill-shift`` the whole shift) and the sheet is marked as a draft that is not recorded. With ``--decision`` the sheet prints that recorded decision:
+Without ``--decision`` the sheet prints the document's plan in force when it holds one
+(with the number of the recorded decision that put it in force, when the history has it);
+otherwise the shop is solved now (least total; one round, or with ``--fill-shift`` the
+whole shift) and the sheet is marked as a draft that is not recorded. With ``--decision``
+the sheet prints that recorded decision:
 its shop snapshot and plan, number, time and supervisor; the decision must belong to
 the shop named by SHOP. Without ``--pdf`` the sheet is printed as text on stdout.
 
@@ -22,6 +25,7 @@ from dispatcher.commands.shop_input import is_shop_document, read_shop_arg, solv
 from dispatcher.io.grid import read_grid
 from dispatcher.io.shopfile import ShopFileError, load_shop
 from dispatcher.shop import Plan, PlanFormatError, Shop, shop_from_grid
+from dispatcher.shop.in_force import plan_in_force
 from dispatcher.sheet.build import build_sheet, run_order
 from dispatcher.sheet.content import SheetContent, sheet_text
 
@@ -109,8 +113,37 @@ def make_content(args: argparse.Namespace) -> SheetContent:
         return build_sheet(shop, _filled(shop, args.shop, args.time_limit))
     if args.time_limit is not None:
         raise CliError("--time-limit applies to --fill-shift only")
+    in_force = plan_in_force(shop, source=args.shop)
+    if in_force is not None:
+        # The plan in force is the plan: print it, with its decision number when the
+        # history holds the decision that put it in force.
+        return build_sheet(shop, in_force, _decision_in_force(shop, args.history), in_force=True)
     plan = solve_shop_arg(shop, args.shop, "total")
     return build_sheet(shop, plan)
+
+
+def _decision_in_force(shop: Shop, history: str | None) -> Any | None:
+    """The newest recorded decision of this shop whose plan is the plan in force, if the
+    history can be read (a sheet is printed without it otherwise)."""
+    try:
+        from dispatcher.history import open_history
+        from dispatcher.errors import DispatcherError
+    except ImportError:  # pragma: no cover - a build without the history package
+        return None
+    try:
+        store = open_history(history)
+        decision = store.latest(shop=shop.name)
+    except (DispatcherError, OSError):
+        return None
+    if decision is None:
+        return None
+    try:
+        recorded = Plan.from_json(decision.plan).in_force(shop)
+    except (PlanFormatError, KeyError):
+        return None
+    same = {m: list(j) for m, j in recorded.items()} == \
+        {m: list(j) for m, j in shop.plan_in_force.items() if j}
+    return decision if same else None
 
 
 def _filled(shop: Shop, source: str, time_limit: float | None) -> Any:

@@ -164,7 +164,8 @@ def _entries(plan: Any) -> dict[str, list[tuple[str, float | None, bool]]]:
 
 def build_sheet(shop: Shop, plan: Any, decision: Any | None = None, *,
                 order: dict[str, list[str]] | None = None,
-                printed_at: dt.datetime | None = None, supervisor: str = "") -> SheetContent:
+                printed_at: dt.datetime | None = None, supervisor: str = "",
+                in_force: bool = False) -> SheetContent:
     """Everything the sheet prints for ``plan`` in ``shop``.
 
     ``plan`` is a :class:`dispatcher.shop.Plan` or a filled-shift plan (several jobs per
@@ -176,7 +177,8 @@ def build_sheet(shop: Shop, plan: Any, decision: Any | None = None, *,
 
     ``decision`` (optional) is the recorded decision the plan comes from; its number, time
     and supervisor go into the header. Without it the sheet says the plan is not recorded
-    and prints ``supervisor`` (or a blank line to fill in).
+    and prints ``supervisor`` (or a blank line to fill in). ``in_force``: the plan is the
+    shop's plan in force (not a draft, even without a recorded decision).
     """
     unit = value_unit(shop)
     by_machine = _entries(plan)
@@ -230,6 +232,7 @@ def build_sheet(shop: Shop, plan: Any, decision: Any | None = None, *,
         jobs_continuing=len(plan.running),
         jobs_waiting=len(plan.waiting_jobs),
         total=plan.total,
+        planned=float(sum(getattr(a, "cost", 0.0) or 0.0 for a in plan.assignments)),
         unit=unit,
         objective=objective_phrase(shop, plan.objective),
         status=_status(plan),
@@ -252,4 +255,6 @@ def build_sheet(shop: Shop, plan: Any, decision: Any | None = None, *,
         safety=SAFETY_CAUTIONS,
         value_heading=value_heading(shop, plan.objective),
         shop_note=shop.description,
+        in_force=in_force,
+        maximize=plan.objective == "maximize",
     )

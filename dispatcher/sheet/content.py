@@ -110,6 +110,7 @@ class SheetTotals:
     jobs_continuing: int = 0
     jobs_waiting: int = 0
     total: float | None = None
+    planned: float | None = None   # the grid values of the jobs dispatched (setups, costs)
     unit: str = ""
     objective: str = ""
     status: str = ""
@@ -140,6 +141,31 @@ class SheetContent:
     safety: tuple[str, ...] = SAFETY_CAUTIONS
     value_heading: str = "Setup"
     shop_note: str = ""
+    in_force: bool = False   # the shop's plan in force (else a draft when not recorded)
+    maximize: bool = False
+
+    def decision_line(self) -> str:
+        """``Decision #12 of ... (plan in force)`` / ``Plan in force (...)`` / draft."""
+        if self.decision_number is not None:
+            when = format_time(self.decision_time)
+            return (f"Decision #{self.decision_number}" + (f" of {when}" if when else "")
+                    + (" (plan in force)" if self.in_force else ""))
+        if self.in_force:
+            return "Plan in force (its decision is not in the history read)"
+        return "Decision: not recorded (draft plan)"
+
+    def total_line(self) -> str:
+        """``Total (least total setup): 418 min = setups 208 + wait penalties 210``."""
+        t = self.totals
+        head = f"Total ({t.objective or 'plan'}): {format_value(t.total, t.unit) or '-'}"
+        if t.total is not None and t.planned is not None:
+            word = "values" if self.maximize else (
+                "costs" if "cost" in (t.objective or "") else "setups")
+            waits = (t.planned - t.total) if self.maximize else (t.total - t.planned)
+            sign = "-" if self.maximize else "+"
+            head += (f" = {word} {format_value(t.planned, t.unit)} {sign} wait penalties "
+                     f"{format_value(round(waits, 9), t.unit)}")
+        return head
 
     def dispatched_jobs(self) -> list[SheetJob]:
         """Every job on every machine, in sheet order."""
@@ -174,11 +200,7 @@ def sheet_text(content: SheetContent) -> str:
     date = content.shift_date.isoformat() if content.shift_date else "-"
     out.append(f"Date {date}   Shift {content.shift_label or '-'}   "
                f"Supervisor {content.supervisor or '-'}")
-    if content.decision_number is not None:
-        when = format_time(content.decision_time)
-        out.append(f"Decision #{content.decision_number}" + (f" of {when}" if when else ""))
-    else:
-        out.append("Decision: not recorded (draft plan)")
+    out.append(content.decision_line())
     out.append(f"Printed {format_time(content.printed_at)}")
     out.append("")
     out.append(f"Machines and jobs ({len(content.machines)} machines, "
@@ -220,8 +242,7 @@ def sheet_text(content: SheetContent) -> str:
                    + (f" since {since}" if since else "") + (f": {d.note}" if d.note else ""))
     t = content.totals
     out.append("")
-    out.append(f"Total ({t.objective or 'plan'}): {format_value(t.total, t.unit) or '-'}"
-               + (f"   [{t.status}]" if t.status else ""))
+    out.append(content.total_line() + (f"   [{t.status}]" if t.status else ""))
     out.append("")
     out.append("SAFETY:")
     out.extend(f"  {k}. {text}" for k, text in enumerate(content.safety, start=1))

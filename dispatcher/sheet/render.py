@@ -275,7 +275,7 @@ def sheet_body_html(content: SheetContent) -> str:
         ("Jobs already running (carry on)", str(t.jobs_continuing)),
         ("Jobs waiting", str(t.jobs_waiting)),
         ("Plan total" + (f" ({t.objective})" if t.objective else ""),
-         format_value(t.total, t.unit) or "-"),
+         content.total_line().split(": ", 1)[-1]),
     ]
     if t.status:
         total_rows.append(("Plan status", t.status))
@@ -360,10 +360,8 @@ def _document(html_text: str, width: float, pt: float, style: str = "") -> QText
 
 
 def _header_html(content: SheetContent, page: int, pages: int) -> str:
-    decision = (f"Decision #{content.decision_number}"
-                + (f" of {_e(format_time(content.decision_time))}" if content.decision_time else "")
-                if content.decision_number is not None
-                else "Decision: <b>not recorded</b> (draft plan)")
+    decision = (_e(content.decision_line()) if content.decision_number is not None
+                or content.in_force else "Decision: <b>not recorded</b> (draft plan)")
     date = content.shift_date.isoformat() if content.shift_date else ""
     return (
         '<table width="100%" cellspacing=0 cellpadding=0><tr>'

@@ -57,6 +57,7 @@ def contract_json(plan: Any, *, bottleneck: float | None, certificate: dict[str,
         **reasons_json(plan.waiting_reasons),
         "certificate": certificate,
         "rush_waiting": list(getattr(plan, "rush_waiting", [])),
+        "total_parts": total_parts(plan),
     }
     rush_groups = getattr(plan, "rush_groups", [])
     if rush_groups:
@@ -69,6 +70,18 @@ def contract_json(plan: Any, *, bottleneck: float | None, certificate: dict[str,
     if plan.unavailable_machines:
         data["unavailable_machines"] = list(plan.unavailable_machines)
     return data
+
+
+def total_parts(plan: Any, move_penalties: float = 0.0) -> dict[str, int | float]:
+    """What ``total`` is made of: ``planned`` (grid values of the jobs dispatched: setup
+    minutes, cost or value by the shop's unit), ``wait_penalties`` (of the jobs left
+    waiting) and ``move_penalties`` (paid by a re-dispatch; reported apart, not in
+    ``total``). ``total`` is planned + wait penalties, or planned - wait penalties when
+    maximising."""
+    planned = float(sum(a.cost for a in plan.assignments))
+    wait = plan.total - planned if plan.objective != "maximize" else planned - plan.total
+    return {"planned": json_number(planned), "wait_penalties": json_number(round(wait, 9)),
+            "move_penalties": json_number(move_penalties)}
 
 
 def reasons_json(reasons: dict[str, "WaitReason"]) -> dict[str, Any]:

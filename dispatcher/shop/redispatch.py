@@ -48,6 +48,7 @@ from dispatcher.engine import DispatchResult, InfeasibleError, redispatch, solve
 
 from .model import DONE, DOWN, MUST, MUST_NOT, RUNNING, UP, WAITING, Problem, Shop, ShopError
 from .plan import Assignment, Plan, json_number
+from .in_force import in_force_problems
 from .translate import ShopProblem, plan_from_result
 from .validate import check_shop
 
@@ -98,10 +99,19 @@ class ShopRedispatch:
     result: DispatchResult = field(repr=False)
     left_round: list[Change] = field(default_factory=list)
     machines_down: list[str] = field(default_factory=list)
+    in_force_parts: tuple[float, float] = (0.0, 0.0)  # grid values, wait penalties
+
+    def change_parts(self) -> dict[str, float]:
+        """The change in total split: planned values, wait penalties; move penalties paid."""
+        parts = self.plan.to_json()["total_parts"]
+        return {"planned": parts["planned"] - self.in_force_parts[0],
+                "wait_penalties": parts["wait_penalties"] - self.in_force_parts[1],
+                "move_penalties": self.move_penalties_paid}
 
     def to_json(self) -> dict[str, Any]:
         """The solve contract of the new plan plus ``changes`` and ``difference``."""
         data = self.plan.to_json()
+        data["total_parts"]["move_penalties"] = json_number(self.move_penalties_paid)
         data["changes"] = [_change_json(c) for c in self.changes]
         data["difference"] = {
             "moved": [{"job": c.job, "from": c.before, "to": c.after} for c in self.moved],
@@ -111,6 +121,10 @@ class ShopRedispatch:
             "machines_now_idle": list(self.machines_now_idle),
             "machines_down": list(self.machines_down),
             "total_in_force": json_number(self.total_in_force),
+            "total_in_force_parts": {"planned": json_number(self.in_force_parts[0]),
+                                     "wait_penalties": json_number(self.in_force_parts[1])},
+            "total_change_parts": {k: json_number(round(v, 9))
+                                   for k, v in self.change_parts().items()},
             "total_change": json_number(self.total_change),
             "move_penalties_paid": json_number(self.move_penalties_paid),
         }
@@ -282,6 +296,8 @@ def _in_force_machines(shop: Shop, plan_in_force: Mapping[str, Sequence[str]] | 
                                         f"job id {jid!r} is not a job of the shop"))
             else:
                 out[jpos[jid]] = mpos[mid]
+    problems += [p for p in in_force_problems(shop, pif, "plan in force")
+                 if "is not a machine" not in p.message and "is not a job" not in p.message]
     if problems:
         raise ShopError(problems, source)
     for i, j in enumerate(shop.jobs):
@@ -389,16 +405,17 @@ def _left_how(events: Sequence[ShopEvent], after: Shop) -> dict[int, str]:
 
 
 def total_in_force(shop: Shop, in_force: Mapping[int, int], rows: Sequence[int],
-                   maximize: bool) -> float:
+                   maximize: bool) -> tuple[float, float, float]:
     """The plan in force evaluated on ``shop`` (the shop after the event) for the jobs in
     ``rows`` (waiting jobs of the round): a job whose machine in force is up and can run it
     counts its grid value, every other job its wait penalty (subtracted when maximising).
     Free slots are not re-checked: the plan in force already fitted its machines, and the
-    event only takes slots away from machines that go down."""
+    event only takes slots away from machines that go down. Returns the total, the grid
+    values it counts and the wait penalties it counts."""
     values_all, allowed_all = shop.matrix()
     pinned_away = {(p.job, p.machine) for p in shop.pins if p.kind == MUST_NOT}
     pinned_to = {p.job: p.machine for p in shop.pins if p.kind == MUST}
-    total = 0.0
+    planned = waiting = 0.0
     for i in rows:
         job = shop.jobs[i]
         k = in_force.get(i)
@@ -406,10 +423,10 @@ def total_in_force(shop: Shop, in_force: Mapping[int, int], rows: Sequence[int],
             and (job.id, shop.machines[k].id) not in pinned_away \
             and pinned_to.get(job.id, shop.machines[k].id) == shop.machines[k].id
         if ok:
-            total += float(values_all[i, k])
+            planned += float(values_all[i, k])
         else:
-            total += -job.wait_penalty if maximize else job.wait_penalty
-    return total
+            waiting += job.wait_penalty
+    return (planned - waiting if maximize else planned + waiting), planned, waiting
 
 
 def _difference(shop: Shop, after: Shop, in_force: Mapping[int, int], left: set[int],
@@ -465,10 +482,11 @@ def _difference(shop: Shop, after: Shop, in_force: Mapping[int, int], left: set[
     # The engine's total includes the move penalties paid (and, maximising, the shift).
     total = float(result.total) - post.shift + (move_paid if maximize else -move_paid)
     plan = replace(plan, total=total)
-    before = total_in_force(after, in_force, post.rows, maximize)
+    before, planned_before, wait_before = total_in_force(after, in_force, post.rows, maximize)
     return ShopRedispatch(plan=plan, shop=after, changes=changes, moved=moved,
                           newly_dispatched=newly, now_waiting=waiting,
                           machines_now_idle=idle_now, total_in_force=before,
                           total_change=total - before,
                           move_penalties_paid=move_paid, result=result, left_round=gone,
-                          machines_down=[m.name for m in machines if m.state == DOWN])
+                          machines_down=[m.name for m in machines if m.state == DOWN],
+                          in_force_parts=(planned_before, wait_before))

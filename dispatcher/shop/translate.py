@@ -233,6 +233,9 @@ def _wait_reasons(problem: ShopProblem, result: DispatchResult) -> dict[str, Wai
         machines = _unique(problem.machine_name(int(c)) for c in w.machines)
         if len(w.machines) == 0:
             why = None
+        elif len(w.machines) == len(problem.columns) and len(w.jobs) == len(problem.rows):
+            why = (f"more jobs than free machine slots ({len(jobs)} jobs, {len(w.machines)} "
+                   f"free slots), so {w.deficiency} of them must wait")
         elif len(machines) == len(w.machines):
             why = (f"{len(jobs)} jobs can only run on {len(machines)} machine(s) "
                    f"({', '.join(machines)}), so {w.deficiency} of them must wait")

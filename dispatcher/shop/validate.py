@@ -135,6 +135,9 @@ def shop_problems(shop: Shop) -> list[Problem]:
         where = f"plan_in_force, {shop.describe_machine(mid)}"
         if mid not in machine_ids:
             add(where, f"names unknown machine id {mid!r}")
+        elif len(jids) > shop.machine(mid).slots:
+            add(where, f"holds {len(jids)} jobs but the machine has {shop.machine(mid).slots} "
+                "slot(s)")
         for jid in jids:
             if jid not in job_ids:
                 add(where, f"names unknown job id {jid!r}")

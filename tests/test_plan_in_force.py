@@ -1,0 +1,147 @@
+"""The plan in force is the plan; totals say what they are made of.
+
+References: the plan in force written by hand into small invented shops, and the shop's
+own grid (sums of grid values and wait penalties recomputed here from the document).
+"""
+
+from __future__ import annotations
+
+import json
+from pathlib import Path
+
+import pytest
+
+from helpers_shops import small_shop
+
+from dispatcher.cli import main
+from dispatcher.io.shopfile import load_shop, save_shop
+from dispatcher.shop import ShopError, solve_shop
+from dispatcher.shop.in_force import plan_in_force
+
+SAMPLES = Path(__file__).resolve().parent.parent / "sample_shops"
+
+
+def test_sheet_prints_the_plan_in_force_not_a_fresh_solve(tmp_path, capsys):
+    # Regression: after "redispatch --rush ... --in-force" the sheet re-solved from scratch
+    # and showed a different plan. The plan in force here is not the cheapest on purpose.
+    shop = small_shop()
+    shop.plan_in_force = {"A": ["J1"], "B": ["J3"], "S": ["J4"]}  # WO-2 waits (penalty 30)
+    path = tmp_path / "cell.dshop"
+    save_shop(shop, path)
+    assert main(["sheet", str(path), "--history", str(tmp_path / "none.sqlite")]) == 0
+    out = capsys.readouterr().out
+    assert "Plan in force" in out and "draft" not in out
+    assert "Press B" in out and "WO-3" in out
+    # By hand: WO-3 on Press B (2) + WO-4 on the Saw (8) + WO-2 waits (30) = 40.
+    assert "Total (least total setup): 40 min = setups 10 min + wait penalties 30 min" in out
+    fresh = solve_shop(shop)
+    assert fresh.total != 40  # a fresh solve would have printed another plan
+
+
+def test_sheet_without_a_plan_in_force_is_a_draft(tmp_path, capsys):
+    shop = small_shop()
+    shop.plan_in_force = {}
+    path = tmp_path / "cell.dshop"
+    save_shop(shop, path)
+    assert main(["sheet", str(path)]) == 0
+    assert "Decision: not recorded (draft plan)" in capsys.readouterr().out
+
+
+def test_convert_plan_writes_the_plan_in_force(tmp_path, capsys):
+    shop = small_shop()
+    shop.plan_in_force = {"A": ["J1"], "B": ["J3"], "S": ["J4"]}
+    path = tmp_path / "cell.dshop"
+    save_shop(shop, path)
+    out = tmp_path / "plan.csv"
+    assert main(["convert", str(path), str(out), "--plan"]) == 0
+    assert "the plan in force" in capsys.readouterr().err
+    text = out.read_text(encoding="utf-8")
+    assert "WO-3" in text and "Press B" in text
+
+
+@pytest.mark.parametrize("pif, message", [
+    ({"A": ["J1"], "B": ["J2", "J3"]}, "holds 2 jobs but the machine has 1 slot"),
+    ({"A": ["J1"], "B": ["J2"], "S": ["J2"]}, "is also planned on"),
+    ({"A": ["J1"], "Q": ["J2"]}, "unknown machine id 'Q'"),
+    ({"A": ["J1"], "B": ["J9"]}, "unknown job id 'J9'"),
+])
+def test_plan_in_force_that_does_not_fit_is_refused_with_its_place(tmp_path, capsys, pif, message):
+    shop = small_shop()
+    shop.plan_in_force = pif
+    path = tmp_path / "cell.dshop"
+    path.write_text(json.dumps({**json.loads(_saved(shop, tmp_path)), "plan_in_force": pif}),
+                    encoding="utf-8")
+    assert main(["sheet", str(path)]) == 2
+    err = capsys.readouterr().err
+    assert f"{path}" in err and "plan_in_force" in err and message in err
+
+
+def _saved(shop, tmp_path) -> str:
+    ok = tmp_path / "ok.dshop"
+    shop.plan_in_force = {}
+    save_shop(shop, ok)
+    return ok.read_text(encoding="utf-8")
+
+
+def test_plan_file_with_a_job_that_cannot_run_on_its_machine_is_refused(tmp_path, capsys):
+    shop = small_shop()
+    path = tmp_path / "cell.dshop"
+    save_shop(shop, path)
+    plan = solve_shop(shop).to_json()
+    plan["assignments"] = [{"job": "WO-3", "machine": "Press A", "cost": 0}]
+    planfile = tmp_path / "plan.json"
+    planfile.write_text(json.dumps(plan), encoding="utf-8")
+    assert main(["redispatch", str(path), "--down", "Saw", "--plan", str(planfile)]) == 2
+    assert "the machine cannot run it" in capsys.readouterr().err
+
+
+def test_plan_in_force_reads_back_with_its_totals():
+    shop = small_shop()
+    plan = plan_in_force(shop)
+    assert plan is not None and plan.status == "in force"
+    # By hand: WO-2 on B (10) + WO-3 on the Saw (9) + WO-4 waits (1); WO-1 runs.
+    assert plan.total == 20
+    assert plan.to_json()["total_parts"] == {"planned": 19, "wait_penalties": 1,
+                                             "move_penalties": 0}
+    shop.plan_in_force = {"A": ["J1"], "B": ["J2", "J3"]}
+    with pytest.raises(ShopError, match="holds 2 jobs"):
+        plan_in_force(shop)
+
+
+def test_total_says_it_adds_setups_and_wait_penalties(capsys):
+    # Regression: "Total: 418 setup min" on the medium sample added 210 of wait penalties
+    # to 208 of setups without saying so.
+    shop = load_shop(SAMPLES / "medium_machining_shop.dshop")
+    shop.plan_in_force = {}
+    plan = solve_shop(shop)
+    planned = sum(a.cost for a in plan.assignments)  # recomputed from the plan's own pairs
+    waits = sum(shop.job_by_name(n).wait_penalty for n in plan.waiting_jobs)
+    assert plan.to_json()["total_parts"] == {"planned": planned, "wait_penalties": waits,
+                                             "move_penalties": 0}
+    assert main(["solve", str(SAMPLES / "medium_machining_shop.dshop")]) == 0
+    out = capsys.readouterr().out
+    assert f"Total: {planned + waits:g} (setups {planned:g} + wait penalties {waits:g})" in out
+
+
+def test_one_wait_reason_sentence_per_group(capsys):
+    # Regression: the same long sentence was repeated for every waiting job.
+    assert main(["solve", str(SAMPLES / "small_moulding_cell.dshop")]) == 0
+    out = capsys.readouterr().out
+    assert out.count("more jobs than free machine slots") == 1
+    assert "WO-7002 clip, WO-7005 bezel, WO-7008 spacer  - more jobs than free machine slots " \
+        "(8 jobs, 5 free slots), so 3 of them must wait" in out
+
+
+def test_redispatch_change_in_total_is_split(tmp_path, capsys):
+    shop = small_shop()
+    path = tmp_path / "cell.dshop"
+    save_shop(shop, path)
+    assert main(["redispatch", str(path), "--down", "Press B", "--json"]) == 0
+    data = json.loads(capsys.readouterr().out)
+    diff = data["difference"]
+    parts = diff["total_change_parts"]
+    assert parts["planned"] + parts["wait_penalties"] == pytest.approx(diff["total_change"])
+    assert data["total_parts"]["planned"] == sum(a["cost"] for a in data["assignments"])
+    assert main(["redispatch", str(path), "--down", "Press B"]) == 0
+    out = capsys.readouterr().out
+    assert "Change in total:" in out and "wait penalties" in out.split("Change in total:")[1]
