@@ -123,20 +123,25 @@ def print_json(obj: Any) -> None:
 
 def print_plan(data: dict[str, Any], unit: str = "", marks: dict[str, str] | None = None) -> None:
     """Readable table of a plan in the solve contract; ``marks`` adds a tag after a job's
-    name (rush, pinned)."""
+    name (rush, pinned). A plan of a shop with a crew gets an operator column."""
     marks = marks or {}
 
     def tagged(job: str) -> str:
         return f"{job} {marks[job]}" if job in marks else job
 
-    rows = [(tagged(a["job"]), a["machine"], f"{a['cost']:g}") for a in data["assignments"]]
-    head = ("Job", "Machine", f"Value{(' (' + unit + ')') if unit else ''}")
-    widths = [max(len(str(r[i])) for r in rows + [head]) for i in range(3)]
+    staffed = "staffing" in data
+    rows = [(tagged(a["job"]), a["machine"], f"{a['cost']:g}")
+            + ((a.get("operator") or "(runs unattended)",) if staffed else ())
+            for a in data["assignments"]]
+    head = ("Job", "Machine", f"Value{(' (' + unit + ')') if unit else ''}") \
+        + (("Operator",) if staffed else ())
+    widths = [max(len(str(r[i])) for r in rows + [head]) for i in range(len(head))]
     line = "  ".join(h.ljust(w) for h, w in zip(head, widths))
-    print(line)
+    print(line.rstrip())
     print("  ".join("-" * w for w in widths))
     for r in rows:
-        print(f"{r[0].ljust(widths[0])}  {r[1].ljust(widths[1])}  {r[2].rjust(widths[2])}")
+        cells = [r[0].ljust(widths[0]), r[1].ljust(widths[1]), r[2].rjust(widths[2])] + list(r[3:])
+        print("  ".join(cells))
     print()
     if data["waiting_jobs"]:
         print(f"Waiting jobs ({len(data['waiting_jobs'])}):")

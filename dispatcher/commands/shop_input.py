@@ -13,6 +13,7 @@ from pathlib import Path
 from dispatcher.commands.common import CliError, print_json, print_plan
 from dispatcher.io.shopfile import SHOP_SUFFIX, ShopFileError, load_shop, save_shop
 from dispatcher.shop import Plan, Shop, solve_shop
+from dispatcher.shop.staffed import staffing_lines
 
 SHOP_SUFFIXES = (SHOP_SUFFIX, ".json")
 
@@ -105,6 +106,9 @@ def print_shop_plan(plan: Plan, shop: Shop, as_json: bool) -> None:
     if plan.unavailable_machines:
         print("Not available: " + ", ".join(
             f"{m} ({shop.machine_by_name(m).state})" for m in plan.unavailable_machines))
+    if plan.staffing is not None:
+        for line in staffing_lines(plan.staffing):
+            print(line)
 
 
 def _marks(shop: Shop) -> dict[str, str]:

@@ -21,6 +21,7 @@ from pathlib import Path
 from typing import Any
 
 from dispatcher.atomic import atomic_write_bytes
+from dispatcher.io.crewfile import CREW_VERSION, crew_to_dict, has_crew, read_crew
 from dispatcher.shop.model import (
     Job,
     Machine,
@@ -35,12 +36,15 @@ from dispatcher.shop.plan import json_number
 from dispatcher.shop.validate import shop_problems
 
 FORMAT_NAME = "dispatcher-shop"
-FORMAT_VERSION = 1
+#: Newest format this program reads. A document is written with the lowest version that
+#: holds everything in it (:func:`_needed_version`), so older programs still open plain
+#: shops: version 2 added the crew block.
+FORMAT_VERSION = 2
 SHOP_SUFFIX = ".dshop"
 MAX_DOCUMENT_BYTES = 256 * 1024 * 1024
 
 _TOP = {"format", "format_version", "name", "description", "unit", "shift", "move_penalty",
-        "machines", "jobs", "grid", "hours", "pins", "plan_in_force"}
+        "machines", "jobs", "grid", "hours", "pins", "plan_in_force", "crew"}
 _UNIT = {"kind", "currency"}
 _SHIFT = {"date", "label", "start", "hours"}
 _MACHINE = {"id", "name", "state", "state_note", "state_changed", "slots", "shift_hours",
@@ -264,6 +268,11 @@ def shop_from_dict(data: Any, source: str = "shop document", *, check: bool = Tr
                 continue
             shop.plan_in_force[mid] = list(jids)
 
+    if "crew" in data:
+        if version < CREW_VERSION:
+            r.bad("field 'crew'", f"needs format_version {CREW_VERSION} or later (the document says {version})")
+        shop.crew = read_crew(r, data["crew"])
+
     problems = list(r.problems)
     if not problems and check:
         problems = shop_problems(shop)
@@ -360,9 +369,9 @@ def shop_to_dict(shop: Shop) -> dict[str, Any]:
             out.setdefault(jid, {})[mid] = json_number(d[(jid, mid)])
         return out
 
-    return {
+    data = {
         "format": FORMAT_NAME,
-        "format_version": FORMAT_VERSION,
+        "format_version": _needed_version(shop),
         "name": shop.name,
         "description": shop.description,
         "unit": {"kind": shop.unit.kind, "currency": shop.unit.currency},
@@ -385,6 +394,14 @@ def shop_to_dict(shop: Shop) -> dict[str, Any]:
                  for p in shop.pins],
         "plan_in_force": {mid: list(jids) for mid, jids in shop.plan_in_force.items()},
     }
+    if has_crew(shop.crew):
+        data["crew"] = crew_to_dict(shop.crew)
+    return data
+
+
+def _needed_version(shop: Shop) -> int:
+    """The lowest format version that holds everything in ``shop``."""
+    return CREW_VERSION if has_crew(shop.crew) else 1
 
 
 def dump_shop_text(shop: Shop) -> str:

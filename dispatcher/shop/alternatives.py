@@ -14,6 +14,7 @@ from dataclasses import dataclass
 from dispatcher.engine import DispatchResult
 from dispatcher.engine.ranking import ranked_plans
 
+from .crew import refuse_with_crew
 from .plan import Assignment, Plan
 from .planning import Cancelled
 
@@ -45,6 +46,7 @@ def alternative_plans(plan: Plan, count: int, cancel=None) -> list[Plan]:
     Raises ValueError for the bottleneck objective (the engine ranks total and maximize)
     and :class:`~dispatcher.shop.planning.Cancelled` when ``cancel`` is set.
     """
+    refuse_with_crew(plan.staffing is not None, "ranked alternative plans")
     problem, result = plan.problem, plan.result
     if problem is None or result is None:
         raise ValueError("this plan carries no solver result to rank alternatives from")

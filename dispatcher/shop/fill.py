@@ -36,6 +36,7 @@ from dispatcher.engine import (
     fill_shift,
 )
 
+from .crew import refuse_with_crew
 from .model import DONE, MUST, MUST_NOT, RUNNING, UP, Problem, Shop, ShopError
 from .plan import Assignment, RunningJob, WaitReason, contract_json, json_number
 from .translate import ShopInfeasibleError
@@ -112,6 +113,7 @@ def _json_float(x: float) -> int | float | None:
 
 def _check_fill(shop: Shop, source: str) -> None:
     """The shop's own checks, except that one machine may take several pinned jobs."""
+    refuse_with_crew(shop.crew.active, "filling the whole shift", source)
     relaxed = shop.copy()
     pinned = {}
     for p in relaxed.pins:

@@ -20,6 +20,8 @@ import numpy as np
 
 from dispatcher.errors import BadInputError
 
+from .crew import Crew
+
 # Job states.
 WAITING, RUNNING, DONE = "waiting", "running", "done"
 JOB_STATES = (WAITING, RUNNING, DONE)
@@ -164,6 +166,7 @@ class Shop:
     cannot run the job. ``hours`` optionally maps pairs to run hours (overriding
     ``job.run_hours * machine.speed_factor``). ``plan_in_force`` maps a machine id to the
     job ids it was given by the decision currently in force (empty when none recorded).
+    ``crew`` holds the operators (empty: plans ignore staffing, as for a plain grid).
     """
 
     name: str = ""
@@ -177,6 +180,7 @@ class Shop:
     pins: list[Pin] = field(default_factory=list)
     hours: dict[tuple[str, str], float] = field(default_factory=dict)
     plan_in_force: dict[str, list[str]] = field(default_factory=dict)
+    crew: Crew = field(default_factory=Crew)
 
     # ---- look-ups -------------------------------------------------------------------
     def job(self, job_id: str) -> Job:
@@ -289,6 +293,7 @@ class Shop:
             pins=[copy.copy(p) for p in self.pins],
             hours=dict(self.hours),
             plan_in_force={k: list(v) for k, v in self.plan_in_force.items()},
+            crew=self.crew.copy(),
         )
 
     def describe_job(self, job_id: str) -> str:

@@ -6,7 +6,10 @@ idle_machines, bottleneck, waiting_reasons and certificate. Two keys are added o
 shop has something to put in them, so a shop made from a plain grid prints exactly what
 the grid prints: ``running`` (jobs already running, which stay where they are:
 ``{"job", "machine", "since", "cost"}``) and ``unavailable_machines`` (down or under
-maintenance). :meth:`Plan.from_json` reads that object back, checking every field.
+maintenance). Shops with a crew (operators) add ``"operator"`` to every assignment and
+running job and a ``staffing`` summary (who minds which machines, shortages with their
+explanation, authorisations about to expire). :meth:`Plan.from_json` reads that object
+back, checking every field.
 
 ``rush_waiting`` (always written) lists rush and pinned jobs left waiting because no plan
 placing as many jobs places more of them; ``rush_groups`` (written when that list is not
@@ -45,12 +48,13 @@ def contract_json(plan: Any, *, bottleneck: float | None, certificate: dict[str,
     ``idle_machines``, ``waiting_reasons``, ``running`` and ``unavailable_machines``; the
     last two keys are written only when non-empty.
     """
+    staffing = getattr(plan, "staffing", None)
+    staffed = staffing is not None
     data: dict[str, Any] = {
         "status": plan.status,
         "objective": plan.objective,
         "total": json_number(plan.total),
-        "assignments": [{"job": a.job, "machine": a.machine, "cost": json_number(a.cost)}
-                        for a in plan.assignments],
+        "assignments": [_assignment_json(a, staffed) for a in plan.assignments],
         "waiting_jobs": list(plan.waiting_jobs),
         "idle_machines": list(plan.idle_machines),
         "bottleneck": None if bottleneck is None else json_number(bottleneck),
@@ -65,11 +69,21 @@ def contract_json(plan: Any, *, bottleneck: float | None, certificate: dict[str,
                                 "waiting": list(g.waiting), "text": g.text} for g in rush_groups]
     if plan.running:
         data["running"] = [{"job": r.job, "machine": r.machine, "since": r.since,
-                            "cost": None if r.cost is None else json_number(r.cost)}
+                            "cost": None if r.cost is None else json_number(r.cost),
+                            **({"operator": r.operator} if staffed else {})}
                            for r in plan.running]
     if plan.unavailable_machines:
         data["unavailable_machines"] = list(plan.unavailable_machines)
+    if staffed:
+        data["staffing"] = staffing
     return data
+
+
+def _assignment_json(a: Assignment, staffed: bool) -> dict[str, Any]:
+    out: dict[str, Any] = {"job": a.job, "machine": a.machine, "cost": json_number(a.cost)}
+    if staffed:
+        out["operator"] = a.operator
+    return out
 
 
 def total_parts(plan: Any, move_penalties: float = 0.0) -> dict[str, int | float]:
@@ -111,6 +125,7 @@ class Assignment:
     job: str
     machine: str
     cost: float
+    operator: str | None = None
 
 
 @dataclass(frozen=True)
@@ -121,6 +136,7 @@ class RunningJob:
     machine: str
     since: str | None = None
     cost: float | None = None
+    operator: str | None = None
 
 
 @dataclass(frozen=True)
@@ -167,6 +183,8 @@ class Plan:
     unavailable_machines: list[str] = field(default_factory=list)
     result: Any = field(default=None, repr=False, compare=False)
     problem: Any = field(default=None, repr=False, compare=False)
+    #: For shops with a crew: who minds what, shortages, warnings (``None`` otherwise).
+    staffing: dict[str, Any] | None = None
 
     # ---- shop-terms views ---------------------------------------------------------------
     @property
@@ -208,7 +226,7 @@ class Plan:
         return contract_json(self, bottleneck=self.bottleneck, certificate=dict(self.certificate))
 
     @classmethod
-    def from_json(cls, data: Any, source: str = "plan") -> "Plan":
+    def from_json(cls, data: Any, source: str = "plan") -> Plan:
         """Read a solve-contract object back. Raises :class:`PlanFormatError` naming the field."""
         def fail(where: str, msg: str) -> PlanFormatError:
             return PlanFormatError(msg, source=source, where=where)
@@ -251,9 +269,11 @@ class Plan:
             for key in ("job", "machine", "cost"):
                 if key not in a:
                     raise fail(f"{where}, field '{key}'", "is missing")
+            op = a.get("operator")
             assignments.append(Assignment(text(a["job"], f"{where}, field 'job'"),
                                           text(a["machine"], f"{where}, field 'machine'"),
-                                          num(a["cost"], f"{where}, field 'cost'")))
+                                          num(a["cost"], f"{where}, field 'cost'"),
+                                          None if op is None else text(op, f"{where}, field 'operator'")))
         groups = []
         raw_groups = data.get("wait_groups", [])
         if not isinstance(raw_groups, list):
@@ -280,9 +300,11 @@ class Plan:
             since = r.get("since")
             if since is not None:
                 since = text(since, f"{where}, field 'since'")
+            op = r.get("operator")
             running.append(RunningJob(text(r.get("job"), f"{where}, field 'job'"),
                                       text(r.get("machine"), f"{where}, field 'machine'"),
-                                      since, num(r.get("cost"), f"{where}, field 'cost'", True)))
+                                      since, num(r.get("cost"), f"{where}, field 'cost'", True),
+                                      None if op is None else text(op, f"{where}, field 'operator'")))
         rush_groups = []
         raw = data.get("rush_groups", [])
         if not isinstance(raw, list):
@@ -295,6 +317,9 @@ class Plan:
                                          names(g.get("waiting", []), f"{where}, field 'waiting'"),
                                          text(g.get("text", ""), f"{where}, field 'text'")))
         cert = obj(data.get("certificate", {"verified": False}), "field 'certificate'")
+        staffing = data.get("staffing")
+        if staffing is not None:
+            staffing = dict(obj(staffing, "field 'staffing'"))
         return cls(
             status=text(data["status"], "field 'status'"),
             objective=objective,
@@ -310,4 +335,5 @@ class Plan:
             running=running,
             unavailable_machines=names(data.get("unavailable_machines", []),
                                        "field 'unavailable_machines'"),
+            staffing=staffing,
         )

@@ -170,12 +170,17 @@ def solve_shop(shop: Shop, objective: str = "total", *, extra_must_run: Iterable
     """The certified plan for ``shop``: per machine its jobs, waiting jobs with reasons.
 
     ``objective`` is ``"total"`` (least setup plus wait penalties), ``"maximize"`` (values
-    are gains) or ``"bottleneck"``. Raises :class:`ShopError` for an inconsistent shop and
+    are gains) or ``"bottleneck"``. A shop with a crew is planned with an operator on every
+    running machine (:mod:`dispatcher.shop.staffed`; objectives total and maximize). Raises :class:`ShopError` for an inconsistent shop and
     :class:`ShopInfeasibleError` when jobs named in ``extra_must_run`` cannot all be
     placed (rush and pinned jobs that cannot all be placed wait and are named in
     ``plan.rush_waiting`` with their reasons).
     """
     problem = build_problem(shop, extra_must_run=extra_must_run, source=source)
+    if shop.crew.active:
+        from .staffed import solve_staffed
+
+        return solve_staffed(problem, objective, source=source)
     result = solve_problem(problem, objective, source)
     return plan_from_result(problem, result)
 

@@ -12,6 +12,7 @@ from __future__ import annotations
 import math
 from collections import Counter, defaultdict
 
+from .crew import crew_problems
 from .model import (
     DONE,
     JOB_STATES,
@@ -145,6 +146,7 @@ def shop_problems(shop: Shop) -> list[Problem]:
                 add(where, f"{shop.describe_job(jid)} is also planned on "
                     f"{shop.describe_machine(placed[jid])}")
             placed[jid] = mid
+    out.extend(crew_problems(shop))
     return out
 
 

@@ -15,6 +15,7 @@ import numpy as np
 
 from dispatcher.engine.whatif import what_if
 
+from .crew import refuse_with_crew
 from .plan import Plan
 from .planning import Cancelled
 
@@ -70,6 +71,7 @@ def what_if_grid(plan: Plan, cancel=None) -> WhatIfGrid:
     """Map the engine's what-if costs for ``plan`` onto its shop (raises ValueError for
     the bottleneck objective, where one number per pair does not describe the plans, and
     :class:`~dispatcher.shop.planning.Cancelled` when ``cancel`` is set)."""
+    refuse_with_crew(plan.staffing is not None, "the what-if map")
     problem, result = plan.problem, plan.result
     if problem is None or result is None:
         raise ValueError("this plan carries no solver result to compute what-if costs from")
