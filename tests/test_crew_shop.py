@@ -165,7 +165,7 @@ def test_running_machine_is_staffed_before_a_rush_job():
     shop.jobs[0].state, shop.jobs[0].machine = RUNNING, "M0"
     plan = solve_shop(shop)
     assert plan.running[0].operator == "operator role 0"
-    assert plan.waiting_jobs == ["job 1"] and plan.staffing["rush_waiting"] == ["job 1"]
+    assert plan.waiting_jobs == ["job 1"] and plan.rush_waiting == ["job 1"]
 
 
 def _document(crew: dict) -> str:

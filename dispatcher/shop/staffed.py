@@ -4,9 +4,9 @@
 builds (waiting jobs x free machine slots) and folds the slots back into machines,
 because an operator minds a machine, not a slot. Machines with running jobs get a kept
 placeholder so that they are staffed before any new job (and reported when nobody
-qualified is present: the plan never stops a running machine). Rush jobs are a
-priority (as many as possible, after the most jobs), pinned and must-run jobs a hard
-constraint.
+qualified is present: the plan never stops a running machine). Rush and pinned jobs
+are a priority (as many as possible, after the most jobs), jobs named must-run a hard
+constraint, as for a shop without a crew.
 """
 
 from __future__ import annotations
@@ -50,17 +50,12 @@ def staffing_inputs(problem, *, at=None):
     slots = free.copy()
     slots[running_on] += 1
     slots = np.maximum(slots, 1)
+    # Rush and pinned jobs are a priority, jobs named must-run a hard constraint, exactly
+    # as the problem marks them for the unstaffed plan.
     rush = np.zeros(n_jobs, bool)
     must = np.zeros(n_jobs, bool)
-    pinned = {p.job for p in shop.pins if p.kind == MUST}
-    extra = set(getattr(problem, "extra_must_run", ()) or ())
-    for n, i in enumerate(problem.rows):
-        job = shop.jobs[i]
-        rush[n] = job.rush
-        must[n] = job.id in pinned or job.name in extra
-    # Without a stored list of extra must-run names, keep whatever the problem marked
-    # must-run that is not explained by the rush flag (a pin or an explicit option).
-    must[:n_rows] |= problem.must_run & ~rush[:n_rows]
+    rush[:n_rows] = problem.rush if problem.rush is not None else False
+    must[:n_rows] = problem.must_run
     keep = np.zeros(n_jobs, bool)
     keep[n_rows:] = True
     crew = shop.crew
@@ -141,13 +136,12 @@ def _plan(problem, sp: StaffedPlan, x) -> Plan:
     reasons = _reasons(problem, sp, x, waiting_rows)
     staffing = _summary(shop, sp, x, label, unstaffed_running)
     rush_waiting = [problem.job_name(n) for n in waiting_rows if x["rush"][n]]
-    staffing["rush_waiting"] = rush_waiting
     plan = Plan(objective=sp.objective, total=float(sp.total), assignments=assignments,
                 waiting_jobs=waiting, idle_machines=idle, bottleneck=None,
                 waiting_reasons=reasons,
                 certificate={"verified": bool(sp.verify()), "method": sp.method},
                 running=running, unavailable_machines=[shop.machines[k].name for k in problem.unavailable],
-                result=sp, problem=problem, staffing=staffing)
+                result=sp, problem=problem, staffing=staffing, rush_waiting=rush_waiting)
     return plan
 
 
