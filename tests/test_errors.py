@@ -46,7 +46,11 @@ def _error_classes():
     for name in names:
         module = importlib.import_module(name)
         for _, obj in inspect.getmembers(module, inspect.isclass):
-            if issubclass(obj, BaseException) and obj.__module__ == module.__name__:
+            # A private class (leading underscore) is a signal caught inside its own
+            # module (history.postgres._Stale: retry on a fresh connection), never raised
+            # to a caller, so it needs no exit code.
+            if issubclass(obj, BaseException) and obj.__module__ == module.__name__ \
+                    and not obj.__name__.startswith("_"):
                 found[f"{obj.__module__}.{obj.__qualname__}"] = obj
     return found
 
