@@ -145,3 +145,90 @@ def test_redispatch_change_in_total_is_split(tmp_path, capsys):
     assert main(["redispatch", str(path), "--down", "Press B"]) == 0
     out = capsys.readouterr().out
     assert "Change in total:" in out and "wait penalties" in out.split("Change in total:")[1]
+
+
+def test_decision_takes_the_shift_of_the_shop_document(tmp_path, capsys):
+    # Regression: the shift recorded came from the clock, not from the document's shift.
+    import datetime as dt
+
+    from dispatcher.history import open_history
+    from dispatcher.shop import Shift
+
+    shop = small_shop()
+    shop.shift = Shift(day=dt.date(2026, 3, 9), label="early")
+    path = tmp_path / "cell.dshop"
+    save_shop(shop, path)
+    hist = tmp_path / "h.sqlite"
+    assert main(["solve", str(path), "--record", "--by", "Supervisor A", "--reason",
+                 "shift-start", "--history", str(hist)]) == 0
+    capsys.readouterr()
+    (d,) = open_history(str(hist)).list()
+    assert (d.shift_date, d.shift) == (dt.date(2026, 3, 9), "early")
+
+
+def test_history_restore_in_force_puts_the_restored_plan_into_the_document(tmp_path, capsys):
+    # Regression: restore recorded a decision but left the document's plan in force as it
+    # was, so the next redispatch started from the old plan.
+    shop = small_shop()
+    path = tmp_path / "cell.dshop"
+    save_shop(shop, path)
+    hist = str(tmp_path / "h.sqlite")
+    record = ["--record", "--by", "Supervisor A", "--reason", "breakdown", "--history", hist]
+    assert main(["solve", str(path), "--in-force", *record]) == 0
+    first = load_shop(path).plan_in_force
+    assert main(["redispatch", str(path), "--down", "Press B", "--in-force", *record]) == 0
+    assert load_shop(path).plan_in_force != first
+    capsys.readouterr()
+    assert main(["history", "restore", "1", "--by", "Supervisor A", "--history", hist,
+                 "--in-force", str(path)]) == 0
+    restored = load_shop(path)
+    assert restored.plan_in_force == first
+    assert restored.machine("B").state == "up"  # the shop as it was at decision 1
+
+
+def test_history_show_lists_down_machines_and_running_jobs(tmp_path, capsys):
+    shop = small_shop()
+    path = tmp_path / "cell.dshop"
+    save_shop(shop, path)
+    hist = str(tmp_path / "h.sqlite")
+    assert main(["redispatch", str(path), "--down", "Saw", "--note", "hydraulic leak",
+                 "--record", "--by", "Supervisor A", "--reason", "breakdown",
+                 "--history", hist]) == 0
+    capsys.readouterr()
+    assert main(["history", "show", "1", "--history", hist]) == 0
+    out = capsys.readouterr().out
+    assert "Machines not available: Saw (down since" in out and "hydraulic leak" in out
+    assert "Running: WO-1 on Press A" in out
+    assert main(["history", "list", "--machine", "Saw", "--history", hist]) == 0
+    assert "Supervisor A" in capsys.readouterr().out
+
+
+def test_unwritable_document_is_refused_before_anything_is_recorded(tmp_path, capsys):
+    import os
+
+    from dispatcher.history import open_history
+
+    shop = small_shop()
+    folder = tmp_path / "ro"
+    folder.mkdir()
+    path = folder / "cell.dshop"
+    save_shop(shop, path)
+    os.chmod(path, 0o444)
+    os.chmod(folder, 0o555)
+    try:
+        try:
+            with open(path, "ab"):
+                pass
+            pytest.skip("running with privileges that write read-only files anyway")
+        except OSError:
+            pass
+        hist = str(tmp_path / "h.sqlite")
+        args = ["redispatch", str(path), "--down", "Saw", "--in-force", "--record", "--by",
+                "Supervisor A", "--reason", "breakdown", "--history", hist]
+        assert main(args) == 2
+        assert "nothing was recorded" in capsys.readouterr().err
+        assert main(args) == 2  # a rerun records nothing either
+        assert not (tmp_path / "h.sqlite").exists() or open_history(hist).list() == []
+    finally:
+        os.chmod(folder, 0o755)
+        os.chmod(path, 0o644)

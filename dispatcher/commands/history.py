@@ -166,6 +166,9 @@ def register(sub: argparse._SubParsersAction) -> None:
     q.add_argument("number", type=int, metavar="N")
     q.add_argument("--by", metavar="NAME", required=True, help="supervisor restoring it")
     q.add_argument("--note", metavar="TEXT", default="")
+    q.add_argument("--in-force", metavar="SHOP", default=None,
+                   help="also save the restored shop, with the restored plan in force, into "
+                   "this shop document (checked writable before anything is recorded)")
     q.set_defaults(func=run_restore)
 
     p.set_defaults(func=lambda args: _usage(p))
@@ -246,6 +249,7 @@ def run_show(args: argparse.Namespace) -> int:
     print(f"Certificate: {d.certificate}")
     print()
     print_plan(d.plan)
+    _print_shop_states(d.shop_document)
     print()
     if d.replaces is None:
         print("Replaces: none (first decision for this shop)")
@@ -254,6 +258,24 @@ def run_show(args: argparse.Namespace) -> int:
         for line in (d.diff_from_replaced.lines() if d.diff_from_replaced else []):
             print(f"  {line}")
     return 0
+
+
+def _print_shop_states(doc) -> None:
+    """Machines not up (with their note and time) and jobs running, from the snapshot."""
+    if not isinstance(doc, dict):
+        return
+    machines = {m.get("id"): m for m in doc.get("machines", []) if isinstance(m, dict)}
+    down = [m for m in machines.values() if m.get("state", "up") != "up"]
+    if down:
+        print("Machines not available: " + "; ".join(
+            f"{m.get('name')} ({m.get('state')}" + (f" since {m['state_changed']}"
+                                                    if m.get("state_changed") else "")
+            + (f": {m['state_note']}" if m.get("state_note") else "") + ")" for m in down))
+    running = [j for j in doc.get("jobs", []) if isinstance(j, dict) and j.get("state") == "running"]
+    if running:
+        print("Running: " + ", ".join(
+            f"{j.get('name')} on {machines.get(j.get('machine'), {}).get('name', j.get('machine'))}"
+            for j in running))
 
 
 def run_diff(args: argparse.Namespace) -> int:
@@ -288,8 +310,17 @@ def run_export(args: argparse.Namespace) -> int:
 
 def run_restore(args: argparse.Namespace) -> int:
     store = open_store(args.history)
+    target = None
+    if args.in_force:
+        from dispatcher.commands.restore_in_force import restored_shop
+
+        target = restored_shop(store, args.number, args.in_force)
     number = store.restore(args.number, by=args.by, note=args.note)
     print(f"Recorded decision #{number}: restored from #{args.number}")
+    if target is not None:
+        from dispatcher.commands.shop_input import save_in_force
+
+        save_in_force(target, target.plan_in_force, args.in_force)
     return 0
 
 

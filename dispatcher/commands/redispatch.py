@@ -21,6 +21,7 @@ from dispatcher.commands.history import (
 )
 from dispatcher.commands.shop_input import (
     add_in_force_argument,
+    check_writable,
     job_name,
     print_shop_plan,
     read_shop_arg,
@@ -133,6 +134,8 @@ def run(args: argparse.Namespace) -> int:
         print_json(outcome.to_json())
     else:
         print_outcome(outcome, args)
+    if args.in_force:
+        check_writable(args.shop)
     record_decision(args, shop_to_dict(outcome.shop), outcome.to_json())
     if args.in_force:
         save_in_force(outcome.shop, outcome.plan.in_force(outcome.shop), args.shop)

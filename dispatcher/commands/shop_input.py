@@ -35,6 +35,29 @@ def add_in_force_argument(parser) -> None:
                         "force (with --record, only after the decision is recorded)")
 
 
+def check_writable(path: str) -> None:
+    """Refuse (exit 2) before anything is recorded when the document cannot be saved, so
+    the history and the document never disagree (a rerun then records once)."""
+    target = Path(path)
+    folder = target.parent if str(target.parent) else Path(".")
+    problem = ""
+    try:
+        if target.exists():
+            with open(target, "ab"):
+                pass  # opened for writing, nothing written
+        probe = folder / f".{target.name}.write-check"
+        with open(probe, "xb"):
+            pass
+        probe.unlink()
+    except FileExistsError:
+        pass
+    except OSError as exc:
+        problem = exc.strerror or str(exc)
+    if problem:
+        raise CliError(f"{path}: the document cannot be saved ({problem}); nothing was "
+                       "recorded and the document was not changed")
+
+
 def save_in_force(shop: Shop, in_force: dict[str, list[str]], path: str) -> None:
     """Save ``shop`` to ``path`` with ``in_force`` as its plan in force (atomic; exit 2 on failure)."""
     shop.plan_in_force = {machine: list(jobs) for machine, jobs in in_force.items()}

@@ -20,6 +20,7 @@ from dispatcher.commands import solve_extras
 from dispatcher.commands.shift_fill import run_fill_shift
 from dispatcher.commands.shop_input import (
     add_in_force_argument,
+    check_writable,
     is_shop_document,
     print_shop_plan,
     read_shop_arg,
@@ -114,6 +115,8 @@ def run(args: argparse.Namespace) -> int:
             print_shop_plan(shop_plan, shop, args.json)
             if added:
                 solve_extras.print_text(added, shop_plan.to_json()["assignments"])
+        if args.in_force:
+            check_writable(args.grid)
         record_decision(args, shop_to_dict(shop), shop_plan.to_json())
         if args.in_force:
             save_in_force(shop, shop_plan.in_force(shop), args.grid)

@@ -145,6 +145,26 @@ def shop_name_of(shop_json: str) -> str:
     return ""
 
 
+def shift_of_document(shop_json: str) -> tuple[date | None, str]:
+    """The shift date and label the shop document names (its ``shift`` object), or
+    (None, ''): a decision belongs to the document's shift, not to the clock's."""
+    try:
+        doc = json.loads(shop_json)
+    except json.JSONDecodeError:
+        return None, ""
+    shift = doc.get("shift") if isinstance(doc, dict) else None
+    if not isinstance(shift, dict):
+        return None, ""
+    day = None
+    if isinstance(shift.get("date"), str):
+        try:
+            day = date.fromisoformat(shift["date"])
+        except ValueError:
+            day = None
+    label = shift.get("label") if isinstance(shift.get("label"), str) else ""
+    return day, label.strip()
+
+
 def _station_default() -> str:
     return os.environ.get(STATION_ENV, "").strip() or socket.gethostname()
 
@@ -234,6 +254,8 @@ class DecisionStore:
         plan_text = json.dumps(plan_data, ensure_ascii=False, separators=(",", ":"))
         moment = utc_now() if time is None else time
         auto_date, auto_shift = shift_of(moment, self.shifts, self.tz)
+        doc_date, doc_shift = shift_of_document(shop_text)
+        auto_date, auto_shift = doc_date or auto_date, doc_shift or auto_shift
         if based_on != UNCHECKED and based_on is not None:
             based_on = int(based_on)
         values = {
@@ -381,8 +403,12 @@ class DecisionStore:
             where.append("shift_label = ?")
             params.append(shift)
         if machine is not None:
-            where.append("id IN (SELECT decision_id FROM decision_rows WHERE machine = ?)")
-            params.append(machine)
+            # Planned on it, or named elsewhere in the plan (down or under maintenance).
+            quoted = json.dumps(machine, ensure_ascii=False)
+            pattern = "%" + quoted.replace("\\", "\\\\").replace("%", "\\%").replace("_", "\\_") + "%"
+            where.append("(id IN (SELECT decision_id FROM decision_rows WHERE machine = ?)"
+                         " OR plan_json LIKE ? ESCAPE '\\')")
+            params += [machine, pattern]
         if job is not None:
             where.append("id IN (SELECT decision_id FROM decision_rows WHERE job = ?)")
             params.append(job)
