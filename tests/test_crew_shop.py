@@ -219,3 +219,81 @@ def test_features_that_ignore_the_crew_refuse_a_crewed_shop(option):
                           capture_output=True, text=True, check=False)
     assert proc.returncode == 2 and "not available yet for a shop with a crew" in proc.stderr
     assert "Traceback" not in proc.stderr
+
+
+# ---- events: an operator leaves or arrives -------------------------------------------
+
+from dispatcher.shop.redispatch import ShopEvent, redispatch_shop
+
+
+@settings(max_examples=60, deadline=None)
+@given(shop=crewed_shops(), data=st.data())
+def test_operator_leaving_replans_like_brute_force(shop, data):
+    """Reference: brute force on the shop after the operator left (no move penalties)."""
+    plan = solve_shop(shop)
+    shop.plan_in_force = plan.in_force(shop)
+    who = data.draw(st.sampled_from(shop.crew.operators))
+    out = redispatch_shop(shop, [ShopEvent("operator_out", who.label)], move_penalty=0.0)
+    n, m = len(shop.jobs), len(shop.machines)
+    values = np.zeros((n, m))
+    allowed = np.zeros((n, m), bool)
+    for (jid, mid), v in shop.grid.items():
+        values[int(jid[1:]), int(mid[1:])], allowed[int(jid[1:]), int(mid[1:])] = v, True
+    qualified = np.zeros((len(shop.crew.operators), m), bool)
+    for a in shop.crew.authorisations:
+        if a.operator != who.id:
+            qualified[int(a.operator[1:]), int(a.machine[1:])] = True
+    needs = np.array([f"M{k}" not in shop.crew.unattended for k in range(m)])
+    rush = np.array([j.rush for j in shop.jobs])
+    ref = brute_force(values, allowed, qualified, np.array([o.capacity for o in shop.crew.operators]),
+                      needs, np.zeros(n), rush, np.zeros(n, bool))
+    new = out.plan
+    assert new.verified
+    placed = len(new.assignments)
+    assert (placed, sum(shop.job_by_name(a.job).rush for a in new.assignments),
+            round(-new.total, 9)) == ref
+    assert all(a.operator != who.label for a in new.assignments)
+    assert out.shop.crew.operator(who.id).attendance == "absent"
+    assert shop.crew.operator(who.id).attendance == "present"  # the shop passed in is unchanged
+
+
+def test_operator_leaving_a_running_machine_is_a_caution_not_a_stop(tmp_path):
+    shop = _shop(2, 2, {(0, 0): 1.0, (1, 1): 1.0}, [1, 1], [(0, 0), (1, 1)])
+    shop.jobs[0].state, shop.jobs[0].machine = RUNNING, "M0"
+    shop.plan_in_force = solve_shop(shop).in_force(shop)
+    path = tmp_path / "s.dshop"
+    save_shop(shop, path)
+    proc = subprocess.run([sys.executable, "-m", "dispatcher", "redispatch", str(path),
+                           "--operator-out", "operator role 0", "--json"],
+                          capture_output=True, text=True, check=True)
+    data = json.loads(proc.stdout)
+    assert data["staffing"]["unstaffed_running"] == [{"job": "job 0", "machine": "machine 0"}]
+    assert [r["job"] for r in data["running"]] == ["job 0"]
+    text = subprocess.run([sys.executable, "-m", "dispatcher", "redispatch", str(path),
+                           "--operator-out", "operator role 0"],
+                          capture_output=True, text=True, check=True).stdout
+    assert "stopped only by the site's procedure" in text
+    assert "trained and authorised" in text
+
+
+def test_operator_arriving_is_used(tmp_path):
+    shop = _shop(2, 2, {(0, 0): 1.0, (1, 1): 1.0}, [1, 1], [(0, 0), (1, 1)])
+    shop.crew.operators[1].attendance = "absent"
+    shop.plan_in_force = solve_shop(shop).in_force(shop)
+    out = redispatch_shop(shop, [ShopEvent("operator_in", "operator role 1")])
+    assert sorted(a.operator for a in out.plan.assignments) == ["operator role 0", "operator role 1"]
+    assert [c.job for c in out.newly_dispatched and out.changes] == ["job 1"]
+
+
+def test_unknown_operator_is_refused_with_the_labels(tmp_path):
+    path = tmp_path / "s.dshop"
+    shop = load_shop(SAMPLE)
+    shop.plan_in_force = solve_shop(shop).in_force(shop)
+    save_shop(shop, path)
+    before = path.read_bytes()
+    proc = subprocess.run([sys.executable, "-m", "dispatcher", "redispatch", str(path),
+                           "--operator-out", "Night porter"], capture_output=True, text=True,
+                          check=False)
+    assert proc.returncode == 2 and "no operator labelled 'Night porter'" in proc.stderr
+    assert "Laser operator" in proc.stderr and "Traceback" not in proc.stderr
+    assert path.read_bytes() == before

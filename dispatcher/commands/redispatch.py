@@ -55,6 +55,14 @@ def register(sub: argparse._SubParsersAction) -> None:
                    help="job that finished (repeatable)")
     p.add_argument("--pull", metavar="JOB", action=_EventAction, dest="pull", event="pulled",
                    help="job pulled from this round (repeatable)")
+    p.add_argument("--operator-out", metavar="LABEL", action=_EventAction, dest="operator_out",
+                   event="operator_out",
+                   help="operator who left (sick, called away): machines they ran get another "
+                        "qualified operator present, or their jobs wait (shops with a crew; "
+                        "repeatable)")
+    p.add_argument("--operator-in", metavar="LABEL", action=_EventAction, dest="operator_in",
+                   event="operator_in",
+                   help="operator who arrived: plan to use them (shops with a crew; repeatable)")
     p.add_argument("--move-penalty", metavar="X", type=float, default=None,
                    help="cost of moving a dispatched job that has not started "
                         "(default: the shop's; a job's own value wins)")
@@ -121,7 +129,8 @@ def _plan_in_force(args: argparse.Namespace, shop) -> dict[str, list[str]]:
 
 def run(args: argparse.Namespace) -> int:
     if not args.events:
-        raise CliError("redispatch needs an event: --down MACHINE (or --up, --rush, --done, --pull)")
+        raise CliError("redispatch needs an event: --down MACHINE (or --up, --rush, --done, "
+                       "--pull, --operator-out, --operator-in)")
     check_record_arguments(args)
     shop = read_shop_arg(args.shop)
     events = _events(args, shop)
@@ -166,6 +175,9 @@ def print_outcome(outcome: ShopRedispatch, args: argparse.Namespace) -> None:
           f"penalties {parts['wait_penalties']:+g})"
           + (f"; move penalties paid apart: {outcome.move_penalties_paid:g}"
              if outcome.move_penalties_paid else ""))
+    if any(kind == "operator_out" for kind, _ in args.events):
+        print("Caution: a machine the operator ran is stopped only by the site's procedure, "
+              "never by this plan; operators run only machines they are trained and authorised for.")
     named = {ev[1] for ev in args.events if ev[0] in ("down", "up")}
     for name in outcome.machines_down:
         if name in named:

@@ -1,7 +1,8 @@
 """Re-dispatch a shop after an event, and say what changed against the plan in force.
 
 Events: a machine goes down or comes back up, a rush job arrives, a job finishes, a job is
-pulled. Rules (the definition the tests check):
+pulled, an operator leaves or arrives (shops with a crew). Rules (the definition the tests
+check):
 
 * jobs running on machines that stay up keep running where they are;
 * a job running on a machine that goes down becomes waiting (it needs a new setup
@@ -13,6 +14,11 @@ pulled. Rules (the definition the tests check):
   all be placed wait, named with the machines they compete for. A breakdown never leaves
   the supervisor without a plan;
 * events apply in the order given; a machine's caution is due when it ends down;
+* an operator who leaves (sick, called away) is absent from then on; one who arrives is
+  present from then on. In a shop with a crew every plan staffs each running machine
+  (:mod:`dispatcher.shop.staffed`): machines the leaving operator ran get another
+  qualified operator present, else their new jobs wait; a running machine left without
+  one is reported, never stopped by the plan (the site's procedure stops it);
 * a job dispatched by the plan in force but not started pays a *move penalty* (its own
   ``move_penalty``, else the shop's, unless overridden) if the new plan puts it anywhere
   else, waiting included, so the new plan moves only what the costs justify (added to the
@@ -46,13 +52,16 @@ import numpy as np
 
 from dispatcher.engine import DispatchResult, InfeasibleError, redispatch, solve
 
+from .crew import ABSENT, PRESENT
 from .model import DONE, DOWN, MUST, MUST_NOT, RUNNING, UP, WAITING, Problem, Shop, ShopError
-from .plan import Assignment, Plan, json_number
+from .plan import Plan, json_number
 from .in_force import in_force_problems
 from .translate import ShopProblem, plan_from_result
 from .validate import check_shop
 
-EVENT_KINDS = ("down", "up", "rush", "done", "pulled")
+EVENT_KINDS = ("down", "up", "rush", "done", "pulled", "operator_out", "operator_in")
+#: Events about the crew: ``name`` is an operator's label (or id).
+OPERATOR_EVENTS = ("operator_out", "operator_in")
 
 
 @dataclass(frozen=True)
@@ -168,6 +177,17 @@ def apply_events(shop: Shop, events: Sequence[ShopEvent], source: str = "") -> t
         where = f"event {n} ({ev.kind} {ev.name!r})"
         if ev.kind not in EVENT_KINDS:
             problems.append(Problem(where, f"kind must be one of {', '.join(EVENT_KINDS)}"))
+            continue
+        if ev.kind in OPERATOR_EVENTS:
+            try:
+                op = after.crew.operator_by_label(ev.name)
+            except KeyError:
+                known = ", ".join(o.label for o in after.crew.operators) or "none"
+                problems.append(Problem(where, f"no operator labelled {ev.name!r} (operators: {known})"))
+                continue
+            op.attendance = PRESENT if ev.kind == "operator_in" else ABSENT
+            if ev.kind == "operator_in":
+                op.arrives = op.leaves = None  # here from now on
             continue
         if ev.kind in ("down", "up"):
             if ev.name not in mpos:
@@ -372,11 +392,41 @@ def redispatch_shop(shop: Shop, events: Sequence[ShopEvent], *,
     maximize = objective == "maximize"
     pre_rows = [i for i, j in enumerate(shop.jobs) if j.state == WAITING and i not in arrived]
     post_rows = [i for i, j in enumerate(after.jobs) if j.state == WAITING and i not in left]
-    pre = _layout(shop, pre_rows, columns, in_force, move_penalty, maximize)
     post = _layout(after, post_rows, columns, in_force, move_penalty, maximize)
+    if after.crew.active:
+        plan, result = _solve_staffed_after(after, post, columns, objective, source)
+        return _difference(shop, after, in_force, left, left_how, post, list(post.rows), columns,
+                           result, objective, plan=plan)
+    pre = _layout(shop, pre_rows, columns, in_force, move_penalty, maximize)
     result, order = _solve_after(pre, post, objective)
     return _difference(shop, after, in_force, left, left_how, post, order, columns, result,
                        objective)
+
+
+def _solve_staffed_after(after: Shop, post: _Layout, columns: list[int], objective: str,
+                         source: str):
+    """The staffed plan after the events, on the same arrays (move penalties included)."""
+    from .staffed import solve_staffed
+
+    mindex = {m.id: k for k, m in enumerate(after.machines)}
+    running = [(i, mindex[j.machine]) for i, j in enumerate(after.jobs) if j.state == RUNNING]
+    unavailable = [k for k, m in enumerate(after.machines) if m.state != UP]
+    # Only free slots are columns of the staffed problem (as build_problem lays them out):
+    # a machine that is up, past the slots its running jobs use.
+    busy = np.bincount([k for _, k in running], minlength=len(after.machines))
+    slot_no: dict[int, int] = {}
+    keep = []
+    for c, k in enumerate(columns):
+        n = slot_no.get(k, 0)
+        slot_no[k] = n + 1
+        if after.machines[k].state == UP and n >= busy[k]:
+            keep.append(c)
+    cols = np.asarray(keep, dtype=np.int64)
+    problem = ShopProblem(after, list(post.rows), [columns[c] for c in keep],
+                          post.values[:, cols], post.allowed[:, cols], post.penalty,
+                          np.zeros(len(post.rows), dtype=bool), running, unavailable, post.rush)
+    plan = solve_staffed(problem, objective, source=source)
+    return plan, plan.result
 
 
 def _solve_after(pre: _Layout, post: _Layout, objective: str) -> tuple[DispatchResult, list[int]]:
@@ -431,23 +481,31 @@ def total_in_force(shop: Shop, in_force: Mapping[int, int], rows: Sequence[int],
 
 def _difference(shop: Shop, after: Shop, in_force: Mapping[int, int], left: set[int],
                 left_how: Mapping[int, str], post: _Layout, order: list[int],
-                columns: list[int], result: DispatchResult, objective: str) -> ShopRedispatch:
+                columns: list[int], result, objective: str,
+                plan: Plan | None = None) -> ShopRedispatch:
+    """The difference against the plan in force. ``plan`` is given by the staffed path
+    (its assignment values include move penalties, corrected here like the engine's)."""
     post_pos = {i: n for n, i in enumerate(post.rows)}
     idx = np.array([post_pos[i] for i in order], dtype=np.int64)
     mindex = {m.id: k for k, m in enumerate(after.machines)}
     running = [(i, mindex[j.machine]) for i, j in enumerate(after.jobs) if j.state == RUNNING]
     unavailable = [k for k, m in enumerate(after.machines) if m.state != UP]
-    problem = ShopProblem(after, list(order), list(columns), post.grid[idx], post.allowed[idx],
-                          post.wait[idx], np.zeros(len(order), dtype=bool), running, unavailable,
-                          post.rush[idx])
-    plan = plan_from_result(problem, result)
+    if plan is None:
+        problem = ShopProblem(after, list(order), list(columns), post.grid[idx], post.allowed[idx],
+                              post.wait[idx], np.zeros(len(order), dtype=bool), running,
+                              unavailable, post.rush[idx])
+        plan = plan_from_result(problem, result)
+    jpos = {j.name: i for i, j in enumerate(after.jobs)}
+    mpos = {m.name: k for k, m in enumerate(after.machines)}
+    first_col = {}
+    for c, k in enumerate(columns):
+        first_col.setdefault(k, c)
     # Assignment values are grid values (the engine's include move penalties).
     plan = replace(plan, assignments=[
-        Assignment(a.job, a.machine, float(post.grid[idx[n], c]))
-        for a, (n, c) in zip(plan.assignments,
-                             [(n, int(c)) for n, c in enumerate(result.machine_of_job) if c >= 0])])
+        replace(a, cost=float(post.grid[post_pos[jpos[a.job]], first_col[mpos[a.machine]]]))
+        for a in plan.assignments])
     machines = after.machines
-    now: dict[int, int] = {order[n]: columns[int(c)] for n, c in enumerate(result.machine_of_job) if c >= 0}
+    now: dict[int, int] = {jpos[a.job]: mpos[a.machine] for a in plan.assignments}
     for i, k in running:
         now[i] = k
     name_j = lambda i: after.jobs[i].name  # noqa: E731
