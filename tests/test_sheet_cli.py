@@ -272,7 +272,7 @@ def filled_shop() -> Shop:
 
 
 def test_filled_shift_keeps_the_planned_run_order_and_hours():
-    from dispatcher.shop.fill import fill_shop_shift
+    from dispatcher.shop.fill_shift import fill_shop_shift
 
     shop = filled_shop()
     fill = fill_shop_shift(shop)
@@ -289,7 +289,7 @@ def test_filled_shift_keeps_the_planned_run_order_and_hours():
 
 
 def test_cli_fill_shift_sheet(tmp_path, capsys):
-    from dispatcher.shop.fill import fill_shop_shift
+    from dispatcher.shop.fill_shift import fill_shop_shift
 
     shop = filled_shop()
     doc = tmp_path / "filled.dshop"

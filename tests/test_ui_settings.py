@@ -16,7 +16,8 @@ from dispatcher.history import SCHEMA_VERSION, HistoryStore
 from dispatcher.io.shopfile import shop_to_dict
 from dispatcher.ui.main_window import MainWindow
 from dispatcher.ui.messages import RecordingMessenger
-from dispatcher.ui.settings_dialog import KEY_HISTORY, KEY_SUPERVISOR, ScriptedChooser
+from dispatcher.ui.settings_dialog import ScriptedChooser
+from dispatcher.ui.settings_keys import KEY_AUTOSAVE, KEY_HISTORY, KEY_SUPERVISOR
 from ui_support import activate, make_window, save_shot
 
 
@@ -82,7 +83,7 @@ def test_a_new_window_uses_the_stored_history_file(qtbot, tmp_path, monkeypatch)
     monkeypatch.setenv("DISPATCHER_AUTOSAVE_DIR", str(tmp_path / "autosave"))
     settings = QSettings(str(tmp_path / "settings.ini"), QSettings.Format.IniFormat)
     settings.setValue(KEY_HISTORY, str(tmp_path / "kept.sqlite"))
-    settings.setValue("autosave/minutes", 3)
+    settings.setValue(KEY_AUTOSAVE, 3)
     window = MainWindow(settings=settings, messenger=RecordingMessenger())
     qtbot.addWidget(window)
     assert window.history.path == tmp_path / "kept.sqlite"

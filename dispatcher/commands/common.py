@@ -18,11 +18,11 @@ from dispatcher.errors import (
     EXIT_OK,
     BadInputError,
 )
-from dispatcher.shop.plan import json_number
+from dispatcher.jsonnum import json_number
 
 EXIT_STORE = EXIT_HISTORY  # the name the commands used before the error root
 __all__ = ["EXIT_BAD_INPUT", "EXIT_CONFLICT", "EXIT_HISTORY", "EXIT_INFEASIBLE", "EXIT_INTERNAL", "EXIT_OK",
-           "EXIT_STORE", "CliError", "number", "plan_json", "print_json", "print_plan",
+           "EXIT_STORE", "CliError", "plan_json", "print_json", "print_plan",
            "wait_reason_text"]
 
 
@@ -39,9 +39,6 @@ class CliError(BadInputError):
         self.exit_code = exit_code
 
 
-number = json_number  # JSON-friendly number: whole values print without a trailing .0
-
-
 def plan_json(result: DispatchResult, jobs: list[str], machines: list[str]) -> dict[str, Any]:
     """The solve output contract for an engine result with names attached.
 
@@ -54,7 +51,7 @@ def plan_json(result: DispatchResult, jobs: list[str], machines: list[str]) -> d
     for j in np.flatnonzero(result.machine_of_job >= 0):
         m = int(result.machine_of_job[j])
         assignments.append({"job": jobs[j], "machine": machines[m],
-                            "cost": number(result.values[j, m])})
+                            "cost": json_number(result.values[j, m])})
     reasons: dict[str, dict[str, Any]] = {}
     groups = []
     for g, w in enumerate(result.wait_groups()):
@@ -66,11 +63,11 @@ def plan_json(result: DispatchResult, jobs: list[str], machines: list[str]) -> d
     return {
         "status": "optimal",
         "objective": result.objective,
-        "total": number(result.total),
+        "total": json_number(result.total),
         "assignments": assignments,
         "waiting_jobs": [jobs[j] for j in result.waiting_jobs],
         "idle_machines": [machines[m] for m in result.idle_machines],
-        "bottleneck": None if result.bottleneck is None else number(result.bottleneck),
+        "bottleneck": None if result.bottleneck is None else json_number(result.bottleneck),
         "waiting_reasons": reasons,
         "wait_groups": groups,
         "certificate": {"verified": result.verify()},
@@ -82,7 +79,7 @@ def plan_json(result: DispatchResult, jobs: list[str], machines: list[str]) -> d
 def _grid_parts(result: DispatchResult) -> dict[str, Any]:
     placed = result.machine_of_job >= 0
     planned = float(result.values[np.flatnonzero(placed), result.machine_of_job[placed]].sum())
-    return {"planned": number(planned), "wait_penalties": number(result.wait_penalty[~placed].sum()),
+    return {"planned": json_number(planned), "wait_penalties": json_number(result.wait_penalty[~placed].sum()),
             "move_penalties": 0}
 
 

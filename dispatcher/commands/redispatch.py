@@ -29,7 +29,16 @@ from dispatcher.commands.shop_input import (
 )
 from dispatcher.io.shopfile import shop_to_dict
 from dispatcher.shop import Plan
-from dispatcher.shop.redispatch import ShopEvent, ShopRedispatch, redispatch_shop
+from dispatcher.shop.redispatch import (
+    EVENT_DONE,
+    EVENT_DOWN,
+    EVENT_PULLED,
+    EVENT_RUSH,
+    EVENT_UP,
+    ShopEvent,
+    ShopRedispatch,
+    redispatch_shop,
+)
 
 #: Largest plan file read with --plan (a plan of a very large shop is well under this).
 MAX_PLAN_BYTES = 16 * 1024 * 1024
@@ -44,16 +53,16 @@ def register(sub: argparse._SubParsersAction) -> None:
                     "new machine.")
     p.add_argument("shop", metavar="SHOP", help="shop document (.dshop)")
     p.set_defaults(events=[])
-    p.add_argument("--down", metavar="MACHINE", action=_EventAction, dest="down", event="down",
+    p.add_argument("--down", metavar="MACHINE", action=_EventAction, dest="down", event=EVENT_DOWN,
                    help="machine that went down (repeatable; events apply in the order given)")
-    p.add_argument("--up", metavar="MACHINE", action=_EventAction, dest="up", event="up",
+    p.add_argument("--up", metavar="MACHINE", action=_EventAction, dest="up", event=EVENT_UP,
                    help="machine that is back up (repeatable)")
-    p.add_argument("--rush", metavar="JOB", action=_EventAction, dest="rush", event="rush",
+    p.add_argument("--rush", metavar="JOB", action=_EventAction, dest="rush", event=EVENT_RUSH,
                    help="waiting job that arrived as a rush job: placed first (repeatable; "
                    "a job may be given by name or work order)")
-    p.add_argument("--done", metavar="JOB", action=_EventAction, dest="done", event="done",
+    p.add_argument("--done", metavar="JOB", action=_EventAction, dest="done", event=EVENT_DONE,
                    help="job that finished (repeatable)")
-    p.add_argument("--pull", metavar="JOB", action=_EventAction, dest="pull", event="pulled",
+    p.add_argument("--pull", metavar="JOB", action=_EventAction, dest="pull", event=EVENT_PULLED,
                    help="job pulled from this round (repeatable)")
     p.add_argument("--operator-out", metavar="LABEL", action=_EventAction, dest="operator_out",
                    event="operator_out",
@@ -95,9 +104,9 @@ def _events(args: argparse.Namespace, shop) -> list[ShopEvent]:
     note = getattr(args, "note", None) or ""
     out = []
     for kind, name in args.events:
-        if kind in ("rush", "done", "pulled"):
+        if kind in (EVENT_RUSH, EVENT_DONE, EVENT_PULLED):
             name = job_name(shop, name, args.shop)
-        out.append(ShopEvent(kind, name, note if kind == "down" else "", now))
+        out.append(ShopEvent(kind, name, note if kind == EVENT_DOWN else "", now))
     return out
 
 
@@ -178,7 +187,7 @@ def print_outcome(outcome: ShopRedispatch, args: argparse.Namespace) -> None:
     if any(kind == "operator_out" for kind, _ in args.events):
         print("Caution: a machine the operator ran is stopped only by the site's procedure, "
               "never by this plan; operators run only machines they are trained and authorised for.")
-    named = {ev[1] for ev in args.events if ev[0] in ("down", "up")}
+    named = {ev[1] for ev in args.events if ev[0] in (EVENT_DOWN, EVENT_UP)}
     for name in outcome.machines_down:
         if name in named:
             print(f"Caution: {name} is down. Apply lockout/tagout and the site's isolation "

@@ -148,7 +148,7 @@ def _decision_in_force(shop: Shop, history: str | None) -> Any | None:
 
 def _filled(shop: Shop, source: str, time_limit: float | None) -> Any:
     """The filled shift of a shop document (least total), errors as for ``solve --fill-shift``."""
-    from dispatcher.shop.fill import fill_shop_shift
+    from dispatcher.shop.fill_shift import fill_shop_shift
 
     if not is_shop_document(source):
         raise CliError(f"{source}: --fill-shift needs a shop document (.dshop) with run hours "

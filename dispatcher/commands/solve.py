@@ -16,8 +16,8 @@ from dispatcher.commands.history import (
     check_record_arguments,
     record_decision,
 )
-from dispatcher.commands import solve_extras
-from dispatcher.commands.shift_fill import run_fill_shift
+from dispatcher.commands import alternatives_whatif
+from dispatcher.commands.fill_shift import run_fill_shift
 from dispatcher.commands.shop_input import (
     add_in_force_argument,
     check_writable,
@@ -56,7 +56,7 @@ def register(sub: argparse._SubParsersAction) -> None:
     p.add_argument("--time-limit", metavar="SECONDS", type=float, default=None,
                    help="with --fill-shift: stop the solver after this many seconds and "
                    "report the best plan found with its proven gap")
-    solve_extras.add_arguments(p)
+    alternatives_whatif.add_arguments(p)
     add_in_force_argument(p)
     add_record_arguments(p)
     p.set_defaults(func=run)
@@ -92,7 +92,7 @@ def infeasible_message(exc: InfeasibleError, jobs: list[str], machines: list[str
 
 def run(args: argparse.Namespace) -> int:
     check_record_arguments(args)
-    solve_extras.check_arguments(args, objective_of(args))
+    alternatives_whatif.check_arguments(args, objective_of(args))
     if args.in_force and (args.fill_shift or not is_shop_document(args.grid)):
         raise CliError(f"{args.grid}: --in-force needs a shop document (.dshop) and one "
                        "dispatch round (not --fill-shift)")
@@ -105,7 +105,7 @@ def run(args: argparse.Namespace) -> int:
         if getattr(args, "what_if", False) or getattr(args, "alternatives", None):
             refuse_with_crew(shop_plan.staffing is not None,
                              "--what-if and --alternatives", args.grid)
-        added = solve_extras.extras(
+        added = alternatives_whatif.added_keys(
             shop_plan.result, args, [problem.job_name(n) for n in range(len(problem.rows))],
             [problem.machine_name(c) for c in range(len(problem.columns))],
             shop.machine_names())
@@ -114,7 +114,7 @@ def run(args: argparse.Namespace) -> int:
         else:
             print_shop_plan(shop_plan, shop, args.json)
             if added:
-                solve_extras.print_text(added, shop_plan.to_json()["assignments"])
+                alternatives_whatif.print_text(added, shop_plan.to_json()["assignments"])
         if args.in_force:
             check_writable(args.grid)
         record_decision(args, shop_to_dict(shop), shop_plan.to_json())
@@ -133,13 +133,13 @@ def run(args: argparse.Namespace) -> int:
                          [table.machines[m] for m in exc.witness.machines],
                          source=args.grid) from None
     data = plan_json(result, table.jobs, table.machines)
-    added = solve_extras.extras(result, args, table.jobs, table.machines)
+    added = alternatives_whatif.added_keys(result, args, table.jobs, table.machines)
     if args.json:
         print_json({**data, **added})
     else:
         print_plan(data)
         if added:
-            solve_extras.print_text(added, data["assignments"])
+            alternatives_whatif.print_text(added, data["assignments"])
     if args.record:  # the grid as a shop document, so every decision keeps one format
         snapshot = shop_from_grid(table.jobs, table.machines, table.values, table.allowed,
                                   name=Path(args.grid).stem)

@@ -409,6 +409,46 @@ def fill_shift(values, hours, capacity, *, allowed=None, maximize: bool = False,
     started = time.perf_counter()
     if time_limit is not None and not (np.isfinite(time_limit) and time_limit > 0):
         raise DispatchInputError(f"time_limit must be a number of seconds > 0, got {time_limit!r}")
+    problem = _checked_problem(values, hours, capacity, allowed=allowed, maximize=maximize,
+                               wait_penalty=wait_penalty, must_run=must_run, all_jobs=all_jobs,
+                               pins=pins, rush=rush, due=due, machine_factor=machine_factor)
+    _diagnose(problem.usable, problem.hours, problem.capacity, problem.must, problem.pinned,
+              problem.mask)
+    model = _build_model(problem)
+    search = _Search(started, time_limit, cancel, progress)
+    outcome = _solve_model(problem, model, search, most_jobs_first)
+    return _shift_plan(problem, model, outcome, search)
+
+
+@dataclass
+class _ShiftProblem:
+    """The checked inputs of :func:`fill_shift`, and which pairs may be used."""
+
+    values: np.ndarray
+    mask: np.ndarray        # allowed pairs as given
+    forbidden: np.ndarray   # pairs a pin forbids
+    hours: np.ndarray
+    capacity: np.ndarray
+    penalty: np.ndarray
+    must: np.ndarray        # must-run, including all_jobs and pinned jobs
+    pinned: np.ndarray      # pinned machine per job, -1 = none
+    rush: np.ndarray
+    due: np.ndarray
+    maximize: bool
+    usable: np.ndarray      # pairs the model gets a variable for
+
+    @property
+    def objective(self) -> str:
+        return "maximize" if self.maximize else "total"
+
+    @property
+    def shape(self) -> tuple[int, int]:
+        return self.values.shape
+
+
+def _checked_problem(values, hours, capacity, *, allowed, maximize, wait_penalty, must_run,
+                     all_jobs, pins, rush, due, machine_factor) -> _ShiftProblem:
+    """Step 1: check every input (raising DispatchInputError) and find the usable pairs."""
     values, mask, penalty, must = _check_inputs(values, allowed, wait_penalty, must_run)
     n_jobs, n_machines = values.shape
     hrs = _check_hours(hours, machine_factor, values.shape, mask)
@@ -419,110 +459,203 @@ def fill_shift(values, hours, capacity, *, allowed=None, maximize: bool = False,
         must[:] = True
     must |= pinned >= 0
     due_time = _job_vector(due, n_jobs, "due", np.nan)
-    objective = "maximize" if maximize else "total"
+    return _ShiftProblem(values=values, mask=mask, forbidden=forbidden, hours=hrs, capacity=cap,
+                         penalty=penalty, must=must, pinned=pinned, rush=rush_mask, due=due_time,
+                         maximize=maximize,
+                         usable=_usable_pairs(mask, forbidden, hrs, cap, pinned))
 
-    usable = mask & ~forbidden & (hrs <= cap[None, :] * (1 + 1e-12))
+
+def _usable_pairs(mask: np.ndarray, forbidden: np.ndarray, hours: np.ndarray, cap: np.ndarray,
+                  pinned: np.ndarray) -> np.ndarray:
+    """Allowed, not forbidden pairs whose hours fit the machine; a pinned job only its pin."""
+    usable = mask & ~forbidden & (hours <= cap[None, :] * (1 + 1e-12))
     has_pin = pinned >= 0
+    rows = np.flatnonzero(has_pin)
     usable[has_pin] = False
-    usable[np.flatnonzero(has_pin), pinned[has_pin]] = mask[np.flatnonzero(has_pin), pinned[has_pin]]
-    _diagnose(usable, hrs, cap, must, pinned, mask)
+    usable[rows, pinned[has_pin]] = mask[rows, pinned[has_pin]]
+    return usable
 
+
+@dataclass
+class _Model:
+    """The MILP: one binary variable per usable pair (``job_of_var``, ``machine_of_var``)."""
+
+    job_of_var: np.ndarray
+    machine_of_var: np.ndarray
+    coef: np.ndarray          # objective coefficient per variable (always minimised)
+    const: float              # constant added to the objective (all wait penalties)
+    constraints: list         # job rows, machine-hour rows (and later the job count)
+    bounds: Bounds
+    lower: np.ndarray         # 1 where a pin forces the variable
+    integrality: np.ndarray
+
+    @property
+    def size(self) -> int:
+        return self.job_of_var.size
+
+
+def _build_model(problem: _ShiftProblem) -> _Model:
+    """Step 2: the MILP of the Notes of :func:`fill_shift` (waiting is the job row's slack)."""
+    n_jobs, n_machines = problem.shape
+    usable, values, penalty = problem.usable, problem.values, problem.penalty
     job_of_var, machine_of_var = np.nonzero(usable)
     n_var = job_of_var.size
-    coef = (-(values + penalty[:, None]) if maximize else (values - penalty[:, None]))[usable]
-    const = float(penalty.sum())
+    coef = (-(values + penalty[:, None]) if problem.maximize
+            else (values - penalty[:, None]))[usable]
+    constraints = []
     if n_var:
         var = np.arange(n_var)
         job_rows = coo_array((np.ones(n_var), (job_of_var, var)), shape=(n_jobs, n_var))
-        hour_rows = coo_array((hrs[usable], (machine_of_var, var)), shape=(n_machines, n_var))
-        constraints = [LinearConstraint(job_rows, np.where(must, 1.0, 0.0), 1.0),
-                       LinearConstraint(hour_rows, -np.inf, cap)]
+        hour_rows = coo_array((problem.hours[usable], (machine_of_var, var)),
+                              shape=(n_machines, n_var))
+        constraints = [LinearConstraint(job_rows, np.where(problem.must, 1.0, 0.0), 1.0),
+                       LinearConstraint(hour_rows, -np.inf, problem.capacity)]
+    has_pin = problem.pinned >= 0
     lower = np.zeros(n_var)
-    lower[has_pin[job_of_var] & (pinned[job_of_var] == machine_of_var)] = 1.0
-    bounds = Bounds(lower, np.ones(n_var))
-    integrality = np.ones(n_var)
+    lower[has_pin[job_of_var] & (problem.pinned[job_of_var] == machine_of_var)] = 1.0
+    return _Model(job_of_var=job_of_var, machine_of_var=machine_of_var, coef=coef,
+                  const=float(penalty.sum()), constraints=constraints,
+                  bounds=Bounds(lower, np.ones(n_var)), lower=lower,
+                  integrality=np.ones(n_var))
 
-    def time_left():
-        return None if time_limit is None else time_limit - (time.perf_counter() - started)
 
-    def stage(text: str) -> None:
-        if cancel is not None and cancel.is_set():
+class _Search:
+    """The time budget, the cancel event and the progress callback of one solve."""
+
+    def __init__(self, started: float, time_limit: float | None, cancel, progress):
+        self.started = started
+        self.time_limit = time_limit
+        self.cancel = cancel
+        self.progress = progress
+
+    def time_left(self) -> float | None:
+        if self.time_limit is None:
+            return None
+        return self.time_limit - (time.perf_counter() - self.started)
+
+    def stage(self, text: str) -> None:
+        """Start a solver stage: stop here if cancelled, else report it."""
+        if self.cancel is not None and self.cancel.is_set():
             raise ShiftCancelled("the shift plan was cancelled")
-        if progress is not None:
-            progress(text)
+        if self.progress is not None:
+            self.progress(text)
 
-    x = np.zeros(n_var)
-    count_proven = True
+    def no_plan(self, must: np.ndarray) -> ShiftSearchError:
+        return ShiftSearchError(_no_plan_text(self.time_limit, must))
+
+
+@dataclass
+class _Outcome:
+    """What the solver stages found: the chosen variables and what is proven about them."""
+
+    x: np.ndarray
+    proven: bool
+    count_proven: bool
+    bound_min: float          # proven bound on the minimised objective, constant included
+
+
+def _solve_model(problem: _ShiftProblem, model: _Model, search: _Search,
+                 most_jobs_first: bool) -> _Outcome:
+    """Step 3: the solver stages (the most jobs, then the best total) with their floors."""
+    must, n_var = problem.must, model.size
+    if not n_var:
+        if must.any():
+            _raise_infeasible(must, problem.usable)
+        return _Outcome(np.zeros(0), True, True, model.const)  # nothing can run: all wait
     # Under a time limit the solver may stop with a poor plan (or none); a quick greedy
     # plan is kept as a floor. scipy's milp takes no starting plan, so it is compared after.
-    greedy = (_greedy(job_of_var, machine_of_var, hrs[usable], cap, coef, must, lower,
-                      most_jobs_first) if time_limit is not None and n_var else None)
-    fallback = greedy
-    two_stages = bool(n_var) and most_jobs_first and not must.all()
+    fallback = (_greedy(model.job_of_var, model.machine_of_var, problem.hours[problem.usable],
+                        problem.capacity, model.coef, must, model.lower, most_jobs_first)
+                if search.time_limit is not None else None)
+    constraints, count_proven = model.constraints, True
+    two_stages = most_jobs_first and not must.all()
     if two_stages:
-        stage("stage 1 of 2: the most jobs that fit")
-        left = time_left()  # the first stage gets half the time, the second the rest
-        first = _milp(-np.ones(n_var), integrality, bounds, constraints,
-                      None if left is None else left / 2)
-        if first.status == 2:
-            _raise_infeasible(must, usable)
-        if first.x is not None and (fallback is None or first.x.sum() > fallback.sum() + 0.5):
-            fallback = np.round(first.x)
-        if fallback is None and must.any():
-            raise ShiftSearchError(_no_plan_text(time_limit, must))
-        count_needed = 0.0 if fallback is None else float(fallback.sum())
-        count_proven = first.status == 0
-        constraints = constraints + [LinearConstraint(np.ones((1, n_var)), count_needed, np.inf)]
-    if n_var:
-        stage("stage 2 of 2: the best total" if two_stages else "solving")
-        res = _milp(coef, integrality, bounds, constraints, time_left())
-        if res.status == 2:
-            _raise_infeasible(must, usable)
-        if res.x is not None and (fallback is None or res.status == 0
-                                  or coef @ np.round(res.x) <= coef @ fallback):
-            x = np.round(res.x)
-        elif fallback is not None:
-            x = fallback
-        elif must.any():
-            raise ShiftSearchError(_no_plan_text(time_limit, must))
-        proven = res.status == 0 and count_proven
-        dual = getattr(res, "mip_dual_bound", None)
-        if dual is None or not np.isfinite(dual):
-            dual = float(coef[coef < 0].sum())  # every pair at its best: a valid bound
-        bound_min = float(dual) + const
-    elif must.any():
-        _raise_infeasible(must, usable)
-    else:
-        proven, bound_min = True, const  # nothing can run: every job waits
+        fallback, count_proven, constraints = _most_jobs_stage(problem, model, search, fallback)
+    search.stage("stage 2 of 2: the best total" if two_stages else "solving")
+    return _best_total_stage(problem, model, search, fallback, constraints, count_proven)
 
+
+def _most_jobs_stage(problem: _ShiftProblem, model: _Model, search: _Search,
+                     fallback: np.ndarray | None) -> tuple[np.ndarray | None, bool, list]:
+    """Stage 1: the most jobs that fit, in half the time left. Returns the floor plan,
+    whether that count is proven maximal, and the constraints with the count required."""
+    search.stage("stage 1 of 2: the most jobs that fit")
+    n_var = model.size
+    left = search.time_left()
+    first = _milp(-np.ones(n_var), model.integrality, model.bounds, model.constraints,
+                  None if left is None else left / 2)
+    if first.status == 2:
+        _raise_infeasible(problem.must, problem.usable)
+    if first.x is not None and (fallback is None or first.x.sum() > fallback.sum() + 0.5):
+        fallback = np.round(first.x)
+    if fallback is None and problem.must.any():
+        raise search.no_plan(problem.must)
+    count_needed = 0.0 if fallback is None else float(fallback.sum())
+    constraints = model.constraints + [LinearConstraint(np.ones((1, n_var)), count_needed, np.inf)]
+    return fallback, first.status == 0, constraints
+
+
+def _best_total_stage(problem: _ShiftProblem, model: _Model, search: _Search,
+                      fallback: np.ndarray | None, constraints: list,
+                      count_proven: bool) -> _Outcome:
+    """Stage 2: the best total among plans running the required number of jobs."""
+    coef = model.coef
+    res = _milp(coef, model.integrality, model.bounds, constraints, search.time_left())
+    if res.status == 2:
+        _raise_infeasible(problem.must, problem.usable)
+    if res.x is not None and (fallback is None or res.status == 0
+                              or coef @ np.round(res.x) <= coef @ fallback):
+        x = np.round(res.x)
+    elif fallback is not None:
+        x = fallback
+    elif problem.must.any():
+        raise search.no_plan(problem.must)
+    else:
+        x = np.zeros(model.size)
+    dual = getattr(res, "mip_dual_bound", None)
+    if dual is None or not np.isfinite(dual):
+        dual = float(coef[coef < 0].sum())  # every pair at its best: a valid bound
+    return _Outcome(x, res.status == 0 and count_proven, count_proven, float(dual) + model.const)
+
+
+def _shift_plan(problem: _ShiftProblem, model: _Model, outcome: _Outcome,
+                search: _Search) -> ShiftPlan:
+    """Step 4: the plan in job and machine terms, its run order, bound and status text."""
+    n_jobs, n_machines = problem.shape
     machine_of_job = np.full(n_jobs, -1, dtype=np.int64)
-    chosen = x > 0.5
-    machine_of_job[job_of_var[chosen]] = machine_of_var[chosen]
-    total = _plan_total(values, machine_of_job, penalty, objective)
-    bound = -bound_min if maximize else bound_min
-    if proven:
+    chosen = outcome.x > 0.5
+    machine_of_job[model.job_of_var[chosen]] = model.machine_of_var[chosen]
+    total = _plan_total(problem.values, machine_of_job, problem.penalty, problem.objective)
+    bound = -outcome.bound_min if problem.maximize else outcome.bound_min
+    if outcome.proven:
         bound = total
     gap = abs(total - bound) / max(abs(total), 1.0)
     placed = machine_of_job >= 0
     hours_used = np.bincount(machine_of_job[placed],
-                             weights=hrs[np.flatnonzero(placed), machine_of_job[placed]],
+                             weights=problem.hours[np.flatnonzero(placed), machine_of_job[placed]],
                              minlength=n_machines).astype(float)
-    order = tuple(run_order(np.flatnonzero(machine_of_job == j), rush_mask, due_time)
+    order = tuple(run_order(np.flatnonzero(machine_of_job == j), problem.rush, problem.due)
                   for j in range(n_machines))
-    if proven:
-        text = "proven optimal"
-    else:
-        limit = "" if time_limit is None else f" within {time_limit:g} s"
-        text = f"best found{limit}; proven gap {gap:.2%}"
-        if not count_proven:
-            text += "; the number of jobs run is not proven maximal"
     return ShiftPlan(
-        machine_of_job=machine_of_job, total=total, proven_optimal=bool(proven), bound=bound,
-        gap=gap, status=STATUS_OPTIMAL if proven else STATUS_TIME_LIMIT, status_text=text,
-        objective=objective, jobs_on_machine=order, hours_used=hours_used, capacity=cap,
-        values=values, hours=hrs, allowed=mask & ~forbidden, wait_penalty=penalty,
-        must_run=must, pinned_machine=pinned, count_proven_maximal=bool(count_proven),
-        seconds=time.perf_counter() - started)
+        machine_of_job=machine_of_job, total=total, proven_optimal=bool(outcome.proven),
+        bound=bound, gap=gap, status=STATUS_OPTIMAL if outcome.proven else STATUS_TIME_LIMIT,
+        status_text=_status_text(outcome, gap, search.time_limit),
+        objective=problem.objective, jobs_on_machine=order, hours_used=hours_used,
+        capacity=problem.capacity, values=problem.values, hours=problem.hours,
+        allowed=problem.mask & ~problem.forbidden, wait_penalty=problem.penalty,
+        must_run=problem.must, pinned_machine=problem.pinned,
+        count_proven_maximal=bool(outcome.count_proven),
+        seconds=time.perf_counter() - search.started)
+
+
+def _status_text(outcome: _Outcome, gap: float, time_limit: float | None) -> str:
+    if outcome.proven:
+        return "proven optimal"
+    limit = "" if time_limit is None else f" within {time_limit:g} s"
+    text = f"best found{limit}; proven gap {gap:.2%}"
+    if not outcome.count_proven:
+        text += "; the number of jobs run is not proven maximal"
+    return text
 
 
 def _greedy(job_of_var: np.ndarray, machine_of_var: np.ndarray, hours: np.ndarray,

@@ -13,6 +13,8 @@ import math
 from dataclasses import dataclass, field
 from typing import Any
 
+from dispatcher.jsonnum import json_number
+
 from .errors import HistoryInputError
 
 #: Row states of the per-decision table used for machine and job queries. ``running``:
@@ -134,8 +136,7 @@ def plan_rows(plan: dict[str, Any]) -> list[tuple[str, str | None, str | None, f
 
 def _tidy(x: float) -> int | float:
     """Difference of two totals without binary noise (1e-9 resolution); whole values as int."""
-    x = round(float(x), 9)
-    return int(x) if x.is_integer() else x
+    return json_number(x, digits=9)
 
 
 @dataclass(frozen=True)

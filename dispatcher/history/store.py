@@ -29,6 +29,7 @@ from pathlib import Path
 from typing import Any, TypeVar
 
 from dispatcher.errors import HINT_OTHER_HISTORY_FILE
+from dispatcher.jsonnum import json_number
 
 from . import schema
 from .errors import DecisionConflict, DecisionNotFound, HistoryError, HistoryInputError
@@ -115,18 +116,12 @@ class Decision(DecisionSummary):
         return data
 
 
-def _number(x: float | None) -> float | int | None:
-    if x is None:
-        return None
-    return int(x) if float(x).is_integer() and abs(x) < 2**53 else x
-
-
 def _summary(v: dict[str, Any]) -> DecisionSummary:
     return DecisionSummary(
         id=int(v["id"]), time=parse_utc(v["time_utc"]),
         shift_date=date.fromisoformat(v["shift_date"]), shift=v["shift_label"],
         by=v["supervisor"], reason=v["reason_kind"], note=v["reason_text"],
-        shop=v["shop_name"], objective=v["objective"], total=_number(v["total"]),
+        shop=v["shop_name"], objective=v["objective"], total=json_number(v["total"]),
         certificate=v["certificate"], replaces=v["replaces"],
         restored_from=v["restored_from"], station=v.get("station") or "",
         based_on=v.get("based_on"))
@@ -485,7 +480,7 @@ class DecisionStore:
                 s["decision"] = s.pop("id")
                 for r in rows:
                     out.append(dict(s, state=r[0], machine=r[1], job=r[2],
-                                    value=_number(r[3])))
+                                    value=json_number(r[3])))
             return out
         return self._read(read, "reading the history", [])
 

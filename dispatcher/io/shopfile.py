@@ -32,6 +32,7 @@ from dispatcher.shop.model import (
     ShopError,
     Unit,
 )
+from dispatcher.shop.model import UP
 from dispatcher.shop.plan import json_number
 from dispatcher.shop.validate import shop_problems
 
@@ -216,7 +217,7 @@ def shop_from_dict(data: Any, source: str = "shop document", *, check: bool = Tr
             continue
         shop.machines.append(Machine(
             id=r.text(m, "id", where, required=True), name=r.text(m, "name", where, required=True),
-            state=r.text(m, "state", where, "up"), state_note=r.text(m, "state_note", where),
+            state=r.text(m, "state", where, UP), state_note=r.text(m, "state_note", where),
             state_changed=r.stamp(m, "state_changed", where, datetime),
             slots=r.integer(m, "slots", where, 1),
             shift_hours=r.number(m, "shift_hours", where, None, optional=True),

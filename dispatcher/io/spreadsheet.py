@@ -137,7 +137,7 @@ def grid_frame(shop: Shop) -> pd.DataFrame:
     cells = np.where(allowed, values.astype(object), CANNOT_RUN_MARK)
     frame = pd.DataFrame(cells, index=pd.Index(shop.job_names(), name=shop.unit.label()),
                          columns=shop.machine_names())
-    return frame.map(lambda v: int(v) if isinstance(v, float) and v.is_integer() else v)
+    return frame.map(lambda v: json_number(v) if isinstance(v, float) else v)
 
 
 def grid_table(shop: Shop) -> GridTable:

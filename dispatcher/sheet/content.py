@@ -16,6 +16,8 @@ import datetime as dt
 import math
 from dataclasses import dataclass, field
 
+from dispatcher.shop.model import DOWN, MAINTENANCE, UP
+
 #: The cautions printed at the foot of every page. Wording is ours; the points are the
 #: ones every sheet must carry (see the Safety section of the README).
 SAFETY_CAUTIONS: tuple[str, ...] = (
@@ -27,15 +29,15 @@ SAFETY_CAUTIONS: tuple[str, ...] = (
 
 #: Machine states as printed. Words, never colour, carry the meaning.
 STATE_WORDS = {
-    "up": "Up",
-    "down": "DOWN",
-    "maintenance": "MAINTENANCE",
+    UP: "Up",
+    DOWN: "DOWN",
+    MAINTENANCE: "MAINTENANCE",
 }
 #: The same in the narrow State column of the machine table.
 STATE_SHORT = {
-    "up": "Up",
-    "down": "DOWN",
-    "maintenance": "MAINT.",
+    UP: "Up",
+    DOWN: "DOWN",
+    MAINTENANCE: "MAINT.",
 }
 
 
@@ -65,13 +67,13 @@ class SheetMachine:
     """One machine and the jobs it is to run this round, in order (empty: idle or down)."""
 
     name: str
-    state: str = "up"
+    state: str = UP
     jobs: tuple[SheetJob, ...] = ()
     notes: str = ""
 
     @property
     def is_down(self) -> bool:
-        return self.state != "up"
+        return self.state != UP
 
 
 @dataclass(frozen=True)

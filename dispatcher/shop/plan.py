@@ -27,18 +27,13 @@ from dataclasses import dataclass, field
 from typing import Any
 
 from dispatcher.errors import BadInputError
+from dispatcher.jsonnum import json_number as json_number  # the one helper, re-exported
 
 OBJECTIVES = ("total", "maximize", "bottleneck")
 
 
 class PlanFormatError(BadInputError, ValueError):
     """A plan object (JSON) that does not follow the solve contract; names the field."""
-
-
-def json_number(x: float) -> int | float:
-    """JSON-friendly number: whole values print without a trailing .0."""
-    x = float(x)
-    return int(x) if math.isfinite(x) and x.is_integer() and abs(x) < 2**53 else x
 
 
 def contract_json(plan: Any, *, bottleneck: float | None, certificate: dict[str, Any]) -> dict[str, Any]:

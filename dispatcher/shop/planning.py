@@ -11,7 +11,7 @@ import threading
 
 from dispatcher.errors import Cancelled
 
-from .fill import ShiftFill, fill_shop_shift
+from .fill_shift import ShiftFill, fill_shop_shift
 from .model import Problem, Shop, ShopError
 from .plan import Plan
 from .translate import ShopInfeasibleError, solve_shop

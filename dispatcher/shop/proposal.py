@@ -15,15 +15,24 @@ from __future__ import annotations
 from dataclasses import dataclass, field
 from typing import Any
 
-from .fill import ShiftFill
+from .fill_shift import ShiftFill
 from .model import Shop, ShopError
 from .plan import Plan
 from .planning import MODE_ROUND, rush_note, solve_for_mode
-from .redispatch import ShopEvent, ShopRedispatch, apply_events, redispatch_shop
+from .redispatch import (
+    EVENT_DOWN,
+    EVENT_PULLED,
+    EVENT_RUSH,
+    EVENT_UP,
+    ShopEvent,
+    ShopRedispatch,
+    apply_events,
+    redispatch_shop,
+)
 from .translate import ShopInfeasibleError
 
-EVENT_DOWN, EVENT_UP, EVENT_RUSH, EVENT_CONFIRM = "down", "up", "rush", "confirm"
-EVENT_PULL = "pulled"
+EVENT_CONFIRM = "confirm"  # confirm the plan at shift start: a decision, not a shop event
+EVENT_PULL = EVENT_PULLED
 #: The reason a decision on each event is recorded with unless the supervisor picks another.
 EVENT_REASON = {EVENT_DOWN: "breakdown", EVENT_UP: "repair", EVENT_RUSH: "rush-job",
                 EVENT_CONFIRM: "shift-start", EVENT_PULL: "manual-change"}

@@ -59,9 +59,14 @@ from .in_force import in_force_problems
 from .translate import ShopProblem, plan_from_result
 from .validate import check_shop
 
-EVENT_KINDS = ("down", "up", "rush", "done", "pulled", "operator_out", "operator_in")
+#: Event kinds: a machine goes down or comes back up; a waiting job becomes a rush job;
+#: a job is done; a job is pulled from this round; an operator leaves or arrives.
+EVENT_DOWN, EVENT_UP, EVENT_RUSH, EVENT_DONE, EVENT_PULLED = "down", "up", "rush", "done", "pulled"
+EVENT_OPERATOR_OUT, EVENT_OPERATOR_IN = "operator_out", "operator_in"
+EVENT_KINDS = (EVENT_DOWN, EVENT_UP, EVENT_RUSH, EVENT_DONE, EVENT_PULLED, EVENT_OPERATOR_OUT,
+               EVENT_OPERATOR_IN)
 #: Events about the crew: ``name`` is an operator's label (or id).
-OPERATOR_EVENTS = ("operator_out", "operator_in")
+OPERATOR_EVENTS = (EVENT_OPERATOR_OUT, EVENT_OPERATOR_IN)
 
 
 @dataclass(frozen=True)
@@ -189,16 +194,16 @@ def apply_events(shop: Shop, events: Sequence[ShopEvent], source: str = "") -> t
             if ev.kind == "operator_in":
                 op.arrives = op.leaves = None  # here from now on
             continue
-        if ev.kind in ("down", "up"):
+        if ev.kind in (EVENT_DOWN, EVENT_UP):
             if ev.name not in mpos:
                 problems.append(Problem(where, f"no machine named {ev.name!r}"))
                 continue
             machine = after.machines[mpos[ev.name]]
-            new_state = DOWN if ev.kind == "down" else UP
+            new_state = DOWN if ev.kind == EVENT_DOWN else UP
             if machine.state != new_state or ev.note:
                 machine.state_note = ev.note if new_state == DOWN else ""
                 machine.state_changed = ev.time or machine.state_changed
-            if ev.kind == "down":
+            if ev.kind == EVENT_DOWN:
                 machine.state = DOWN
                 for job in after.jobs:
                     if job.state == RUNNING and job.machine == machine.id:
@@ -213,13 +218,13 @@ def apply_events(shop: Shop, events: Sequence[ShopEvent], source: str = "") -> t
         job = after.jobs[i]
         if job.state == DONE:
             problems.append(Problem(where, "the job is already done"))
-        elif ev.kind == "rush":
+        elif ev.kind == EVENT_RUSH:
             if job.state != WAITING:
                 problems.append(Problem(where, "a job that arrives must be waiting"))
             else:
                 job.rush = True
                 arrived.add(i)
-        elif ev.kind == "done":
+        elif ev.kind == EVENT_DONE:
             job.state, job.machine, job.since = DONE, None, None
             left.add(i)
         else:  # pulled: out of this round; a running job frees its slot

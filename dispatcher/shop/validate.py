@@ -22,6 +22,7 @@ from .model import (
     PIN_KINDS,
     RUNNING,
     UNIT_KINDS,
+    UP,
     Problem,
     Shop,
     ShopError,
@@ -96,7 +97,7 @@ def shop_problems(shop: Shop) -> list[Problem]:
             else:
                 running_on[j.machine].append(j.id)
                 m = shop.machine(j.machine)
-                if m.state != "up":
+                if m.state != UP:
                     add(f"{where}, field 'machine'",
                         f"is running on {shop.describe_machine(m.id)}, which is {m.state}; "
                         "set the job back to waiting (or done) or the machine back up")
@@ -182,7 +183,7 @@ def pin_problems(shop: Shop, running_on: dict[str, list[str]]) -> list[Problem]:
             continue
         if p.machine not in {m for m in forced[p.job]}:
             forced[p.job].append(p.machine)
-        if machine.state != "up":
+        if machine.state != UP:
             out.append(Problem(where, f"the machine is {machine.state}; it can take no job"))
         if (p.job, p.machine) not in shop.grid:
             out.append(Problem(where, "the grid says this machine cannot run this job"))

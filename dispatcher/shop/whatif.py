@@ -16,6 +16,7 @@ import numpy as np
 from dispatcher.engine.whatif import what_if
 
 from .crew import refuse_with_crew
+from .model import UP
 from .plan import Plan
 from .planning import Cancelled
 
@@ -100,6 +101,6 @@ def what_if_grid(plan: Plan, cancel=None) -> WhatIfGrid:
         best_other_extra[ok] = others[np.flatnonzero(ok), best_other[ok]]
     wait_extra = np.full(n_jobs, np.nan)
     wait_extra[rows] = w.wait_extra
-    machine_up = np.array([m.state == "up" for m in shop.machines], dtype=bool)
+    machine_up = np.array([m.state == UP for m in shop.machines], dtype=bool)
     return WhatIfGrid(result.objective, extra, in_problem, machine_up, planned, best_other,
                       best_other_extra, wait_extra)

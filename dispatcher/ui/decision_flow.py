@@ -26,6 +26,7 @@ from dispatcher.shop.proposal import (
 )
 from dispatcher.ui.decision import DecisionDialog
 from dispatcher.ui.edits import RemoveJob, SetJobsState, SetMachineFields, SetPlanInForce
+from dispatcher.ui.settings_keys import KEY_SUPERVISOR
 
 
 class DecisionFlow(QObject):
@@ -127,7 +128,7 @@ class DecisionFlow(QObject):
         before, label = self.plan_in_force()
         self.based_on = self._latest_number()
         dialog = DecisionDialog(proposal, self.doc.shop.unit.label(),
-                                str(self.window.settings.value("history/supervisor", "")), self.window,
+                                str(self.window.settings.value(KEY_SUPERVISOR, "")), self.window,
                                 before=before, before_label=label)
         dialog.confirmed.connect(self.apply)
         dialog.setAttribute(Qt.WidgetAttribute.WA_DeleteOnClose)
@@ -150,7 +151,7 @@ class DecisionFlow(QObject):
         except (HistoryError, HistoryInputError, OSError) as exc:
             self.window.messenger.error("Decision not recorded", f"{exc}\n\nThe plan in force is unchanged.")
             return None
-        self.window.settings.setValue("history/supervisor", by)
+        self.window.settings.setValue(KEY_SUPERVISOR, by)
         stack = self.doc.undo_stack
         stack.beginMacro(f"{proposal.title} (decision #{number})")
         if proposal.event == EVENT_PULL:

@@ -22,10 +22,11 @@ from dispatcher.io.spreadsheet import export_grid, export_plan, import_grid_file
 from dispatcher.shop import Shop, ShopError, shop_from_grid
 from dispatcher.ui.document import ShopDocument
 from dispatcher.ui.messages import CANCEL, SAVE, Messenger
+from dispatcher.ui.settings_keys import KEY_RECENT
 
 AUTOSAVE_MS = 60_000
 MAX_RECENT = 8
-RECENT_KEY = "files/recent"
+RECENT_KEY = KEY_RECENT
 
 
 def autosave_folder() -> Path:

@@ -11,7 +11,7 @@ from __future__ import annotations
 
 from PySide6.QtCore import QAbstractTableModel, QModelIndex, QPersistentModelIndex, Qt, Signal
 
-from dispatcher.shop import DONE, DOWN, MAINTENANCE, MUST, MUST_NOT, RUNNING, Plan
+from dispatcher.shop import DONE, DOWN, MAINTENANCE, MUST, MUST_NOT, RUNNING, UP, Plan
 from dispatcher.ui import palette
 from dispatcher.ui.document import ShopDocument
 from dispatcher.ui.edits import SetJobField, SetValues
@@ -36,7 +36,7 @@ _CELL_ROLES = [Qt.ItemDataRole.DisplayRole, Qt.ItemDataRole.EditRole,
 _PLAN_ROLES = [Qt.ItemDataRole.DisplayRole, Qt.ItemDataRole.BackgroundRole,
                Qt.ItemDataRole.ToolTipRole, Qt.ItemDataRole.AccessibleTextRole, PlannedRole]
 
-STATE_TEXT = {"up": f"{palette.MARK_UP} up", DOWN: f"{palette.MARK_DOWN} DOWN",
+STATE_TEXT = {UP: f"{palette.MARK_UP} up", DOWN: f"{palette.MARK_DOWN} DOWN",
               MAINTENANCE: f"{palette.MARK_MAINT} maintenance"}
 
 
@@ -245,7 +245,7 @@ class GridModel(QAbstractTableModel):
                 return palette.colour("forbidden", 60)
             if value is None:
                 return palette.colour("cannot", 28)
-            if doc.machine_at(col).state != "up":
+            if doc.machine_at(col).state != UP:
                 return palette.colour("down", 28)
             return None
         if role == Qt.ItemDataRole.FontRole and (planned or running):
@@ -272,7 +272,7 @@ class GridModel(QAbstractTableModel):
             lines.append(f"{palette.MARK_PINNED} pinned: {job.name} must go to {machine.name}")
         elif pin == MUST_NOT:
             lines.append(f"{palette.MARK_FORBIDDEN} forbidden: {job.name} must not go to {machine.name}")
-        if machine.state != "up":
+        if machine.state != UP:
             lines.append(f"{machine.name} is {machine.state} and takes no jobs")
         return "\n".join(lines)
 
@@ -300,7 +300,7 @@ class GridModel(QAbstractTableModel):
                 if m.state_note:
                     tip += f"\nNote: {m.state_note}"
                 return tip + "\nRight-click (or Shift+F10) for machine actions"
-            if role == Qt.ItemDataRole.BackgroundRole and m.state != "up":
+            if role == Qt.ItemDataRole.BackgroundRole and m.state != UP:
                 return palette.colour(m.state if m.state == DOWN else "maintenance", 90)
             return None
         if section >= self._doc.n_jobs():

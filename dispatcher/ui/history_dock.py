@@ -12,6 +12,7 @@ from PySide6.QtWidgets import QDockWidget, QInputDialog
 from dispatcher.history import HistoryError, HistoryInputError, HistoryStore
 from dispatcher.io.shopfile import ShopFileError, shop_from_dict
 from dispatcher.ui.history_panel import HistoryPanel
+from dispatcher.ui.settings_keys import KEY_SUPERVISOR
 
 
 class HistoryDock(QDockWidget):
@@ -43,7 +44,7 @@ class HistoryDock(QDockWidget):
         supervisor name when ``by`` is None. Returns the new decision's number."""
         window = self.window_
         if by is None:
-            by = str(window.settings.value("history/supervisor", ""))
+            by = str(window.settings.value(KEY_SUPERVISOR, ""))
             by, ok = QInputDialog.getText(window, "Restore decision",
                                           f"Restore decision #{decision_id}: supervisor name", text=by)
             if not ok or not by.strip():

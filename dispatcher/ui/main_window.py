@@ -29,7 +29,7 @@ from PySide6.QtWidgets import QDockWidget, QFileDialog, QLabel, QMainWindow, QMe
 from dispatcher.history import HistoryStore, open_history
 from dispatcher.io.shopfile import SHOP_SUFFIX
 from dispatcher.shop import MUST, MUST_NOT, Plan, Shop
-from dispatcher.shop.fill import ShiftFill
+from dispatcher.shop.fill_shift import ShiftFill
 from dispatcher.ui import palette
 from dispatcher.ui.alternatives_tab import AlternativesTab
 from dispatcher.ui.decision_flow import DecisionFlow
@@ -48,6 +48,7 @@ from dispatcher.shop.proposal import EVENT_DOWN, EVENT_UP
 from dispatcher.ui.solving import SolveOutcome, solve_outcome
 from dispatcher.ui.whatif_tab import WhatIfTab
 from dispatcher.ui.worker import BackgroundRunner
+from dispatcher.ui.settings_keys import KEY_HISTORY
 
 APP_TITLE = "Dispatcher"
 FILE_FILTER = f"Shop documents (*{SHOP_SUFFIX});;Grid files (*.csv *.tsv *.txt *.xlsx);;All files (*)"
@@ -71,7 +72,7 @@ class MainWindow(QMainWindow):
         self._messenger = messenger or Messenger(self)
         self.doc = ShopDocument(shop, self)
         self.files = FileController(self.doc, self._messenger, self.settings, self)
-        self.history = open_history(history_path or self.settings.value("history/path") or None)
+        self.history = open_history(history_path or self.settings.value(KEY_HISTORY) or None)
         self.objective = "total"
         self.mode = MODE_ROUND
         self.plan: Plan | ShiftFill | None = None

@@ -19,7 +19,7 @@ from PySide6.QtWidgets import (
 )
 
 from dispatcher.shop import Plan
-from dispatcher.shop.fill import ShiftFill
+from dispatcher.shop.fill_shift import ShiftFill
 from dispatcher.ui import palette
 from dispatcher.ui.format import fmt
 from dispatcher.shop.planning import MODES

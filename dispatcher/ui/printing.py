@@ -22,12 +22,13 @@ from dispatcher.shop import Plan, PlanFormatError
 from dispatcher.sheet.build import build_sheet
 from dispatcher.sheet.content import SheetContent
 from dispatcher.sheet.render import SheetRenderError, page_size_for, print_sheet, write_pdf
+from dispatcher.ui.settings_keys import KEY_SUPERVISOR
 
 
 def sheet_content(window) -> SheetContent | None:
     """The sheet for the window's shop: the recorded decision in force, else the plan shown."""
     shop = window.doc.shop
-    supervisor = str(window.settings.value("history/supervisor", ""))
+    supervisor = str(window.settings.value(KEY_SUPERVISOR, ""))
     if shop.plan_in_force:
         try:
             decision = window.history.latest(shop.name)

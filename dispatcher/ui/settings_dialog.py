@@ -35,8 +35,8 @@ from dispatcher.history import (
     is_postgres_location,
     open_history,
 )
+from dispatcher.ui.settings_keys import KEY_AUTOSAVE, KEY_HISTORY, KEY_SUPERVISOR
 
-KEY_HISTORY, KEY_SUPERVISOR, KEY_AUTOSAVE = "history/path", "history/supervisor", "autosave/minutes"
 AUTOSAVE_DEFAULT_MIN, AUTOSAVE_MAX_MIN = 1, 60
 HISTORY_FILTER = "Decision histories (*.sqlite);;All files (*)"
 

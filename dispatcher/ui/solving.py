@@ -15,7 +15,7 @@ from dataclasses import dataclass
 
 from dispatcher.engine.fill_shift import ShiftCancelled
 from dispatcher.shop import Plan, Shop, ShopError, ShopInfeasibleError
-from dispatcher.shop.fill import ShiftFill
+from dispatcher.shop.fill_shift import ShiftFill
 from dispatcher.shop.planning import MODE_ROUND, solve_for_mode
 
 

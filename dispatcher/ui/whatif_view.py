@@ -11,7 +11,7 @@ import math
 from PySide6.QtCore import QAbstractTableModel, QModelIndex, QPersistentModelIndex, Qt
 from PySide6.QtWidgets import QLabel, QTableView, QVBoxLayout, QWidget
 
-from dispatcher.shop import Shop
+from dispatcher.shop import UP, Shop
 from dispatcher.ui import palette
 from dispatcher.ui.format import fmt
 from dispatcher.shop.whatif import WhatIfGrid
@@ -44,7 +44,7 @@ class WhatIfModel(QAbstractTableModel):
             return None
         if orientation == Qt.Orientation.Horizontal:
             m = self.shop.machines[section]
-            return m.name if m.state == "up" else f"{m.name}\n{palette.MARK_DOWN} {m.state}"
+            return m.name if m.state == UP else f"{m.name}\n{palette.MARK_DOWN} {m.state}"
         return self.shop.jobs[section].name
 
     def _word(self) -> str:

@@ -1,7 +1,7 @@
-"""Filling a shop's shift (dispatcher.shop.fill) and ``dispatcher solve SHOP --fill-shift``.
+"""Filling a shop's shift (dispatcher.shop.fill_shift) and ``dispatcher solve SHOP --fill-shift``.
 
 References outside the code under test: brute-force enumeration of every plan of small
-shops, applying the rules of dispatcher/shop/fill.py's docstring and the shop document
+shops, applying the rules of dispatcher/shop/fill_shift.py's docstring and the shop document
 definition of run hours (docs/shop-format.md) directly (:func:`brute_force_shop_fill`);
 and, with one hour per job and one hour per machine, the one-to-one shop solve.
 All shops here are invented test data.
@@ -30,7 +30,7 @@ from dispatcher.shop import (
     ShopInfeasibleError,
     solve_shop,
 )
-from dispatcher.shop.fill import fill_shop_shift
+from dispatcher.shop.fill_shift import fill_shop_shift
 
 CONTRACT_KEYS = {"status", "objective", "total", "assignments", "waiting_jobs",
                  "idle_machines", "bottleneck", "waiting_reasons", "certificate"}

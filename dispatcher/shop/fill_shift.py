@@ -101,7 +101,7 @@ class ShiftFill:
                        "text": self.status_text}
         data = contract_json(self, bottleneck=None, certificate=certificate)
         data["machines"] = [{"machine": m.machine, "jobs": list(m.jobs),
-                             "hours_used": json_number(round(m.hours_used, 9)),
+                             "hours_used": json_number(m.hours_used, digits=9),
                              "capacity": json_number(m.capacity), "running": list(m.running)}
                             for m in self.machines]
         return data

@@ -14,7 +14,7 @@ from dispatcher.commands.common import CliError, print_json
 from dispatcher.commands.history import record_decision
 from dispatcher.commands.shop_input import is_shop_document, job_name, must_run_names
 from dispatcher.io.shopfile import load_shop, shop_to_dict
-from dispatcher.shop.fill import ShiftFill, fill_shop_shift
+from dispatcher.shop.fill_shift import ShiftFill, fill_shop_shift
 
 
 def run_fill_shift(args: argparse.Namespace) -> int:

@@ -18,8 +18,9 @@ from typing import Any
 
 import numpy as np
 
-from dispatcher.commands.common import CliError, number
+from dispatcher.commands.common import CliError
 from dispatcher.engine import DispatchResult, what_if
+from dispatcher.jsonnum import json_number
 from dispatcher.shop.alternatives import ranked_choices
 from dispatcher.shop.whatif import machine_minimum
 
@@ -35,7 +36,7 @@ def add_arguments(p: argparse.ArgumentParser) -> None:
 
 
 def check_arguments(args: argparse.Namespace, objective: str) -> None:
-    """Refuse combinations these extras do not support, before any work is done."""
+    """Refuse combinations these options do not support, before any work is done."""
     wanted = args.alternatives is not None or args.what_if
     if not wanted:
         return
@@ -49,8 +50,8 @@ def check_arguments(args: argparse.Namespace, objective: str) -> None:
         raise CliError("--alternatives and --what-if cannot be combined with --fill-shift")
 
 
-def extras(result: DispatchResult, args: argparse.Namespace, jobs: list[str],
-           columns: list[str], machines: list[str] | None = None) -> dict[str, Any]:
+def added_keys(result: DispatchResult, args: argparse.Namespace, jobs: list[str],
+               columns: list[str], machines: list[str] | None = None) -> dict[str, Any]:
     """The added JSON keys. ``columns[c]`` names the machine of engine column c (a machine
     with several slots appears several times); ``machines`` lists every machine to report
     in ``what_if`` (default: the distinct column names)."""
@@ -65,8 +66,8 @@ def extras(result: DispatchResult, args: argparse.Namespace, jobs: list[str],
 def _alternatives(result: DispatchResult, k: int, jobs: list[str],
                   columns: list[str]) -> list[dict[str, Any]]:
     # Columns with the same machine name are slots of one machine (ranked over machines).
-    return [{"total": number(choice.total), "assignments": [
-        {"job": jobs[j], "machine": columns[c], "cost": number(result.values[j, c])}
+    return [{"total": json_number(choice.total), "assignments": [
+        {"job": jobs[j], "machine": columns[c], "cost": json_number(result.values[j, c])}
         for j, c in choice.pairs]} for choice in ranked_choices(result, k, columns)]
 
 
@@ -74,12 +75,12 @@ def _what_if(result: DispatchResult, jobs: list[str], columns: list[str],
              machines: list[str] | None) -> dict[str, dict[str, Any]]:
     names = machines if machines is not None else list(dict.fromkeys(columns))
     best = machine_minimum(what_if(result).extra, columns, names)
-    return {job: {m: (None if np.isnan(best[j, k]) else number(float(best[j, k])))
+    return {job: {m: (None if np.isnan(best[j, k]) else json_number(float(best[j, k])))
                   for k, m in enumerate(names)} for j, job in enumerate(jobs)}
 
 
 def print_text(data: dict[str, Any], plan_assignments: list[dict[str, Any]]) -> None:
-    """Readable form of the extras after the plan."""
+    """Readable form of the alternatives and what-if costs after the plan."""
     if "alternatives" in data:
         mine = {(a["job"], a["machine"]) for a in plan_assignments}
         print()
