@@ -8,6 +8,7 @@ from the shop's own fields, not by the code under test.
 from __future__ import annotations
 
 import json
+import os
 import subprocess
 import sys
 from datetime import date, time
@@ -297,3 +298,36 @@ def test_unknown_operator_is_refused_with_the_labels(tmp_path):
     assert proc.returncode == 2 and "no operator labelled 'Night porter'" in proc.stderr
     assert "Laser operator" in proc.stderr and "Traceback" not in proc.stderr
     assert path.read_bytes() == before
+
+
+# ---- the printed sheet ----------------------------------------------------------------
+
+
+def test_sheet_prints_the_operator_of_each_machine_and_the_crew_notes(tmp_path):
+    from pypdf import PdfReader
+
+    text = subprocess.run([sys.executable, "-m", "dispatcher", "sheet", str(SAMPLE)],
+                          capture_output=True, text=True, check=True).stdout
+    assert "Robot welder A [Up]  operator: Robot cell minder" in text
+    assert "Deburr tumbler [Up]  operator: unattended" in text
+    assert "Short of operators: 6 jobs could run but the crew present can staff only 5" in text
+    assert "Authorisation: Welder (manual): authorisation for group robot welders expires" in text
+    pdf = tmp_path / "sheet.pdf"
+    subprocess.run([sys.executable, "-m", "dispatcher", "sheet", str(SAMPLE), "--pdf", str(pdf)],
+                   capture_output=True, text=True, check=True,
+                   env={**os.environ, "QT_QPA_PLATFORM": "offscreen"})
+    words = " ".join(" ".join(page.extract_text().split()) for page in PdfReader(pdf).pages)
+    for phrase in ("Operator", "Initials", "Robot cell minder", "Brake operator", "Crew",
+                   "Short of operators", "lockout/tagout", "trained and authorised"):
+        assert phrase in words, phrase
+
+
+def test_plain_sheet_has_no_operator_column(tmp_path):
+    from dispatcher.sheet.build import build_sheet
+    from dispatcher.sheet.content import sheet_text
+
+    shop = _shop(1, 1, {(0, 0): 1.0}, [], [])
+    shop.crew = Crew()
+    content = build_sheet(shop, solve_shop(shop))
+    assert not content.staffed and "operator" not in sheet_text(content).lower().replace(
+        "operators trained", "")

@@ -184,6 +184,8 @@ def build_sheet(shop: Shop, plan: Any, decision: Any | None = None, *,
     by_machine = _entries(plan)
     pinned = _must_pins(shop)
     order = order if order is not None else run_order(plan)
+    staffing = getattr(plan, "staffing", None)
+    operator_of = _operators(staffing, shop)
     machines = []
     for machine in shop.machines:
         entries = by_machine.get(machine.name, [])
@@ -209,7 +211,7 @@ def build_sheet(shop: Shop, plan: Any, decision: Any | None = None, *,
         if machine.slots > 1:
             notes = f"{machine.slots} slots" + (f"; {notes}" if notes else "")
         machines.append(SheetMachine(name=machine.name, state=machine.state, jobs=tuple(jobs),
-                                     notes=notes))
+                                     notes=notes, operator=operator_of.get(machine.name, "")))
 
     down = tuple(SheetDownMachine(name=m.name, state=m.state, note=m.state_note,
                                   since=m.state_changed)
@@ -257,4 +259,35 @@ def build_sheet(shop: Shop, plan: Any, decision: Any | None = None, *,
         shop_note=shop.description,
         in_force=in_force,
         maximize=plan.objective == "maximize",
+        staffed=staffing is not None,
+        crew_notes=tuple(crew_notes(staffing)) if staffing is not None else (),
     )
+
+
+def _operators(staffing: dict | None, shop: Shop) -> dict[str, str]:
+    """Machine name -> who minds it ("unattended" for machines that need nobody)."""
+    if staffing is None:
+        return {}
+    out = {m: "unattended" for m in staffing.get("unattended_machines", [])}
+    for who, machines in staffing.get("minding", {}).items():
+        for m in machines:
+            out[m] = who
+    return out
+
+
+def crew_notes(staffing: dict) -> list[str]:
+    """The sheet's crew lines: running machines nobody qualified minds, the shortage,
+    authorisations about to expire, operators not here yet or absent."""
+    lines = []
+    for r in staffing.get("unstaffed_running", []):
+        lines.append(f"CAUTION: {r['machine']} runs {r['job']} with no qualified operator present: "
+                     "stop it only by the site's procedure.")
+    if staffing.get("shortage"):
+        lines.append(f"Short of operators: {staffing['shortage']['text']}.")
+    for w in staffing.get("expiring", []):
+        lines.append(f"Authorisation: {w['text']}.")
+    if staffing.get("operators_not_yet_here"):
+        lines.append("Not here yet: " + ", ".join(staffing["operators_not_yet_here"]) + ".")
+    if staffing.get("operators_absent"):
+        lines.append("Absent: " + ", ".join(staffing["operators_absent"]) + ".")
+    return lines

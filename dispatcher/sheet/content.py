@@ -70,6 +70,7 @@ class SheetMachine:
     state: str = UP
     jobs: tuple[SheetJob, ...] = ()
     notes: str = ""
+    operator: str = ""   # who minds it this round (shops with a crew); "" otherwise
 
     @property
     def is_down(self) -> bool:
@@ -145,6 +146,8 @@ class SheetContent:
     shop_note: str = ""
     in_force: bool = False   # the shop's plan in force (else a draft when not recorded)
     maximize: bool = False
+    staffed: bool = False    # the shop has a crew: print the operator of each machine
+    crew_notes: tuple[str, ...] = ()   # shortages, cautions, expiring authorisations
 
     def decision_line(self) -> str:
         """``Decision #12 of ... (plan in force)`` / ``Plan in force (...)`` / draft."""
@@ -213,7 +216,8 @@ def sheet_text(content: SheetContent) -> str:
             what = "no work: see Machines down" if m.is_down else "idle: no job this round"
             out.append(f"  {m.name} [{state}]: {what}" + (f" ({m.notes})" if m.notes else ""))
             continue
-        out.append(f"  {m.name} [{state}]" + (f" ({m.notes})" if m.notes else ""))
+        out.append(f"  {m.name} [{state}]" + (f" ({m.notes})" if m.notes else "")
+                   + (f"  operator: {m.operator}" if m.operator else ""))
         for k, job in enumerate(m.jobs, start=1):
             bits = [f"{k}. " + ("RUSH " if job.rush else "") + job.name]
             if job.work_order:
@@ -242,6 +246,9 @@ def sheet_text(content: SheetContent) -> str:
         since = format_time(d.since)
         out.append(f"  {d.name} [{STATE_WORDS.get(d.state, d.state.upper())}]"
                    + (f" since {since}" if since else "") + (f": {d.note}" if d.note else ""))
+    if content.staffed:
+        out.append("Crew:" if content.crew_notes else "Crew: every running machine is staffed")
+        out.extend(f"  {line}" for line in content.crew_notes)
     t = content.totals
     out.append("")
     out.append(content.total_line() + (f"   [{t.status}]" if t.status else ""))

@@ -179,17 +179,25 @@ def _job_cells(job: SheetJob, day: dt.date | None) -> tuple[str, str, str]:
     return name, _nb(format_value(job.setup, job.unit)), "; ".join(notes)
 
 
-def _machine_rows(machine: SheetMachine, day: dt.date | None) -> list[str]:
+#: The same with the operator of each machine beside the initials box (shops with a crew).
+_STAFFED_COLUMNS = (
+    ("Machine", 12), ("State", 7), ("Seq.", 6), ("Work order", 10), ("Job", 14),
+    ("Setup", 8), ("Notes", 10), ("Operator", 11), ("Initials", 8), ("Start", 7), ("Finish", 7),
+)
+
+
+def _machine_rows(machine: SheetMachine, day: dt.date | None, staffed: bool = False) -> list[str]:
     state = STATE_SHORT.get(machine.state, machine.state.upper())
     state_cell = f"<b>{_e(state)}</b>" if machine.is_down else _e(state)
     shade = f' bgcolor="{DOWN_SHADE}"' if machine.is_down else ""
     note = _e(machine.notes)
+    op = f"<td>{_e(machine.operator)}</td>" if staffed else ""
     if not machine.jobs:
         what = ("no work: see Machines down" if machine.is_down else "idle: no job this round")
         box = "&#8212;" if machine.is_down else ""
         return [f"<tr{shade}><td><b>{_e(machine.name)}</b></td><td>{state_cell}</td>"
                 f"<td></td><td></td><td><i>{what}</i></td><td></td><td>{note}</td>"
-                f"<td align=center>{box}</td><td align=center>{box}</td>"
+                + ("<td></td>" if staffed else "") + f"<td align=center>{box}</td><td align=center>{box}</td>"
                 f"<td align=center>{box}</td></tr>"]
     rows = []
     count = len(machine.jobs)
@@ -201,7 +209,7 @@ def _machine_rows(machine: SheetMachine, day: dt.date | None) -> list[str]:
         rows.append(
             f"<tr{shade}><td><b>{_e(machine.name)}</b></td><td>{state_cell}</td>"
             f"<td align=center>{seq}</td><td>{_e(job.work_order)}</td><td>{name}</td>"
-            f"<td align=right>{setup}</td><td>{notes}</td><td></td><td></td><td></td></tr>")
+            f"<td align=right>{setup}</td><td>{notes}</td>{op}<td></td><td></td><td></td></tr>")
     return rows
 
 
@@ -232,15 +240,22 @@ _SPACER = '<p style="font-size:6pt">&nbsp;</p>'
 def sheet_body_html(content: SheetContent) -> str:
     """The body of the sheet as Qt rich-text HTML (tables get their borders afterwards)."""
     parts: list[str] = []
-    machine_rows = [row for m in content.machines for row in _machine_rows(m, content.shift_date)]
+    columns = _STAFFED_COLUMNS if content.staffed else _MACHINE_COLUMNS
+    machine_rows = [row for m in content.machines
+                    for row in _machine_rows(m, content.shift_date, content.staffed)]
     if not machine_rows:
-        machine_rows = [f"<tr><td colspan={len(_MACHINE_COLUMNS)}><i>No machines in this shop."
+        machine_rows = [f"<tr><td colspan={len(columns)}><i>No machines in this shop."
                         "</i></td></tr>"]
     n_jobs = len(content.dispatched_jobs())
     parts.append(_table(
         f"Machines and jobs ({len(content.machines)} machines, {n_jobs} jobs)",
-        tuple((content.value_heading if h == "Setup" else h, w) for h, w in _MACHINE_COLUMNS),
+        tuple((content.value_heading if h == "Setup" else h, w) for h, w in columns),
         machine_rows, write_in=True))
+    if content.staffed:
+        parts.append(_SPACER)
+        crew_rows = [f"<tr><td>{_e(line)}</td></tr>" for line in content.crew_notes] or [
+            "<tr><td><i>Every running machine has a present, authorised operator.</i></td></tr>"]
+        parts.append(_table("Crew", (("", 100),), crew_rows, headings=False))
 
     parts.append(_SPACER)
     wait_cols = (("Job", 26), ("Work order", 14), ("Why it waits", 60))
