@@ -156,7 +156,8 @@ class PlanDiff:
     * ``jobs_gone``: jobs in the earlier plan and not in the later one (done or removed;
       a job the later plan lists as already running is not gone);
     * ``machines_now_idle``: idle now, running a job or absent before;
-    * ``machines_back_in_use``: running a job now, idle before;
+    * ``machines_back_in_use``: running a job now, idle or absent (down) before: the
+      mirror of ``machines_gone``, so ``diff(A, B)`` and ``diff(B, A)`` tell the same facts;
     * ``machines_gone``: in the earlier plan and not in the later one (e.g. broken down);
     * ``total_change``: later total minus earlier total (None if either is missing).
     """
@@ -246,6 +247,8 @@ def diff_plans(before: dict[str, Any], after: dict[str, Any], from_id: int | Non
     new_running = {r["job"]: r["machine"] for r in after.get("running", [])}
     new_jobs = set(new_place) | set(after["waiting_jobs"]) | set(new_running)
     old_idle = set(before["idle_machines"])
+    old_running = {r["job"]: r["machine"] for r in before.get("running", [])}
+    old_machines = set(old_place.values()) | old_idle | set(old_running.values())
     new_machines = (set(new_place.values()) | set(after["idle_machines"])
                     | set(new_running.values()))
 
@@ -254,13 +257,13 @@ def diff_plans(before: dict[str, Any], after: dict[str, Any], from_id: int | Non
     newly = tuple((j, m) for j, m in new_place.items() if j not in old_place)
     waiting = tuple(j for j in after["waiting_jobs"] if j not in old_wait)
     gone = tuple(j for j in [a["job"] for a in before["assignments"]] + before["waiting_jobs"]
-                 if j not in new_jobs)
+                 + list(old_running) if j not in new_jobs)
     now_idle = tuple(m for m in after["idle_machines"] if m not in old_idle)
     back = tuple(dict.fromkeys(a["machine"] for a in after["assignments"]
-                               if a["machine"] in old_idle))
+                               if a["machine"] in old_idle or a["machine"] not in old_machines))
     machines_gone = tuple(dict.fromkeys(
         m for m in [a["machine"] for a in before["assignments"]] + before["idle_machines"]
-        if m not in new_machines))
+        + list(old_running.values()) if m not in new_machines))
     t0, t1 = before.get("total"), after.get("total")
     change = _tidy(t1 - t0) if isinstance(t0, (int, float)) and isinstance(t1, (int, float)) \
         else None
