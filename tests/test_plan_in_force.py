@@ -269,3 +269,36 @@ def test_history_diff_reports_the_same_facts_both_ways():
         assert set(ab.jobs_gone) == {j for j in appeared if j not in in_b}
         assert set(ab.machines_gone) <= set(ba.machines_back_in_use) | set(ba.machines_now_idle)
         assert ab.total_change == -ba.total_change
+
+
+def test_grid_with_a_run_hours_column_and_an_hours_file_fills_a_shift(tmp_path, capsys):
+    # Regression: shift filling needed run hours that no grid file could carry. Invented.
+    grid = tmp_path / "g.csv"
+    grid.write_text("job,Press A,Saw,run hours\nWO-1,5,x,2\nWO-2,3,4,\n", encoding="utf-8")
+    hours = tmp_path / "h.csv"
+    hours.write_text("job,Press A,Saw\nWO-2,1.5,2.5\n", encoding="utf-8")
+    shop_path = tmp_path / "g.dshop"
+    assert main(["convert", str(grid), str(shop_path), "--hours", str(hours)]) == 0
+    shop = load_shop(shop_path)
+    assert shop.machine_names() == ["Press A", "Saw"]
+    assert shop.job_by_name("WO-1").run_hours == 2
+    assert shop.hours[(shop.job_by_name("WO-2").id, shop.machine_by_name("Saw").id)] == 2.5
+    capsys.readouterr()
+    assert main(["solve", str(shop_path), "--fill-shift", "--json"]) == 0
+    data = json.loads(capsys.readouterr().out)
+    assert not data["waiting_jobs"]
+    bad = tmp_path / "bad.csv"
+    bad.write_text("job,Press Q\nWO-2,1\n", encoding="utf-8")
+    assert main(["convert", str(grid), str(tmp_path / "b.dshop"), "--hours", str(bad)]) == 2
+    assert "row 1, column 2" in capsys.readouterr().err
+
+
+def test_missing_run_hours_message_says_how_to_give_them(tmp_path, capsys):
+    grid = tmp_path / "g.csv"
+    grid.write_text("job,Press A\nWO-1,5\n", encoding="utf-8")
+    shop_path = tmp_path / "g.dshop"
+    assert main(["convert", str(grid), str(shop_path)]) == 0
+    capsys.readouterr()
+    assert main(["solve", str(shop_path), "--fill-shift"]) == 2
+    err = capsys.readouterr().err
+    assert "'run hours' column" in err and "--hours HOURS.csv" in err

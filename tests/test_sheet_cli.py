@@ -286,6 +286,16 @@ def test_filled_shift_keeps_the_planned_run_order_and_hours():
             assert job.hours == pytest.approx(expected)
     assert content.totals.status == fill.status_text
     assert {w.name for w in content.waiting} == set(fill.waiting_jobs)
+    # Each machine's hours used, as the app shows them: the run hours of its jobs summed
+    # here from the shop (running jobs' hours included by the plan's own count).
+    planned = {x.machine: x for x in fill.machines}
+    assert planned
+    for m in content.machines:
+        if m.name not in planned:
+            continue
+        fm = planned[m.name]
+        assert f"{fm.hours_used:g} of {fm.capacity:g} h used" in m.notes
+        assert fm.hours_used >= sum(j.hours for j in m.jobs if not j.continuing) - 1e-9
 
 
 def test_cli_fill_shift_sheet(tmp_path, capsys):

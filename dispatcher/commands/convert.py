@@ -41,6 +41,10 @@ def register(sub: argparse._SubParsersAction) -> None:
     p.add_argument("--plan", action="store_true",
                    help="from a shop document: write its plan in force (else its best plan) "
                    "instead of its grid")
+    p.add_argument("--hours", metavar="HOURS.csv", default=None,
+                   help="reading a grid file: a second grid file (same job and machine "
+                   "names) whose cells are run hours, for filling a shift; a 'run hours' "
+                   "column in the grid gives each job's run hours instead")
     p.set_defaults(func=run)
 
 
@@ -55,6 +59,8 @@ def run(args: argparse.Namespace) -> int:
                            f"expected one of {', '.join(EXPORT_SUFFIXES)}")
         if args.into:
             raise CliError("--into applies when reading a grid file into a shop document")
+        if args.hours:
+            raise CliError("--hours applies when reading a grid file into a shop document")
         shop = read_shop_arg(src)
         if args.plan:
             # The plan in force is the plan; a document without one gets its best plan.
@@ -77,7 +83,7 @@ def run(args: argparse.Namespace) -> int:
     if args.plan:
         raise CliError("--plan applies when reading a shop document")
     existing = read_shop_arg(args.into) if args.into else None
-    report = import_grid_file(src, existing)
+    report = import_grid_file(src, existing, hours=args.hours)
     if existing is None:
         report.shop.description = f"Converted from the grid file {Path(src).name}."
     save_shop(report.shop, out)

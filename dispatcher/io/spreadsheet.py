@@ -120,10 +120,52 @@ def import_table(table: GridTable, shop: Shop | None = None, *, name: str = "") 
     return report
 
 
-def import_grid_file(path: str | os.PathLike, shop: Shop | None = None) -> ImportReport:
-    """Read a grid file (.csv, .tsv, .txt, .xlsx) and merge it. Raises GridFileError."""
+#: Column headings read as each job's run hours (the same on every machine), not a machine.
+RUN_HOURS_HEADINGS = ("run hours", "run_hours", "run hours (h)")
+
+
+def import_grid_file(path: str | os.PathLike, shop: Shop | None = None,
+                     hours: str | os.PathLike | None = None) -> ImportReport:
+    """Read a grid file (.csv, .tsv, .txt, .xlsx) and merge it. Raises GridFileError.
+
+    A column headed ``run hours`` gives each job's run hours (needed to fill a shift)
+    instead of a machine. ``hours``: a second grid file with the same job and machine
+    names whose cells are the run hours of each pair (empty = none given).
+    """
     table = read_grid(path)
-    return import_table(table, shop, name=Path(path).stem)
+    run_hours = None
+    heads = [m.strip().lower() for m in table.machines]
+    col = next((k for k, h in enumerate(heads) if h in RUN_HOURS_HEADINGS), None)
+    if col is not None:
+        run_hours = {job: float(table.values[n, col]) for n, job in enumerate(table.jobs)
+                     if table.allowed[n, col]}
+        keep = [k for k in range(len(table.machines)) if k != col]
+        table = GridTable(table.jobs, [table.machines[k] for k in keep], table.values[:, keep],
+                          table.allowed[:, keep], table.label)
+    report = import_table(table, shop, name=Path(path).stem)
+    if run_hours:
+        for job in report.shop.jobs:
+            if job.name in run_hours:
+                job.run_hours = run_hours[job.name]
+    if hours is not None:
+        _merge_hours(report.shop, read_grid(hours), str(hours))
+    return report
+
+
+def _merge_hours(shop: Shop, table: GridTable, source: str) -> None:
+    """Pair run hours from a grid of hours; unknown names are refused with their place."""
+    jobs = {j.name: j.id for j in shop.jobs}
+    machines = {m.name: m.id for m in shop.machines}
+    for n, name in enumerate(table.jobs):
+        if name not in jobs:
+            raise GridFileError(source, f"job {name!r} is not in the grid", row=n + 2, column=1)
+    for k, name in enumerate(table.machines):
+        if name not in machines:
+            raise GridFileError(source, f"machine {name!r} is not in the grid", row=1, column=k + 2)
+    for n, name in enumerate(table.jobs):
+        for k, mname in enumerate(table.machines):
+            if table.allowed[n, k]:
+                shop.hours[(jobs[name], machines[mname])] = float(table.values[n, k])
 
 
 def import_clipboard(text: str, shop: Shop | None = None) -> ImportReport:

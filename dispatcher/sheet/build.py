@@ -187,6 +187,9 @@ def build_sheet(shop: Shop, plan: Any, decision: Any | None = None, *,
     staffing = getattr(plan, "staffing", None)
     operator_of = _operators(staffing, shop)
     machines = []
+    # A whole-shift plan says how many of each machine's hours it uses (as the app does).
+    hours_used = {m.machine: (m.hours_used, m.capacity) for m in getattr(plan, "machines", [])
+                  if hasattr(m, "hours_used")}
     for machine in shop.machines:
         entries = by_machine.get(machine.name, [])
         if order is not None and machine.name in order:
@@ -210,6 +213,9 @@ def build_sheet(shop: Shop, plan: Any, decision: Any | None = None, *,
         notes = machine.notes
         if machine.slots > 1:
             notes = f"{machine.slots} slots" + (f"; {notes}" if notes else "")
+        if machine.name in hours_used:
+            used, capacity = hours_used[machine.name]
+            notes = f"{used:g} of {capacity:g} h used" + (f"; {notes}" if notes else "")
         machines.append(SheetMachine(name=machine.name, state=machine.state, jobs=tuple(jobs),
                                      notes=notes, operator=operator_of.get(machine.name, "")))
 

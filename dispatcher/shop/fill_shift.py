@@ -214,7 +214,9 @@ def _no_hours(shop: Shop, i: int, k: int) -> Problem:
     job, machine = shop.jobs[i], shop.machines[k]
     return Problem(f"{shop.describe_job(job.id)}, field 'run_hours'",
                    f"no run hours on {shop.describe_machine(machine.id)}: give the job's "
-                   "run_hours or the pair's hours (needed to fill the shift)")
+                   "run_hours or the pair's hours (needed to fill the shift; from a grid "
+                   "file: a 'run hours' column, or 'dispatcher convert GRID SHOP.dshop "
+                   "--hours HOURS.csv' with the hours of each job on each machine)")
 
 
 def _infeasible_text(exc: ShiftInfeasibleError, names: list[str], mnames: list[str]) -> str:
