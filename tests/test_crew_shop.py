@@ -331,3 +331,26 @@ def test_plain_sheet_has_no_operator_column(tmp_path):
     content = build_sheet(shop, solve_shop(shop))
     assert not content.staffed and "operator" not in sheet_text(content).lower().replace(
         "operators trained", "")
+
+
+def test_history_export_names_operators_unless_asked_not_to(tmp_path):
+    import csv
+
+    shop_path = tmp_path / "s.dshop"
+    save_shop(load_shop(SAMPLE), shop_path)
+    history = tmp_path / "h.sqlite"
+    subprocess.run([sys.executable, "-m", "dispatcher", "solve", str(shop_path), "--record",
+                    "--history", str(history), "--by", "Supervisor A", "--reason", "shift-start"],
+                   capture_output=True, text=True, check=True)
+    with_ops, without = tmp_path / "a.csv", tmp_path / "b.csv"
+    for target, extra in ((with_ops, []), (without, ["--no-operators"])):
+        subprocess.run([sys.executable, "-m", "dispatcher", "history", "export", str(target),
+                        "--history", str(history), *extra], capture_output=True, text=True,
+                       check=True)
+    rows = list(csv.DictReader(with_ops.open(encoding="utf-8")))
+    minded = {(r["machine"], r["operator"]) for r in rows if r["state"] == "assigned"}
+    assert ("Robot welder A", "Robot cell minder") in minded
+    text = without.read_text(encoding="utf-8")
+    assert "operator" not in next(csv.reader(without.open(encoding="utf-8")))
+    for label in ("Robot cell minder", "Brake operator", "Laser operator"):
+        assert label not in text

@@ -146,6 +146,9 @@ def register(sub: argparse._SubParsersAction) -> None:
     q = cmds.add_parser("export", parents=[common, filters],
                         help="write decisions to a CSV file (one line per placement)")
     q.add_argument("target", metavar="FILE.csv")
+    q.add_argument("--no-operators", action="store_true",
+                   help="leave the operator column out (operator labels are personal data "
+                        "at some sites)")
     q.set_defaults(func=run_export)
 
     q = cmds.add_parser("init", help="create an empty history (and its folder) explicitly")
@@ -303,7 +306,7 @@ def run_export(args: argparse.Namespace) -> int:
     store = open_store(args.history)
     if not store.exists():
         raise HistoryError(f"{store.location}: the history does not exist; nothing to export")
-    count = store.export_csv(args.target, **_filters(args))
+    count = store.export_csv(args.target, operators=not args.no_operators, **_filters(args))
     print(f"Wrote {count} rows to {args.target}")
     return 0
 

@@ -24,7 +24,7 @@ if TYPE_CHECKING:
 
 COLUMNS = ["decision", "time", "shift_date", "shift", "by", "reason", "note", "shop",
            "objective", "total", "certificate", "replaces", "restored_from", "state",
-           "machine", "job", "value"]
+           "machine", "job", "value", "operator"]
 
 _FORMULA_START = ("=", "+", "-", "@", "\t", "\r")
 
@@ -45,12 +45,20 @@ def to_dataframe(store: HistoryStore, **filters: Any) -> pd.DataFrame:
     return frame
 
 
-def export_csv(store: HistoryStore, target: str | os.PathLike, **filters: Any) -> int:
-    """Write the matching decisions' rows to ``target`` (UTF-8 CSV); returns the row count."""
+def export_csv(store: HistoryStore, target: str | os.PathLike, *, operators: bool = True,
+               **filters: Any) -> int:
+    """Write the matching decisions' rows to ``target`` (UTF-8 CSV); returns the row count.
+
+    ``operators=False`` leaves the ``operator`` column out: operator labels are personal
+    data at some sites (they stay in the history itself, inside each decision's shop and
+    plan; see docs/crew.md).
+    """
     frame = to_dataframe(store, **filters)
+    if not operators:
+        frame = frame.drop(columns=["operator"])
     import pandas as pd
 
-    for column in [c for c in COLUMNS if not pd.api.types.is_numeric_dtype(frame[c])]:
+    for column in [c for c in frame.columns if not pd.api.types.is_numeric_dtype(frame[c])]:
         frame[column] = frame[column].map(_defuse)
     target = Path(target)
     try:

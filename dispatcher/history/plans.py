@@ -134,6 +134,20 @@ def plan_rows(plan: dict[str, Any]) -> list[tuple[str, str | None, str | None, f
     return rows
 
 
+def plan_operators(plan_json: str | None) -> dict[tuple[str, str], str]:
+    """(job, machine) -> operator label of the placements and running jobs of a stored plan
+    (empty for plans of shops without a crew, and for text that is not a plan)."""
+    try:
+        plan = json.loads(plan_json or "{}")
+    except json.JSONDecodeError:
+        return {}
+    out = {}
+    for entry in [*plan.get("assignments", []), *plan.get("running", [])]:
+        if isinstance(entry, dict) and isinstance(entry.get("operator"), str):
+            out[(entry.get("job"), entry.get("machine"))] = entry["operator"]
+    return out
+
+
 def _tidy(x: float) -> int | float:
     """Difference of two totals without binary noise (1e-9 resolution); whole values as int."""
     return json_number(x, digits=9)

@@ -40,6 +40,7 @@ from .plans import (
     check_plan,
     diff_plans,
     json_text,
+    plan_operators,
     plan_rows,
 )
 from .reasons import parse_reason_kind
@@ -462,8 +463,9 @@ class DecisionStore:
 
         Keys: decision, time, shift_date, shift, by, reason, note, shop, objective, total,
         certificate, replaces, restored_from, station, based_on, state
-        (assigned/running/waiting/idle), machine, job, value. Every decision is checked
-        against its seal first.
+        (assigned/running/waiting/idle), machine, job, value, operator (who minds the
+        machine in a plan of a shop with a crew, from the sealed plan; else None). Every
+        decision is checked against its seal first.
         """
         where, params = self._filters(
             filters.pop("date_from", None), filters.pop("date_to", None),
@@ -478,9 +480,10 @@ class DecisionStore:
             for v, rows in self._sealed(cx, where, params):
                 s = _summary(v).to_json()
                 s["decision"] = s.pop("id")
+                ops = plan_operators(v["plan_json"])
                 for r in rows:
                     out.append(dict(s, state=r[0], machine=r[1], job=r[2],
-                                    value=json_number(r[3])))
+                                    value=json_number(r[3]), operator=ops.get((r[2], r[1]))))
             return out
         return self._read(read, "reading the history", [])
 
