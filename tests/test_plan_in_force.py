@@ -302,3 +302,21 @@ def test_missing_run_hours_message_says_how_to_give_them(tmp_path, capsys):
     assert main(["solve", str(shop_path), "--fill-shift"]) == 2
     err = capsys.readouterr().err
     assert "'run hours' column" in err and "--hours HOURS.csv" in err
+
+
+def test_breakdown_dialog_splits_the_change_in_total(qtbot):
+    # Regression: "Change in total: -13" after a breakdown read as a saving; the dialog's
+    # explanation now splits setups and wait penalties as the command line does.
+    from dispatcher.history import diff_plans
+    from dispatcher.shop.redispatch import ShopEvent, redispatch_shop
+    from dispatcher.ui.decision import diff_html
+
+    shop = small_shop()
+    before = plan_in_force(shop).to_json()
+    out = redispatch_shop(shop, [ShopEvent("down", "Press B")])
+    after = out.to_json()
+    text = diff_html(diff_plans(before, after), "min", before, None, after,
+                     out.move_penalties_paid)
+    b, a = before["total_parts"], after["total_parts"]
+    assert f"setups {b['planned']:g} \u2192 {a['planned']:g}" in text
+    assert f"wait penalties {b['wait_penalties']:g} \u2192 {a['wait_penalties']:g}" in text

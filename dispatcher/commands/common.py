@@ -19,11 +19,12 @@ from dispatcher.errors import (
     BadInputError,
 )
 from dispatcher.jsonnum import json_number
+from dispatcher.shop.plan import parts_text, parts_word
 
 EXIT_STORE = EXIT_HISTORY  # the name the commands used before the error root
 __all__ = ["EXIT_BAD_INPUT", "EXIT_CONFLICT", "EXIT_HISTORY", "EXIT_INFEASIBLE", "EXIT_INTERNAL", "EXIT_OK",
            "EXIT_STORE", "CliError", "plan_json", "print_json", "print_plan",
-           "wait_reason_text"]
+           "wait_reason_text", "parts_text", "parts_word"]
 
 
 class CliError(BadInputError):
@@ -93,24 +94,6 @@ def wait_reason_text(jobs: list[str], machines: list[str], job: int, witness) ->
     names = ", ".join(machines[m] for m in witness.machines)
     return (f"{jobs[job]}: {len(witness.jobs)} jobs can only run on {len(witness.machines)} "
             f"machine(s) ({names}), so {witness.deficiency} of them must wait")
-
-
-def parts_word(objective: str, unit: str = "") -> str:
-    """What the planned values are called: setups, costs or values."""
-    if objective == "maximize":
-        return "values"
-    return "costs" if "cost" in unit.lower() or (unit and "min" not in unit and "setup" not in unit) \
-        else "setups"
-
-
-def parts_text(data: dict[str, Any], unit: str = "") -> str:
-    """`` (setups 208 + wait penalties 210)``: what a plan's total is made of."""
-    parts = data.get("total_parts")
-    if not parts:
-        return ""
-    sign = "-" if data["objective"] == "maximize" else "+"
-    return (f" ({parts_word(data['objective'], unit)} {parts['planned']:g} {sign} wait "
-            f"penalties {parts['wait_penalties']:g})")
 
 
 def print_json(obj: Any) -> None:

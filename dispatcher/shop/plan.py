@@ -93,6 +93,42 @@ def total_parts(plan: Any, move_penalties: float = 0.0) -> dict[str, int | float
             "move_penalties": json_number(move_penalties)}
 
 
+def parts_word(objective: str, unit: str = "") -> str:
+    """What the planned values are called in a sentence: setups, costs or values."""
+    if objective == "maximize":
+        return "values"
+    unit = unit.lower()
+    return "costs" if "cost" in unit or (unit and "min" not in unit and "setup" not in unit) \
+        else "setups"
+
+
+def parts_text(data: dict[str, Any], unit: str = "") -> str:
+    """`` (setups 208 + wait penalties 210)``: what a plan's total (solve JSON) is made of;
+    '' for a plan written before the split was recorded."""
+    parts = data.get("total_parts")
+    if not isinstance(parts, dict) or "planned" not in parts:
+        return ""
+    sign = "-" if data.get("objective") == "maximize" else "+"
+    return (f" ({parts_word(data.get('objective', 'total'), unit)} {parts['planned']:g} {sign} "
+            f"wait penalties {parts['wait_penalties']:g})")
+
+
+def parts_change_text(before: dict[str, Any] | None, after: dict[str, Any], unit: str = "",
+                      move_penalties: float | None = None) -> str:
+    """``setups 208 -> 215, wait penalties 210 -> 180; move penalties 4 (apart)``: the
+    change of a total split the same way ('' when either plan lacks the split)."""
+    a = (before or {}).get("total_parts")
+    b = after.get("total_parts")
+    if not isinstance(a, dict) or not isinstance(b, dict):
+        return ""
+    word = parts_word(after.get("objective", "total"), unit)
+    text = (f"{word} {a['planned']:g} \u2192 {b['planned']:g}, wait penalties "
+            f"{a['wait_penalties']:g} \u2192 {b['wait_penalties']:g}")
+    if move_penalties:
+        text += f"; move penalties {move_penalties:g} (apart)"
+    return text
+
+
 def reasons_json(reasons: dict[str, "WaitReason"]) -> dict[str, Any]:
     """``waiting_reasons`` (job -> group number and sentence) and ``wait_groups``.
 

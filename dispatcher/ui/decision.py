@@ -27,6 +27,7 @@ from PySide6.QtWidgets import (
 
 from dispatcher.history import REASON_KINDS, PlanDiff
 from dispatcher.shop.proposal import EVENT_CONFIRM, EVENT_DOWN, EVENT_PULL, EVENT_REASON, EVENT_RUSH, EVENT_UP, Proposal
+from dispatcher.shop.plan import parts_change_text
 from dispatcher.ui import palette
 from dispatcher.ui.format import fmt
 
@@ -46,9 +47,11 @@ NOTE_HINTS = {
 
 
 def diff_html(diff: PlanDiff | None, unit: str, before: dict | None = None,
-              pulled: str | None = None) -> str:
+              pulled: str | None = None, after: dict | None = None,
+              move_penalties: float | None = None) -> str:
     """The difference as a short list a supervisor reads at a glance (marks, not colour only).
-    ``pulled`` names a job taken out of the shop by this decision."""
+    ``pulled`` names a job taken out of the shop by this decision; ``after`` (the proposed
+    plan's JSON) lets the total change be split into setups and wait penalties."""
     if diff is None:
         return "<p>No plan in force to compare with.</p>"
     e = html.escape
@@ -78,6 +81,9 @@ def diff_html(diff: PlanDiff | None, unit: str, before: dict | None = None,
         sign = "+" if diff.total_change > 0 else ""
         total = (f"<p>Total: {fmt(diff.total_before)} \u2192 <b>{fmt(diff.total_after)}</b> {unit} "
                  f"({sign}{fmt(diff.total_change)})")
+        split = parts_change_text(before, after, unit, move_penalties) if after is not None else ""
+        if split:
+            total += f" - {e(split)}"
         if diff.now_waiting and diff.total_change < 0:
             total += (" - lower only because fewer jobs are dispatched: a waiting job adds "
                       "just its wait penalty")
@@ -127,7 +133,8 @@ class DecisionDialog(QDialog):
                 moves += ("<p>The job is taken out of the shop document (Undo brings it back); "
                           "earlier decisions in the history keep it.</p>")
             body = QLabel(warn + f"<b>Proposed changes against {html.escape(before_label)}:</b>"
-                          + diff_html(proposal.diff, unit, before, pulled) + moves)
+                          + diff_html(proposal.diff, unit, before, pulled, proposal.plan.to_json(),
+                                      proposal.move_penalties) + moves)
         body.setObjectName("proposalDiff")
         body.setWordWrap(True)
         body.setTextFormat(Qt.TextFormat.RichText)

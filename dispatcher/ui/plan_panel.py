@@ -20,6 +20,7 @@ from PySide6.QtWidgets import (
 
 from dispatcher.shop import Plan
 from dispatcher.shop.fill_shift import ShiftFill
+from dispatcher.shop.plan import parts_text
 from dispatcher.ui import palette
 from dispatcher.ui.format import fmt
 from dispatcher.shop.planning import MODES
@@ -160,7 +161,7 @@ class PlanPanel(QWidget):
         self.status.setText(f"{palette.MARK_PLANNED} Up to date (solved in {seconds * 1000:.0f} ms)")
         self.status.setToolTip("The plan shown matches the grid as it is now")
         label = "value" if plan.objective == "maximize" else unit
-        self.total.setText(f"{fmt(plan.total)} {label}")
+        self.total.setText(f"{fmt(plan.total)} {label}" + parts_text(plan.to_json(), unit))
         self.total.setToolTip(
             "Sum of the values of newly dispatched jobs "
             + ("minus" if plan.objective == "maximize" else "plus")
