@@ -110,3 +110,36 @@ def test_redispatch_with_rush_conflict_equals_cold_solve():
         assert after.verify()
         assert np.isclose(after.total, ref.total)
         assert int(((after.machine_of_job >= 0) & rush).sum()) == ref.rush_placed
+
+
+def test_whole_shift_places_the_most_rush_jobs_among_plans_with_the_most_jobs():
+    # Brute force over every assignment of 5 jobs to 2 machines or waiting, with hours.
+    import itertools
+
+    from dispatcher.engine import fill_shift
+
+    rng = np.random.default_rng(4)
+    for _ in range(25):
+        m, n = 5, 2
+        values = rng.integers(0, 9, size=(m, n)).astype(float)
+        hours = rng.integers(1, 4, size=(m, n)).astype(float)
+        cap = rng.integers(2, 6, size=n).astype(float)
+        rush = rng.random(m) < 0.5
+        best = None
+        for combo in itertools.product(range(-1, n), repeat=m):
+            load = np.zeros(n)
+            for i, j in enumerate(combo):
+                if j >= 0:
+                    load[j] += hours[i, j]
+            if (load > cap).any():
+                continue
+            placed = sum(j >= 0 for j in combo)
+            rush_placed = sum(j >= 0 and rush[i] for i, j in enumerate(combo))
+            total = sum(values[i, j] for i, j in enumerate(combo) if j >= 0)
+            key = (-placed, -rush_placed, total)
+            best = key if best is None or key < best else best
+        plan = fill_shift(values, hours, cap, priority=rush)
+        got = plan.machine_of_job
+        assert plan.verify()
+        assert (-(got >= 0).sum(), -((got >= 0) & rush).sum()) == best[:2]
+        assert plan.total == pytest.approx(best[2])

@@ -8,7 +8,8 @@ tests check against):
   on a machine do not exceed its capacity; must-run jobs (and pinned jobs) always run,
   pinned jobs on their pinned machine, never on a forbidden one;
 * with ``most_jobs_first=True`` (the default, as in the one-to-one engine) the plan runs
-  as many jobs as the hours permit; among those plans
+  as many jobs as the hours permit, and among those as many ``priority`` (rush) jobs as
+  possible; among those plans
 * it minimises ``sum(planned setup values) + sum(wait penalties of waiting jobs)``, or
   with ``maximize=True`` maximises ``sum(planned values) - sum(wait penalties)``.
 
@@ -331,7 +332,7 @@ def fill_shift(values, hours, capacity, *, allowed=None, maximize: bool = False,
                time_limit: float | None = None, wait_penalty=None, must_run=None,
                all_jobs: bool = False, pins: Mapping | None = None, rush=None, due=None,
                machine_factor=None, most_jobs_first: bool = True, cancel=None,
-               progress=None) -> ShiftPlan:
+               progress=None, priority=None) -> ShiftPlan:
     """Best shift plan running several jobs per machine within each machine's hours.
 
     Parameters
@@ -362,6 +363,10 @@ def fill_shift(values, hours, capacity, *, allowed=None, maximize: bool = False,
         defaults to the ``must_run`` jobs given (not to ``all_jobs`` or pinned ones).
     most_jobs_first : bool
         Run as many jobs as fit before optimising values (as the one-to-one engine does).
+    priority : boolean mask or indices of jobs, optional
+        Jobs placed first (rush jobs): with ``most_jobs_first``, among the plans running
+        the most jobs only those running the most priority jobs count. Not a constraint:
+        priority jobs that do not fit wait.
     cancel : threading.Event, optional
         Checked before each solver stage; when set, :class:`ShiftCancelled` is raised. A
         stage already running is not interrupted (scipy offers no hook): pair it with a
@@ -412,6 +417,8 @@ def fill_shift(values, hours, capacity, *, allowed=None, maximize: bool = False,
     problem = _checked_problem(values, hours, capacity, allowed=allowed, maximize=maximize,
                                wait_penalty=wait_penalty, must_run=must_run, all_jobs=all_jobs,
                                pins=pins, rush=rush, due=due, machine_factor=machine_factor)
+    problem.priority = _job_mask(priority, problem.shape[0], "priority") if priority is not None \
+        else np.zeros(problem.shape[0], dtype=bool)
     _diagnose(problem.usable, problem.hours, problem.capacity, problem.must, problem.pinned,
               problem.mask)
     model = _build_model(problem)
@@ -436,6 +443,7 @@ class _ShiftProblem:
     due: np.ndarray
     maximize: bool
     usable: np.ndarray      # pairs the model gets a variable for
+    priority: np.ndarray | None = None  # placed first (rush), not a constraint
 
     @property
     def objective(self) -> str:
@@ -582,8 +590,13 @@ def _most_jobs_stage(problem: _ShiftProblem, model: _Model, search: _Search,
     search.stage("stage 1 of 2: the most jobs that fit")
     n_var = model.size
     left = search.time_left()
-    first = _milp(-np.ones(n_var), model.integrality, model.bounds, model.constraints,
-                  None if left is None else left / 2)
+    # The most jobs, then the most priority jobs, in one objective: a job counts P + 1, a
+    # priority job P + 2 (P priority jobs), so one more job outweighs every priority job.
+    prio = problem.priority if problem.priority is not None else np.zeros(problem.shape[0], bool)
+    prio_var = prio[model.job_of_var] & ~problem.must[model.job_of_var]
+    weight = float(prio_var.sum() + 1)
+    first = _milp(-(weight + prio_var.astype(float)), model.integrality, model.bounds,
+                  model.constraints, None if left is None else left / 2)
     if first.status == 2:
         _raise_infeasible(problem.must, problem.usable)
     if first.x is not None and (fallback is None or first.x.sum() > fallback.sum() + 0.5):
@@ -592,6 +605,9 @@ def _most_jobs_stage(problem: _ShiftProblem, model: _Model, search: _Search,
         raise search.no_plan(problem.must)
     count_needed = 0.0 if fallback is None else float(fallback.sum())
     constraints = model.constraints + [LinearConstraint(np.ones((1, n_var)), count_needed, np.inf)]
+    if prio_var.any() and fallback is not None:
+        prio_needed = float(fallback[prio_var].sum())
+        constraints.append(LinearConstraint(prio_var.astype(float)[None, :], prio_needed, np.inf))
     return fallback, first.status == 0, constraints
 
 

@@ -86,6 +86,7 @@ class ShiftFill:
     running: list[RunningJob] = field(default_factory=list)
     unavailable_machines: list[str] = field(default_factory=list)
     engine_plan: ShiftPlan | None = field(default=None, repr=False, compare=False)
+    rush_waiting: list[str] = field(default_factory=list)
 
     def jobs_on(self, machine: str) -> list[str]:
         """Running then planned jobs of a machine, in run order (empty if unknown)."""
@@ -187,7 +188,9 @@ def fill_shop_shift(shop: Shop, *, maximize: bool = False, extra_must_run: Itera
         elif p.kind == MUST_NOT:
             pins[(n, col)] = False
     jobs = [shop.jobs[i] for i in rows]
-    must = np.array([j.rush or j.name in extra for j in jobs], dtype=bool)
+    # Rush is a priority (as in one round): the most jobs, then the most rush jobs; only
+    # jobs named as must-run (and pinned jobs) must run.
+    must = np.array([j.name in extra for j in jobs], dtype=bool)
     rush = np.array([j.rush for j in jobs], dtype=bool)
     due = np.array([j.due.timestamp() if j.due else np.nan for j in jobs], dtype=float)
     penalty = np.array([j.wait_penalty for j in jobs], dtype=float)
@@ -198,7 +201,7 @@ def fill_shop_shift(shop: Shop, *, maximize: bool = False, extra_must_run: Itera
                           capacity, allowed=allowed.reshape(len(rows), len(up)),
                           maximize=maximize, time_limit=time_limit, wait_penalty=penalty,
                           must_run=must, pins=pins, rush=rush, due=due, cancel=cancel,
-                          progress=progress)
+                          progress=progress, priority=rush)
     except ShiftInfeasibleError as exc:
         raise ShopInfeasibleError(_infeasible_text(exc, names, mnames),
                                   [names[i] for i in exc.jobs],
@@ -273,7 +276,8 @@ def _fill_from_plan(shop: Shop, plan: ShiftPlan, rows: list[int], up: list[int],
         waiting_jobs=[names[int(n)] for n in plan.waiting_jobs], idle_machines=idle,
         waiting_reasons=reasons, verified=plan.verify(), running=run_list,
         unavailable_machines=[m.name for m in shop.machines if m.state != UP],
-        engine_plan=plan)
+        engine_plan=plan,
+        rush_waiting=[names[int(n)] for n in plan.waiting_jobs if shop.jobs[rows[int(n)]].rush])
 
 
 def _wait_reason(plan: ShiftPlan, n: int, names: list[str], mnames: list[str]) -> WaitReason:
