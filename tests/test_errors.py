@@ -30,7 +30,7 @@ from dispatcher.history import DecisionNotFound, HistoryError, HistoryInputError
 from dispatcher.io.grid import GridFileError
 from dispatcher.io.shopfile import ShopFileError, save_shop
 from dispatcher.io.spreadsheet import ExportError
-from dispatcher.shop import Job, Machine, PlanFormatError, Shift, Shop, ShopError
+from dispatcher.shop import MUST, Job, Machine, Pin, PlanFormatError, Shift, Shop, ShopError
 from dispatcher.shop.translate import ShopInfeasibleError
 
 CORE_PACKAGES = ("engine", "shop", "io", "history", "sheet", "commands")
@@ -145,11 +145,13 @@ def test_internal_errors_keep_their_traceback(monkeypatch, tmp_path):
 
 
 def _rush_too_long(tmp_path):
-    """Invented shop: one rush job longer than any machine's shift."""
+    """Invented shop: one pinned rush job longer than any machine's shift (a pin is hard
+    in a whole shift; a rush flag alone is a priority and would let the job wait)."""
     shop = Shop(name="Invented cell (test data)", shift=Shift(hours=8))
     shop.machines = [Machine("M1", "Laser")]
     shop.jobs = [Job("J1", "WO-1", run_hours=9, rush=True, due=datetime(2026, 3, 14, 9))]
     shop.grid[("J1", "M1")] = 5
+    shop.pins = [Pin("J1", "M1", MUST)]
     path = tmp_path / "cell.dshop"
     save_shop(shop, path)
     return path
@@ -163,9 +165,8 @@ def test_same_error_same_line_from_every_command(tmp_path, capsys):
     assert main(["sheet", str(path), "--fill-shift"]) == 3
     from_sheet = capsys.readouterr().err
     assert from_solve == from_sheet
-    assert from_solve == (f"dispatcher: {path}: infeasible: must-run job WO-1 fits on no "
-                          "machine: it needs at least 9 h, its machines (Laser) have at most "
-                          "8 h free this shift\n")
+    assert from_solve == (f"dispatcher: {path}: infeasible: jobs WO-1 are pinned to Laser: "
+                          "they need 9 h, it has 8 h free this shift\n")
 
 
 def test_one_round_infeasible_names_the_file_once(tmp_path, capsys):
