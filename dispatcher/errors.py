@@ -32,6 +32,7 @@ more, because its settings dialog is where the file is chosen.
 from __future__ import annotations
 
 from collections.abc import Sequence
+
 EXIT_OK = 0
 EXIT_INTERNAL = 1
 EXIT_BAD_INPUT = 2
@@ -53,8 +54,7 @@ def column_letter(column: int) -> str:
     return letters
 
 
-def location_text(source: str = "", row: int | None = None, column: int | None = None,
-                  where: str = "") -> str:
+def location_text(source: str = "", row: int | None = None, column: int | None = None, where: str = "") -> str:
     """``"file: row 3, column 2 (B): job 'WO-1', field 'due'"`` (empty parts left out)."""
     parts = []
     if source:
@@ -79,8 +79,16 @@ class DispatcherError(Exception):
 
     exit_code: int = EXIT_BAD_INPUT  #: set by each family; an instance may override it
 
-    def __init__(self, message: str = "", *, source: str = "", row: int | None = None,
-                 column: int | None = None, where: str = "", hint: str | None = None):
+    def __init__(
+        self,
+        message: str = "",
+        *,
+        source: str = "",
+        row: int | None = None,
+        column: int | None = None,
+        where: str = "",
+        hint: str | None = None,
+    ):
         self.message = message
         self.source = source
         self.row = row

@@ -224,7 +224,7 @@ def test_features_that_ignore_the_crew_refuse_a_crewed_shop(option):
 
 # ---- events: an operator leaves or arrives -------------------------------------------
 
-from dispatcher.shop.redispatch import ShopEvent, redispatch_shop
+from dispatcher.shop.redispatch import ShopEvent, redispatch_shop  # noqa: E402 - this section's own
 
 
 @settings(max_examples=60, deadline=None)

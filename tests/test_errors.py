@@ -49,8 +49,11 @@ def _error_classes():
             # A private class (leading underscore) is a signal caught inside its own
             # module (history.postgres._Stale: retry on a fresh connection), never raised
             # to a caller, so it needs no exit code.
-            if issubclass(obj, BaseException) and obj.__module__ == module.__name__ \
-                    and not obj.__name__.startswith("_"):
+            if (
+                issubclass(obj, BaseException)
+                and obj.__module__ == module.__name__
+                and not obj.__name__.startswith("_")
+            ):
                 found[f"{obj.__module__}.{obj.__qualname__}"] = obj
     return found
 
@@ -62,15 +65,29 @@ def test_every_error_class_of_the_core_derives_from_the_root():
     assert strays == []
 
 
-@pytest.mark.parametrize("cls, code", [
-    (DispatchInputError, 2), (GridFileError, 2), (ShopError, 2), (ShopFileError, 2),
-    (PlanFormatError, 2), (HistoryInputError, 2), (DecisionNotFound, 2), (ExportError, 2),
-    (CliError, 2), (BadInputError, 2),
-    (InfeasibleError, 3), (ShiftInfeasibleError, 3), (ShopInfeasibleError, 3),
-    (ShiftSearchError, 3),
-    (HistoryError, 4), (HistoryUnusableError, 4),
-    (CertificateError, 1), (ShiftCancelled, 130),
-])
+@pytest.mark.parametrize(
+    "cls, code",
+    [
+        (DispatchInputError, 2),
+        (GridFileError, 2),
+        (ShopError, 2),
+        (ShopFileError, 2),
+        (PlanFormatError, 2),
+        (HistoryInputError, 2),
+        (DecisionNotFound, 2),
+        (ExportError, 2),
+        (CliError, 2),
+        (BadInputError, 2),
+        (InfeasibleError, 3),
+        (ShiftInfeasibleError, 3),
+        (ShopInfeasibleError, 3),
+        (ShiftSearchError, 3),
+        (HistoryError, 4),
+        (HistoryUnusableError, 4),
+        (CertificateError, 1),
+        (ShiftCancelled, 130),
+    ],
+)
 def test_exit_code_lives_on_the_class(cls, code):
     assert cls.exit_code == code
 
@@ -85,6 +102,7 @@ def test_the_three_infeasible_errors_are_one_family():
 
 def test_sheet_render_error_is_bad_input():
     from dispatcher.sheet.render import SheetRenderError  # Qt: imported only here
+
     assert issubclass(SheetRenderError, BadInputError)
     assert issubclass(SheetRenderError, RuntimeError)
 
@@ -92,8 +110,7 @@ def test_sheet_render_error_is_bad_input():
 def test_source_is_carried_and_prefixes_the_message():
     err = BadInputError("must be a number >= 0", source="grid.csv", row=3, column=28)
     assert str(err) == "grid.csv: row 3, column 28 (AB): must be a number >= 0"
-    assert (err.source, err.row, err.column, err.message) == ("grid.csv", 3, 28,
-                                                               "must be a number >= 0")
+    assert (err.source, err.row, err.column, err.message) == ("grid.csv", 3, 28, "must be a number >= 0")
     err = BadInputError("must be >= 0", source="shop.dshop", where="job 'WO-1', field 'due'")
     assert str(err) == "shop.dshop: job 'WO-1', field 'due': must be >= 0"
     assert str(BadInputError("plain")) == "plain"
@@ -105,6 +122,7 @@ def test_existing_errors_keep_their_wording_and_gain_their_source():
     assert (grid.source, grid.row, grid.column) == ("g.csv", 2, 3)
     assert str(GridFileError("g.csv", "empty file")) == "g.csv: empty file"
     from dispatcher.shop import Problem
+
     one = ShopError([Problem("job 'WO-1' (id J1), field 'due'", "not a time")], "s.dshop")
     assert str(one) == "s.dshop: job 'WO-1' (id J1), field 'due': not a time"
     assert one.where == "job 'WO-1' (id J1), field 'due'" and one.source == "s.dshop"
@@ -165,8 +183,9 @@ def test_same_error_same_line_from_every_command(tmp_path, capsys):
     assert main(["sheet", str(path), "--fill-shift"]) == 3
     from_sheet = capsys.readouterr().err
     assert from_solve == from_sheet
-    assert from_solve == (f"dispatcher: {path}: infeasible: jobs WO-1 are pinned to Laser: "
-                          "they need 9 h, it has 8 h free this shift\n")
+    assert from_solve == (
+        f"dispatcher: {path}: infeasible: jobs WO-1 are pinned to Laser: they need 9 h, it has 8 h free this shift\n"
+    )
 
 
 def test_one_round_infeasible_names_the_file_once(tmp_path, capsys):
@@ -188,8 +207,9 @@ def test_infeasible_grid_is_named(tmp_path, capsys):
     grid = tmp_path / "g.csv"
     grid.write_text("job,M1\nA,1\nB,2\n", encoding="utf-8")
     assert main(["solve", str(grid), "--must-run", "A,B"]) == 3
-    assert capsys.readouterr().err == (f"dispatcher: {grid}: infeasible: must-run jobs A, B (2) "
-                                       "compete for only 1 machine(s): M1\n")
+    assert capsys.readouterr().err == (
+        f"dispatcher: {grid}: infeasible: must-run jobs A, B (2) compete for only 1 machine(s): M1\n"
+    )
 
 
 def test_internal_error_is_not_bad_input():

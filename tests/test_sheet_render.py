@@ -205,7 +205,7 @@ def test_printer_and_pdf_share_the_layout(app, tmp_path):
     assert print_sheet(content, printer) == pages
     del printer
     ours, theirs = pdf_pages(direct), pdf_pages(tmp_path / "printer.pdf")
-    assert len(theirs) == pages
+    assert len(ours) == len(theirs) == pages
     for i in range(pages):
         assert f"Page {i + 1} of {pages}" in theirs[i]
 

@@ -14,7 +14,7 @@ from dispatcher.errors import Cancelled
 from .fill_shift import ShiftFill, fill_shop_shift
 from .model import Problem, Shop, ShopError
 from .plan import Plan
-from .translate import ShopInfeasibleError, solve_shop
+from .translate import solve_shop
 
 #: Planning modes: one dispatch round (one job per free machine slot) or the whole shift
 #: (several jobs per machine, in run order, within its hours).

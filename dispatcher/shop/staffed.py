@@ -19,7 +19,7 @@ from dispatcher.engine import InfeasibleError
 from dispatcher.engine.staffing import StaffedPlan, staffed_dispatch
 
 from .crew import PRESENT, authorised, expiring, present_at, warning_text
-from .model import MUST, Shop
+from .model import Shop
 from .plan import Assignment, Plan, RunningJob, WaitReason
 
 

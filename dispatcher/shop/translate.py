@@ -171,7 +171,8 @@ def solve_shop(shop: Shop, objective: str = "total", *, extra_must_run: Iterable
 
     ``objective`` is ``"total"`` (least setup plus wait penalties), ``"maximize"`` (values
     are gains) or ``"bottleneck"``. A shop with a crew is planned with an operator on every
-    running machine (:mod:`dispatcher.shop.staffed`; objectives total and maximize). Raises :class:`ShopError` for an inconsistent shop and
+    running machine (:mod:`dispatcher.shop.staffed`; objectives total and maximize).
+    Raises :class:`ShopError` for an inconsistent shop and
     :class:`ShopInfeasibleError` when jobs named in ``extra_must_run`` cannot all be
     placed (rush and pinned jobs that cannot all be placed wait and are named in
     ``plan.rush_waiting`` with their reasons).

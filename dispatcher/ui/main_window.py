@@ -203,8 +203,8 @@ class MainWindow(QMainWindow):
                                       "The current machine takes no jobs (planned maintenance)")
         self.act_slots = self._action("Set &slots\u2026", self.edits.ask_slots, None,
                                       "How many jobs the current machine takes per round")
-        self.act_confirm = self._action("&Put plan in force\u2026", lambda: self.decisions.confirm_plan(), "Ctrl+Return",
-                                        "Record the plan shown as the decision in force")
+        self.act_confirm = self._action("&Put plan in force\u2026", lambda: self.decisions.confirm_plan(),
+                                        "Ctrl+Return", "Record the plan shown as the decision in force")
         self.act_resolve = self._action("Re-&solve now", self.request_solve, "F5", "Solve again")
         self.act_cancel = self._action("&Cancel solve", self.cancel_solve, "Esc",
                                        "Stop waiting for a long solve")

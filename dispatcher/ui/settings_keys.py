@@ -3,9 +3,9 @@
 Kept free of Qt imports so any part of ui/ can use it without an import cycle.
 """
 
-KEY_HISTORY = "history/path"            # the history file chosen in Edit > Settings
-KEY_SUPERVISOR = "history/supervisor"   # default name for "decided by"
-KEY_AUTOSAVE = "autosave/minutes"       # autosave interval
-KEY_RECENT = "files/recent"             # recently opened shop documents, newest first
+KEY_HISTORY = "history/path"  # the history file chosen in Edit > Settings
+KEY_SUPERVISOR = "history/supervisor"  # default name for "decided by"
+KEY_AUTOSAVE = "autosave/minutes"  # autosave interval
+KEY_RECENT = "files/recent"  # recently opened shop documents, newest first
 
 ALL_KEYS = (KEY_HISTORY, KEY_SUPERVISOR, KEY_AUTOSAVE, KEY_RECENT)

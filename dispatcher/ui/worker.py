@@ -9,7 +9,8 @@ Cancellation is explicit: :meth:`BackgroundRunner.cancel` sets the running job's
 event (computations that look at it stop early), discards its result and reports
 ``cancelled``. A newer request also sets the running job's cancel event (its result would
 be discarded anyway), so a superseded whole-shift solve or ranking stops early instead of
-holding the pool thread. :meth:`BackgroundRunner.shutdown` cancels without waiting. Long computations (over :data:`PROGRESS_AFTER_MS`) report ``slow`` so the
+holding the pool thread. :meth:`BackgroundRunner.shutdown` cancels without waiting. Long
+computations (over :data:`PROGRESS_AFTER_MS`) report ``slow`` so the
 window can show progress and a cancel button.
 """
 

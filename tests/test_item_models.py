@@ -1,0 +1,84 @@
+"""Every item model of the app passes pytest-qt's ``qtmodeltester`` (Qt's own model checks:
+row and column counts, parents, indexes, data for every role, signals on change).
+
+The models: the shop grid (ui/grid_model.py), the what-if map (ui/whatif_view.py) and the
+decision list of the history dock (ui/history_panel.py). Each is checked empty, filled
+from an invented sample shop, and after a change.
+"""
+
+from __future__ import annotations
+
+import pytest
+
+from dispatcher.history import HistoryStore
+from dispatcher.io.shopfile import load_shop, shop_to_dict
+from dispatcher.shop import solve_shop
+from dispatcher.shop.whatif import what_if_grid
+from dispatcher.ui.document import ShopDocument
+from dispatcher.ui.edits import SetPin
+from dispatcher.ui.grid_model import GridModel
+from dispatcher.ui.history_panel import DecisionListModel
+from dispatcher.ui.whatif_view import WhatIfModel
+
+ITEM_MODELS = (GridModel, WhatIfModel, DecisionListModel)
+
+
+@pytest.fixture
+def shop(samples):
+    return load_shop(samples / "small_moulding_cell.dshop")
+
+
+def test_every_item_model_of_the_app_is_checked_here():
+    """A new item model in ui/ must be added to this module (and to ITEM_MODELS)."""
+    import importlib
+    import inspect
+    import pkgutil
+
+    from PySide6.QtCore import QAbstractItemModel
+
+    import dispatcher.ui as ui
+
+    found = set()
+    for info in pkgutil.iter_modules(ui.__path__, "dispatcher.ui."):
+        module = importlib.import_module(info.name)
+        for _, cls in inspect.getmembers(module, inspect.isclass):
+            if issubclass(cls, QAbstractItemModel) and cls.__module__ == module.__name__:
+                found.add(cls)
+    assert found == set(ITEM_MODELS)
+
+
+def test_grid_model(qtmodeltester, shop):
+    doc = ShopDocument(shop)
+    model = GridModel(doc)
+    qtmodeltester.check(model)
+    model.set_plan(solve_shop(doc.shop))
+    qtmodeltester.check(model)
+    doc.undo_stack.push(SetPin(doc, 0, 0, "must_not", "forbid"))
+    qtmodeltester.check(model)
+    doc.undo_stack.undo()
+    qtmodeltester.check(model)
+
+
+def test_what_if_model(qtmodeltester, shop):
+    model = WhatIfModel()
+    qtmodeltester.check(model)
+    plan = solve_shop(shop)
+    model.set_grid(shop, what_if_grid(plan), shop.unit.label())
+    assert model.rowCount() == len(shop.jobs) and model.columnCount() == len(shop.machines)
+    qtmodeltester.check(model)
+    model.set_grid(None, None)
+    qtmodeltester.check(model)
+
+
+def test_decision_list_model(qtmodeltester, shop, tmp_path):
+    model = DecisionListModel()
+    qtmodeltester.check(model)
+    store = HistoryStore(tmp_path / "history.sqlite")
+    plan = solve_shop(shop).to_json()
+    for note in ("first", "second"):
+        store.record(shop_to_dict(shop), plan, by="Supervisor A", reason="shift-start", note=note)
+    model.set_decisions(store.list())
+    assert model.rowCount() == 2
+    qtmodeltester.check(model)
+    model.set_decisions([])
+    qtmodeltester.check(model)
