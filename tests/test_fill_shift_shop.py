@@ -296,7 +296,7 @@ def test_cli_fill_shift_record_keeps_run_order_in_history(press_file, tmp_path, 
 
     history = tmp_path / "history.sqlite"
     assert main(["solve", str(press_file), "--fill-shift", "--json", "--record",
-                 "--by", "R. Lind", "--reason", "shift-start", "--history", str(history)]) == 0
+                 "--by", "Supervisor R", "--reason", "shift-start", "--history", str(history)]) == 0
     out = capsys.readouterr()
     printed = json.loads(out.out)
     assert "Recorded decision #1" in out.err

@@ -40,7 +40,7 @@ def hist(tmp_path) -> str:
 
 def test_solve_record_then_list_show_diff_export(capsys, samples, hist, tmp_path):
     grid = str(samples / "sheet_metal_grid.csv")
-    code, out, err = run(capsys, "solve", grid, "--json", "--record", "--by", "Ana",
+    code, out, err = run(capsys, "solve", grid, "--json", "--record", "--by", "Supervisor A",
                          "--reason", "shift start", "--note", "monday", "--history", hist)
     assert code == 0
     plan = json.loads(out)  # stdout stays one JSON object; the receipt goes to stderr
@@ -52,22 +52,22 @@ def test_solve_record_then_list_show_diff_export(capsys, samples, hist, tmp_path
     assert plan["total"] == pytest.approx(cost[r, c].sum())
 
     code, out, _ = run(capsys, "solve", grid, "--must-run", plan["waiting_jobs"][0]
-                       if plan["waiting_jobs"] else "", "--record", "--by", "Bo",
+                       if plan["waiting_jobs"] else "", "--record", "--by", "Supervisor B",
                        "--reason", "rush-job", "--history", hist)
     assert code == 0
 
     code, out, _ = run(capsys, "history", "list", "--json", "--history", hist)
     listed = json.loads(out)
     assert [(d["id"], d["by"], d["reason"]) for d in listed] == [
-        (1, "Ana", "shift-start"), (2, "Bo", "rush-job")]
+        (1, "Supervisor A", "shift-start"), (2, "Supervisor B", "rush-job")]
     assert all({"id", "time", "by", "reason", "total"} <= set(d) for d in listed)
     assert listed[0]["total"] == plan["total"] and listed[1]["replaces"] == 1
 
-    code, out, _ = run(capsys, "history", "list", "--history", hist, "--by", "ana")
-    assert code == 0 and "monday" in out and "Bo" not in out
+    code, out, _ = run(capsys, "history", "list", "--history", hist, "--by", "supervisor a")
+    assert code == 0 and "monday" in out and "Supervisor B" not in out
 
     code, out, _ = run(capsys, "history", "show", "1", "--history", hist)
-    assert code == 0 and "By: Ana" in out and "Reason: shift start - monday" in out
+    assert code == 0 and "By: Supervisor A" in out and "Reason: shift start - monday" in out
     code, out, _ = run(capsys, "history", "show", "2", "--json", "--history", hist)
     shown = json.loads(out)
     assert shown["diff_from_replaced"]["from"] == 1
@@ -90,11 +90,11 @@ def test_solve_record_then_list_show_diff_export(capsys, samples, hist, tmp_path
 def test_solve_shop_document_record_and_restore(capsys, samples, hist):
     shop = samples / "small_moulding_cell.dshop"
     before = hashlib.sha256(shop.read_bytes()).hexdigest()
-    code, out, err = run(capsys, "solve", str(shop), "--json", "--record", "--by", "Ana",
+    code, out, err = run(capsys, "solve", str(shop), "--json", "--record", "--by", "Supervisor A",
                          "--reason", "breakdown", "--history", hist)
     assert code == 0, err
     plan = json.loads(out)
-    code, out, err = run(capsys, "history", "restore", "1", "--by", "Cy", "--note", "undo",
+    code, out, err = run(capsys, "history", "restore", "1", "--by", "Supervisor C", "--note", "undo",
                          "--history", hist)
     assert code == 0 and "restored from #1" in out
     code, out, _ = run(capsys, "history", "show", "2", "--json", "--history", hist)
@@ -106,9 +106,9 @@ def test_solve_shop_document_record_and_restore(capsys, samples, hist):
 
 @pytest.mark.parametrize("argv, message", [
     (["--record", "--reason", "other"], "--record needs --by NAME"),
-    (["--record", "--by", "Ana"], "--record needs --reason KIND"),
-    (["--record", "--by", "Ana", "--reason", "lunch"], "unknown kind 'lunch'"),
-    (["--by", "Ana"], "--by and --reason are used with --record"),
+    (["--record", "--by", "Supervisor A"], "--record needs --reason KIND"),
+    (["--record", "--by", "Supervisor A", "--reason", "lunch"], "unknown kind 'lunch'"),
+    (["--by", "Supervisor A"], "--by and --reason are used with --record"),
 ])
 def test_solve_record_bad_arguments_exit_2_before_solving(capsys, samples, hist, argv, message):
     code, out, err = run(capsys, "solve", str(samples / "sheet_metal_grid.csv"), *argv,
@@ -121,7 +121,7 @@ def test_unusable_history_exits_4_after_printing_the_plan(capsys, samples, tmp_p
     bad = tmp_path / "history.sqlite"
     bad.write_text("not a database")
     code, out, err = run(capsys, "solve", str(samples / "sheet_metal_grid.csv"), "--json",
-                         "--record", "--by", "Ana", "--reason", "other", "--history", str(bad))
+                         "--record", "--by", "Supervisor A", "--reason", "other", "--history", str(bad))
     assert code == EXIT_STORE
     assert json.loads(out)["status"] == "optimal"  # the plan is still shown
     assert err.count("\n") == 1 and str(bad) in err and "not an SQLite database" in err
@@ -147,11 +147,11 @@ def test_env_var_chooses_the_file_in_a_real_process(tmp_path, samples):
     target = tmp_path / "from-env.sqlite"
     env = dict(os.environ, DISPATCHER_HISTORY=str(target), PYTHONPATH=str(ROOT))
     subprocess.run([sys.executable, "-m", "dispatcher", "solve",
-                    str(samples / "sheet_metal_grid.csv"), "--record", "--by", "Ana",
+                    str(samples / "sheet_metal_grid.csv"), "--record", "--by", "Supervisor A",
                     "--reason", "repair"], check=True, env=env, capture_output=True)
     conn = sqlite3.connect(target)
     assert conn.execute("SELECT supervisor, reason_kind FROM decisions").fetchall() == [
-        ("Ana", "repair")]
+        ("Supervisor A", "repair")]
     conn.close()
     listed = subprocess.run([sys.executable, "-m", "dispatcher", "history", "list", "--json"],
                             check=True, env=env, capture_output=True, text=True)

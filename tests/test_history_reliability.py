@@ -141,12 +141,12 @@ def _hold_write_lock(path: Path) -> sqlite3.Connection:
 def test_busy_file_is_retried_for_a_bounded_time_then_reported(tmp_path):
     path = tmp_path / "history.sqlite"
     store = HistoryStore(path, timeout=0.6)
-    store.record({"name": "s"}, sample_plan(), by="Ana", reason="shift start")
+    store.record({"name": "s"}, sample_plan(), by="Supervisor A", reason="shift start")
     holder = _hold_write_lock(path)
     try:
         start = time.monotonic()
         with pytest.raises(HistoryError, match=r"stayed busy .* for 0\.6 s; nothing was changed"):
-            store.record({"name": "s"}, sample_plan(5), by="Ana", reason="repair")
+            store.record({"name": "s"}, sample_plan(5), by="Supervisor A", reason="repair")
         elapsed = time.monotonic() - start
         assert 0.6 <= elapsed < 5.0
         assert [d.total for d in store.list()] == [3]  # readers are not blocked (WAL)
@@ -159,7 +159,7 @@ def test_busy_file_is_retried_for_a_bounded_time_then_reported(tmp_path):
 def test_busy_file_released_in_time_is_written(tmp_path):
     path = tmp_path / "history.sqlite"
     store = HistoryStore(path, timeout=10)
-    store.record({"name": "s"}, sample_plan(), by="Ana", reason="shift start")
+    store.record({"name": "s"}, sample_plan(), by="Supervisor A", reason="shift start")
     holder = _hold_write_lock(path)
 
     def release() -> None:
@@ -170,7 +170,7 @@ def test_busy_file_released_in_time_is_written(tmp_path):
     start = time.monotonic()
     thread.start()
     try:
-        number = store.record({"name": "s"}, sample_plan(5), by="Ana", reason="repair")
+        number = store.record({"name": "s"}, sample_plan(5), by="Supervisor A", reason="repair")
     finally:
         thread.join()
         holder.close()
@@ -183,7 +183,7 @@ def _history_with_decisions(path: Path, n: int = 20) -> None:
     store = HistoryStore(path)
     for i in range(n):
         shop, plan = make_decision(f"base-{i}")
-        store.record(shop, plan, by="Ana", reason="other")
+        store.record(shop, plan, by="Supervisor A", reason="other")
 
 
 def _foreign_sqlite(path: Path) -> None:
@@ -241,7 +241,7 @@ def test_bad_file_is_reported_and_left_untouched(tmp_path, kind):
     make(path)
     before = sha(path)
     for action in (
-        lambda s: s.record({"name": "s"}, sample_plan(), by="Ana", reason="other"),
+        lambda s: s.record({"name": "s"}, sample_plan(), by="Supervisor A", reason="other"),
         lambda s: s.list(),
         lambda s: s.get(1),
         lambda s: s.export_csv(tmp_path / "out.csv"),
@@ -261,9 +261,9 @@ def test_read_only_file_refuses_to_record_and_still_reads(tmp_path):
     try:
         store = HistoryStore(path)
         with pytest.raises(HistoryError, match="read-only; nothing was recorded"):
-            store.record({"name": "s"}, sample_plan(), by="Ana", reason="other")
+            store.record({"name": "s"}, sample_plan(), by="Supervisor A", reason="other")
         with pytest.raises(HistoryError, match="read-only"):
-            store.restore(1, by="Ana")
+            store.restore(1, by="Supervisor A")
         assert [d.id for d in store.list()] == [1, 2, 3]
         assert store.get(2).note == ""
     finally:
@@ -283,10 +283,10 @@ def test_full_disk_is_reported_and_nothing_is_written(tmp_path):
     full = HistoryStore(path, max_pages=pages)
     big_shop = {"name": SHOP_NAME, "padding": "y" * 200_000}
     with pytest.raises(HistoryError, match="no room left to write"):
-        full.record(big_shop, sample_plan(), by="Ana", reason="breakdown")
+        full.record(big_shop, sample_plan(), by="Supervisor A", reason="breakdown")
     assert sha(path) == before
     store = HistoryStore(path)
     assert store.count() == 5
     assert store.check() == ["ok"]
-    number = store.record(big_shop, sample_plan(), by="Ana", reason="breakdown")
+    number = store.record(big_shop, sample_plan(), by="Supervisor A", reason="breakdown")
     assert store.get(number).shop_document == big_shop

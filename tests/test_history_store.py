@@ -76,10 +76,10 @@ def test_nothing_is_created_by_reading(tmp_path):
 def test_record_and_read_back(store, tmp_path):
     shop = {"format": "dispatcher-shop", "name": "Press shop", "jobs": ["WO-1"]}
     p = plan({"WO-1": "Press 1"}, waiting=["WO-2"], idle=["Press 2"])
-    n = store.record(json.dumps(shop), p, by="  Ana  ", reason="Shift Start", note="monday",
+    n = store.record(json.dumps(shop), p, by="  Supervisor A  ", reason="Shift Start", note="monday",
                      time=T0)
     d = store.get(n)
-    assert (d.id, d.by, d.reason, d.note, d.shop) == (1, "Ana", "shift-start", "monday",
+    assert (d.id, d.by, d.reason, d.note, d.shop) == (1, "Supervisor A", "shift-start", "monday",
                                                       "Press shop")
     assert d.time == T0 and d.shift_date == date(2026, 3, 13) and d.shift == "night"
     assert d.shop_document == shop and d.plan == p
@@ -92,7 +92,7 @@ def test_record_and_read_back(store, tmp_path):
 def test_the_sqlite_file_seen_with_plain_sqlite3(sqlite_store):
     store = sqlite_store
     p = plan({"WO-1": "Press 1"}, waiting=["WO-2"], idle=["Press 2"])
-    store.record({"name": "Press shop"}, p, by="Ana", reason="other", time=T0)
+    store.record({"name": "Press shop"}, p, by="Supervisor A", reason="other", time=T0)
     # Independent look at the file with plain sqlite3: WAL, foreign keys declared, our id.
     conn = sqlite3.connect(store.path)
     assert conn.execute("PRAGMA journal_mode").fetchone()[0] == "wal"
@@ -114,7 +114,7 @@ def test_objects_with_to_json_are_accepted(store):
         def to_json(self):
             return plan({"A": "M"})
 
-    n = store.record(Doc(), PlanLike(), by="Ana", reason="other")
+    n = store.record(Doc(), PlanLike(), by="Supervisor A", reason="other")
     assert store.get(n).shop == "from object"
 
 
@@ -135,7 +135,7 @@ def test_objects_with_to_json_are_accepted(store):
 ])
 def test_bad_plans_are_refused_before_the_file_is_touched(store, bad, message):
     with pytest.raises(HistoryInputError, match=message):
-        store.record({}, bad, by="Ana", reason="other")
+        store.record({}, bad, by="Supervisor A", reason="other")
     assert not store.exists()
 
 
@@ -143,20 +143,20 @@ def test_bad_supervisor_and_reason(store):
     with pytest.raises(HistoryInputError, match="supervisor's name is required"):
         store.record({}, plan({"A": "M"}), by=" ", reason="other")
     with pytest.raises(HistoryInputError, match="unknown kind 'coffee'; use one of: shift-start"):
-        store.record({}, plan({"A": "M"}), by="Ana", reason="coffee")
+        store.record({}, plan({"A": "M"}), by="Supervisor A", reason="coffee")
     assert {parse_reason_kind(label) for label in REASON_KINDS.values()} == set(REASON_KINDS)
 
 
 def test_history_is_append_only_even_through_raw_sql(sqlite_store):
     store = sqlite_store
-    store.record({}, plan({"A": "M"}), by="Ana", reason="other")
+    store.record({}, plan({"A": "M"}), by="Supervisor A", reason="other")
     conn = sqlite3.connect(store.path)
     for sql in ("UPDATE decisions SET supervisor = 'Eve'", "DELETE FROM decisions",
                 "UPDATE decision_rows SET job = 'X'", "DELETE FROM decision_rows"):
         with pytest.raises(sqlite3.DatabaseError, match="append-only"):
             conn.execute(sql)
     conn.close()
-    assert store.get(1).by == "Ana"
+    assert store.get(1).by == "Supervisor A"
 
 
 def test_replaces_links_decisions_of_the_same_shop_with_their_diff(store):
@@ -181,22 +181,22 @@ def test_replaces_links_decisions_of_the_same_shop_with_their_diff(store):
 
 
 def test_restore_records_a_new_decision_and_changes_nothing_old(store):
-    first = store.record({"name": "s"}, plan({"J1": "M1"}), by="Ana", reason="shift start")
-    second = store.record({"name": "s"}, plan({"J1": "M2"}), by="Bo", reason="breakdown")
+    first = store.record({"name": "s"}, plan({"J1": "M1"}), by="Supervisor A", reason="shift start")
+    second = store.record({"name": "s"}, plan({"J1": "M2"}), by="Supervisor B", reason="breakdown")
     before = [store.get(i) for i in (first, second)]
-    third = store.restore(first, by="Cy", note="M1 repaired")
+    third = store.restore(first, by="Supervisor C", note="M1 repaired")
     d = store.get(third)
     assert (d.reason, d.note, d.by, d.restored_from, d.replaces) == (
-        "restored", "restored from #1: M1 repaired", "Cy", first, second)
+        "restored", "restored from #1: M1 repaired", "Supervisor C", first, second)
     assert d.plan == store.get(first).plan
     assert d.diff_from_replaced.lines()[0] == "moved: J1 from M2 to M1"
     assert [store.get(i) for i in (first, second)] == before
     with pytest.raises(DecisionNotFound):
-        store.restore(42, by="Cy")
+        store.restore(42, by="Supervisor C")
 
 
 def test_queries_match_a_plain_python_filter(store):
-    people = ["Ana", "Bo", "Cy"]
+    people = ["Supervisor A", "Supervisor B", "Supervisor C"]
     reasons = ["shift start", "breakdown", "repair", "rush job"]
     made = []
     for i in range(24):
@@ -219,9 +219,9 @@ def test_queries_match_a_plain_python_filter(store):
                                  if "M2" in [a["machine"] for a in p["assignments"]]
                                  + p["idle_machines"]]
     assert ids(job="W1") == [n for n, *_, p in made if "W1" in p["waiting_jobs"]]
-    assert ids(by="bo") == [n for n, _, _, who, *_ in made if who == "Bo"]
-    assert ids(reason="Rush Job", by="Cy") == [n for n, _, _, who, why, _ in made
-                                              if why == "rush-job" and who == "Cy"]
+    assert ids(by="supervisor b") == [n for n, _, _, who, *_ in made if who == "Supervisor B"]
+    assert ids(reason="Rush Job", by="Supervisor C") == [n for n, _, _, who, why, _ in made
+                                              if why == "rush-job" and who == "Supervisor C"]
     assert ids(limit=3, newest_first=True) == [24, 23, 22]
     assert store.latest().id == 24
 
@@ -246,8 +246,8 @@ def test_running_jobs_and_multi_slot_machines(store):
     after = plan({"J2": "M2", "J3": "M3"}, waiting=["J4"])
     after["assignments"].append({"job": "J5", "machine": "M3", "cost": 1})  # two slots
     after["running"] = [{"job": "J1", "machine": "M1", "since": "2026-03-14T06:05", "cost": 7}]
-    n = store.record({"name": "s"}, before, by="Ana", reason="other")
-    m = store.record({"name": "s"}, after, by="Ana", reason="rush job")
+    n = store.record({"name": "s"}, before, by="Supervisor A", reason="other")
+    m = store.record({"name": "s"}, after, by="Supervisor A", reason="rush job")
     diff = store.diff(n, m)
     assert diff.jobs_gone == () and diff.machines_gone == ()
     assert diff.newly_placed == (("J3", "M3"), ("J5", "M3"))
@@ -297,8 +297,8 @@ def test_diff_turns_the_earlier_plan_into_the_later_one(before, after):
 
 def test_export_csv_read_back_with_the_csv_module(store, tmp_path):
     store.record({"name": "s"}, plan({"=HYPERLINK(1)": "M1"}, waiting=["J2"], idle=["M2"]),
-                 by="Ana", reason="rush job", note="+urgent", time=T0)
-    store.record({"name": "s"}, plan({"J2": "M1"}), by="Bo", reason="repair", time=T0)
+                 by="Supervisor A", reason="rush job", note="+urgent", time=T0)
+    store.record({"name": "s"}, plan({"J2": "M1"}), by="Supervisor B", reason="repair", time=T0)
     target = tmp_path / "out.csv"
     assert store.export_csv(target) == 4
     with target.open(newline="", encoding="utf-8") as f:
@@ -308,7 +308,7 @@ def test_export_csv_read_back_with_the_csv_module(store, tmp_path):
         ("1", "idle", "M2", "", ""), ("2", "assigned", "M1", "J2", "10.0")]
     assert rows[0]["note"] == "'+urgent" and rows[0]["time"] == "2026-03-14T05:00:00.000000Z"
     assert rows[3]["replaces"] == "1" and rows[0]["replaces"] == ""
-    assert store.export_csv(target, by="Bo") == 1
+    assert store.export_csv(target, by="Supervisor B") == 1
 
 
 def _add_column(conn: sqlite3.Connection) -> None:
@@ -317,16 +317,16 @@ def _add_column(conn: sqlite3.Connection) -> None:
 
 def test_older_file_is_backed_up_then_migrated(tmp_path):
     path = tmp_path / "history.sqlite"
-    HistoryStore(path).record({"name": "s"}, plan({"A": "M"}), by="Ana", reason="other")
+    HistoryStore(path).record({"name": "s"}, plan({"A": "M"}), by="Supervisor A", reason="other")
     newer = MIGRATIONS + (Migration(MIGRATIONS[-1].version + 1, "station", _add_column),)
     store = HistoryStore(path, migrations=newer)
-    assert store.get(1).by == "Ana"
+    assert store.get(1).by == "Supervisor A"
     backup = store.last_backup
     current = MIGRATIONS[-1].version
     assert backup is not None and backup.name.startswith(f"history.sqlite.backup-v{current}-")
     old = sqlite3.connect(backup)
     assert old.execute("PRAGMA user_version").fetchone()[0] == current
-    assert old.execute("SELECT supervisor FROM decisions").fetchall() == [("Ana",)]
+    assert old.execute("SELECT supervisor FROM decisions").fetchall() == [("Supervisor A",)]
     old.close()
     conn = sqlite3.connect(path)
     assert conn.execute("PRAGMA user_version").fetchone()[0] == newer[-1].version
@@ -340,7 +340,7 @@ def test_older_file_is_backed_up_then_migrated(tmp_path):
 
 def test_failed_migration_leaves_the_file_at_its_old_version(tmp_path):
     path = tmp_path / "history.sqlite"
-    HistoryStore(path).record({"name": "s"}, plan({"A": "M"}), by="Ana", reason="other")
+    HistoryStore(path).record({"name": "s"}, plan({"A": "M"}), by="Supervisor A", reason="other")
 
     def broken(conn: sqlite3.Connection) -> None:
         _add_column(conn)
@@ -350,7 +350,7 @@ def test_failed_migration_leaves_the_file_at_its_old_version(tmp_path):
     with pytest.raises(HistoryError, match="no_such_column"):
         HistoryStore(path, migrations=newer).list()
     store = HistoryStore(path)
-    assert store.get(1).by == "Ana"
+    assert store.get(1).by == "Supervisor A"
     conn = sqlite3.connect(path)
     assert conn.execute("PRAGMA user_version").fetchone()[0] == MIGRATIONS[-1].version
     assert "later_column" not in [r[1] for r in conn.execute("PRAGMA table_info(decisions)")]
@@ -360,7 +360,7 @@ def test_failed_migration_leaves_the_file_at_its_old_version(tmp_path):
 
 def test_tampered_decision_is_reported_not_shown(sqlite_store):
     store = sqlite_store
-    store.record({"name": "s"}, plan({"A": "M"}), by="Ana", reason="other")
+    store.record({"name": "s"}, plan({"A": "M"}), by="Supervisor A", reason="other")
     conn = sqlite3.connect(store.path)
     conn.execute("DROP TRIGGER decisions_append_only_update")
     conn.execute("UPDATE decisions SET plan_json = replace(plan_json, '\"M\"', '\"X\"')")
@@ -405,10 +405,10 @@ def test_shift_uses_local_time_and_custom_pattern(tmp_path):
     assert shift_of(datetime(2026, 3, 14, 4, 30, tzinfo=UTC), two_shifts, plus2) == (
         date(2026, 3, 13), "night")
     store = HistoryStore(tmp_path / "h.sqlite", shifts=two_shifts, tz=plus2)
-    n = store.record({}, plan({"A": "M"}), by="Ana", reason="other",
+    n = store.record({}, plan({"A": "M"}), by="Supervisor A", reason="other",
                      time=datetime(2026, 3, 14, 5, 30, tzinfo=UTC))
     assert (store.get(n).shift_date, store.get(n).shift) == (date(2026, 3, 14), "day")
-    m = store.record({}, plan({"A": "M"}), by="Ana", reason="other",
+    m = store.record({}, plan({"A": "M"}), by="Supervisor A", reason="other",
                      shift_date=date(2026, 1, 1), shift="special")
     assert (store.get(m).shift_date, store.get(m).shift) == (date(2026, 1, 1), "special")
 
@@ -431,7 +431,7 @@ def test_decision_based_on_a_replaced_plan_is_refused(store):
                                                 r" .*started from \(#1\)"):
         store.record(shop, plan({"C": "M"}), by="early-shift lead", reason="other",
                      based_on=first)
-    assert store.record(other, plan({"C": "M"}), by="Ana", reason="other", based_on=None) == 3
+    assert store.record(other, plan({"C": "M"}), by="Supervisor A", reason="other", based_on=None) == 3
     assert store.count() == 3
     d = store.get(second)
     assert (d.based_on, d.replaces, d.station) == (first, first, "B")

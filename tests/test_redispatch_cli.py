@@ -132,7 +132,7 @@ def test_command_line_loop_solve_in_force_then_breakdown_recorded_and_saved(shop
     from dispatcher.history import HistoryStore
 
     history = tmp_path / "h.sqlite"
-    record = ["--record", "--by", "M. Ortega", "--history", str(history)]
+    record = ["--record", "--by", "late-shift lead", "--history", str(history)]
     assert main(["solve", str(shop_file), "--json", "--in-force", *record,
                  "--reason", "shift-start"]) == 0
     morning = json.loads(capsys.readouterr().out)

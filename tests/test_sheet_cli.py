@@ -209,7 +209,7 @@ class TestRecordedDecision:
         db = tmp_path / "history.sqlite"
         store = history.HistoryStore(db)
         plan = solve_shop(shop)
-        number = store.record(shop_to_dict(shop), plan.to_json(), by="Ana Example",
+        number = store.record(shop_to_dict(shop), plan.to_json(), by="early-shift lead",
                               reason="shift start", time=dt.datetime(2026, 3, 9, 5, 58,
                                                                      tzinfo=dt.timezone.utc))
         return shop, doc, db, number, plan
@@ -220,7 +220,7 @@ class TestRecordedDecision:
         assert main(["sheet", str(doc), "--decision", str(number), "--history", str(db),
                      "--pdf", str(out)]) == 0
         _, text = pdf_text(out)
-        assert f"Decision #{number}" in text and "Supervisor Ana Example" in text
+        assert f"Decision #{number}" in text and "Supervisor early-shift lead" in text
         assert "not recorded" not in text
         for a in plan.assignments:
             assert a.job in text

@@ -63,7 +63,7 @@ def make_content(n_machines: int, *, decision: int | None = 7, fill: bool = Fals
     waiting = (SheetWaitingJob("Late flange", "WO-9001", "no available machine can run it"),)
     return SheetContent(
         shop_name="Invented test shop", shift_date=SHIFT_DAY, shift_label="early",
-        supervisor="A. Tester", decision_number=decision,
+        supervisor="early-shift lead", decision_number=decision,
         decision_time=dt.datetime(2026, 3, 9, 5, 55, tzinfo=dt.timezone.utc) if decision else None,
         printed_at=dt.datetime(2026, 3, 9, 6, 1),
         machines=tuple(machines), waiting=waiting, down=tuple(down),
@@ -118,7 +118,7 @@ def test_sixty_machines_paginate_with_page_numbers_and_repeated_headers(app, tmp
     for i, text in enumerate(texts, start=1):
         assert f"Page {i} of {pages}" in text
         assert "Dispatch sheet - Invented test shop" in text
-        assert "Shift early" in text and "Supervisor A. Tester" in text
+        assert "Shift early" in text and "Supervisor early-shift lead" in text
         assert "SAFETY:" in text and SAFETY_CAUTIONS[0] in text
     # the machine table spans pages: its title and column headings repeat on each of them
     spanned = [t for t in texts if "Cell-0" in t or "Cell-1" in t]

@@ -64,7 +64,7 @@ def test_machine_down_then_back_up_by_keys(qtbot, open_window, tmp_path):
     col = window.doc.shop.machine_names().index("Trim bench")
     window.view.setCurrentIndex(window.model.index(0, FIRST_MACHINE_COL + col))
     press(qtbot, window, Qt.Key.Key_D, CTRL)
-    confirm_by_keys(qtbot, window.decisions.dialog, "A. Supervisor")
+    confirm_by_keys(qtbot, window.decisions.dialog, "Supervisor A")
     wait_plan(qtbot, window)
     assert window.doc.shop.machines[col].state == DOWN
     press(qtbot, window, Qt.Key.Key_U, CTRL)
@@ -218,9 +218,9 @@ def test_ctrl_return_puts_the_plan_shown_in_force(qtbot, open_window, tmp_path):
     press(qtbot, window, Qt.Key.Key_Return, CTRL)
     dialog = window.decisions.dialog
     assert dialog.reason.currentData() == "shift-start"
-    confirm_by_keys(qtbot, dialog, "E. Early")
+    confirm_by_keys(qtbot, dialog, "early-shift lead")
     [entry] = HistoryStore(tmp_path / "history.sqlite").list()
-    assert entry.total == pytest.approx(shown.total) and entry.by == "E. Early"
+    assert entry.total == pytest.approx(shown.total) and entry.by == "early-shift lead"
     assert window.doc.shop.plan_in_force == shown.in_force(window.doc.shop)
 
 
@@ -410,11 +410,11 @@ def test_sheet_pdf_says_not_recorded_until_a_decision_is(qtbot, open_window, tmp
     menu_action(window, "File", "Export sheet as PDF…").trigger()
     text = _sheet_text(out)
     assert "not recorded" in text and "lockout/tagout" in text.lower()
-    window.decisions.confirm_plan().confirm("S. Lead", "shift start")
+    window.decisions.confirm_plan().confirm("Supervisor S", "shift start")
     wait_plan(qtbot, window)
     menu_action(window, "File", "Export sheet as PDF…").trigger()
     text = _sheet_text(out)
-    assert "not recorded" not in text and "Decision #1" in text and "S. Lead" in text
+    assert "not recorded" not in text and "Decision #1" in text and "Supervisor S" in text
     preview = menu_action(window, "File", "Print preview…")
     preview.trigger()
     assert window.printing.preview_dialog.isVisible()
@@ -423,10 +423,10 @@ def test_sheet_pdf_says_not_recorded_until_a_decision_is(qtbot, open_window, tmp
 
 def test_history_panel_by_ctrl_h_shows_details_and_restores(qtbot, open_window, tmp_path):
     window = open_window(MOULDING)
-    window.decisions.confirm_plan().confirm("E. Early", "shift start")
+    window.decisions.confirm_plan().confirm("early-shift lead", "shift start")
     first = shop_to_dict(window.doc.shop)["machines"]
     col = window.doc.shop.machine_names().index("Trim bench")
-    window.decisions.machine_event("down", col).confirm("E. Early", "belt torn")
+    window.decisions.machine_event("down", col).confirm("early-shift lead", "belt torn")
     wait_plan(qtbot, window)
     activate(qtbot, window)
     press(qtbot, window, Qt.Key.Key_H, CTRL)
@@ -439,11 +439,11 @@ def test_history_panel_by_ctrl_h_shows_details_and_restores(qtbot, open_window, 
     qtbot.mouseClick(table.viewport(), Qt.MouseButton.LeftButton, pos=rect.center())
     assert "#1" in panel.details.toPlainText()
     save_shot(dock, tmp_path, "history_dock")
-    answer_next_dialog(lambda d: d.setTextValue("R. Lead"))
+    answer_next_dialog(lambda d: d.setTextValue("Supervisor R"))
     panel.restore_button.click()
     store = HistoryStore(tmp_path / "history.sqlite")
     restored = store.get(3)
-    assert restored.restored_from == 1 and restored.by == "R. Lead"
+    assert restored.restored_from == 1 and restored.by == "Supervisor R"
     assert shop_to_dict(window.doc.shop)["machines"] == first
     assert panel.model.rowCount() == 3
     press(qtbot, window, Qt.Key.Key_H, CTRL)
@@ -465,9 +465,9 @@ def test_settings_use_default_and_the_last_name_becomes_the_default(qtbot, open_
     assert window.history.path == default_history_path()
     decision = window.decisions.confirm_plan()
     assert decision.by.text() == ""
-    decision.confirm("N. Night")
+    decision.confirm("night-shift lead")
     menu_action(window, "Edit", "Settings…").trigger()
-    assert window.settings_ctl.dialog.supervisor.text() == "N. Night"
+    assert window.settings_ctl.dialog.supervisor.text() == "night-shift lead"
     window.settings_ctl.dialog.reject()
     col = window.doc.shop.machine_names().index("Trim bench")
-    assert window.decisions.machine_event("down", col).by.text() == "N. Night"
+    assert window.decisions.machine_event("down", col).by.text() == "night-shift lead"

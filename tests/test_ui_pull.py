@@ -38,14 +38,14 @@ def test_pulled_job_is_proposed_confirmed_and_recorded(qtbot, shop_window, tmp_p
     assert dialog.reason.currentData() == "manual-change"
     save_shot(dialog, tmp_path, "pull_dialog")
     with qtbot.waitSignal(window.decision_recorded) as rec:
-        dialog.confirm("P. Lead", "order cancelled by the customer")
+        dialog.confirm("Supervisor P", "order cancelled by the customer")
     wait_plan(qtbot, window)
     shop = window.doc.shop
     assert name not in shop.job_names() and len(shop.jobs) == count - 1
     assert name not in [a.job for a in window.plan.assignments] + window.plan.waiting_jobs
     store = HistoryStore(tmp_path / "history.sqlite")
     [entry] = store.list()
-    assert entry.id == rec.args[0] and entry.reason == "manual-change" and entry.by == "P. Lead"
+    assert entry.id == rec.args[0] and entry.reason == "manual-change" and entry.by == "Supervisor P"
     decision = store.get(entry.id)
     assert decision.note == "order cancelled by the customer"
     assert name not in [j["name"] for j in decision.shop_document["jobs"]]
@@ -61,7 +61,7 @@ def test_pulled_job_is_proposed_confirmed_and_recorded(qtbot, shop_window, tmp_p
 
 def test_pull_after_a_recorded_plan_redispatches_from_it(qtbot, tmp_path, monkeypatch, samples):
     window = make_window(qtbot, tmp_path, monkeypatch, samples / "medium_machining_shop.dshop")
-    window.decisions.confirm_plan().confirm("F. Late", "shift start")
+    window.decisions.confirm_plan().confirm("late-shift lead", "shift start")
     wait_plan(qtbot, window)
     in_force = {a.job: a.machine for a in window.plan.assignments}
     row, name, machine = _ordinary_planned(window)
@@ -70,7 +70,7 @@ def test_pull_after_a_recorded_plan_redispatches_from_it(qtbot, tmp_path, monkey
     text = dialog.findChild(object, "proposalDiff").text()
     assert "Re-dispatched from the plan in force" in text and "decision #1" in text
     assert f"frees {machine}" in text
-    dialog.confirm("F. Late", "put on hold")
+    dialog.confirm("late-shift lead", "put on hold")
     wait_plan(qtbot, window)
     decision = HistoryStore(tmp_path / "history.sqlite").get(2)
     after = {a["job"]: a["machine"] for a in decision.plan["assignments"]}
@@ -109,7 +109,7 @@ def test_pulling_a_running_job_frees_its_machine(qtbot, tmp_path, monkeypatch, s
     assert machine not in [a.machine for a in window.plan.assignments]   # busy: not offered
     dialog = window.decisions.pull(row)
     assert f"frees {machine}" in dialog.findChild(object, "proposalDiff").text()
-    dialog.confirm("R. Day", "customer cancelled the order")
+    dialog.confirm("day-shift lead", "customer cancelled the order")
     wait_plan(qtbot, window)
     plan = HistoryStore(tmp_path / "history.sqlite").get(1).plan
     # The machine is free again: the new plan gives it a job or lists it idle.

@@ -26,7 +26,7 @@ def window(qtbot, tmp_path, monkeypatch, samples):
     return make_window(qtbot, tmp_path, monkeypatch, samples / "small_moulding_cell.dshop")
 
 
-def _other_history(window, path: Path, by: str = "Z. Elsewhere") -> None:
+def _other_history(window, path: Path, by: str = "second-station lead") -> None:
     HistoryStore(path).record(shop_to_dict(window.doc.shop), window.plan.to_json(),
                               by=by, reason="other", note="recorded by another station")
 
@@ -54,7 +54,7 @@ def test_switching_the_history_file_takes_effect_at_once(qtbot, window, tmp_path
     dialog.choose_button.click()
     assert window.settings_ctl.chooser.asked == [str(tmp_path / "history.sqlite")]
     assert dialog.history_path.text() == str(other)
-    dialog.supervisor.setText("Q. Lead")
+    dialog.supervisor.setText("cell lead")
     dialog.autosave.setValue(5)
     save_shot(dialog, tmp_path, "settings_dialog")
     _ok(dialog)
@@ -63,15 +63,15 @@ def test_switching_the_history_file_takes_effect_at_once(qtbot, window, tmp_path
     assert window.history.path == other
     # The panel lists the other file's decision without being asked to refresh.
     assert window.history_dock.panel.model.rowCount() == 1
-    assert window.history_dock.panel.model.decision(0).by == "Z. Elsewhere"
+    assert window.history_dock.panel.model.decision(0).by == "second-station lead"
     assert str(other) in window.history_dock.panel.where.text()
     save_shot(window.history_dock.panel, tmp_path, "history_panel_other_file")
     assert window.settings.value(KEY_HISTORY) == str(other)
-    assert window.settings.value(KEY_SUPERVISOR) == "Q. Lead"
+    assert window.settings.value(KEY_SUPERVISOR) == "cell lead"
     assert window.files.autosave_interval_ms() == 5 * 60_000
     # The next decision goes into the new file, with the default supervisor filled in.
     decision = window.decisions.confirm_plan()
-    assert decision.by.text() == "Q. Lead"
+    assert decision.by.text() == "cell lead"
     with qtbot.waitSignal(window.decision_recorded):
         decision.confirm(decision.by.text(), "shift start")
     assert HistoryStore(other).count() == 2

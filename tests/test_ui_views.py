@@ -86,7 +86,7 @@ def test_alternatives_are_ranked_and_one_can_be_put_in_force(qtbot, grid_window,
     # which is the least positive what-if extra (checked by forced scipy solves above).
     assert len({frozenset((a.job, a.machine) for a in p.assignments) for p in plans}) == 4
     dialog = window.alternatives_tab.put_in_force(plans[1], 2)
-    dialog.confirm("D. Day", "customer asked for the laser on WO-4102")
+    dialog.confirm("day-shift lead", "customer asked for the laser on WO-4102")
     [entry] = HistoryStore(tmp_path / "history.sqlite").list()
     assert entry.total == pytest.approx(plans[1].total)
 
@@ -96,11 +96,11 @@ def test_history_panel_lists_filters_compares_and_restores(qtbot, tmp_path, monk
     window.resize(1200, 800)
     window.show()
     shop = window.doc.shop
-    window.decisions.confirm_plan().confirm("E. Early", "shift start")
+    window.decisions.confirm_plan().confirm("early-shift lead", "shift start")
     wait_plan(qtbot, window)
     first_state = shop_to_dict(window.doc.shop)
     col = shop.machine_names().index("Trim bench")
-    window.decisions.machine_event("down", col).confirm("E. Early", "belt torn")
+    window.decisions.machine_event("down", col).confirm("early-shift lead", "belt torn")
     wait_plan(qtbot, window)
     panel = window.history_dock.panel
     window.history_dock.show()
@@ -120,7 +120,7 @@ def test_history_panel_lists_filters_compares_and_restores(qtbot, tmp_path, monk
     text = panel.details.toPlainText()
     assert "From decision #1 to #2" in text and "Trim bench" in text
     save_shot(window.history_dock, tmp_path, "history_panel")
-    number = window.history_dock.restore(1, by="E. Early")
+    number = window.history_dock.restore(1, by="early-shift lead")
     assert number == 3
     wait_plan(qtbot, window)
     assert window.doc.shop.machines[col].state == "up"

@@ -121,13 +121,13 @@ def test_machine_down_confirmed_is_recorded_with_safety_reminder(qtbot, shop_win
     assert busy in dialog.findChild(object, "proposalDiff").text()
     save_shot(dialog, tmp_path, "breakdown_dialog")
     with qtbot.waitSignal(window.decision_recorded) as rec:
-        dialog.confirm("A. Supervisor", "hydraulic leak")
+        dialog.confirm("Supervisor A", "hydraulic leak")
     wait_plan(qtbot, window)
     assert shop.machines[col].state == DOWN
     assert busy not in [a.machine for a in window.plan.assignments]
     store = HistoryStore(tmp_path / "history.sqlite")
     [entry] = store.list()
-    assert entry.id == rec.args[0] and entry.reason == "breakdown" and entry.by == "A. Supervisor"
+    assert entry.id == rec.args[0] and entry.reason == "breakdown" and entry.by == "Supervisor A"
     decision = store.get(entry.id)
     assert decision.note == "hydraulic leak"
     assert busy not in [a["machine"] for a in decision.plan["assignments"]]
@@ -148,7 +148,7 @@ def test_breakdown_that_strands_a_rush_job_still_offers_a_plan(qtbot, shop_windo
     text = dialog.findChild(object, "proposalDiff").text()
     if "Not every rush job can be placed" in text:
         assert "rush flags stay set" in text
-    dialog.confirm("C. Night")
+    dialog.confirm("night-shift lead")
     wait_plan(qtbot, window)
     assert shop.machines[col].state == DOWN
     assert HistoryStore(tmp_path / "history.sqlite").count() == 1
@@ -161,7 +161,7 @@ def test_rush_job_arrival_is_recorded(qtbot, shop_window, tmp_path):
     name = shop.jobs[row].name
     dialog = window.decisions.rush(row)
     assert dialog.findChild(object, "safetyReminder") is None
-    dialog.confirm("B. Lead")
+    dialog.confirm("Supervisor B")
     wait_plan(qtbot, window)
     assert shop.jobs[row].rush
     assert window.plan is not None
@@ -281,7 +281,7 @@ def test_screenshot_of_the_main_window(qtbot, tmp_path, monkeypatch, samples):
 
 def test_breakdown_after_a_recorded_plan_redispatches_from_it(qtbot, tmp_path, monkeypatch, samples):
     window = make_window(qtbot, tmp_path, monkeypatch, samples / "medium_machining_shop.dshop")
-    window.decisions.confirm_plan().confirm("F. Late", "shift start")
+    window.decisions.confirm_plan().confirm("late-shift lead", "shift start")
     wait_plan(qtbot, window)
     shop = window.doc.shop
     assert shop.plan_in_force
@@ -291,7 +291,7 @@ def test_breakdown_after_a_recorded_plan_redispatches_from_it(qtbot, tmp_path, m
     dialog = window.decisions.machine_event("down", col)
     text = dialog.findChild(object, "proposalDiff").text()
     assert "Re-dispatched from the plan in force" in text and "decision #1" in text
-    dialog.confirm("F. Late", "spindle fault")
+    dialog.confirm("late-shift lead", "spindle fault")
     wait_plan(qtbot, window)
     decision = HistoryStore(tmp_path / "history.sqlite").get(2)
     assert busy not in [a["machine"] for a in decision.plan["assignments"]]
@@ -328,7 +328,7 @@ def test_whole_shift_mode_fills_machines_within_their_hours(qtbot, tmp_path, mon
     assert "h used" in " ".join(window.plan_panel.tree.topLevelItem(0).child(i).text(1)
                                 for i in range(window.plan_panel.tree.topLevelItem(0).childCount()))
     assert progress, "the whole-shift solver reports its stages"
-    window.decisions.confirm_plan().confirm("G. Lead", "whole shift")
+    window.decisions.confirm_plan().confirm("Supervisor G", "whole shift")
     [entry] = HistoryStore(tmp_path / "history.sqlite").list()
     assert entry.total == pytest.approx(plan.total)
 
@@ -354,7 +354,7 @@ def test_keyboard_only_breakdown_and_close_prompt(qtbot, shop_window, tmp_path):
     dialog = window.decisions.dialog
     assert dialog is not None and dialog.isVisible() and "Trim bench" in dialog.windowTitle()
     dialog.by.setFocus()
-    qtbot.keyClicks(dialog.by, "H. Keys")
+    qtbot.keyClicks(dialog.by, "Supervisor H")
     qtbot.keyClick(dialog, Qt.Key.Key_Return)
     wait_plan(qtbot, window)
     assert window.doc.shop.machines[col].state == DOWN

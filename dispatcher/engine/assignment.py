@@ -251,6 +251,27 @@ def rush_cover(allowed: np.ndarray, machine_of_job: np.ndarray,
     The restriction must be a maximum matching of the priority rows' grid; the cover then
     has as many vertices as priority jobs placed (Konig 1931), which proves the count
     maximal. Returns (job mask over all jobs, machine mask).
+
+    Parameters
+    ----------
+    allowed : boolean jobs x machines array
+        The pairs the engine may use.
+    machine_of_job : int array
+        The plan (-1 = waiting); restricted to the priority rows it must be a maximum
+        matching of their grid.
+    priority : boolean array, one per job
+        The rush (or must-run) jobs.
+
+    Returns
+    -------
+    (jobs, machines) : boolean arrays
+        The cover: every allowed pair of a priority job touches a marked job or machine.
+
+    References
+    ----------
+    D. Konig, "Grafok es matrixok", Matematikai es Fizikai Lapok 38 (1931) 116-119.
+    A. L. Dulmage and N. S. Mendelsohn, "Coverings of bipartite graphs", Canadian J.
+    Math. 10 (1958) 517-534, doi:10.4153/CJM-1958-052-0.
     """
     rows = np.flatnonzero(priority)
     cover_jobs = np.zeros(len(machine_of_job), dtype=bool)
@@ -311,7 +332,28 @@ def _check_inputs(costs, allowed, wait_penalty, must_run):
 
 
 def job_mask(jobs, n_jobs: int, what: str) -> np.ndarray:
-    """A boolean mask over ``n_jobs`` jobs from a mask or from job indices (None: empty)."""
+    """A boolean mask over ``n_jobs`` jobs from a mask or from job indices (None: empty).
+
+    Parameters
+    ----------
+    jobs : boolean mask, job indices, or None
+    n_jobs : int
+    what : str
+        The argument's name, for the error message.
+
+    Returns
+    -------
+    numpy.ndarray of bool, length ``n_jobs``
+
+    Raises
+    ------
+    DispatchInputError
+        A mask of the wrong length or an index outside the grid.
+
+    References
+    ----------
+    None: input normalisation (common practice, no published method).
+    """
     out = np.zeros(n_jobs, dtype=bool)
     if jobs is None:
         return out
@@ -330,7 +372,26 @@ def job_mask(jobs, n_jobs: int, what: str) -> np.ndarray:
 def rush_waits(mask: np.ndarray, priority: np.ndarray) -> int:
     """How many priority (must-run or rush) jobs wait in every maximum plan: the rows of
     ``priority`` minus the largest matching of their own grid (Mendelsohn and Dulmage
-    1958: a maximum matching reaches that many priority jobs placed)."""
+    1958: a maximum matching reaches that many priority jobs placed).
+
+    Parameters
+    ----------
+    mask : boolean jobs x machines array
+        The pairs the engine may use.
+    priority : boolean array, one per job
+
+    Returns
+    -------
+    int
+        The number of priority jobs left waiting by every maximum plan.
+
+    References
+    ----------
+    A. L. Dulmage and N. S. Mendelsohn, "Coverings of bipartite graphs", Canadian J.
+    Math. 10 (1958) 517-534, doi:10.4153/CJM-1958-052-0.
+    J. E. Hopcroft and R. M. Karp, "An n^5/2 algorithm for maximum matchings in bipartite
+    graphs", SIAM J. Computing 2 (1973) 225-231, doi:10.1137/0202019.
+    """
     rows = np.flatnonzero(priority)
     if rows.size == 0:
         return 0
@@ -436,6 +497,38 @@ def solve(costs, allowed=None, *, maximize: bool = False, objective: str | None 
 
     Raises :class:`DispatchInputError` for bad numbers and :class:`InfeasibleError` when
     must-run jobs cannot all be placed.
+
+    Parameters
+    ----------
+    costs : jobs x machines array
+    allowed : boolean jobs x machines array, optional
+    maximize : bool
+    objective : {"total", "maximize", "bottleneck"}, optional
+    wait_penalty : one number >= 0 per job, optional
+    must_run, rush : boolean mask or job indices, optional
+        See above.
+
+    Returns
+    -------
+    DispatchResult
+        The plan with its certificate; ``result.verify()`` checks it.
+
+    Notes
+    -----
+    The square matrix of jobs, idle rows, machines and wait slots is solved by scipy's
+    ``linear_sum_assignment`` (Crouse 2016); the dual potentials come from
+    :func:`~dispatcher.engine.certificate.potentials_from_plan`; the placed count is proven
+    maximal by a Konig cover and waiting jobs are explained by Hall witnesses.
+
+    References
+    ----------
+    H. W. Kuhn, "The Hungarian method for the assignment problem", Naval Research
+    Logistics Quarterly 2 (1955) 83-97, doi:10.1002/nav.3800020109.
+    D. F. Crouse, "On implementing 2D rectangular assignment algorithms", IEEE Trans.
+    Aerospace and Electronic Systems 52 (2016) 1679-1696, doi:10.1109/TAES.2016.140952.
+    D. Konig, "Grafok es matrixok", Matematikai es Fizikai Lapok 38 (1931) 116-119.
+    P. Hall, "On representatives of subsets", J. London Math. Soc. 10 (1935) 26-30,
+    doi:10.1112/jlms/s1-10.37.26.
     """
     if objective is None:
         objective = "maximize" if maximize else "total"

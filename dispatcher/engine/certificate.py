@@ -30,7 +30,22 @@ class CertificateError(InternalError, RuntimeError):
 
 
 def tolerance(cost: np.ndarray) -> float:
-    """Absolute slack allowed in reduced costs, scaled to the magnitude of the finite costs."""
+    """Absolute slack allowed in reduced costs, scaled to the magnitude of the finite costs.
+
+    Parameters
+    ----------
+    cost : array
+        The costs of the problem (``inf`` entries are ignored).
+
+    Returns
+    -------
+    float
+        ``1e-9 * max(1, largest |finite cost|) * max(1, rows)``.
+
+    References
+    ----------
+    None: floating-point slack scaled to the data (common practice, no published method).
+    """
     finite = np.isfinite(cost)
     high = float(np.max(cost, where=finite, initial=0.0))
     low = float(np.min(cost, where=finite, initial=0.0))
@@ -44,6 +59,32 @@ def potentials_from_plan(cost: np.ndarray, col_of_row: np.ndarray) -> tuple[np.n
     ``cost`` may hold ``inf`` for forbidden pairs; ``col_of_row`` is a permutation using
     only finite pairs. Raises :class:`CertificateError` if the plan is not optimal
     (a negative cycle keeps the relaxation from settling).
+
+    Parameters
+    ----------
+    cost : (n, n) array, ``inf`` where forbidden
+    col_of_row : int array
+        A permutation using finite pairs only.
+
+    Returns
+    -------
+    (u, v) : float arrays
+        Row and column potentials: ``cost - u - v >= 0`` on finite pairs, ``== 0`` on the
+        plan.
+
+    Raises
+    ------
+    CertificateError
+        The plan is not optimal.
+
+    References
+    ----------
+    H. W. Kuhn, "The Hungarian method for the assignment problem", Naval Research
+    Logistics Quarterly 2 (1955) 83-97, doi:10.1002/nav.3800020109.
+    L. R. Ford and D. R. Fulkerson, "Flows in Networks", Princeton University Press (1962).
+    R. Bellman, "On a routing problem", Quarterly of Applied Mathematics 16 (1958) 87-90.
+    R. Jonker and A. Volgenant, "A shortest augmenting path algorithm for dense and sparse
+    linear assignment problems", Computing 38 (1987) 325-340, doi:10.1007/BF02278710.
     """
     n = cost.shape[0]
     if n == 0:

@@ -179,7 +179,25 @@ def _plan_total(values: np.ndarray, machine_of_job: np.ndarray, penalty: np.ndar
 
 
 def run_order(jobs: np.ndarray, rush: np.ndarray, due: np.ndarray) -> np.ndarray:
-    """Jobs in run order: rush jobs first, then by due time (none = last), then by index."""
+    """Jobs in run order: rush jobs first, then by due time (none = last), then by index.
+
+    Parameters
+    ----------
+    jobs : int array
+        The jobs of one machine.
+    rush : boolean array, one per job
+    due : float array, one per job
+        Due times as timestamps, NaN when none.
+
+    Returns
+    -------
+    numpy.ndarray of int
+        ``jobs`` in run order.
+
+    References
+    ----------
+    None: a stable sort by rush flag, due time and input order (common practice, no published method).
+    """
     jobs = np.asarray(jobs, dtype=np.int64)
     due_key = np.where(np.isnan(due[jobs]), np.inf, due[jobs])
     return jobs[np.lexsort((jobs, due_key, ~rush[jobs]))]

@@ -43,7 +43,22 @@ class HallWitness:
 
 
 def maximum_matching(allowed: np.ndarray) -> np.ndarray:
-    """Machine index per job (-1 = unmatched) of one maximum matching (Hopcroft-Karp, in scipy)."""
+    """Machine index per job (-1 = unmatched) of one maximum matching (Hopcroft-Karp, in scipy).
+
+    Parameters
+    ----------
+    allowed : boolean jobs x machines array
+
+    Returns
+    -------
+    numpy.ndarray of int
+        Machine per job, -1 when unmatched.
+
+    References
+    ----------
+    J. E. Hopcroft and R. M. Karp, "An n^5/2 algorithm for maximum matchings in bipartite
+    graphs", SIAM J. Computing 2 (1973) 225-231, doi:10.1137/0202019.
+    """
     n_jobs, n_machines = allowed.shape
     if n_jobs == 0 or n_machines == 0:
         return np.full(n_jobs, -1, dtype=np.int64)
@@ -58,6 +73,24 @@ def alternating_reach(allowed: np.ndarray, machine_of_job: np.ndarray,
 
     Paths leave a job along any allowed pair and leave a machine along its matched pair.
     Returns boolean masks (jobs, machines).
+
+    Parameters
+    ----------
+    allowed : boolean jobs x machines array
+    machine_of_job : int array
+        A matching (-1 = unmatched).
+    start_jobs : int array or boolean mask
+
+    Returns
+    -------
+    (jobs, machines) : boolean arrays
+
+    References
+    ----------
+    A. L. Dulmage and N. S. Mendelsohn, "Coverings of bipartite graphs", Canadian J.
+    Math. 10 (1958) 517-534, doi:10.4153/CJM-1958-052-0.
+    R. Burkard, M. Dell'Amico and S. Martello, "Assignment Problems", SIAM (2009),
+    doi:10.1137/1.9781611972238.
     """
     n_jobs, n_machines = allowed.shape
     job_of_machine = np.full(n_machines, -1, dtype=np.int64)
@@ -91,6 +124,25 @@ def hall_witness(allowed: np.ndarray, machine_of_job: np.ndarray,
     default all unmatched jobs are used. The matching must be maximum, otherwise an
     augmenting path exists and the returned set would not be a witness; callers verify
     with :meth:`HallWitness.holds`.
+
+    Parameters
+    ----------
+    allowed : boolean jobs x machines array
+    machine_of_job : int array
+        A maximum matching.
+    waiting : int array, optional
+        Unmatched jobs to start from (default: all).
+
+    Returns
+    -------
+    HallWitness or None
+
+    References
+    ----------
+    P. Hall, "On representatives of subsets", J. London Math. Soc. 10 (1935) 26-30,
+    doi:10.1112/jlms/s1-10.37.26.
+    A. L. Dulmage and N. S. Mendelsohn, "Coverings of bipartite graphs", Canadian J.
+    Math. 10 (1958) 517-534, doi:10.4153/CJM-1958-052-0.
     """
     if waiting is None:
         waiting = np.flatnonzero(machine_of_job < 0)
@@ -109,6 +161,23 @@ def hall_witness_groups(allowed: np.ndarray, machine_of_job: np.ndarray) -> list
     leads to a reached machine, so groups never share a machine). Every reached machine
     is matched to a reached job, so a group holding w waiting jobs has exactly w more jobs
     than machines: its witness has deficiency w. Groups come in order of their first job.
+
+    Parameters
+    ----------
+    allowed : boolean jobs x machines array
+    machine_of_job : int array
+        A maximum matching.
+
+    Returns
+    -------
+    list of HallWitness
+
+    References
+    ----------
+    P. Hall, "On representatives of subsets", J. London Math. Soc. 10 (1935) 26-30,
+    doi:10.1112/jlms/s1-10.37.26.
+    A. L. Dulmage and N. S. Mendelsohn, "Coverings of bipartite graphs", Canadian J.
+    Math. 10 (1958) 517-534, doi:10.4153/CJM-1958-052-0.
     """
     waiting = np.flatnonzero(machine_of_job < 0)
     if waiting.size == 0:
@@ -132,6 +201,22 @@ def konig_cover(allowed: np.ndarray, machine_of_job: np.ndarray) -> tuple[np.nda
 
     Its size equals the matching size, which proves the matching is maximum (Konig 1931):
     no matching can have more pairs than any vertex cover has vertices.
+
+    Parameters
+    ----------
+    allowed : boolean jobs x machines array
+    machine_of_job : int array
+        A maximum matching.
+
+    Returns
+    -------
+    (jobs, machines) : boolean arrays
+
+    References
+    ----------
+    D. Konig, "Grafok es matrixok", Matematikai es Fizikai Lapok 38 (1931) 116-119.
+    R. Burkard, M. Dell'Amico and S. Martello, "Assignment Problems", SIAM (2009),
+    doi:10.1137/1.9781611972238.
     """
     start = np.flatnonzero(machine_of_job < 0)
     jobs, machines = alternating_reach(allowed, machine_of_job, start)

@@ -288,6 +288,14 @@ def ranked_plans(result: DispatchResult, count: int, groups=None, cancel=None) -
     remaining capacity in the subproblem. Each plan over machines is thus reached in
     exactly one subproblem and no slot copy is ever generated (Murty's partition holds
     for any set of solutions made of one choice per row; here a choice is a machine).
+
+    References
+    ----------
+    K. G. Murty, "An algorithm for ranking all the assignments in order of increasing
+    cost", Operations Research 16 (1968) 682-687, doi:10.1287/opre.16.3.682.
+    M. L. Miller, H. S. Stone and I. J. Cox, "Optimizing Murty's ranked assignment
+    method", IEEE Trans. Aerospace and Electronic Systems 33 (1997) 851-862,
+    doi:10.1109/7.599256.
     """
     if result.objective not in ("total", "maximize"):
         raise ValueError("ranked alternatives are defined for the 'total' and 'maximize' objectives")

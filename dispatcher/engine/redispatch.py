@@ -76,6 +76,15 @@ def shortest_augmenting_path(cost: np.ndarray, col_of_row: np.ndarray, row_of_co
     are whole minutes and distances tie); then the dual update that
     keeps feasibility and tightness (Tomizawa 1971; Jonker and Volgenant 1987; the update
     follows Crouse 2016, Algorithm 1). O(n) per scanned row, O(n^2) per call at worst.
+
+    References
+    ----------
+    R. Jonker and A. Volgenant, "A shortest augmenting path algorithm for dense and sparse
+    linear assignment problems", Computing 38 (1987) 325-340, doi:10.1007/BF02278710.
+    D. F. Crouse, "On implementing 2D rectangular assignment algorithms", IEEE Trans.
+    Aerospace and Electronic Systems 52 (2016) 1679-1696, doi:10.1109/TAES.2016.140952.
+    E. W. Dijkstra, "A note on two problems in connexion with graphs", Numerische
+    Mathematik 1 (1959) 269-271, doi:10.1007/BF01386390.
     """
     placed, _ = _sap(cost, col_of_row, row_of_col, u, v, start)
     return placed
@@ -110,6 +119,29 @@ def sap_search(cost: np.ndarray, col_of_row: np.ndarray, row_of_col: np.ndarray,
     are) and ``skip`` columns as forbidden to ``start``: the same search as on a copy of
     ``cost`` with those entries set to ``inf``, without the copy. Used to evaluate
     subproblems lazily (see :mod:`dispatcher.engine.ranking`).
+
+    Parameters
+    ----------
+    cost, col_of_row, row_of_col, u, v, start
+        As for :func:`shortest_augmenting_path`.
+    limit : float
+        Distance at which to pause.
+    blocked, skip : boolean arrays over columns, optional
+
+    Returns
+    -------
+    generator
+        Yields lower bounds; returns ``(placed, length)``.
+
+    References
+    ----------
+    R. Jonker and A. Volgenant, "A shortest augmenting path algorithm for dense and sparse
+    linear assignment problems", Computing 38 (1987) 325-340, doi:10.1007/BF02278710.
+    E. W. Dijkstra, "A note on two problems in connexion with graphs", Numerische
+    Mathematik 1 (1959) 269-271, doi:10.1007/BF01386390.
+    M. L. Miller, H. S. Stone and I. J. Cox, "Optimizing Murty's ranked assignment
+    method", IEEE Trans. Aerospace and Electronic Systems 33 (1997) 851-862,
+    doi:10.1109/7.599256.
     """
     n = cost.shape[0]
     cand = np.full(n, np.inf)       # tentative distances of columns not yet final
@@ -602,6 +634,13 @@ def redispatch(previous: DispatchResult, *, machines_down: Sequence[int] = (),
     (:func:`_result_after`). Only rows and columns the event touched are re-placed, by
     shortest augmenting paths on reduced costs (see the module references). The
     ``"bottleneck"`` objective, and plans with rush jobs left waiting, are re-solved cold.
+
+    References
+    ----------
+    R. Jonker and A. Volgenant, "A shortest augmenting path algorithm for dense and sparse
+    linear assignment problems", Computing 38 (1987) 325-340, doi:10.1007/BF02278710.
+    D. F. Crouse, "On implementing 2D rectangular assignment algorithms", IEEE Trans.
+    Aerospace and Electronic Systems 52 (2016) 1679-1696, doi:10.1109/TAES.2016.140952.
     """
     rows = _rows_after(previous, jobs_removed, new_jobs, new_allowed, new_wait_penalty,
                        new_must_run, new_rush)

@@ -50,6 +50,20 @@ def alternating_distances(weights: np.ndarray) -> np.ndarray:
     doi:10.1145/367766.368168), one numpy outer minimum per pivot: O(n^3) arithmetic in n
     vector steps. Written here rather than taken from ``scipy.sparse.csgraph`` because
     tight pairs are zero-weight arcs, which its dense input reads as missing arcs.
+
+    Parameters
+    ----------
+    weights : (n, n) array of arc weights >= 0, ``inf`` = no arc
+
+    Returns
+    -------
+    (n, n) array
+        Shortest path lengths (0 on the diagonal).
+
+    References
+    ----------
+    R. W. Floyd, "Algorithm 97: Shortest path", Comm. ACM 5 (1962) 345,
+    doi:10.1145/367766.368168.
     """
     dist = np.array(weights, dtype=float, copy=True)
     n = dist.shape[0]
@@ -66,6 +80,25 @@ def forced_rise(cost: np.ndarray, col_of_row: np.ndarray, u: np.ndarray,
     ``col_of_row`` is optimal with potentials ``u``, ``v``. Entry ``[i, j]`` is
     ``r(i, j) + D(row_of(j), i)`` (see :func:`what_if`), ``inf`` where no perfect matching
     of finite entries contains (i, j), and exactly 0 on the plan.
+
+    Parameters
+    ----------
+    cost : (n, n) array, ``inf`` where forbidden
+    col_of_row : int array
+        An optimal permutation.
+    u, v : float arrays
+        Its dual potentials.
+
+    Returns
+    -------
+    (n, n) array
+        The rise per forced entry, ``inf`` where impossible.
+
+    References
+    ----------
+    L. R. Ford and D. R. Fulkerson, "Flows in Networks", Princeton University Press (1962).
+    R. Burkard, M. Dell'Amico and S. Martello, "Assignment Problems", SIAM (2009),
+    doi:10.1137/1.9781611972238.
     """
     size = cost.shape[0]
     finite = np.isfinite(cost)
@@ -103,6 +136,14 @@ def what_if(result: DispatchResult) -> WhatIf:
     ``r(i, j) + D(row_of(j), i)`` (Ford and Fulkerson 1962, ch. III: optimal circulations
     differ by cycles of the residual graph). Shortest paths by
     :func:`alternating_distances`, O(n^3) for an n x n square problem.
+
+    References
+    ----------
+    L. R. Ford and D. R. Fulkerson, "Flows in Networks", Princeton University Press (1962).
+    R. Burkard, M. Dell'Amico and S. Martello, "Assignment Problems", SIAM (2009),
+    doi:10.1137/1.9781611972238.
+    R. W. Floyd, "Algorithm 97: Shortest path", Comm. ACM 5 (1962) 345,
+    doi:10.1145/367766.368168.
     """
     if result.objective not in ("total", "maximize"):
         raise ValueError("what-if costs are defined for the 'total' and 'maximize' objectives")

@@ -6,12 +6,12 @@ a decision stores the shop document as JSON text and the plan in the solve JSON 
 Typical use::
 
     store = HistoryStore(path)                      # None: the per-user default file
-    n = store.record(shop_doc, plan, by="Ana", reason="breakdown", note="press 2 down")
+    n = store.record(shop_doc, plan, by="Supervisor A", reason="breakdown", note="press 2 down")
     store.list(machine="Press 2", date_from=date(2026, 12, 1))
     store.get(n).plan
     store.diff(n - 1, n).lines()
-    store.restore(n - 1, by="Ana")                  # a new decision "restored from #..."
-    store.export_csv("history.csv", by="Ana")
+    store.restore(n - 1, by="Supervisor A")         # a new decision "restored from #..."
+    store.export_csv("history.csv", by="Supervisor A")
 """
 
 from .errors import DecisionConflict, DecisionNotFound, HistoryError, HistoryInputError
