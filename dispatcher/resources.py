@@ -16,6 +16,8 @@ from importlib import resources
 from importlib.abc import Traversable
 from pathlib import Path
 
+from dispatcher.errors import InternalError
+
 __all__ = [
     "APP_ID",
     "ICON_SIZES",
@@ -40,8 +42,9 @@ ICON_SIZES = (16, 24, 32, 48, 64, 128, 256)
 LANGUAGES: tuple[str, ...] = ()
 
 
-class ResourceMissing(FileNotFoundError):
-    """An installed data file is missing: the installation is incomplete."""
+class ResourceMissing(InternalError, FileNotFoundError):
+    """An installed data file is missing: the installation is incomplete (not a user
+    error: exit code 1 with its traceback on the command line)."""
 
 
 def _register_checkout() -> None:

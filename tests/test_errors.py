@@ -39,7 +39,14 @@ CORE_PACKAGES = ("engine", "shop", "io", "history", "sheet", "commands")
 def _error_classes():
     """Every exception class defined in the core packages and the command line."""
     found = {}
-    names = ["dispatcher.cli", "dispatcher.errors", "dispatcher.atomic"]
+    names = [
+        "dispatcher.cli",
+        "dispatcher.errors",
+        "dispatcher.atomic",
+        "dispatcher.jsonnum",
+        "dispatcher.resources",
+        "dispatcher.qt_platform",
+    ]
     for package in CORE_PACKAGES:
         pkg = importlib.import_module(f"dispatcher.{package}")
         names += [m.name for m in pkgutil.iter_modules(pkg.__path__, f"{pkg.__name__}.")]
