@@ -6,12 +6,17 @@ edits cells (each edit re-solves in the background). A 5 ms heartbeat timer on t
 thread records the longest gap between its ticks: that gap is the longest time the window
 could not respond. Goal: under 100 ms. Run: ``python benchmarks/gui_stall.py``.
 
-The script prints one line per shop and ends with ``worst_stall_ms <number>``.
+One-round solves run in a worker process (``dispatcher.ui.solving``), so the stall left
+is the window's own work. The measurement is repeated (``--runs N``, default 3, each in a
+fresh window); the script prints one line per shop and run, the median and the worst per
+shop, and ends with ``worst_stall_ms <number>`` (the worst over all runs).
 """
 
 from __future__ import annotations
 
+import argparse
 import os
+import statistics
 import sys
 import tempfile
 import time
@@ -103,33 +108,52 @@ def measure(app, window, path: Path, edits: int = 12) -> tuple[float, float]:
     return opening, beat.stop()
 
 
-def main() -> int:
-    app = make_application()
+def one_run(app, tmp: Path, shops: list[Path], run: int) -> dict[str, tuple[float, float]]:
     from dispatcher.ui.main_window import MainWindow
     from dispatcher.ui.messages import RecordingMessenger
 
+    settings = QSettings(str(tmp / f"s{run}.ini"), QSettings.Format.IniFormat)
+    window = MainWindow(settings=settings, messenger=RecordingMessenger(),
+                        history_path=tmp / "h.sqlite")
+    window.resize(1400, 900)
+    window.show()
+    pump(app, 0.3)
+    out = {}
+    for path in shops:
+        t0 = time.perf_counter()
+        opening, editing = measure(app, window, path)
+        plan = window.plan
+        print(f"run {run} {path.name}: {window.doc.n_jobs()} x {window.doc.n_machines()}, "
+              f"stall opening {opening:.0f} ms (file read on the GUI thread), "
+              f"worst stall scrolling+editing {editing:.0f} ms, "
+              f"plan {'ok' if plan is not None else 'none'}, {time.perf_counter() - t0:.1f} s")
+        out[path.name] = (opening, editing)
+    window.doc.undo_stack.setClean()
+    window.close()
+    window.deleteLater()
+    pump(app, 0.2)
+    return out
+
+
+def main() -> int:
+    parser = argparse.ArgumentParser(description=__doc__.splitlines()[0])
+    parser.add_argument("--runs", type=int, default=3, help="repetitions (default 3)")
+    args = parser.parse_args()
+    app = make_application()
     with tempfile.TemporaryDirectory() as tmp:
-        os.environ["DISPATCHER_AUTOSAVE_DIR"] = str(Path(tmp) / "autosave")
-        settings = QSettings(str(Path(tmp) / "s.ini"), QSettings.Format.IniFormat)
-        window = MainWindow(settings=settings, messenger=RecordingMessenger(),
-                            history_path=Path(tmp) / "h.sqlite")
-        window.resize(1400, 900)
-        window.show()
-        pump(app, 0.3)
-        worst = 0.0
+        tmp = Path(tmp)
+        os.environ["DISPATCHER_AUTOSAVE_DIR"] = str(tmp / "autosave")
         shops = [ROOT / "sample_shops" / "large_print_plant.dshop",
-                 generated_shop(Path(tmp) / "generated_1000x200.dshop")]
-        for path in shops:
-            t0 = time.perf_counter()
-            opening, editing = measure(app, window, path)
-            plan = window.plan
-            print(f"{path.name}: {window.doc.n_jobs()} x {window.doc.n_machines()}, "
-                  f"stall opening {opening:.0f} ms (file read on the GUI thread), "
-                  f"worst stall scrolling+editing {editing:.0f} ms, "
-                  f"plan {'ok' if plan is not None else 'none'}, {time.perf_counter() - t0:.1f} s")
-            worst = max(worst, editing)
-        window.doc.undo_stack.setClean()
-        window.close()
+                 generated_shop(tmp / "generated_1000x200.dshop")]
+        runs = [one_run(app, tmp, shops, n) for n in range(1, max(args.runs, 1) + 1)]
+    worst = 0.0
+    for path in shops:
+        opening = [r[path.name][0] for r in runs]
+        editing = [r[path.name][1] for r in runs]
+        print(f"{path.name}: scrolling+editing median {statistics.median(editing):.0f} ms, "
+              f"worst {max(editing):.0f} ms; opening median {statistics.median(opening):.0f} ms, "
+              f"worst {max(opening):.0f} ms ({len(runs)} runs)")
+        worst = max(worst, max(editing))
     print(f"goal: scrolling and editing never block the GUI thread for more than {GOAL_MS:.0f} ms")
     print(f"worst_stall_ms {worst:.0f}")
     return 0

@@ -45,7 +45,7 @@ from dispatcher.ui.printing import SheetPrinting
 from dispatcher.ui.settings_dialog import SettingsController
 from dispatcher.shop.planning import MODE_ROUND, MODE_SHIFT, MODES
 from dispatcher.shop.proposal import EVENT_DOWN, EVENT_UP
-from dispatcher.ui.solving import SolveOutcome, solve_outcome
+from dispatcher.ui.solving import SolveOutcome, solve_outcome, solve_round_in_process
 from dispatcher.ui.whatif_tab import WhatIfTab
 from dispatcher.ui.worker import BackgroundRunner
 from dispatcher.ui.settings_keys import KEY_HISTORY
@@ -347,6 +347,10 @@ class MainWindow(QMainWindow):
         """Re-solve the current shop in the background; older results will be discarded."""
         shop = self.doc.shop.copy()
         objective, mode = self.objective, self.mode
+        if mode == MODE_ROUND:
+            # In a worker process: the solve never competes with the window for Python.
+            self.runner.submit(lambda cancel: solve_round_in_process(shop, objective), "solving")
+            return
         self.runner.submit(lambda cancel, report: solve_outcome(shop, objective, cancel, report, mode),
                            "solving", with_progress=True)
 
@@ -410,14 +414,23 @@ class MainWindow(QMainWindow):
         self._fit_columns = True
 
     def _fit_grid_columns(self) -> None:
-        """Size columns to their text once per opened shop, measuring a sample of rows
-        (measuring every cell of a big grid would stall the window)."""
+        """Size columns to their text once per opened shop: the job columns measured on a
+        sample of rows, the machine columns from their header text (cell values are short
+        numbers). Measuring every machine column's cells stalled the window for over a
+        second on a 1000 x 200 shop."""
         self._fit_columns = False
-        # Measure only the first rows (Qt samples that many): fast on a 1000-job shop.
-        self.view.horizontalHeader().setResizeContentsPrecision(60)
-        if self.doc.n_machines() <= 400:
-            self.view.resizeColumnsToContents()
-        self.view.setColumnWidth(COL_PLAN, max(self.view.columnWidth(COL_PLAN), 170))
+        view = self.view
+        header = view.horizontalHeader()
+        header.setResizeContentsPrecision(60)
+        for column in range(FIRST_MACHINE_COL):
+            view.resizeColumnToContents(column)
+        view.setColumnWidth(COL_PLAN, max(view.columnWidth(COL_PLAN), 170))
+        metrics = header.fontMetrics()
+        floor = metrics.horizontalAdvance("000000.0") + 16
+        for k in range(self.doc.n_machines()):
+            text = str(self.model.headerData(FIRST_MACHINE_COL + k, Qt.Orientation.Horizontal) or "")
+            widest = max((metrics.horizontalAdvance(line) for line in text.split("\n")), default=0)
+            view.setColumnWidth(FIRST_MACHINE_COL + k, min(max(widest + 16, floor), 220))
 
     # ---- files ------------------------------------------------------------------------------
     def on_new(self) -> None:

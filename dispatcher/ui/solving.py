@@ -9,9 +9,15 @@ plan panel shows, and lays a plan out per machine for it.
 
 from __future__ import annotations
 
+import atexit
+import multiprocessing
 import threading
 import time
-from dataclasses import dataclass
+from concurrent.futures import ProcessPoolExecutor
+from concurrent.futures.process import BrokenProcessPool
+from dataclasses import dataclass, replace
+
+import numpy as np
 
 from dispatcher.engine.fill_shift import ShiftCancelled
 from dispatcher.shop import Plan, Shop, ShopError, ShopInfeasibleError
@@ -69,3 +75,78 @@ def shift_hours(plan: Plan | ShiftFill) -> dict[str, tuple[float, float]]:
     if not isinstance(plan, ShiftFill):
         return {}
     return {m.machine: (m.hours_used, m.capacity) for m in plan.machines}
+
+
+# ---- one-round solves in a worker process ------------------------------------------------
+# A one-round solve of a 1000 x 200 shop spends about half a second in C code that holds
+# Python's interpreter lock (matrix building, scipy's linear_sum_assignment); in a thread
+# the GUI thread cannot run meanwhile, however short the switch interval. In a worker
+# process it never competes with the window. The shop is sent with its grid as numpy
+# arrays built by an interruptible loop (pickling the 200,000-entry dict is one 80 ms call
+# holding the lock); the plan comes back without its copy of the shop, which the caller
+# already has.
+
+_EXECUTOR: ProcessPoolExecutor | None = None
+_EXECUTOR_LOCK = threading.Lock()
+
+
+def _executor() -> ProcessPoolExecutor:
+    global _EXECUTOR
+    with _EXECUTOR_LOCK:
+        if _EXECUTOR is None:
+            _EXECUTOR = ProcessPoolExecutor(max_workers=1,
+                                            mp_context=multiprocessing.get_context("spawn"))
+            atexit.register(_EXECUTOR.shutdown, wait=False, cancel_futures=True)
+        return _EXECUTOR
+
+
+def _pack(shop: Shop) -> tuple:
+    """``shop`` without its grid and hours, plus both as (job index, machine index, value)."""
+    jpos = {j.id: i for i, j in enumerate(shop.jobs)}
+    mpos = {m.id: k for k, m in enumerate(shop.machines)}
+
+    def table(cells: dict) -> tuple:
+        n = len(cells)
+        rows = np.fromiter((jpos[k[0]] for k in cells), dtype=np.int32, count=n)
+        cols = np.fromiter((mpos[k[1]] for k in cells), dtype=np.int32, count=n)
+        return rows, cols, np.fromiter(cells.values(), dtype=float, count=n)
+
+    return replace(shop, grid={}, hours={}), table(shop.grid), table(shop.hours)
+
+
+def _unpack(packed: tuple) -> Shop:
+    light, grid, hours = packed
+    jids = [j.id for j in light.jobs]
+    mids = [m.id for m in light.machines]
+
+    def cells(table: tuple) -> dict:
+        rows, cols, values = table
+        return {(jids[r], mids[c]): v for r, c, v in zip(rows.tolist(), cols.tolist(), values.tolist())}
+
+    return replace(light, grid=cells(grid), hours=cells(hours))
+
+
+def _solve_packed(packed: tuple, objective: str) -> SolveOutcome:
+    """In the worker process: solve one round; the plan goes back without the shop."""
+    outcome = solve_outcome(_unpack(packed), objective, mode=MODE_ROUND)
+    problem = getattr(outcome.plan, "problem", None)
+    if problem is not None:
+        problem.shop = None
+    return outcome
+
+
+def solve_round_in_process(shop: Shop, objective: str) -> SolveOutcome:
+    """:func:`solve_outcome` for one round, computed in the worker process (called from a
+    background thread: it blocks until the result is back). Falls back to this process
+    when the worker cannot be started."""
+    try:
+        outcome = _executor().submit(_solve_packed, _pack(shop), objective).result()
+    except (BrokenProcessPool, OSError, RuntimeError):
+        global _EXECUTOR
+        with _EXECUTOR_LOCK:
+            _EXECUTOR = None
+        return solve_outcome(shop, objective, mode=MODE_ROUND)
+    problem = getattr(outcome.plan, "problem", None)
+    if problem is not None:
+        problem.shop = shop
+    return outcome
