@@ -471,3 +471,30 @@ def test_settings_use_default_and_the_last_name_becomes_the_default(qtbot, open_
     window.settings_ctl.dialog.reject()
     col = window.doc.shop.machine_names().index("Trim bench")
     assert window.decisions.machine_event("down", col).by.text() == "night-shift lead"
+
+
+def test_rush_by_ctrl_r_pull_and_done_from_the_job_menu(qtbot, open_window, tmp_path):
+    window = open_window(MOULDING)
+    shop = window.doc.shop
+    row = shop.job_names().index(window.plan.waiting_jobs[0])
+    window.view.setCurrentIndex(window.model.index(row, FIRST_MACHINE_COL))
+    press(qtbot, window, Qt.Key.Key_R, CTRL)
+    dialog = window.decisions.dialog
+    assert dialog.reason.currentData() == "rush-job"
+    confirm_by_keys(qtbot, dialog, "Early-shift lead")
+    wait_plan(qtbot, window)
+    assert shop.jobs[row].rush
+    name = shop.jobs[0].name
+    window.view.setCurrentIndex(window.model.index(0, FIRST_MACHINE_COL))
+    menu_action(window, "Job", "Job pulled…").trigger()
+    window.decisions.dialog.confirm("Early-shift lead", "order cancelled")
+    wait_plan(qtbot, window)
+    assert name not in window.doc.shop.job_names()
+    reasons = {d.id: d.reason for d in HistoryStore(tmp_path / "history.sqlite").list()}
+    assert reasons == {1: "rush-job", 2: "manual-change"}
+    window.view.setCurrentIndex(window.model.index(1, FIRST_MACHINE_COL))
+    done = window.doc.shop.jobs[1].name
+    menu_action(window, "Job", "Mark job done").trigger()
+    wait_plan(qtbot, window)
+    assert window.doc.shop.jobs[1].state == "done"
+    assert done not in [a.job for a in window.plan.assignments] + window.plan.waiting_jobs
