@@ -219,7 +219,7 @@ BAD_FILES = [
     ("negative.csv", "l,A\nJ1,-1\n", r"row 2, column 2 \(B\): -1 is negative"),
     ("latin.csv", "l,A\nPièce,1\n".encode("latin-1"), r"row 2: is not UTF-8 text"),
     ("grid.pdf", "l,A\nJ1,1\n", r"unsupported extension '\.pdf'"),
-    ("fake.xlsx", "l,A\nJ1,1\n", r"not an XLSX spreadsheet"),
+    ("fake.xlsx", "l,A\nJ1,1\n", r"is not an XLSX workbook \(not a zip archive\)"),
     ("zip.csv", b"PK\x03\x04" + bytes(40), r"looks like a zipped spreadsheet"),
 ]
 

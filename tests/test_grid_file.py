@@ -235,7 +235,7 @@ def test_xlsx_saved_as_csv(tmp_path):
 
 @pytest.mark.parametrize("content", [b"l,A\nJ1,1\n", b"PK\x03\x04 not really a zip", b""])
 def test_not_a_spreadsheet_with_xlsx_extension(tmp_path, content):
-    with pytest.raises(GridFileError, match=r"fake\.xlsx: (not an XLSX spreadsheet|the file is empty)"):
+    with pytest.raises(GridFileError, match=r"fake\.xlsx: (is not an XLSX workbook \(not a zip archive\)|the file is empty)"):
         read_grid(write(tmp_path, "fake.xlsx", content))
 
 
@@ -299,7 +299,8 @@ from hypothesis import HealthCheck, assume, given, settings  # noqa: E402
 from hypothesis import strategies as st  # noqa: E402
 
 _name = st.text(st.characters(blacklist_categories=("Cs", "Cc", "Zl", "Zp")), min_size=1, max_size=12) \
-    .map(str.strip).filter(lambda s: s and not s.startswith("\ufeff") and s not in ("x", "X"))
+    .map(str.strip).filter(lambda s: s and not s.startswith("\ufeff") and s not in ("x", "X")
+                           and not s.startswith(("'=", "'+", "'-", "'@", "''")))  # escapes
 _cell = st.one_of(st.sampled_from(["x", "X", ""]),
                   st.floats(0, 1e9, allow_nan=False, allow_infinity=False),
                   st.integers(0, 10**9))

@@ -318,7 +318,7 @@ def test_in_force_maps_ids():
     (lambda s: s.pins.extend([Pin("J1", "M1", MUST), Pin("J1", "M2", MUST)]), "more than one machine"),
     (lambda s: s.pins.append(Pin("J9", "M1", MUST)), "unknown job id 'J9'"),
     (lambda s: s.pins.append(Pin("J1", "M9", MUST_NOT)), "unknown machine id 'M9'"),
-    (lambda s: setattr(s.machines[0], "slots", -1), "slots.*whole number >= 1"),
+    (lambda s: setattr(s.machines[0], "slots", -1), "slots.*whole number from 1"),
     (lambda s: (setattr(s.machines[0], "state", DOWN), setattr(s.jobs[0], "state", RUNNING),
                 setattr(s.jobs[0], "machine", "M1")), "which is down"),
     (lambda s: s.jobs.append(Job("J1", "other")), "id 'J1'.*unique"),

@@ -17,6 +17,7 @@ from dispatcher.errors import (
     EXIT_INTERNAL,
     EXIT_OK,
     BadInputError,
+    InternalError,
 )
 from dispatcher.jsonnum import json_number
 from dispatcher.shop.plan import parts_text, parts_word
@@ -97,8 +98,12 @@ def wait_reason_text(jobs: list[str], machines: list[str], job: int, witness) ->
 
 
 def print_json(obj: Any) -> None:
-    json.dump(obj, sys.stdout, indent=2, ensure_ascii=False)
-    sys.stdout.write("\n")
+    """Print strict JSON: a non-finite number (which JSON cannot spell) prints nothing."""
+    try:
+        text = json.dumps(obj, indent=2, ensure_ascii=False, allow_nan=False)
+    except ValueError as exc:
+        raise InternalError(f"{exc}; nothing was printed") from None
+    sys.stdout.write(text + "\n")
 
 
 def print_plan(data: dict[str, Any], unit: str = "", marks: dict[str, str] | None = None) -> None:

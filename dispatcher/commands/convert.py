@@ -2,24 +2,28 @@
 
 * ``convert GRID.csv|.xlsx SHOP.dshop``: a new shop (all jobs waiting, all machines up);
 * ``convert GRID.csv SHOP.dshop --into OLD.dshop``: merge the grid into an existing shop,
-  matching jobs and machines by name, and report what was added, changed and unmatched;
+  matching jobs and machines by name, and report what was added, changed and unmatched
+  (``OLD.dshop`` is only read: the output must be another file);
 * ``convert SHOP.dshop GRID.csv|.xlsx``: the shop's grid as a grid file;
 * ``convert SHOP.dshop PLAN.csv|.xlsx --plan``: the shop's plan in force as a table (its
   best plan, marked as a draft on stderr, when the document holds none).
 
-Nothing is written when the input has a problem; files are replaced in one step.
+Nothing is written when the input has a problem; files are replaced in one step. An
+existing shop document is never replaced without ``--force`` (its states, pins and plan in
+force would be lost), and the output's extension must name what is written.
 """
 
 from __future__ import annotations
 
 import argparse
+import os
 import sys
 from pathlib import Path
 
 from dispatcher.commands.common import CliError
 from dispatcher.commands.shop_input import is_shop_document, read_shop_arg, solve_shop_arg
 from dispatcher.io.grid import GRID_SUFFIXES
-from dispatcher.io.shopfile import save_shop
+from dispatcher.io.shopfile import SHOP_SUFFIX, save_shop
 from dispatcher.io.spreadsheet import (
     EXPORT_SUFFIXES,
     export_grid,
@@ -45,11 +49,39 @@ def register(sub: argparse._SubParsersAction) -> None:
                    help="reading a grid file: a second grid file (same job and machine "
                    "names) whose cells are run hours, for filling a shift; a 'run hours' "
                    "column in the grid gives each job's run hours instead")
+    p.add_argument("--force", action="store_true",
+                   help="replace OUT when it is an existing shop document")
     p.set_defaults(func=run)
+
+
+def _same_file(a: str, b: str) -> bool:
+    try:
+        return os.path.samefile(a, b)
+    except OSError:
+        return Path(a).resolve() == Path(b).resolve()
+
+
+def _check_shop_output(out: str, args: argparse.Namespace) -> None:
+    """A shop document goes to a new ``.dshop`` path, or over an old one with ``--force``."""
+    if Path(out).suffix.lower() != SHOP_SUFFIX:
+        raise CliError(f"{out}: a grid file converts to a shop document, so the file name must "
+                       f"end in {SHOP_SUFFIX} (got {Path(out).suffix or 'no extension'!r})")
+    if args.into and _same_file(args.into, out):
+        raise CliError(f"{out}: is the --into document, which is only read; write the merged "
+                       "shop to another file (nothing was written)")
+    if Path(out).is_dir():
+        raise CliError(f"{out}: is a folder; give the path of the shop document to write")
+    if Path(out).exists() and not args.force:
+        raise CliError(f"{out}: already exists; replacing it would lose its states, pins and "
+                       "plan in force. Give a new file name, or --force to replace it "
+                       "(nothing was written)")
 
 
 def run(args: argparse.Namespace) -> int:
     src, out = args.source, args.target
+    if Path(src).is_dir():
+        raise CliError(f"{src}: is a folder, not a file; give a grid file "
+                       f"({', '.join(GRID_SUFFIXES)}) or a shop document ({SHOP_SUFFIX})")
     out_is_shop = is_shop_document(out)
     if is_shop_document(src):
         if out_is_shop:
@@ -82,6 +114,7 @@ def run(args: argparse.Namespace) -> int:
         raise CliError(f"{out}: a grid file converts to a shop document; name it *.dshop")
     if args.plan:
         raise CliError("--plan applies when reading a shop document")
+    _check_shop_output(out, args)
     existing = read_shop_arg(args.into) if args.into else None
     report = import_grid_file(src, existing, hours=args.hours)
     if existing is None:

@@ -104,6 +104,9 @@ def _recorded(shop: Shop, source: str, number: str, history: str | None) -> tupl
 
 def make_content(args: argparse.Namespace) -> SheetContent:
     """The sheet for the parsed arguments (no Qt involved)."""
+    if args.pdf and Path(args.pdf).suffix.lower() != ".pdf":
+        raise CliError(f"{args.pdf}: the sheet is written as PDF, so the file name must end in "
+                       f".pdf (got {Path(args.pdf).suffix or 'no extension'!r})")
     shop = _load(args.shop, check=not args.fill_shift)
     if args.decision is not None:
         snapshot, plan, decision = _recorded(shop, args.shop, args.decision, args.history)

@@ -91,6 +91,9 @@ def infeasible_message(exc: InfeasibleError, jobs: list[str], machines: list[str
 
 
 def run(args: argparse.Namespace) -> int:
+    if args.time_limit is not None and not args.fill_shift:
+        raise CliError(f"{args.grid}: --time-limit applies to --fill-shift only (one dispatch "
+                       "round has no time limit)")
     check_record_arguments(args)
     alternatives_whatif.check_arguments(args, objective_of(args))
     if args.in_force and (args.fill_shift or not is_shop_document(args.grid)):

@@ -16,12 +16,27 @@ from __future__ import annotations
 import json
 import math
 import os
+import re
 from datetime import date, datetime, time
 from pathlib import Path
 from typing import Any
 
+import numpy as np
+
 from dispatcher.atomic import atomic_write_bytes
 from dispatcher.io.crewfile import CREW_VERSION, crew_to_dict, has_crew, read_crew
+from dispatcher.limits import (
+    MAX_CELLS,
+    MAX_DOCUMENT_BYTES,
+    MAX_JOBS,
+    MAX_JSON_DEPTH,
+    MAX_MACHINES,
+    MAX_PINS,
+    MAX_SLOTS,
+    MAX_TOTAL_SLOTS,
+    name_problem,
+    value_problem,
+)
 from dispatcher.shop.model import (
     Job,
     Machine,
@@ -42,7 +57,9 @@ FORMAT_NAME = "dispatcher-shop"
 #: shops: version 2 added the crew block.
 FORMAT_VERSION = 2
 SHOP_SUFFIX = ".dshop"
-MAX_DOCUMENT_BYTES = 256 * 1024 * 1024
+
+#: Fields holding free text (notes); every other text field is a name or an id.
+_FREE_TEXT = {"description", "notes", "state_note", "note"}
 
 _TOP = {"format", "format_version", "name", "description", "unit", "shift", "move_penalty",
         "machines", "jobs", "grid", "hours", "pins", "plan_in_force", "crew"}
@@ -90,6 +107,14 @@ class _Reader:
                 self.bad(where, f"unknown field {k!r} (known: {', '.join(sorted(keys))})")
         return x
 
+    def checked(self, v: str, key: str, where: str, default: str) -> str:
+        """``v`` if it is plain text within the length limit (names: one line), else ``default``."""
+        problem = name_problem(v, free_text=key in _FREE_TEXT)
+        if problem is not None:
+            self.bad(f"{where}, field '{key}'", problem)
+            return default
+        return v
+
     def text(self, d: dict, key: str, where: str, default: str = "", required: bool = False) -> str:
         if key not in d:
             if required:
@@ -99,7 +124,7 @@ class _Reader:
         if not isinstance(v, str):
             self.bad(f"{where}, field '{key}'", f"expected text, got {_kind(v)}")
             return default
-        return v
+        return self.checked(v, key, where, default)
 
     def opt_text(self, d: dict, key: str, where: str) -> str | None:
         v = d.get(key)
@@ -108,7 +133,7 @@ class _Reader:
         if not isinstance(v, str):
             self.bad(f"{where}, field '{key}'", f"expected text or null, got {_kind(v)}")
             return None
-        return v
+        return self.checked(v, key, where, None)
 
     def number(self, d: dict, key: str, where: str, default: float | None,
                optional: bool = False) -> float | None:
@@ -118,14 +143,22 @@ class _Reader:
         if isinstance(v, bool) or not isinstance(v, (int, float)) or not math.isfinite(v):
             self.bad(f"{where}, field '{key}'", f"expected a number, got {_kind(v)}")
             return default
+        too_big = value_problem(float(v))
+        if too_big:
+            self.bad(f"{where}, field '{key}'", too_big)
+            return default
         return float(v)
 
-    def integer(self, d: dict, key: str, where: str, default: int) -> int:
+    def integer(self, d: dict, key: str, where: str, default: int, maximum: int | None = None) -> int:
         if key not in d:
             return default
         v = d[key]
-        if isinstance(v, bool) or not isinstance(v, (int, float)) or not float(v).is_integer():
+        if (isinstance(v, bool) or not isinstance(v, (int, float))
+                or not math.isfinite(v) or not float(v).is_integer()):
             self.bad(f"{where}, field '{key}'", f"expected a whole number, got {_kind(v)}")
+            return default
+        if maximum is not None and v > maximum:
+            self.bad(f"{where}, field '{key}'", f"{int(v):,} is more than the limit of {maximum:,}")
             return default
         return int(v)
 
@@ -156,7 +189,7 @@ def _kind(x: Any) -> str:
     if isinstance(x, bool):
         return "true/false"
     if isinstance(x, (int, float)):
-        return f"the number {x!r}"
+        return f"the number {x!r}" if len(repr(x)) < 40 else "a number"
     if isinstance(x, str):
         return f"the text {x!r}" if len(x) < 40 else "a text"
     if isinstance(x, list):
@@ -190,6 +223,7 @@ def shop_from_dict(data: Any, source: str = "shop document", *, check: bool = Tr
                                      f"the document is format version {version}, newer than this "
                                      f"program reads (up to {FORMAT_VERSION}); update dispatcher "
                                      "to open it")], source)
+    _check_counts(data, source)
     r.obj(data, "top level", _TOP)
     shop = Shop(name=r.text(data, "name", "top level"),
                 description=r.text(data, "description", "top level"))
@@ -219,7 +253,7 @@ def shop_from_dict(data: Any, source: str = "shop document", *, check: bool = Tr
             id=r.text(m, "id", where, required=True), name=r.text(m, "name", where, required=True),
             state=r.text(m, "state", where, UP), state_note=r.text(m, "state_note", where),
             state_changed=r.stamp(m, "state_changed", where, datetime),
-            slots=r.integer(m, "slots", where, 1),
+            slots=r.integer(m, "slots", where, 1, maximum=MAX_SLOTS),
             shift_hours=r.number(m, "shift_hours", where, None, optional=True),
             speed_factor=r.number(m, "speed_factor", where, 1.0),
             notes=r.text(m, "notes", where)))
@@ -242,6 +276,10 @@ def shop_from_dict(data: Any, source: str = "shop document", *, check: bool = Tr
             run_hours=r.number(j, "run_hours", where, None, optional=True),
             move_penalty=r.number(j, "move_penalty", where, None, optional=True)))
 
+    total_slots = sum(m.slots for m in shop.machines if isinstance(m.slots, int))
+    if total_slots > MAX_TOTAL_SLOTS:
+        r.bad("field 'machines'", f"the machines have {total_slots:,} slots in all, more than the "
+              f"limit of {MAX_TOTAL_SLOTS:,}")
     shop.grid = _read_pairs(r, data.get("grid", {}), "grid", shop)
     shop.hours = _read_pairs(r, data.get("hours", {}), "hours", shop)
 
@@ -282,8 +320,29 @@ def shop_from_dict(data: Any, source: str = "shop document", *, check: bool = Tr
     return shop
 
 
+def _check_counts(data: dict, source: str) -> None:
+    """Refuse a document whose lists exceed the limits, before any object is built."""
+    problems = []
+    sizes = {}
+    for key, limit in (("jobs", MAX_JOBS), ("machines", MAX_MACHINES), ("pins", MAX_PINS)):
+        items = data.get(key)
+        if isinstance(items, list):
+            sizes[key] = len(items)
+            if len(items) > limit:
+                problems.append(Problem(f"field '{key}'", f"{len(items):,} {key} are more than "
+                                        f"the limit of {limit:,}"))
+    cells = sizes.get("jobs", 0) * sizes.get("machines", 0)
+    if not problems and cells > MAX_CELLS:
+        problems.append(Problem("fields 'jobs' and 'machines'",
+                                f"{sizes['jobs']:,} jobs x {sizes['machines']:,} machines = "
+                                f"{cells:,} grid cells, more than the limit of {MAX_CELLS:,}"))
+    if problems:
+        raise ShopFileError(problems, source)
+
+
 def _item_where(what: str, n: int, item: Any) -> str:
-    if isinstance(item, dict) and isinstance(item.get("name"), str):
+    if (isinstance(item, dict) and isinstance(item.get("name"), str)
+            and name_problem(item["name"]) is None):
         return f"{what} {item['name']!r} (#{n})"
     return f"{what} #{n}"
 
@@ -305,14 +364,57 @@ def _read_pairs(r: _Reader, block: Any, field: str, shop: Shop) -> dict[tuple[st
                 r.bad(f"{field}, {shop.describe_job(jid)}, {shop.describe_machine(mid)}",
                       f"expected a number (or null: cannot run), got {_kind(v)}")
                 continue
+            too_big = value_problem(float(v))
+            if too_big:
+                r.bad(f"{field}, {shop.describe_job(jid)}, {shop.describe_machine(mid)}", too_big)
+                continue
             out[(jid, mid)] = float(v)
     return out
 
 
+_ESCAPE = re.compile(rb"\\.", re.DOTALL)
+_SCAN_CHUNK = 1 << 22
+
+
+def json_depth_problem(text: str, limit: int = MAX_JSON_DEPTH) -> Problem | None:
+    """Where ``text`` nests JSON lists and objects deeper than ``limit``, or None.
+
+    A linear scan outside the parser (numpy over the bytes, in chunks): brackets inside
+    strings do not count. ``json.loads`` would recurse once per level and fail with a
+    RecursionError on a document such as ``[`` x 100000; this refuses it first.
+    """
+    data = _ESCAPE.sub(b"__", text.encode("utf-8", "surrogatepass"))
+    depth, in_string = 0, False
+    for start in range(0, len(data), _SCAN_CHUNK):
+        b = np.frombuffer(data, np.uint8, count=min(_SCAN_CHUNK, len(data) - start), offset=start)
+        quotes = np.cumsum(b == ord('"')) + (1 if in_string else 0)
+        outside = (quotes % 2) == 0
+        step = (((b == ord("[")) | (b == ord("{"))).astype(np.int64)
+                - ((b == ord("]")) | (b == ord("}"))).astype(np.int64)) * outside
+        levels = depth + np.cumsum(step)
+        deep = np.flatnonzero(levels > limit)
+        if deep.size:
+            at = start + int(deep[0])
+            line = data.count(b"\n", 0, at) + 1
+            column = at - (data.rfind(b"\n", 0, at) + 1) + 1
+            return Problem(f"line {line}, column {column}",
+                           f"lists and objects nest more than {limit} levels deep; a shop "
+                           f"document needs at most 3")
+        if b.size:
+            depth = int(levels[-1])
+            in_string = bool(quotes[-1] % 2)
+    return None
+
+
 def parse_shop_text(text: str, source: str = "shop document", *, check: bool = True) -> Shop:
     """Parse a shop document from JSON text."""
+    deep = json_depth_problem(text)
+    if deep is not None:
+        raise ShopFileError([deep], source)
     try:
         data = json.loads(text, parse_constant=_reject_constant, object_pairs_hook=_no_duplicate_keys)
+    except RecursionError:
+        raise ShopFileError([Problem("", "lists and objects nest too deeply")], source) from None
     except json.JSONDecodeError as exc:
         raise ShopFileError([Problem(f"line {exc.lineno}, column {exc.colno}",
                                      f"not valid JSON: {exc.msg}")], source) from None
@@ -409,11 +511,12 @@ def dump_shop_text(shop: Shop) -> str:
     """The document as JSON text (grid rows on one line each, so diffs stay readable)."""
     data = shop_to_dict(shop)
     grid, hours = data.pop("grid"), data.pop("hours")
-    text = json.dumps(data, indent=2, ensure_ascii=False)
+    text = json.dumps(data, indent=2, ensure_ascii=False, allow_nan=False)
     def block(d: dict) -> str:
         if not d:
             return "{}"
-        rows = [f"    {json.dumps(k, ensure_ascii=False)}: {json.dumps(v, ensure_ascii=False)}"
+        rows = [f"    {json.dumps(k, ensure_ascii=False)}: "
+                f"{json.dumps(v, ensure_ascii=False, allow_nan=False)}"
                 for k, v in d.items()]
         return "{\n" + ",\n".join(rows) + "\n  }"
     tail = f',\n  "grid": {block(grid)},\n  "hours": {block(hours)}\n}}\n'
@@ -432,7 +535,11 @@ def save_shop(shop: Shop, path: str | os.PathLike, *, check: bool = True) -> Non
         problems = shop_problems(shop)
         if problems:
             raise ShopFileError(problems, source)
-    text = dump_shop_text(shop).encode("utf-8")
+    try:
+        text = dump_shop_text(shop).encode("utf-8")
+    except ValueError as exc:  # a non-finite number: JSON has no spelling for it
+        raise ShopFileError([Problem("", f"cannot save: {exc}; the previous file (if any) is "
+                                     "unchanged")], source) from None
     try:
         atomic_write_bytes(path, text)
     except OSError as exc:

@@ -7,9 +7,13 @@ merges it into a new or an existing shop, matching jobs and machines by name. It
 changes the shop it is given: it returns a new shop and a report of what was added,
 changed and left unmatched, so the caller can show the report and keep or drop the result.
 
-Export writes with pandas (``to_csv``, and ``to_excel`` through openpyxl), through a
-temporary file in the same folder replaced in one step, so an existing file is never left
-half-written.
+Export builds the tables with pandas and writes CSV with ``to_csv`` and XLSX with openpyxl
+(every text as a text cell, so a name such as ``=SUM(A1)`` is never stored as a live
+formula), through a temporary file in the same folder replaced in one step, so an existing
+file is never left half-written. In CSV, text starting with ``=``, ``+``, ``-``, ``@`` (or an
+apostrophe, tab or carriage return) gets a leading apostrophe, as the OWASP note on CSV
+injection advises (common practice); :func:`~dispatcher.io.grid.read_grid` drops it again,
+so every export reads back equal.
 """
 
 from __future__ import annotations
@@ -29,6 +33,48 @@ from dispatcher.shop.plan import Plan, json_number
 
 EXPORT_SUFFIXES = (".csv", ".xlsx")
 CANNOT_RUN_MARK = "x"
+_FORMULA_START = ("=", "+", "-", "@", "'", "\t", "\r")
+
+
+def escape_csv_text(value: object) -> object:
+    """Text a spreadsheet would run as a formula, with a leading apostrophe; else unchanged."""
+    if isinstance(value, str) and value.startswith(_FORMULA_START):
+        return "'" + value
+    return value
+
+
+def _escaped_frame(frame: pd.DataFrame) -> pd.DataFrame:
+    out = frame.map(escape_csv_text)
+    out.index = pd.Index([escape_csv_text(v) for v in frame.index], name=escape_csv_text(frame.index.name))
+    out.columns = [escape_csv_text(v) for v in frame.columns]
+    return out
+
+
+def _write_xlsx(path: Path, sheets: list[tuple[str, pd.DataFrame, bool]]) -> None:
+    """Write each ``(title, frame, with_index)`` as a sheet; text always as text cells."""
+    import openpyxl
+    from openpyxl.cell import WriteOnlyCell
+
+    book = openpyxl.Workbook(write_only=True)
+    for title, frame, with_index in sheets:
+        sheet = book.create_sheet(title)
+
+        def cell(v: object, sheet=sheet):
+            if v is None or (isinstance(v, float) and np.isnan(v)):
+                return None
+            if isinstance(v, np.generic):
+                v = v.item()
+            if isinstance(v, str):
+                c = WriteOnlyCell(sheet, value=v)
+                c.data_type = "s"  # openpyxl would store text starting with "=" as a formula
+                return c
+            return v
+
+        head = ([frame.index.name] if with_index else []) + list(frame.columns)
+        sheet.append([cell(v) for v in head])
+        for label, row in zip(frame.index, frame.itertuples(index=False, name=None)):
+            sheet.append([cell(v) for v in (([label] if with_index else []) + list(row))])
+    book.save(path)
 
 
 class ExportError(BadInputError, OSError):
@@ -190,7 +236,7 @@ def grid_table(shop: Shop) -> GridTable:
 
 def clipboard_text(shop: Shop) -> str:
     """The grid as a tab-separated block, which :func:`import_clipboard` reads back."""
-    return grid_frame(shop).to_csv(sep="\t", lineterminator="\n")
+    return _escaped_frame(grid_frame(shop)).to_csv(sep="\t", lineterminator="\n")
 
 
 def plan_frame(plan: Plan, shop: Shop | None = None) -> pd.DataFrame:
@@ -244,9 +290,9 @@ def export_grid(shop: Shop, path: str | os.PathLike) -> None:
 
     def write(tmp: Path) -> None:
         if path.suffix.lower() == ".csv":
-            frame.to_csv(tmp, encoding="utf-8")
+            _escaped_frame(frame).to_csv(tmp, encoding="utf-8")
         else:
-            frame.to_excel(tmp, sheet_name="grid", engine="openpyxl")
+            _write_xlsx(tmp, [("grid", frame, True)])
 
     _atomic_write(path, write)
 
@@ -258,17 +304,15 @@ def export_plan(plan: Plan, path: str | os.PathLike, shop: Shop | None = None) -
 
     def write(tmp: Path) -> None:
         if path.suffix.lower() == ".csv":
-            frame.to_csv(tmp, index=False, encoding="utf-8")
+            _escaped_frame(frame).to_csv(tmp, index=False, encoding="utf-8")
         else:
-            with pd.ExcelWriter(tmp, engine="openpyxl") as xl:
-                frame.to_excel(xl, sheet_name="plan", index=False)
-                plan_summary_frame(plan).to_excel(xl, sheet_name="totals", index=False)
+            _write_xlsx(tmp, [("plan", frame, False), ("totals", plan_summary_frame(plan), False)])
 
     _atomic_write(path, write)
 
 
 __all__ = [
-    "ExportError", "GridFileError", "ImportReport", "clipboard_text", "export_grid",
+    "ExportError", "GridFileError", "ImportReport", "clipboard_text", "escape_csv_text", "export_grid",
     "export_plan", "grid_frame", "grid_table", "import_clipboard", "import_grid_file",
     "import_table", "plan_frame", "plan_summary_frame",
 ]

@@ -51,9 +51,25 @@ class ShopError(BadInputError, ValueError):
             super().__init__(self.problems[0].message, source=source,
                              where=self.problems[0].location)
         else:
-            super().__init__(f"{len(self.problems)} problems: "
-                             + "; ".join(str(p) for p in self.problems[:10])
-                             + ("; ..." if len(self.problems) > 10 else ""), source=source)
+            super().__init__(self._listing(None), source=source)
+
+    def _listing(self, limit: int | None) -> str:
+        shown = self.problems if limit is None else self.problems[:limit]
+        text = f"{len(self.problems)} problems:" + "".join(f"\n  {p}" for p in shown)
+        if len(shown) < len(self.problems):
+            text += f"\n  ... and {len(self.problems) - len(shown)} more (see the details)"
+        return text
+
+    def summary(self, limit: int | None = 8) -> str:
+        """The problems as text: one line for one problem, else the count then one per line.
+
+        ``str()`` of the error lists every problem (``limit=None``); a message box shows the
+        first ``limit`` and the rest in its scrollable detail.
+        """
+        if len(self.problems) == 1:
+            return str(self)
+        head = f"{self.source}: " if self.source else ""
+        return head + self._listing(limit)
 
 
 @dataclass(frozen=True)

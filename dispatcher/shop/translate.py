@@ -160,9 +160,41 @@ def solve_problem(problem: ShopProblem, objective: str = "total", source: str = 
         jobs = [problem.job_name(int(i)) for i in w.jobs]
         machines = _unique(problem.machine_name(int(c)) for c in w.machines)
         slots = len(w.machines)
-        msg = (f"infeasible: must-run jobs {', '.join(jobs)} ({len(jobs)}) compete for only "
-               f"{slots} free slot(s) on: {', '.join(machines) or 'no machine'}")
+        if not machines:
+            msg = (f"infeasible: must-run jobs {', '.join(jobs)} ({len(jobs)}) have no free slot: "
+                   + unavailable_text(problem.shop, jobs))
+        else:
+            msg = (f"infeasible: must-run jobs {', '.join(jobs)} ({len(jobs)}) compete for only "
+                   f"{slots} free slot(s) on: {', '.join(machines)}")
         raise ShopInfeasibleError(msg, jobs, machines, source) from None
+
+
+def unavailable_text(shop: Shop, job_names: list[str]) -> str:
+    """Why no machine can take any of ``job_names`` now: each capable machine and what holds it.
+
+    Said when must-run jobs compete for no free slot at all, so the supervisor sees which
+    machines could run them and why each is unavailable (down, or its slots all running).
+    """
+    ids = {shop.job_by_name(n).id for n in job_names}
+    barred = {(p.job, p.machine) for p in shop.pins if p.kind == MUST_NOT}
+    pinned = {p.job: p.machine for p in shop.pins if p.kind == MUST and p.job in ids}
+    running: dict[str, list[str]] = {}
+    for j in shop.jobs:
+        if j.state == RUNNING and j.machine is not None:
+            running.setdefault(j.machine, []).append(j.name)
+    reasons = []
+    for m in shop.machines:
+        if not any((jid, m.id) in shop.grid and (jid, m.id) not in barred
+                   and pinned.get(jid, m.id) == m.id for jid in ids):
+            continue
+        if m.state != UP:
+            reasons.append(f"{m.name} ({m.state})")
+        else:
+            busy = running.get(m.id, [])
+            reasons.append(f"{m.name} (all {m.slots} slot(s) running: {', '.join(busy)})")
+    if not reasons:
+        return "no machine can run them (the grid and the pins allow none)"
+    return "the machines that can run them are all taken: " + "; ".join(reasons)
 
 
 def solve_shop(shop: Shop, objective: str = "total", *, extra_must_run: Iterable[str] = (),

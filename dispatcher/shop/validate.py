@@ -12,6 +12,8 @@ from __future__ import annotations
 import math
 from collections import Counter, defaultdict
 
+from dispatcher.limits import MAX_SLOTS, MAX_VALUE, name_problem
+
 from .crew import crew_problems
 from .model import (
     DONE,
@@ -30,7 +32,9 @@ from .model import (
 
 
 def _finite(x: object) -> bool:
-    return isinstance(x, (int, float)) and not isinstance(x, bool) and math.isfinite(x)
+    """A real number within the value limit (dispatcher.limits.MAX_VALUE, so totals stay finite)."""
+    return (isinstance(x, (int, float)) and not isinstance(x, bool) and math.isfinite(x)
+            and abs(x) <= MAX_VALUE)
 
 
 def shop_problems(shop: Shop) -> list[Problem]:
@@ -41,9 +45,9 @@ def shop_problems(shop: Shop) -> list[Problem]:
     if shop.unit.kind not in UNIT_KINDS:
         add("unit, field 'kind'", f"{shop.unit.kind!r} is not one of {', '.join(UNIT_KINDS)}")
     if not _finite(shop.shift.hours) or shop.shift.hours <= 0:
-        add("shift, field 'hours'", f"{shop.shift.hours!r} must be a number > 0")
+        add("shift, field 'hours'", f"{shop.shift.hours!r} must be a number > 0 and at most 1e12")
     if not _finite(shop.move_penalty) or shop.move_penalty < 0:
-        add("shop, field 'move_penalty'", f"{shop.move_penalty!r} must be a number >= 0")
+        add("shop, field 'move_penalty'", f"{shop.move_penalty!r} must be a number from 0 to 1e12")
     if not shop.jobs:
         add("jobs", "the shop has no jobs; add at least one job")
     if not shop.machines:
@@ -61,6 +65,11 @@ def shop_problems(shop: Shop) -> list[Problem]:
                 add(f"{what} {x.name!r}, field 'id'", "must be a non-empty text")
             if not isinstance(x.name, str) or not x.name.strip():
                 add(f"{what} id {x.id!r}, field 'name'", "must be a non-empty text")
+            for fname in ("id", "name"):
+                v = getattr(x, fname)
+                problem = name_problem(v) if isinstance(v, str) else None
+                if problem:
+                    add(f"{what} #{items.index(x) + 1}, field '{fname}'", problem)
 
     machine_ids = {m.id for m in shop.machines}
     job_ids = {j.id for j in shop.jobs}
@@ -70,12 +79,12 @@ def shop_problems(shop: Shop) -> list[Problem]:
         where = shop.describe_machine(m.id)
         if m.state not in MACHINE_STATES:
             add(f"{where}, field 'state'", f"{m.state!r} is not one of {', '.join(MACHINE_STATES)}")
-        if isinstance(m.slots, bool) or not isinstance(m.slots, int) or m.slots < 1:
-            add(f"{where}, field 'slots'", f"{m.slots!r} must be a whole number >= 1")
+        if isinstance(m.slots, bool) or not isinstance(m.slots, int) or not 1 <= m.slots <= MAX_SLOTS:
+            add(f"{where}, field 'slots'", f"{m.slots!r} must be a whole number from 1 to {MAX_SLOTS}")
         if m.shift_hours is not None and (not _finite(m.shift_hours) or m.shift_hours < 0):
-            add(f"{where}, field 'shift_hours'", f"{m.shift_hours!r} must be a number >= 0")
+            add(f"{where}, field 'shift_hours'", f"{m.shift_hours!r} must be a number from 0 to 1e12")
         if not _finite(m.speed_factor) or m.speed_factor <= 0:
-            add(f"{where}, field 'speed_factor'", f"{m.speed_factor!r} must be a number > 0")
+            add(f"{where}, field 'speed_factor'", f"{m.speed_factor!r} must be a number > 0 and at most 1e12")
 
     for j in shop.jobs:
         where = shop.describe_job(j.id)
@@ -84,11 +93,11 @@ def shop_problems(shop: Shop) -> list[Problem]:
         for fname in ("wait_penalty",):
             v = getattr(j, fname)
             if not _finite(v) or v < 0:
-                add(f"{where}, field '{fname}'", f"{v!r} must be a number >= 0")
+                add(f"{where}, field '{fname}'", f"{v!r} must be a number from 0 to 1e12")
         for fname in ("move_penalty", "run_hours"):
             v = getattr(j, fname)
             if v is not None and (not _finite(v) or v < 0):
-                add(f"{where}, field '{fname}'", f"{v!r} must be a number >= 0")
+                add(f"{where}, field '{fname}'", f"{v!r} must be a number from 0 to 1e12")
         if j.state == RUNNING:
             if j.machine is None:
                 add(f"{where}, field 'machine'", "a running job needs the machine it runs on")
@@ -122,13 +131,13 @@ def shop_problems(shop: Shop) -> list[Problem]:
             add(pair("grid", jid, mid), f"names unknown machine id {mid!r}")
         if not _finite(v) or v < 0:
             shown = f"{v:g}" if _finite(v) else repr(v)
-            add(pair("grid", jid, mid), f"value {shown} must be a number >= 0 (leave the cell "
+            add(pair("grid", jid, mid), f"value {shown} must be a number from 0 to 1e12 (leave the cell "
                 "out when the machine cannot run the job)")
     for (jid, mid), v in shop.hours.items():
         if jid not in job_ids or mid not in machine_ids:
             add(pair("hours", jid, mid), "names an unknown job or machine id")
         if not _finite(v) or v < 0:
-            add(pair("hours", jid, mid), f"{v!r} must be a number >= 0")
+            add(pair("hours", jid, mid), f"{v!r} must be a number from 0 to 1e12")
 
     out.extend(pin_problems(shop, running_on))
 

@@ -118,9 +118,10 @@ class FileController(QObject):
         try:
             shop = self._read(path)
         except (ShopError, GridFileError) as exc:
-            self.messenger.error("Cannot open file", str(exc))
-            self.problem.emit(str(exc))
-            self.status.emit(f"Not opened: {exc}")
+            short, detail = _problem_texts(exc)
+            self.messenger.error("Cannot open file", short, detail)
+            self.problem.emit(short)
+            self.status.emit(f"Not opened: {short.splitlines()[0]}")
             return False
         if not self.maybe_keep_changes():
             return False
@@ -155,9 +156,10 @@ class FileController(QObject):
         try:
             save_shop(self.doc.shop, path)
         except ShopError as exc:
-            self.messenger.error("Cannot save", str(exc))
-            self.problem.emit(str(exc))
-            self.status.emit(f"Not saved: {exc}")
+            short, detail = _problem_texts(exc)
+            self.messenger.error("Cannot save", short, detail)
+            self.problem.emit(short)
+            self.status.emit(f"Not saved: {short.splitlines()[0]}")
             return False
         self.discard_autosave()
         self.doc.set_path(path)
@@ -257,3 +259,10 @@ class FileController(QObject):
 def _mtime_text(path: Path) -> str:
     from datetime import datetime
     return datetime.fromtimestamp(path.stat().st_mtime).strftime("%Y-%m-%d %H:%M")
+
+
+def _problem_texts(exc: Exception) -> tuple[str, str]:
+    """A message box's text (the first problems) and its detail (every problem, or "")."""
+    if isinstance(exc, ShopError) and len(exc.problems) > 8:
+        return exc.summary(8), str(exc)
+    return str(exc), ""

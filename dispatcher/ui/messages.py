@@ -17,8 +17,15 @@ class Messenger:
     def __init__(self, parent: QWidget | None = None):
         self.parent = parent
 
-    def error(self, title: str, text: str) -> None:
-        QMessageBox.warning(self.parent, title, text)
+    def error(self, title: str, text: str, detail: str = "") -> None:
+        """A warning; ``detail`` (every problem of a long list) goes in the scrollable details."""
+        if not detail:
+            QMessageBox.warning(self.parent, title, text)
+            return
+        box = QMessageBox(QMessageBox.Icon.Warning, title, text, QMessageBox.StandardButton.Ok,
+                          self.parent)
+        box.setDetailedText(detail)
+        box.exec()
 
     def info(self, title: str, text: str) -> None:
         QMessageBox.information(self.parent, title, text)
@@ -45,11 +52,13 @@ class RecordingMessenger(Messenger):
     def __init__(self, yes: bool = True, save_answer: str = DISCARD):
         super().__init__(None)
         self.messages: list[tuple[str, str, str]] = []
+        self.details: list[str] = []
         self.yes = yes
         self.save_answer = save_answer
 
-    def error(self, title: str, text: str) -> None:
+    def error(self, title: str, text: str, detail: str = "") -> None:
         self.messages.append(("error", title, text))
+        self.details.append(detail)
 
     def info(self, title: str, text: str) -> None:
         self.messages.append(("info", title, text))
