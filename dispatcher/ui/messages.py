@@ -19,13 +19,14 @@ class Messenger:
 
     def error(self, title: str, text: str, detail: str = "") -> None:
         """A warning; ``detail`` (every problem of a long list) goes in the scrollable details."""
-        if not detail:
-            QMessageBox.warning(self.parent, title, text)
-            return
+        self.error_box(title, text, detail).exec()
+
+    def error_box(self, title: str, text: str, detail: str = "") -> QMessageBox:
         box = QMessageBox(QMessageBox.Icon.Warning, title, text, QMessageBox.StandardButton.Ok,
                           self.parent)
-        box.setDetailedText(detail)
-        box.exec()
+        if detail:
+            box.setDetailedText(detail)
+        return box
 
     def info(self, title: str, text: str) -> None:
         QMessageBox.information(self.parent, title, text)
