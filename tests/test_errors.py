@@ -134,7 +134,7 @@ def test_existing_errors_keep_their_wording_and_gain_their_source():
     assert str(one) == "s.dshop: job 'WO-1' (id J1), field 'due': not a time"
     assert one.where == "job 'WO-1' (id J1), field 'due'" and one.source == "s.dshop"
     two = ShopError([Problem("a", "x"), Problem("b", "y")], "s.dshop")
-    assert str(two) == "s.dshop: 2 problems: a: x; b: y"
+    assert str(two) == "s.dshop: 2 problems:\n  a: x\n  b: y"  # every problem, one per line
 
 
 def _empty_history(tmp_path):

@@ -18,7 +18,8 @@ import openpyxl
 import pytest
 
 from dispatcher import limits
-from dispatcher.commands.common import CliError, print_json
+from dispatcher.commands.common import print_json
+from dispatcher.errors import InternalError
 from dispatcher.io import shopfile
 from dispatcher.io.grid import read_grid
 from dispatcher.io.shopfile import ShopFileError, json_depth_problem, load_shop, parse_shop_text, save_shop
@@ -151,7 +152,7 @@ def test_depth_problem_names_line_and_column():
 
 
 def test_print_json_refuses_non_finite_numbers(capsys):
-    with pytest.raises(CliError) as info:
+    with pytest.raises(InternalError) as info:
         print_json({"total": math.inf})
     assert info.value.exit_code == 1 and "nothing was printed" in str(info.value)
     assert capsys.readouterr().out == ""
