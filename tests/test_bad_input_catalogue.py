@@ -201,7 +201,7 @@ def shop_rush_all_busy(folder):
                    jobs=[{"id": "J1", "name": "WO-1 lid", "rush": True},
                          {"id": "J2", "name": "WO-2 clip", "state": "running", "machine": "M2"}],
                    grid={"J1": {"M1": 5, "M2": 7}, "J2": {"M2": 3}})
-    return _solve(write_doc(folder, doc))
+    return _solve(write_doc(folder, doc), "--must-run", "WO-1 lid")
 
 
 def csv_text(text: str, name: str = "grid.csv"):
@@ -278,7 +278,7 @@ CASES = [
          r"machine #1, field 'name': contains the control character U\+000A"),
     Case("shop 202 bad values, all listed", shop_202_bad_values, 2,
          r"202 problems:\n(  grid, job 'WO-\d+' .*\n){202}"),
-    Case("shop rush job, capable machines all taken", shop_rush_all_busy, 3,
+    Case("shop must-run job, capable machines all taken", shop_rush_all_busy, 3,
          r"WO-1 lid \(1\) have no free slot: the machines that can run them are all taken: "
          r"Press 1 \(down\); Press 2 \(all 1 slot\(s\) running: WO-2 clip\)"),
     Case("csv value 1e308", csv_text("l,A,B\nJ1,1e308,1e308\n"), 2,
