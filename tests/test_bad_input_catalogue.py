@@ -246,6 +246,13 @@ def convert_folder(folder):
     return ["convert", str(path), str(folder / "new.dshop")], path
 
 
+def history_export_xlsx(folder):
+    history = folder / "history.sqlite"
+    assert main(["history", "init", str(history)]) == 0
+    target = folder / "decisions.xlsx"
+    return ["history", "export", str(target), "--history", str(history)], target
+
+
 CASES = [
     Case("xlsx machine name in column XFD", xlsx_far_machine, 2,
          r"row 1, column 16384 \(XFD\): .*cell XFD1 lies beyond it"),
@@ -310,6 +317,8 @@ CASES = [
     Case("convert --into its own output", convert_into_itself, 2,
          r"is the --into document, which is only read"),
     Case("convert a folder", convert_folder, 2, r"is a folder, not a file"),
+    Case("history export to .xlsx", history_export_xlsx, 2,
+         r"the export is CSV text, so the file name must end in \.csv \(got '\.xlsx'\)"),
 ]
 
 
@@ -321,6 +330,7 @@ def _checksums(folder: Path) -> dict[str, str]:
 @pytest.mark.parametrize("case", CASES, ids=[c.id for c in CASES])
 def test_catalogue(case, tmp_path, capsys):
     argv, named = case.make(tmp_path)
+    capsys.readouterr()
     before = _checksums(tmp_path)
     code = main(argv)
     out, err = capsys.readouterr()

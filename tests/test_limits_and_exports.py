@@ -22,8 +22,19 @@ from dispatcher.commands.common import print_json
 from dispatcher.errors import InternalError
 from dispatcher.io import shopfile
 from dispatcher.io.grid import read_grid
-from dispatcher.io.shopfile import ShopFileError, json_depth_problem, load_shop, parse_shop_text, save_shop
-from dispatcher.io.spreadsheet import clipboard_text, export_grid, export_plan, import_clipboard
+from dispatcher.io.shopfile import (
+    ShopFileError,
+    json_depth_problem,
+    load_shop,
+    parse_shop_text,
+    save_shop,
+)
+from dispatcher.io.spreadsheet import (
+    clipboard_text,
+    export_grid,
+    export_plan,
+    import_clipboard,
+)
 from dispatcher.shop import Job, Machine, Shop, shop_problems, solve_shop
 
 ROOT = Path(__file__).resolve().parent.parent
@@ -33,7 +44,7 @@ FORMULA_NAMES = ["=SUM(A1:A9)", "+41 press", "-cut", "@line", "'quoted", "''twic
 def test_readme_table_is_the_limits_module():
     readme = (ROOT / "README.md").read_text(encoding="utf-8")
     section = readme.split("## Limits", 1)[1].split("\n## ", 1)[0]
-    rows = re.findall(r"^\| (.+?) \| (.+?) \|$", section, flags=re.M)
+    rows = re.findall(r"^\| (.+?) \| (.+?) \|$", section, flags=re.MULTILINE)
     assert rows[2:] == limits.TABLE, "README's table of limits and dispatcher/limits.py differ"
 
 

@@ -6,9 +6,9 @@ from __future__ import annotations
 import json
 
 from PySide6.QtWidgets import QMessageBox
+from ui_support import make_window
 
 from dispatcher.ui.messages import Messenger
-from ui_support import make_window
 
 
 def test_every_problem_reaches_the_message_details(qtbot, tmp_path, monkeypatch):
