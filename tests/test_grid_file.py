@@ -235,7 +235,8 @@ def test_xlsx_saved_as_csv(tmp_path):
 
 @pytest.mark.parametrize("content", [b"l,A\nJ1,1\n", b"PK\x03\x04 not really a zip", b""])
 def test_not_a_spreadsheet_with_xlsx_extension(tmp_path, content):
-    with pytest.raises(GridFileError, match=r"fake\.xlsx: (is not an XLSX workbook \(not a zip archive\)|the file is empty)"):
+    message = r"fake\.xlsx: (is not an XLSX workbook \(not a zip archive\)|the file is empty)"
+    with pytest.raises(GridFileError, match=message):
         read_grid(write(tmp_path, "fake.xlsx", content))
 
 
