@@ -38,8 +38,9 @@ PACKAGE = "dispatcher_resources"
 APP_ID = "org.shiftdispatch.Dispatcher"
 #: Sizes (pixels, square) of the rendered PNG icons.
 ICON_SIZES = (16, 24, 32, 48, 64, 128, 256)
-#: Languages the interface is translated into (besides English, the source language).
-LANGUAGES: tuple[str, ...] = ()
+#: Languages of the translation files: English (the source language; its file carries
+#: only the plural forms) and the translations.
+LANGUAGES: tuple[str, ...] = ("en", "de", "es")
 
 
 class ResourceMissing(InternalError, FileNotFoundError):

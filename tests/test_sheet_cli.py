@@ -120,7 +120,7 @@ def test_two_slot_machine_lists_rush_first_then_by_due_time():
     jobs = {j.name: j for j in shop.jobs}
     keys = [(not jobs[n].rush, jobs[n].due or dt.datetime.max) for n in names]
     assert keys == sorted(keys)
-    assert lathe_b.notes.startswith("2 slots")
+    assert "2 slots" in lathe_b.all_notes()
 
 
 def test_explicit_run_order_is_kept_and_hours_are_shown():
@@ -259,7 +259,8 @@ def test_pinned_job_says_so():
     assert plan.machine_of("Cover 600") == "Saw E"
     saw = next(m for m in build_sheet(shop, plan).machines if m.name == "Saw E")
     cover = next(j for j in saw.jobs if j.name == "Cover 600")
-    assert cover.notes == "pinned here (fixture stays on the saw)"
+    assert cover.pinned and cover.pin_note == "fixture stays on the saw"
+    assert cover.all_notes() == "pinned here (fixture stays on the saw)"
 
 
 def filled_shop() -> Shop:

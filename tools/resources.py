@@ -24,7 +24,7 @@ RESOURCES = ROOT / "resources"
 ICON_SVG = RESOURCES / "icons" / "dispatcher.svg"
 ICON_SIZES = (16, 24, 32, 48, 64, 128, 256)
 TRANSLATIONS = RESOURCES / "translations"
-LANGUAGES = ("de", "es")
+LANGUAGES = ("en", "de", "es")  # en: the plural forms of the English source only
 #: Sources scanned for translatable strings: the app and the printed sheet.
 SOURCE_DIRS = ("dispatcher/ui", "dispatcher/sheet")
 
@@ -91,8 +91,12 @@ def lrelease(ts: Path, qm: Path) -> None:
                    cwd=ROOT, check=True)
 
 
+LUPDATE_OPTIONS = ("-no-obsolete", "-locations", "none")
+
+
 def build_translations() -> None:
-    lupdate([ts_path(lang) for lang in LANGUAGES], ("-no-obsolete", "-locations", "none"))
+    lupdate([ts_path(lang) for lang in LANGUAGES if lang != "en"], LUPDATE_OPTIONS)
+    lupdate([ts_path("en")], (*LUPDATE_OPTIONS, "-pluralonly"))
     for lang in LANGUAGES:
         lrelease(ts_path(lang), qm_path(lang))
 

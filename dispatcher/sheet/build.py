@@ -19,6 +19,7 @@ from typing import Any, Protocol
 from dispatcher.shop import MUST, UP, Shop
 
 from .content import (
+    QT_TRANSLATE_NOOP,
     SAFETY_CAUTIONS,
     SheetContent,
     SheetDownMachine,
@@ -27,6 +28,11 @@ from .content import (
     SheetTotals,
     SheetWaitingJob,
 )
+
+#: How a waiting reason starts when no machine can take the job (shop.translate's words).
+NO_MACHINE = QT_TRANSLATE_NOOP("Sheet", "no available machine can run it")
+#: Printed for a shop without a name.
+UNNAMED_SHOP = QT_TRANSLATE_NOOP("Sheet", "(unnamed shop)")
 
 __all__ = ["DecisionLike", "build_sheet", "objective_phrase", "run_order", "value_heading"]
 
@@ -42,8 +48,9 @@ class DecisionLike(Protocol):
 def value_heading(shop: Shop, objective: str) -> str:
     """Heading of the value column: what the grid numbers mean for this shop."""
     if objective == "maximize":
-        return "Value"
-    return "Cost" if shop.unit.kind == "cost" else "Setup"
+        return QT_TRANSLATE_NOOP("Sheet", "Value")
+    return QT_TRANSLATE_NOOP("Sheet", "Cost") if shop.unit.kind == "cost" else \
+        QT_TRANSLATE_NOOP("Sheet", "Setup")
 
 
 def value_unit(shop: Shop) -> str:
@@ -53,12 +60,14 @@ def value_unit(shop: Shop) -> str:
 
 def objective_phrase(shop: Shop, objective: str) -> str:
     """The plan's aim in a few words, for the totals."""
-    what = "cost" if shop.unit.kind == "cost" else "setup"
-    return {
-        "total": f"least total {what}",
-        "maximize": "greatest total value",
-        "bottleneck": f"smallest largest {what}, then least total",
-    }.get(objective, objective)
+    if shop.unit.kind == "cost":
+        phrases = {"total": QT_TRANSLATE_NOOP("Sheet", "least total cost"),
+                   "bottleneck": QT_TRANSLATE_NOOP("Sheet", "smallest largest cost, then least total")}
+    else:
+        phrases = {"total": QT_TRANSLATE_NOOP("Sheet", "least total setup"),
+                   "bottleneck": QT_TRANSLATE_NOOP("Sheet", "smallest largest setup, then least total")}
+    phrases["maximize"] = QT_TRANSLATE_NOOP("Sheet", "greatest total value")
+    return phrases.get(objective, objective)
 
 
 def _status(plan: Any) -> str:
@@ -67,8 +76,10 @@ def _status(plan: Any) -> str:
     if not extra and isinstance(getattr(plan, "certificate", None), dict):
         extra = plan.certificate.get("text")
     if isinstance(extra, str) and extra:
-        return extra
+        return QT_TRANSLATE_NOOP("Sheet", "proven optimal") if extra == "proven optimal" else extra
     if plan.verified:
+        if plan.status == "optimal":
+            return QT_TRANSLATE_NOOP("Sheet", "optimal, proven by its certificate")
         return f"{plan.status}, proven by its certificate"
     return f"{plan.status} (certificate NOT verified: check the plan before use)"
 
@@ -76,10 +87,10 @@ def _status(plan: Any) -> str:
 def _reason_text(plan: Any, job: str) -> str:
     reason = plan.waiting_reasons.get(job)
     if reason is None or not reason.text:
-        return "not placed in this round"
+        return QT_TRANSLATE_NOOP("Sheet", "not placed in this round")
     text = reason.text
     prefix = f"{job}: "
-    return text[len(prefix):] if text.startswith(prefix) else text
+    return text.removeprefix(prefix)
 
 
 def _order_key(shop: Shop, name: str, position: int) -> tuple:
@@ -89,7 +100,7 @@ def _order_key(shop: Shop, name: str, position: int) -> tuple:
         return (1, dt.datetime.max, position)
     due = job.due
     if due is not None and due.tzinfo is not None:
-        due = due.astimezone(dt.timezone.utc).replace(tzinfo=None)
+        due = due.astimezone(dt.UTC).replace(tzinfo=None)
     return (0 if job.rush else 1, due or dt.datetime.max, position)
 
 
@@ -205,8 +216,7 @@ def build_sheet(shop: Shop, plan: Any, decision: Any | None = None, *,
             job = _sheet_job(shop, name, value, running, unit)
             pin = pinned.get((name, machine.name))
             if pin is not None:
-                note = "pinned here" + (f" ({pin})" if pin else "")
-                job = dataclasses.replace(job, notes=f"{note}; {job.notes}" if job.notes else note)
+                job = dataclasses.replace(job, pinned=True, pin_note=pin)
             if order is not None:
                 job = dataclasses.replace(job, hours=_pair_hours(shop, name, machine.name))
             jobs.append(job)
@@ -223,14 +233,19 @@ def build_sheet(shop: Shop, plan: Any, decision: Any | None = None, *,
                                   since=m.state_changed)
                  for m in shop.machines if m.state != UP)
     waiting = []
+    waiting_set = set(plan.waiting_jobs)
     for name in plan.waiting_jobs:
         try:
             job = shop.job_by_name(name)
             work_order, rush = job.work_order, job.rush
         except KeyError:
             work_order, rush = "", False
-        waiting.append(SheetWaitingJob(name=name, work_order=work_order,
-                                       why=_reason_text(plan, name), rush=rush))
+        reason = plan.waiting_reasons.get(name)
+        competing = tuple(reason.competing_jobs) if reason is not None and reason.machines else ()
+        waiting.append(SheetWaitingJob(
+            name=name, work_order=work_order, why=_reason_text(plan, name), rush=rush,
+            competing=competing, machines=tuple(reason.machines) if competing else (),
+            must_wait=sum(1 for j in competing if j in waiting_set)))
 
     totals = SheetTotals(
         machines=len(shop.machines),
@@ -249,7 +264,7 @@ def build_sheet(shop: Shop, plan: Any, decision: Any | None = None, *,
     shift_date = shop.shift.day or getattr(decision, "shift_date", None)
     shift_label = shop.shift.label or getattr(decision, "shift", "") or ""
     return SheetContent(
-        shop_name=shop.name or "(unnamed shop)",
+        shop_name=shop.name or UNNAMED_SHOP,
         shift_date=shift_date,
         shift_label=shift_label,
         supervisor=(decision.by if decision is not None else supervisor) or "",

@@ -18,22 +18,35 @@ from dataclasses import dataclass, field
 
 from dispatcher.shop.model import DOWN, MAINTENANCE, UP
 
+def QT_TRANSLATE_NOOP(context: str, text: str) -> str:
+    """Mark ``text`` for translation in ``context`` without translating it here.
+
+    Qt's ``pyside6-lupdate`` collects every call of this name into the translation
+    sources; the renderer (:mod:`dispatcher.sheet.render`) translates the English text
+    when it paints, so the content stays Qt-free and the command line stays English.
+    """
+    return text
+
+
 #: The cautions printed at the foot of every page. Wording is ours; the points are the
 #: ones every sheet must carry (see the Safety section of the README).
 SAFETY_CAUTIONS: tuple[str, ...] = (
-    "Apply lockout/tagout before any work on a machine that is down.",
-    "Only operators trained and authorised for a machine may run it, whatever this sheet says.",
-    "Follow the machine's own setup instructions for every changeover.",
-    "Site safety rules and local regulations take precedence over this sheet.",
+    QT_TRANSLATE_NOOP("Sheet", "Apply lockout/tagout before any work on a machine that is down."),
+    QT_TRANSLATE_NOOP("Sheet", "Only operators trained and authorised for a machine may run it, "
+                      "whatever this sheet says."),
+    QT_TRANSLATE_NOOP("Sheet", "Follow the machine's own setup instructions for every changeover."),
+    QT_TRANSLATE_NOOP("Sheet", "Site safety rules and local regulations take precedence over "
+                      "this sheet."),
 )
 
 #: Machine states as printed. Words, never colour, carry the meaning.
 STATE_WORDS = {
-    UP: "Up",
-    DOWN: "DOWN",
-    MAINTENANCE: "MAINTENANCE",
+    UP: QT_TRANSLATE_NOOP("Sheet", "Up"),
+    DOWN: QT_TRANSLATE_NOOP("Sheet", "DOWN"),
+    MAINTENANCE: QT_TRANSLATE_NOOP("Sheet", "MAINTENANCE"),
 }
-#: The same in the narrow State column of the machine table.
+#: The same in the narrow State column of the machine table (translated by the renderer's
+#: ``Sheet.state_short``, which may abbreviate differently in each language).
 STATE_SHORT = {
     UP: "Up",
     DOWN: "DOWN",
@@ -48,7 +61,8 @@ class SheetJob:
     ``setup`` is the grid value of the (job, machine) pair in ``unit`` (``None`` when the
     value is not known, for example a job that was already running before the plan).
     ``continuing`` marks a job already running on the machine that simply carries on.
-    ``hours`` is the planned run time in fill-shift mode, ``None`` otherwise.
+    ``hours`` is the planned run time in fill-shift mode, ``None`` otherwise. ``pinned``
+    marks a job a "must go to" pin holds on this machine, ``pin_note`` is that pin's note.
     """
 
     name: str
@@ -60,6 +74,14 @@ class SheetJob:
     continuing: bool = False
     running_since: dt.datetime | None = None
     hours: float | None = None
+    pinned: bool = False
+    pin_note: str = ""
+
+    def all_notes(self) -> str:
+        """The pin (if any) and the job's own notes, as the text sheet prints them."""
+        pin = ("pinned here" + (f" ({self.pin_note})" if self.pin_note else "")
+               if self.pinned else "")
+        return "; ".join(t for t in (pin, self.notes) if t)
 
 
 @dataclass(frozen=True)
@@ -71,6 +93,12 @@ class SheetMachine:
     jobs: tuple[SheetJob, ...] = ()
     notes: str = ""
     operator: str = ""   # who minds it this round (shops with a crew); "" otherwise
+    slots: int = 1
+
+    def all_notes(self) -> str:
+        """Slots (when more than one) and the machine's notes, as the text sheet prints them."""
+        slots = f"{self.slots} slots" if self.slots > 1 else ""
+        return "; ".join(t for t in (slots, self.notes) if t)
 
     @property
     def is_down(self) -> bool:
@@ -79,12 +107,21 @@ class SheetMachine:
 
 @dataclass(frozen=True)
 class SheetWaitingJob:
-    """A job that is not dispatched this round and the plain reason why."""
+    """A job that is not dispatched this round and the plain reason why.
+
+    ``competing`` (the jobs of its wait group), ``machines`` (the only machines they can
+    use) and ``must_wait`` (how many of them wait whatever the plan) let a translated
+    sheet say ``why`` in its own language; they are empty when the job has no machine
+    at all.
+    """
 
     name: str
     work_order: str = ""
     why: str = ""
     rush: bool = False
+    competing: tuple[str, ...] = ()
+    machines: tuple[str, ...] = ()
+    must_wait: int = 0
 
 
 @dataclass(frozen=True)
@@ -212,11 +249,12 @@ def sheet_text(content: SheetContent) -> str:
                f"{len(content.dispatched_jobs())} jobs):")
     for m in content.machines:
         state = STATE_WORDS.get(m.state, m.state.upper())
+        notes = m.all_notes()
         if not m.jobs:
             what = "no work: see Machines down" if m.is_down else "idle: no job this round"
-            out.append(f"  {m.name} [{state}]: {what}" + (f" ({m.notes})" if m.notes else ""))
+            out.append(f"  {m.name} [{state}]: {what}" + (f" ({notes})" if notes else ""))
             continue
-        out.append(f"  {m.name} [{state}]" + (f" ({m.notes})" if m.notes else "")
+        out.append(f"  {m.name} [{state}]" + (f" ({notes})" if notes else "")
                    + (f"  operator: {m.operator}" if m.operator else ""))
         for k, job in enumerate(m.jobs, start=1):
             bits = [f"{k}. " + ("RUSH " if job.rush else "") + job.name]
@@ -230,8 +268,8 @@ def sheet_text(content: SheetContent) -> str:
                 bits.append(f"{content.value_heading.lower()} {value}")
             if job.hours is not None:
                 bits.append(f"run {format_value(job.hours, 'h')}")
-            if job.notes:
-                bits.append(job.notes)
+            if job.all_notes():
+                bits.append(job.all_notes())
             out.append("      " + "  |  ".join(bits))
     out.append("")
     out.append(f"Waiting jobs ({len(content.waiting)}):" if content.waiting else "Waiting jobs: none")

@@ -35,6 +35,18 @@ def make_application(argv: Sequence[str] | None = None):
     return app
 
 
+def install_language(settings=None) -> str:
+    """Install the interface language: Settings' choice, else the system's (QSettings key
+    :data:`dispatcher.translation.KEY_LANGUAGE`). Returns the language installed."""
+    from PySide6.QtCore import QSettings
+
+    from dispatcher import translation
+
+    settings = QSettings() if settings is None else settings
+    chosen = str(settings.value(translation.KEY_LANGUAGE, "") or "")
+    return translation.install(chosen or None, set_default_locale=True)
+
+
 def app_icon():
     """The app icon at every installed size (empty when the installation lacks it)."""
     from PySide6.QtGui import QIcon, QPixmap
@@ -66,6 +78,7 @@ def start(path: str | None = None, history: str | None = None, on_error=None, se
     not close normally.
     """
     make_application()
+    install_language()
     from dispatcher.ui.main_window import MainWindow
     from dispatcher.ui.messages import RecordingMessenger
 

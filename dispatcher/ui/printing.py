@@ -18,6 +18,7 @@ from PySide6.QtWidgets import QFileDialog
 from PySide6.QtPrintSupport import QPrintDialog, QPrinter, QPrinterInfo, QPrintPreviewDialog
 
 from dispatcher.history import HistoryError
+from dispatcher.translation import app_locale
 from dispatcher.shop import Plan, PlanFormatError
 from dispatcher.sheet.build import build_sheet
 from dispatcher.sheet.content import SheetContent
@@ -52,7 +53,7 @@ def export_pdf(window, path: str | os.PathLike) -> int | None:
         window.messenger.error("Nothing to print", "There is no plan yet: fix the grid first.")
         return None
     try:
-        pages = write_pdf(content, Path(path))
+        pages = write_pdf(content, Path(path), text_locale=app_locale())
     except (SheetRenderError, OSError) as exc:
         window.messenger.error("PDF not written", str(exc))
         return None
@@ -80,7 +81,7 @@ def preview(window) -> QPrintPreviewDialog | None:
     dialog = QPrintPreviewDialog(printer, window)
     dialog.printer_ref = printer   # the dialog does not own the printer: keep it alive
     dialog.setWindowTitle("Dispatch sheet - print preview")
-    dialog.paintRequested.connect(lambda printer: print_sheet(content, printer))
+    dialog.paintRequested.connect(lambda printer: print_sheet(content, printer, app_locale()))
     dialog.open()
     return dialog
 
@@ -93,7 +94,7 @@ def print_now(window) -> None:
     printer = _printer()
     dialog = QPrintDialog(printer, window)
     if dialog.exec() == QPrintDialog.DialogCode.Accepted:
-        print_sheet(content, printer)
+        print_sheet(content, printer, app_locale())
 
 
 class SheetPrinting(QObject):

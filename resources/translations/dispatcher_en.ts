@@ -1,0 +1,56 @@
+<?xml version="1.0" encoding="utf-8"?>
+<!DOCTYPE TS>
+<TS version="2.1" language="en_US">
+<context>
+    <name>Sheet</name>
+    <message numerus="yes">
+        <source>%n machine(s)</source>
+        <translation>
+            <numerusform>%n machine</numerusform>
+            <numerusform>%n machines</numerusform>
+        </translation>
+    </message>
+    <message numerus="yes">
+        <source>%n job(s)</source>
+        <translation>
+            <numerusform>%n job</numerusform>
+            <numerusform>%n jobs</numerusform>
+        </translation>
+    </message>
+    <message numerus="yes">
+        <source>Waiting jobs (%n)</source>
+        <translation>
+            <numerusform>Waiting jobs (%n)</numerusform>
+            <numerusform>Waiting jobs (%n)</numerusform>
+        </translation>
+    </message>
+    <message numerus="yes">
+        <source>Machines down (%n) - lockout/tagout before any work</source>
+        <translation>
+            <numerusform>Machines down (%n) - lockout/tagout before any work</numerusform>
+            <numerusform>Machines down (%n) - lockout/tagout before any work</numerusform>
+        </translation>
+    </message>
+    <message numerus="yes">
+        <source>%n slot(s)</source>
+        <translation>
+            <numerusform>%n slot</numerusform>
+            <numerusform>%n slots</numerusform>
+        </translation>
+    </message>
+    <message numerus="yes">
+        <source>%n job(s) can only run on {machines}</source>
+        <translation>
+            <numerusform>%n job can only run on {machines}</numerusform>
+            <numerusform>%n jobs can only run on {machines}</numerusform>
+        </translation>
+    </message>
+    <message numerus="yes">
+        <source>so %n of them must wait</source>
+        <translation>
+            <numerusform>so %n of them must wait</numerusform>
+            <numerusform>so %n of them must wait</numerusform>
+        </translation>
+    </message>
+</context>
+</TS>
