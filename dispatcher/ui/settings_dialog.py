@@ -15,6 +15,7 @@ from pathlib import Path
 
 from PySide6.QtCore import QObject, Signal
 from PySide6.QtWidgets import (
+    QComboBox,
     QDialog,
     QDialogButtonBox,
     QFileDialog,
@@ -35,6 +36,7 @@ from dispatcher.history import (
     is_postgres_location,
     open_history,
 )
+from dispatcher.translation import KEY_LANGUAGE, LANGUAGE_NAMES
 from dispatcher.ui.settings_keys import KEY_AUTOSAVE, KEY_HISTORY, KEY_SUPERVISOR
 
 AUTOSAVE_DEFAULT_MIN, AUTOSAVE_MAX_MIN = 1, 60
@@ -165,6 +167,17 @@ class SettingsDialog(QDialog):
         self.autosave.setValue(autosave_minutes(window.settings))
         self.autosave.setToolTip("How often unsaved changes are copied to the recovery folder")
         form.addRow("&Autosave every:", self.autosave)
+
+        self.language = QComboBox()
+        self.language.setObjectName("languageCombo")
+        self.language.addItem("System language", "")
+        for code, name in LANGUAGE_NAMES.items():
+            self.language.addItem(name, code)
+        chosen = str(window.settings.value(KEY_LANGUAGE, "") or "")
+        self.language.setCurrentIndex(max(0, self.language.findData(chosen)))
+        self.language.setToolTip("The interface and printed sheet language; applies at the "
+                                 "next start")
+        form.addRow("&Language:", self.language)
         layout.addLayout(form)
 
         self.buttons = QDialogButtonBox(QDialogButtonBox.StandardButton.Ok
@@ -186,7 +199,7 @@ class SettingsDialog(QDialog):
     def apply(self) -> bool:
         """What OK does: apply through the controller; close only if it accepted."""
         ok = self.controller.apply(self.history_path.text(), self.supervisor.text(),
-                                         self.autosave.value())
+                                   self.autosave.value(), language=self.language.currentData())
         if ok:
             self.accept()
         return ok
@@ -215,7 +228,8 @@ class SettingsController(QObject):
         dialog.open()
         return dialog
 
-    def apply(self, history_path: str, supervisor: str, minutes: int) -> bool:
+    def apply(self, history_path: str, supervisor: str, minutes: int,
+              language: str | None = None) -> bool:
         """Use these settings; False (with a message, nothing changed) when refused."""
         window = self.window
         text = history_path.strip()
@@ -238,4 +252,8 @@ class SettingsController(QObject):
         minutes = min(max(int(minutes), 1), AUTOSAVE_MAX_MIN)
         window.settings.setValue(KEY_AUTOSAVE, minutes)
         window.files.set_autosave_minutes(minutes)
+        if language is not None and language != str(window.settings.value(KEY_LANGUAGE, "") or ""):
+            # the language is installed at start (ui.app.install_language): say so
+            window.settings.setValue(KEY_LANGUAGE, language)
+            window.statusBar().showMessage("The new language applies at the next start", 8000)
         return True
