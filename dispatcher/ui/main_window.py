@@ -87,7 +87,7 @@ class MainWindow(QMainWindow):
 
         self.tabs = QTabWidget(self)
         self.tabs.setObjectName("centralTabs")
-        self.tabs.addTab(self.view, "&Grid")
+        self.tabs.addTab(self.view, self.tr("&Grid"))
         self.setCentralWidget(self.tabs)
         plan_dock = QDockWidget("Plan", self)
         plan_dock.setObjectName("planDock")
@@ -105,9 +105,9 @@ class MainWindow(QMainWindow):
         self.edits = GridEdits(self)
         self.decisions = DecisionFlow(self)
         self.whatif_tab = WhatIfTab(self)
-        self.tabs.addTab(self.whatif_tab.view, "&What-if map")
+        self.tabs.addTab(self.whatif_tab.view, self.tr("&What-if map"))
         self.alternatives_tab = AlternativesTab(self)
-        self.tabs.addTab(self.alternatives_tab.view, "&Alternatives")
+        self.tabs.addTab(self.alternatives_tab.view, self.tr("&Alternatives"))
         self.history_dock = HistoryDock(self)
         self.addDockWidget(Qt.DockWidgetArea.BottomDockWidgetArea, self.history_dock)
         self.history_dock.hide()
@@ -243,10 +243,10 @@ class MainWindow(QMainWindow):
 
     def _build_menus(self) -> None:
         bar = self.menuBar()
-        m = bar.addMenu("&File")
+        m = bar.addMenu(self.tr("&File"))
         for a in (self.act_new, self.act_open, self.act_save, self.act_save_as):
             m.addAction(a)
-        self.recent_menu = m.addMenu("Open &recent")
+        self.recent_menu = m.addMenu(self.tr("Open &recent"))
         m.addSeparator()
         m.addAction(self.act_import)
         m.addAction(self.act_import_into)
@@ -258,23 +258,23 @@ class MainWindow(QMainWindow):
         m.addSeparator()
         m.addAction(self.act_quit)
         self.file_menu = m
-        m = bar.addMenu("&Edit")
+        m = bar.addMenu(self.tr("&Edit"))
         self.edit_menu = m
         for a in (self.act_undo, self.act_redo, None, self.act_copy, self.act_copy_names,
                   self.act_paste, None, self.act_cannot, self.act_pin, self.act_forbid, self.act_unpin,
                   None, self.act_settings):
             m.addSeparator() if a is None else m.addAction(a)
-        m = bar.addMenu("&Job")
+        m = bar.addMenu(self.tr("&Job"))
         m.addAction(self.act_add_job)
         m.addAction(self.act_rush)
         m.addAction(self.act_pull)
         m.addAction(self.act_penalty)
         m.addAction(self.act_done)
-        m = bar.addMenu("&Machine")
+        m = bar.addMenu(self.tr("&Machine"))
         m.addAction(self.act_add_machine)
         for a in (self.act_down, self.act_up, self.act_maint, self.act_slots):
             m.addAction(a)
-        m = bar.addMenu("&Plan")
+        m = bar.addMenu(self.tr("&Plan"))
         for a in self.act_objectives.values():
             m.addAction(a)
         m.addSeparator()
@@ -284,7 +284,7 @@ class MainWindow(QMainWindow):
         for a in (self.act_resolve, self.act_cancel, self.act_confirm):
             m.addAction(a)
         self.plan_menu = m
-        self.view_menu = bar.addMenu("&View")
+        self.view_menu = bar.addMenu(self.tr("&View"))
         self.view_menu.addAction(self.plan_dock.toggleViewAction())
         self.view_menu.addAction(self.act_history)
         self._fill_recent()

@@ -2,6 +2,49 @@
 <!DOCTYPE TS>
 <TS version="2.1" language="de_DE">
 <context>
+    <name>MainWindow</name>
+    <message>
+        <source>&amp;Grid</source>
+        <translation>&amp;Raster</translation>
+    </message>
+    <message>
+        <source>&amp;What-if map</source>
+        <translation>&amp;Was-wäre-wenn</translation>
+    </message>
+    <message>
+        <source>&amp;Alternatives</source>
+        <translation>A&amp;lternativen</translation>
+    </message>
+    <message>
+        <source>&amp;File</source>
+        <translation>&amp;Datei</translation>
+    </message>
+    <message>
+        <source>Open &amp;recent</source>
+        <translation>&amp;Zuletzt geöffnet</translation>
+    </message>
+    <message>
+        <source>&amp;Edit</source>
+        <translation>&amp;Bearbeiten</translation>
+    </message>
+    <message>
+        <source>&amp;Job</source>
+        <translation>&amp;Auftrag</translation>
+    </message>
+    <message>
+        <source>&amp;Machine</source>
+        <translation>&amp;Maschine</translation>
+    </message>
+    <message>
+        <source>&amp;Plan</source>
+        <translation>&amp;Plan</translation>
+    </message>
+    <message>
+        <source>&amp;View</source>
+        <translation>A&amp;nsicht</translation>
+    </message>
+</context>
+<context>
     <name>Sheet</name>
     <message>
         <source>no available machine can run it</source>

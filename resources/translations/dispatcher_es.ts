@@ -2,6 +2,49 @@
 <!DOCTYPE TS>
 <TS version="2.1" language="es_ES">
 <context>
+    <name>MainWindow</name>
+    <message>
+        <source>&amp;Grid</source>
+        <translation>&amp;Cuadrícula</translation>
+    </message>
+    <message>
+        <source>&amp;What-if map</source>
+        <translation>&amp;Mapa qué pasaría si</translation>
+    </message>
+    <message>
+        <source>&amp;Alternatives</source>
+        <translation>A&amp;lternativas</translation>
+    </message>
+    <message>
+        <source>&amp;File</source>
+        <translation>&amp;Archivo</translation>
+    </message>
+    <message>
+        <source>Open &amp;recent</source>
+        <translation>Abrir &amp;reciente</translation>
+    </message>
+    <message>
+        <source>&amp;Edit</source>
+        <translation>&amp;Editar</translation>
+    </message>
+    <message>
+        <source>&amp;Job</source>
+        <translation>&amp;Trabajo</translation>
+    </message>
+    <message>
+        <source>&amp;Machine</source>
+        <translation>&amp;Máquina</translation>
+    </message>
+    <message>
+        <source>&amp;Plan</source>
+        <translation>&amp;Plan</translation>
+    </message>
+    <message>
+        <source>&amp;View</source>
+        <translation>&amp;Ver</translation>
+    </message>
+</context>
+<context>
     <name>Sheet</name>
     <message>
         <source>no available machine can run it</source>
