@@ -31,6 +31,19 @@ def or_library() -> Path:
     return path
 
 
+@pytest.fixture(scope="session")
+def tsplib_atsp() -> Path:
+    """TSPLIB asymmetric instances (Reinelt 1991). Skips when absent, unless CI requires it."""
+    path = shared_data_dir() / "tsplib-atsp"
+    if not (path / "README.md").exists():
+        reason = (f"TSPLIB asymmetric data not found at {path}: these published instances are "
+                  "not shipped with the project (set DISPATCHER_SHARED_DATA to their folder)")
+        if os.environ.get("DISPATCHER_REQUIRE_SHARED"):
+            pytest.fail(reason)
+        pytest.skip(reason)
+    return path
+
+
 @pytest.fixture
 def samples() -> Path:
     return SAMPLES

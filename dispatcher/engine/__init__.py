@@ -13,6 +13,7 @@ from .assignment import (
     solve,
 )
 from .certificate import Certificate, CertificateError
+from .order_runs import RunOrder, RunOrderInfeasibleError, order_runs
 from .fill_shift import ShiftInfeasibleError, ShiftPlan, ShiftSearchError, fill_shift
 from .matching import HallWitness
 from .ranking import RankedPlan, ranked_plans
@@ -21,6 +22,9 @@ from .whatif import WhatIf, what_if
 
 __all__ = [
     "RankedPlan",
+    "RunOrder",
+    "RunOrderInfeasibleError",
+    "order_runs",
     "WhatIf",
     "ranked_plans",
     "redispatch",
