@@ -38,6 +38,7 @@ from dispatcher.limits import (
     value_problem,
 )
 from dispatcher.shop.model import (
+    ChangeoverTable,
     Job,
     Machine,
     Pin,
@@ -54,21 +55,25 @@ from dispatcher.shop.validate import shop_problems
 FORMAT_NAME = "dispatcher-shop"
 #: Newest format this program reads. A document is written with the lowest version that
 #: holds everything in it (:func:`_needed_version`), so older programs still open plain
-#: shops: version 2 added the crew block.
-FORMAT_VERSION = 2
+#: shops: version 2 added the crew block, version 3 setup families (job ``family``),
+#: ``changeover_tables`` and the machines' ``mounted`` and ``end_family``.
+FORMAT_VERSION = 3
+CHANGEOVER_VERSION = 3
 SHOP_SUFFIX = ".dshop"
 
 #: Fields holding free text (notes); every other text field is a name or an id.
 _FREE_TEXT = {"description", "notes", "state_note", "note"}
 
 _TOP = {"format", "format_version", "name", "description", "unit", "shift", "move_penalty",
-        "machines", "jobs", "grid", "hours", "pins", "plan_in_force", "crew"}
+        "machines", "jobs", "grid", "hours", "pins", "plan_in_force", "crew",
+        "changeover_tables"}
 _UNIT = {"kind", "currency"}
 _SHIFT = {"date", "label", "start", "hours"}
 _MACHINE = {"id", "name", "state", "state_note", "state_changed", "slots", "shift_hours",
-            "speed_factor", "notes"}
+            "speed_factor", "notes", "mounted", "end_family"}
 _JOB = {"id", "name", "work_order", "rush", "wait_penalty", "due", "notes", "state",
-        "machine", "since", "run_hours", "move_penalty"}
+        "machine", "since", "run_hours", "move_penalty", "family"}
+_TABLE = {"id", "name", "machines", "families", "changes", "from_empty"}
 _PIN = {"job", "machine", "kind", "note"}
 
 
@@ -256,7 +261,8 @@ def shop_from_dict(data: Any, source: str = "shop document", *, check: bool = Tr
             slots=r.integer(m, "slots", where, 1, maximum=MAX_SLOTS),
             shift_hours=r.number(m, "shift_hours", where, None, optional=True),
             speed_factor=r.number(m, "speed_factor", where, 1.0),
-            notes=r.text(m, "notes", where)))
+            notes=r.text(m, "notes", where), mounted=r.opt_text(m, "mounted", where),
+            end_family=r.opt_text(m, "end_family", where)))
 
     jobs = data.get("jobs", [])
     if not isinstance(jobs, list):
@@ -274,7 +280,17 @@ def shop_from_dict(data: Any, source: str = "shop document", *, check: bool = Tr
             notes=r.text(j, "notes", where), state=r.text(j, "state", where, "waiting"),
             machine=r.opt_text(j, "machine", where), since=r.stamp(j, "since", where, datetime),
             run_hours=r.number(j, "run_hours", where, None, optional=True),
-            move_penalty=r.number(j, "move_penalty", where, None, optional=True)))
+            move_penalty=r.number(j, "move_penalty", where, None, optional=True),
+            family=r.opt_text(j, "family", where)))
+
+    tables = data.get("changeover_tables", [])
+    if not isinstance(tables, list):
+        r.bad("field 'changeover_tables'", f"expected a list, got {_kind(tables)}")
+        tables = []
+    for n, t in enumerate(tables, start=1):
+        table = _read_table(r, t, n, shop)
+        if table is not None:
+            shop.changeover_tables.append(table)
 
     total_slots = sum(m.slots for m in shop.machines if isinstance(m.slots, int))
     if total_slots > MAX_TOTAL_SLOTS:
@@ -345,6 +361,63 @@ def _item_where(what: str, n: int, item: Any) -> str:
             and name_problem(item["name"]) is None):
         return f"{what} {item['name']!r} (#{n})"
     return f"{what} #{n}"
+
+
+def _read_table(r: _Reader, t: Any, n: int, shop: Shop) -> ChangeoverTable | None:
+    where = _item_where("changeover table", n, t)
+    t = r.obj(t, where, _TABLE)
+    if t is None:
+        return None
+    table = ChangeoverTable(id=r.text(t, "id", where, required=True), name=r.text(t, "name", where))
+    for key in ("machines", "families"):
+        items = t.get(key, [])
+        if not isinstance(items, list) or not all(isinstance(x, str) for x in items):
+            r.bad(f"{where}, field '{key}'", f"expected a list of texts, got {_kind(items)}")
+            continue
+        setattr(table, key, list(items))
+
+    def cell(a: str | None, b: str, v: Any, place: str) -> None:
+        if v is None:
+            return  # not allowed
+        if isinstance(v, bool) or not isinstance(v, (int, float)) or not math.isfinite(v):
+            r.bad(place, f"expected a number >= 0 (or null: not allowed), got {_kind(v)}")
+        else:
+            table.changes[(a, b)] = float(v)
+
+    changes = t.get("changes", {})
+    if not isinstance(changes, dict):
+        r.bad(f"{where}, field 'changes'", f"expected an object from family -> {{to family: number}}, "
+              f"got {_kind(changes)}")
+        changes = {}
+    for a, row in changes.items():
+        if not isinstance(row, dict):
+            r.bad(f"{where}, field 'changes', from {a!r}", f"expected an object to family -> number, "
+                  f"got {_kind(row)}")
+            continue
+        for b, v in row.items():
+            cell(a, b, v, f"{where}, field 'changes', from {a!r} to {b!r}")
+    empty = t.get("from_empty", {})
+    if not isinstance(empty, dict):
+        r.bad(f"{where}, field 'from_empty'", f"expected an object family -> number, got {_kind(empty)}")
+        empty = {}
+    for b, v in empty.items():
+        cell(None, b, v, f"{where}, field 'from_empty', to {b!r}")
+    return table
+
+
+def _table_to_dict(t: ChangeoverTable) -> dict[str, Any]:
+    changes: dict[str, dict[str, int | float]] = {}
+    empty: dict[str, int | float] = {}
+    order = {f: i for i, f in enumerate(t.families)}
+    for (a, b) in sorted(t.changes, key=lambda k: (k[0] is None, order.get(k[0], 1 << 30) if k[0] else 0,
+                                                    order.get(k[1], 1 << 30))):
+        v = json_number(t.changes[(a, b)])
+        if a is None:
+            empty[b] = v
+        else:
+            changes.setdefault(a, {})[b] = v
+    return {"id": t.id, "name": t.name, "machines": list(t.machines), "families": list(t.families),
+            "changes": changes, "from_empty": empty}
 
 
 def _read_pairs(r: _Reader, block: Any, field: str, shop: Shop) -> dict[tuple[str, str], float]:
@@ -472,6 +545,7 @@ def shop_to_dict(shop: Shop) -> dict[str, Any]:
             out.setdefault(jid, {})[mid] = json_number(d[(jid, mid)])
         return out
 
+    families = uses_changeovers(shop)
     data = {
         "format": FORMAT_NAME,
         "format_version": _needed_version(shop),
@@ -485,12 +559,14 @@ def shop_to_dict(shop: Shop) -> dict[str, Any]:
             "id": m.id, "name": m.name, "state": m.state, "state_note": m.state_note,
             "state_changed": _stamp(m.state_changed), "slots": m.slots,
             "shift_hours": opt(m.shift_hours), "speed_factor": json_number(m.speed_factor),
-            "notes": m.notes} for m in shop.machines],
+            "notes": m.notes, **({"mounted": m.mounted, "end_family": m.end_family} if families else {})}
+            for m in shop.machines],
         "jobs": [{
             "id": j.id, "name": j.name, "work_order": j.work_order, "rush": j.rush,
             "wait_penalty": json_number(j.wait_penalty), "due": _stamp(j.due), "notes": j.notes,
             "state": j.state, "machine": j.machine, "since": _stamp(j.since),
-            "run_hours": opt(j.run_hours), "move_penalty": opt(j.move_penalty)} for j in shop.jobs],
+            "run_hours": opt(j.run_hours), "move_penalty": opt(j.move_penalty),
+            **({"family": j.family} if families else {})} for j in shop.jobs],
         "grid": pairs(shop.grid),
         "hours": pairs(shop.hours),
         "pins": [{"job": p.job, "machine": p.machine, "kind": p.kind, "note": p.note}
@@ -499,12 +575,24 @@ def shop_to_dict(shop: Shop) -> dict[str, Any]:
     }
     if has_crew(shop.crew):
         data["crew"] = crew_to_dict(shop.crew)
+    if families:
+        data["changeover_tables"] = [_table_to_dict(t) for t in shop.changeover_tables]
     return data
 
 
 def _needed_version(shop: Shop) -> int:
     """The lowest format version that holds everything in ``shop``."""
+    if uses_changeovers(shop):
+        return CHANGEOVER_VERSION
     return CREW_VERSION if has_crew(shop.crew) else 1
+
+
+def uses_changeovers(shop: Shop) -> bool:
+    """True when the shop has changeover tables, job families or mounted/end families
+    (it is then written as format version 3)."""
+    return bool(shop.changeover_tables
+                or any(j.family is not None for j in shop.jobs)
+                or any(m.mounted is not None or m.end_family is not None for m in shop.machines))
 
 
 def dump_shop_text(shop: Shop) -> str:

@@ -21,6 +21,7 @@ from .model import (
     UNIT_KINDS,
     UP,
     WAITING,
+    ChangeoverTable,
     Job,
     Machine,
     Pin,
@@ -40,14 +41,14 @@ from .translate import (
     solve_problem,
     solve_shop,
 )
-from .validate import check_shop, shop_problems
+from .validate import changeover_problems, check_shop, shop_problems
 
 __all__ = [
     "DONE", "DOWN", "JOB_STATES", "MACHINE_STATES", "MAINTENANCE", "MUST", "MUST_NOT",
     "PIN_KINDS", "RUNNING", "UNIT_KINDS", "UP", "WAITING",
-    "Assignment", "Job", "Machine", "Pin", "Plan", "PlanFormatError", "Problem",
+    "Assignment", "ChangeoverTable", "Job", "Machine", "Pin", "Plan", "PlanFormatError", "Problem",
     "RunningJob", "RushGroup", "Shift", "Shop", "ShopError", "ShopInfeasibleError", "ShopProblem",
     "Unit", "WaitReason",
-    "build_problem", "check_shop", "plan_from_result", "shop_from_grid", "shop_problems",
+    "build_problem", "changeover_problems", "check_shop", "plan_from_result", "shop_from_grid", "shop_problems",
     "solve_problem", "solve_shop",
 ]

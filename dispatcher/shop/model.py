@@ -115,7 +115,9 @@ class Job:
     when the job is left waiting (or subtracted when maximising). ``machine`` and
     ``since`` are set only while the job is running. ``run_hours`` is the job's own run
     time (used when filling a whole shift); ``move_penalty`` overrides the shop's default
-    cost of moving a dispatched-but-not-started job during re-dispatch.
+    cost of moving a dispatched-but-not-started job during re-dispatch. ``family`` is the
+    setup family the job needs (mould, die, colour group...; None: the job's values are
+    typed in the grid only).
     """
 
     id: str
@@ -130,6 +132,7 @@ class Job:
     since: datetime | None = None
     run_hours: float | None = None
     move_penalty: float | None = None
+    family: str | None = None
 
     @property
     def is_waiting(self) -> bool:
@@ -147,6 +150,8 @@ class Machine:
     ``slots`` is how many jobs the machine takes at once in one dispatch round (jobs already
     running on it use up slots). ``shift_hours`` is the time it has in this shift (None: the
     shift length); ``speed_factor`` scales a job's ``run_hours`` on this machine.
+    ``mounted`` is the setup family mounted now (None: nothing mounted, or cleaned) and
+    ``end_family`` the family it must end the shift in (None: any).
     """
 
     id: str
@@ -158,6 +163,8 @@ class Machine:
     shift_hours: float | None = None
     speed_factor: float = 1.0
     notes: str = ""
+    mounted: str | None = None
+    end_family: str | None = None
 
     @property
     def is_up(self) -> bool:
@@ -175,6 +182,37 @@ class Pin:
 
 
 @dataclass
+class ChangeoverTable:
+    """How long (or what it costs) to change a group of machines from one family to another.
+
+    ``machines`` are the ids of the machines sharing the table; ``families`` the family
+    names in row/column order. ``changes[(a, b)]`` is the change from family ``a`` to
+    family ``b`` (``a`` None: from nothing mounted / a cleaned machine); ``(a, a)`` is
+    the no-change value (0 or a short clean). A missing entry means the change is not
+    allowed: a job of family ``b`` cannot follow family ``a`` on these machines. The
+    entries need not obey the triangle inequality (a wash-up in between can be cheaper
+    than the direct change); nothing in the program assumes it.
+    """
+
+    id: str
+    name: str = ""
+    machines: list[str] = field(default_factory=list)
+    families: list[str] = field(default_factory=list)
+    changes: dict[tuple[str | None, str], float] = field(default_factory=dict)
+
+    def change(self, from_family: str | None, to_family: str) -> float | None:
+        """The change from one family (None: nothing mounted) to another; None: not allowed."""
+        return self.changes.get((from_family, to_family))
+
+    def matrix(self) -> np.ndarray:
+        """``(len(families) + 1) x len(families)``: the rows in family order, then the
+        "nothing mounted" row; NaN where a change is not allowed."""
+        rows = [*self.families, None]
+        return np.array([[self.changes.get((a, b), np.nan) for b in self.families] for a in rows],
+                        dtype=float).reshape(len(rows), len(self.families))
+
+
+@dataclass
 class Shop:
     """A whole shop: jobs, machines, the grid of values, pins and the plan in force.
 
@@ -183,6 +221,11 @@ class Shop:
     ``job.run_hours * machine.speed_factor``). ``plan_in_force`` maps a machine id to the
     job ids it was given by the decision currently in force (empty when none recorded).
     ``crew`` holds the operators (empty: plans ignore staffing, as for a plain grid).
+
+    ``changeover_tables`` price changeovers between setup families: where a job has a
+    family and a machine a table, the value of the pair is derived from the table (the
+    change from what the machine has mounted to the job's family); a value typed into
+    ``grid`` overrides the derived one (:meth:`value_source` tells which).
     """
 
     name: str = ""
@@ -197,6 +240,7 @@ class Shop:
     hours: dict[tuple[str, str], float] = field(default_factory=dict)
     plan_in_force: dict[str, list[str]] = field(default_factory=dict)
     crew: Crew = field(default_factory=Crew)
+    changeover_tables: list[ChangeoverTable] = field(default_factory=list)
 
     # ---- look-ups -------------------------------------------------------------------
     def job(self, job_id: str) -> Job:
@@ -231,10 +275,62 @@ class Shop:
     def machine_names(self) -> list[str]:
         return [m.name for m in self.machines]
 
+    # ---- changeovers ------------------------------------------------------------------
+    def table_of(self, machine_id: str) -> ChangeoverTable | None:
+        """The changeover table the machine belongs to (None: its values are typed only)."""
+        for t in self.changeover_tables:
+            if machine_id in t.machines:
+                return t
+        return None
+
+    def has_families(self) -> bool:
+        """True when the shop prices changeovers (some job has a family and a table exists)."""
+        return bool(self.changeover_tables) and any(j.family is not None for j in self.jobs)
+
+    def derived_value(self, job_id: str, machine_id: str) -> float | None:
+        """The change from the machine's mounted family to the job's family, from its table.
+
+        None when the job has no family, the machine no table, or the change is not allowed.
+        """
+        family = self.job(job_id).family
+        table = self.table_of(machine_id)
+        if family is None or table is None:
+            return None
+        return table.change(self.machine(machine_id).mounted, family)
+
+    def value_source(self, job_id: str, machine_id: str) -> str | None:
+        """``"typed"`` (in the grid), ``"derived"`` (from the changeover table) or None."""
+        if (job_id, machine_id) in self.grid:
+            return "typed"
+        if self.derived_value(job_id, machine_id) is not None:
+            return "derived"
+        return None
+
+    def mark_running(self, job_id: str, machine_id: str, since: datetime | None = None) -> None:
+        """The job starts on the machine: the machine's mounted family becomes the job's."""
+        job, machine = self.job(job_id), self.machine(machine_id)
+        job.state, job.machine, job.since = RUNNING, machine.id, since
+        if job.family is not None:
+            machine.mounted = job.family
+
+    def mark_done(self, job_id: str) -> None:
+        """The job is done; the machine it ran on keeps the job's family mounted."""
+        job = self.job(job_id)
+        if job.machine is not None and job.family is not None:
+            try:
+                self.machine(job.machine).mounted = job.family
+            except KeyError:
+                pass
+        job.state, job.machine, job.since = DONE, None, None
+
     # ---- the grid --------------------------------------------------------------------
     def value(self, job_id: str, machine_id: str) -> float | None:
-        """Grid value of a pair, or None when the machine cannot run the job."""
-        return self.grid.get((job_id, machine_id))
+        """Value of a pair: typed in the grid, else derived from the changeover table; None
+        when the machine cannot run the job."""
+        typed = self.grid.get((job_id, machine_id))
+        if typed is not None or not self.changeover_tables:
+            return typed
+        return self.derived_value(job_id, machine_id)
 
     def set_value(self, job_id: str, machine_id: str, value: float | None) -> None:
         """Set a pair's value (None = cannot run). Checks the ids and the number."""
@@ -250,11 +346,23 @@ class Shop:
         self.grid[(job_id, machine_id)] = value
 
     def matrix(self) -> tuple[np.ndarray, np.ndarray]:
-        """``(values, allowed)`` over all jobs x all machines in list order."""
+        """``(values, allowed)`` over all jobs x all machines in list order (typed values
+        over derived ones)."""
         jpos = {j.id: i for i, j in enumerate(self.jobs)}
         mpos = {m.id: i for i, m in enumerate(self.machines)}
         values = np.zeros((len(self.jobs), len(self.machines)))
         allowed = np.zeros(values.shape, dtype=bool)
+        if self.changeover_tables:
+            for k, m in enumerate(self.machines):
+                table = self.table_of(m.id)
+                if table is None:
+                    continue
+                for i, j in enumerate(self.jobs):
+                    if j.family is not None:
+                        v = table.change(m.mounted, j.family)
+                        if v is not None:
+                            values[i, k] = v
+                            allowed[i, k] = True
         for (jid, mid), v in self.grid.items():
             i, k = jpos.get(jid), mpos.get(mid)
             if i is not None and k is not None:

@@ -225,7 +225,7 @@ def apply_events(shop: Shop, events: Sequence[ShopEvent], source: str = "") -> t
                 job.rush = True
                 arrived.add(i)
         elif ev.kind == EVENT_DONE:
-            job.state, job.machine, job.since = DONE, None, None
+            after.mark_done(job.id)      # the machine keeps the job's family mounted
             left.add(i)
         else:  # pulled: out of this round; a running job frees its slot
             job.state, job.machine, job.since = WAITING, None, None

@@ -140,6 +140,7 @@ def shop_problems(shop: Shop) -> list[Problem]:
             add(pair("hours", jid, mid), f"{v!r} must be a number from 0 to 1e12")
 
     out.extend(pin_problems(shop, running_on))
+    out.extend(changeover_problems(shop))
 
     placed: dict[str, str] = {}
     for mid, jids in shop.plan_in_force.items():
@@ -194,7 +195,7 @@ def pin_problems(shop: Shop, running_on: dict[str, list[str]]) -> list[Problem]:
             forced[p.job].append(p.machine)
         if machine.state != UP:
             out.append(Problem(where, f"the machine is {machine.state}; it can take no job"))
-        if (p.job, p.machine) not in shop.grid:
+        if shop.value(p.job, p.machine) is None:
             out.append(Problem(where, "the grid says this machine cannot run this job"))
 
     for (jid, mid), ks in kinds.items():
@@ -217,6 +218,71 @@ def pin_problems(shop: Shop, running_on: dict[str, list[str]]) -> list[Problem]:
                 f"pins on {shop.describe_machine(mid)}",
                 f"{len(jids)} jobs are pinned to it ({', '.join(shop.job(j).name for j in jids)}) "
                 f"but it has {max(free, 0)} free slot(s)"))
+    return out
+
+
+def changeover_problems(shop: Shop) -> list[Problem]:
+    """Changeover tables and families that cannot be used as they are.
+
+    Refused: a table without an id or with an id used twice, a table naming a machine
+    that does not exist (or a machine in two tables), family names empty or listed twice,
+    an entry naming a family the table does not list, an entry that is not a number >= 0,
+    a job family that is empty text, and a machine whose mounted or end family no table
+    knows (its own table when it has one). A job whose family is missing from a
+    machine's table is not an error: the job cannot run there (it waits, with the reason).
+    """
+    out: list[Problem] = []
+    add = lambda where, msg: out.append(Problem(where, msg))
+    machine_ids = {m.id for m in shop.machines}
+    owner: dict[str, str] = {}
+    for ident, n in Counter(t.id for t in shop.changeover_tables).items():
+        if n > 1:
+            add(f"changeover table id {ident!r}", f"is used by {n} tables; ids must be unique")
+    for n, t in enumerate(shop.changeover_tables, start=1):
+        where = f"changeover table {t.name or t.id!r} (#{n})"
+        if not isinstance(t.id, str) or not t.id.strip():
+            add(f"{where}, field 'id'", "must be a non-empty text")
+        for mid in t.machines:
+            if mid not in machine_ids:
+                add(f"{where}, field 'machines'", f"names unknown machine id {mid!r}")
+            elif mid in owner and owner[mid] != t.id:
+                add(f"{where}, field 'machines'",
+                    f"{shop.describe_machine(mid)} is already in changeover table {owner[mid]!r}; "
+                    "a machine belongs to one table")
+            else:
+                owner[mid] = t.id
+        for fam, k in Counter(t.families).items():
+            if k > 1:
+                add(f"{where}, field 'families'", f"family {fam!r} is listed {k} times; names must be unique")
+        for fam in t.families:
+            if not isinstance(fam, str) or not fam.strip():
+                add(f"{where}, field 'families'", "a family name must be a non-empty text")
+        known = set(t.families)
+        for (a, b), v in t.changes.items():
+            cell = f"{where}, change from {'nothing mounted' if a is None else repr(a)} to {b!r}"
+            if a is not None and a not in known:
+                add(cell, f"family {a!r} is not in the table's families")
+            if b not in known:
+                add(cell, f"family {b!r} is not in the table's families")
+            if not _finite(v) or v < 0:
+                add(cell, f"value {v!r} must be a number >= 0 (leave the entry out when the "
+                    "change is not allowed)")
+    every_family = {f for t in shop.changeover_tables for f in t.families}
+    for m in shop.machines:
+        table = shop.table_of(m.id)
+        for fname in ("mounted", "end_family"):
+            fam = getattr(m, fname)
+            if fam is None:
+                continue
+            if table is not None and fam not in table.families:
+                add(f"{shop.describe_machine(m.id)}, field '{fname}'",
+                    f"family {fam!r} is not in the machine's changeover table {table.id!r}")
+            elif table is None and fam not in every_family:
+                add(f"{shop.describe_machine(m.id)}, field '{fname}'",
+                    f"no changeover table knows family {fam!r}")
+    for j in shop.jobs:
+        if j.family is not None and (not isinstance(j.family, str) or not j.family.strip()):
+            add(f"{shop.describe_job(j.id)}, field 'family'", "must be a non-empty text or null")
     return out
 
 
