@@ -47,6 +47,8 @@ from scipy.optimize import (
 from scipy.sparse import coo_array, csr_array
 from scipy.sparse.csgraph import breadth_first_order, connected_components, maximum_flow
 
+from dispatcher.errors import Infeasible
+
 from .assignment import DispatchInputError
 
 __all__ = ["RunOrder", "RunOrderInfeasibleError", "order_runs"]
@@ -59,8 +61,8 @@ _MAX_CUT_ROUNDS = 200
 _CORE_K = 8                # cheapest arcs per node in the first LP (others by pricing)
 
 
-class RunOrderInfeasibleError(Exception):
-    """No run order exists: the allowed changeovers cannot chain all the jobs."""
+class RunOrderInfeasibleError(Infeasible):
+    """No run order exists: the allowed changeovers cannot chain all the jobs (exit 3)."""
 
 
 @dataclass(frozen=True)
