@@ -22,7 +22,15 @@ from dispatcher.io.shopfile import (
     parse_shop_text,
     shop_to_dict,
 )
-from dispatcher.shop import ChangeoverTable, Job, Machine, Shop, ShopError, check_shop, solve_shop
+from dispatcher.shop import (
+    ChangeoverTable,
+    Job,
+    Machine,
+    Shop,
+    ShopError,
+    check_shop,
+    solve_shop,
+)
 from dispatcher.shop.redispatch import ShopEvent, apply_events, redispatch_shop
 
 TABLE = {("mould A", "mould A"): 0.0, ("mould A", "mould B"): 40.0, ("mould B", "mould A"): 35.0,
