@@ -198,3 +198,16 @@ def test_missing_entry_means_not_allowed():
 def test_table_matrix_has_the_nothing_mounted_row_last():
     t = moulding_cell().changeover_tables[0]
     assert t.matrix().tolist() == [[0, 40], [35, 5], [20, 20]]
+
+
+def test_copy_shares_no_changeover_table_container():
+    shop = moulding_cell()
+    twin = shop.copy()
+    twin.changeover_tables[0].changes[("mould A", "mould B")] = 99.0
+    twin.changeover_tables[0].machines.append("M3")
+    twin.changeover_tables[0].families.append("mould C")
+    twin.machines[0].mounted = "mould B"
+    assert shop.changeover_tables[0].changes[("mould A", "mould B")] == 40.0
+    assert shop.changeover_tables[0].machines == ["M1", "M2"]
+    assert shop.changeover_tables[0].families == ["mould A", "mould B"]
+    assert shop.machines[0].mounted == "mould A"

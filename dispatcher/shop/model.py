@@ -418,6 +418,8 @@ class Shop:
             hours=dict(self.hours),
             plan_in_force={k: list(v) for k, v in self.plan_in_force.items()},
             crew=self.crew.copy(),
+            changeover_tables=[replace(t, machines=list(t.machines), families=list(t.families),
+                                       changes=dict(t.changes)) for t in self.changeover_tables],
         )
 
     def describe_job(self, job_id: str) -> str:
