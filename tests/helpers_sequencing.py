@@ -89,3 +89,50 @@ def tsplib_atsp_optima(readme: Path) -> dict[str, int]:
     """Published optimal tour lengths from the data folder's README table."""
     rows = re.findall(r"^\|\s*(\w+)\.atsp\s*\|\s*(\d+)\s*\|\s*(\d+)\s*\|", readme.read_text(), re.MULTILINE)
     return {name: int(opt) for name, _n, opt in rows}
+
+
+def brute_force_shift(changeover, hours, capacity, end_change=None, penalty=None, must=None,
+                      tau: float = 0.0, most_jobs_first: bool = True):
+    """Best whole-shift plan with run orders by trying every assignment and every order.
+
+    Reads the problem as :func:`dispatcher.engine.shift_runs.plan_shift_runs` documents
+    it. Returns ``(placed, total)`` of the best plan under the rule (most jobs first,
+    then least total), or None when no plan runs every must-run job. Small shops only
+    (machines + 1) ** jobs assignments.
+    """
+    c = _clean(np.asarray(changeover, dtype=float))
+    h = np.array(hours, dtype=float)
+    m, n1, _ = c.shape
+    n = n1 - 1
+    end = np.zeros((m, n1)) if end_change is None else _clean(end_change)
+    pen = np.zeros(n) if penalty is None else np.asarray(penalty, dtype=float)
+    must = np.zeros(n, dtype=bool) if must is None else np.asarray(must, dtype=bool)
+
+    def best_route(k, jobs):
+        best = np.inf
+        for perm in itertools.permutations(jobs):
+            seq = [0] + [j + 1 for j in perm]
+            cost = sum(c[k, a, b] for a, b in itertools.pairwise(seq)) + end[k, seq[-1]]
+            if not np.isfinite(cost):
+                continue
+            if sum(h[j, k] for j in perm) + tau * cost > capacity[k] + 1e-9:
+                continue
+            best = min(best, cost)
+        return best
+
+    best = None
+    for choice in itertools.product(range(-1, m), repeat=n):
+        if any(must[i] and choice[i] < 0 for i in range(n)):
+            continue
+        if any(choice[i] >= 0 and not np.isfinite(h[i, choice[i]]) for i in range(n)):
+            continue
+        total = sum(pen[i] for i in range(n) if choice[i] < 0)
+        for k in range(m):
+            total += best_route(k, [i for i in range(n) if choice[i] == k])
+        if not np.isfinite(total):
+            continue
+        placed = sum(1 for x in choice if x >= 0)
+        key = (-placed if most_jobs_first else 0, total)
+        if best is None or key < best[0]:
+            best = (key, placed, total)
+    return None if best is None else (best[1], best[2])

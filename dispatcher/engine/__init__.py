@@ -13,23 +13,15 @@ from .assignment import (
     solve,
 )
 from .certificate import Certificate, CertificateError
-from .order_runs import RunOrder, RunOrderInfeasibleError, order_runs
 from .fill_shift import ShiftInfeasibleError, ShiftPlan, ShiftSearchError, fill_shift
 from .matching import HallWitness
+from .order_runs import RunOrder, RunOrderInfeasibleError, order_runs
 from .ranking import RankedPlan, ranked_plans
 from .redispatch import redispatch, shortest_augmenting_path
+from .shift_runs import ShiftRuns, plan_shift_runs
 from .whatif import WhatIf, what_if
 
 __all__ = [
-    "RankedPlan",
-    "RunOrder",
-    "RunOrderInfeasibleError",
-    "order_runs",
-    "WhatIf",
-    "ranked_plans",
-    "redispatch",
-    "shortest_augmenting_path",
-    "what_if",
     "MAX_CELLS",
     "OBJECTIVES",
     "Certificate",
@@ -38,9 +30,20 @@ __all__ = [
     "DispatchResult",
     "HallWitness",
     "InfeasibleError",
+    "RankedPlan",
+    "RunOrder",
+    "RunOrderInfeasibleError",
     "ShiftInfeasibleError",
     "ShiftPlan",
+    "ShiftRuns",
     "ShiftSearchError",
+    "WhatIf",
     "fill_shift",
+    "order_runs",
+    "plan_shift_runs",
+    "ranked_plans",
+    "redispatch",
+    "shortest_augmenting_path",
     "solve",
+    "what_if",
 ]
