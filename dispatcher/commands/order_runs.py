@@ -17,7 +17,7 @@ import argparse
 
 from dispatcher.commands.common import CliError, print_json
 from dispatcher.commands.shop_input import read_shop_arg
-from dispatcher.shop.fill import fill_shop_shift
+from dispatcher.shop.fill_shift import fill_shop_shift
 from dispatcher.shop.runs import machine_run_order
 
 

@@ -59,6 +59,8 @@ class MachineShift:
     hours_used: float
     capacity: float
     running: list[str] = field(default_factory=list)
+    runs: list[dict[str, Any]] | None = None       # shops with families: each run's change
+    end_change: float | None = None                 # and the change into the end family
 
 
 @dataclass
@@ -103,7 +105,10 @@ class ShiftFill:
         data = contract_json(self, bottleneck=None, certificate=certificate)
         data["machines"] = [{"machine": m.machine, "jobs": list(m.jobs),
                              "hours_used": json_number(m.hours_used, digits=9),
-                             "capacity": json_number(m.capacity), "running": list(m.running)}
+                             "capacity": json_number(m.capacity), "running": list(m.running),
+                             **({} if m.runs is None else
+                                {"runs": [dict(r) for r in m.runs],
+                                 "end_change": None if m.end_change is None else json_number(m.end_change)})}
                             for m in self.machines]
         return data
 
@@ -143,6 +148,11 @@ def fill_shop_shift(shop: Shop, *, maximize: bool = False, extra_must_run: Itera
     :class:`~dispatcher.engine.fill_shift.ShiftCancelled` when cancelled.
     """
     _check_fill(shop, source)
+    if shop.has_families() and not maximize:
+        # changeovers priced in run order (dispatcher.shop.fill_runs)
+        from .fill_runs import fill_with_changeovers
+        return fill_with_changeovers(shop, extra_must_run=extra_must_run, time_limit=time_limit,
+                                     source=source)
     values_all, allowed_all = shop.matrix()
     hours_all = shop.hours_matrix()
     mindex = {m.id: k for k, m in enumerate(shop.machines)}
