@@ -81,3 +81,25 @@ def test_json_has_runs_with_changes_and_hours(tmp_path, capsys):
             prev = r["to_family"]
         assert t <= 4.0 + 1e-9
     assert data["certificate"]["proven_optimal"] is True
+
+
+def test_sheet_prints_each_change_and_the_planned_times():
+    import datetime as dt
+
+    from dispatcher.sheet.build import build_sheet
+    from dispatcher.sheet.content import sheet_text
+
+    shop = print_plant()
+    shop.shift.start = dt.time(6, 0)
+    fill = fill_shop_shift(shop)
+    text = sheet_text(build_sheet(shop, fill))
+    runs = {(m.machine, r["job"]): r for m in fill.machines for r in m.runs}
+    assert runs
+    for (machine, job), r in runs.items():
+        if r["from_family"] != r["to_family"]:
+            phrase = f"change from family {r['from_family']} to {r['to_family']}: {r['changeover']:g} min"
+            assert phrase in text, phrase
+        start = dt.datetime(2026, 1, 1, 6, 0) + dt.timedelta(hours=r["start_hour"])
+        assert f"planned {start:%H:%M}-" in text
+    # the cautions stay on the sheet
+    assert "lockout/tagout" in text

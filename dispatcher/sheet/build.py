@@ -27,6 +27,7 @@ from .content import (
     SheetMachine,
     SheetTotals,
     SheetWaitingJob,
+    format_value,
 )
 
 #: How a waiting reason starts when no machine can take the job (shop.translate's words).
@@ -34,7 +35,8 @@ NO_MACHINE = QT_TRANSLATE_NOOP("Sheet", "no available machine can run it")
 #: Printed for a shop without a name.
 UNNAMED_SHOP = QT_TRANSLATE_NOOP("Sheet", "(unnamed shop)")
 
-__all__ = ["DecisionLike", "build_sheet", "objective_phrase", "run_order", "value_heading"]
+__all__ = ["DecisionLike", "build_sheet", "change_text", "objective_phrase", "planned_text", "run_order",
+           "value_heading"]
 
 
 class DecisionLike(Protocol):
@@ -148,6 +150,48 @@ def run_order(plan: Any) -> dict[str, list[str]] | None:
     return order
 
 
+def _runs(plan: Any) -> dict[tuple[str, str], dict]:
+    """(machine, job) -> the run (change before it, planned hours) of a whole-shift plan
+    for a shop with setup families; empty for other plans."""
+    machines = plan.get("machines") if isinstance(plan, dict) else getattr(plan, "machines", None)
+    out: dict[tuple[str, str], dict] = {}
+    for m in machines if isinstance(machines, list) else []:
+        get = m.get if isinstance(m, dict) else (lambda key, default=None, m=m: getattr(m, key, default))
+        for r in get("runs", None) or []:
+            if isinstance(r, dict) and isinstance(r.get("job"), str):
+                out[(get("machine"), r["job"])] = r
+    return out
+
+
+def change_text(run: dict, unit: str) -> str:
+    """``change from family A to B: 25 min`` (or the setup when the job has no family)."""
+    value = format_value(run.get("changeover"), unit)
+    to_family = run.get("to_family")
+    if to_family is None:
+        return f"setup {value}" if value else ""
+    from_family = run.get("from_family")
+    source = f"family {from_family}" if from_family is not None else "nothing mounted"
+    if from_family == to_family:
+        return f"no change of family ({to_family})"
+    return f"change from {source} to {to_family}: {value}"
+
+
+def planned_text(shop: Shop, run: dict) -> str:
+    """Planned start and end: clock times from the shift start, else hours into the shift."""
+    start, end = run.get("start_hour"), run.get("end_hour")
+    if not isinstance(start, (int, float)) or not isinstance(end, (int, float)):
+        return ""
+
+    def clock(hours: float) -> str:
+        minutes = round(hours * 60)
+        if shop.shift.start is not None:
+            base = shop.shift.start.hour * 60 + shop.shift.start.minute + minutes
+            return f"{base // 60 % 24:02d}:{base % 60:02d}"
+        return f"+{minutes // 60}:{minutes % 60:02d}"
+
+    return f"{clock(start)}-{clock(end)}"
+
+
 def _must_pins(shop: Shop) -> dict[tuple[str, str], str]:
     """(job name, machine name) -> note of each "must go to" pin."""
     out = {}
@@ -197,6 +241,7 @@ def build_sheet(shop: Shop, plan: Any, decision: Any | None = None, *,
     order = order if order is not None else run_order(plan)
     staffing = getattr(plan, "staffing", None)
     operator_of = _operators(staffing, shop)
+    runs = _runs(plan)
     machines = []
     # A whole-shift plan says how many of each machine's hours it uses (as the app does).
     hours_used = {m.machine: (m.hours_used, m.capacity) for m in getattr(plan, "machines", [])
@@ -219,6 +264,10 @@ def build_sheet(shop: Shop, plan: Any, decision: Any | None = None, *,
                 job = dataclasses.replace(job, pinned=True, pin_note=pin)
             if order is not None:
                 job = dataclasses.replace(job, hours=_pair_hours(shop, name, machine.name))
+            run = runs.get((machine.name, name))
+            if run is not None:
+                job = dataclasses.replace(job, change=change_text(run, unit),
+                                          planned=planned_text(shop, run))
             jobs.append(job)
         notes = machine.notes
         if machine.slots > 1:

@@ -63,6 +63,8 @@ class SheetJob:
     ``continuing`` marks a job already running on the machine that simply carries on.
     ``hours`` is the planned run time in fill-shift mode, ``None`` otherwise. ``pinned``
     marks a job a "must go to" pin holds on this machine, ``pin_note`` is that pin's note.
+    In a shop with setup families ``change`` says which changeover comes before the job and
+    ``planned`` its planned start and end times.
     """
 
     name: str
@@ -76,6 +78,8 @@ class SheetJob:
     hours: float | None = None
     pinned: bool = False
     pin_note: str = ""
+    change: str = ""          # shops with families: "change from family A to B: 25 min"
+    planned: str = ""         # planned start and end ("06:25-08:10"), whole-shift plans
 
     def all_notes(self) -> str:
         """The pin (if any) and the job's own notes, as the text sheet prints them."""
@@ -266,8 +270,12 @@ def sheet_text(content: SheetContent) -> str:
             value = format_value(job.setup, job.unit)
             if value:
                 bits.append(f"{content.value_heading.lower()} {value}")
+            if job.change:
+                bits.append(job.change)
             if job.hours is not None:
                 bits.append(f"run {format_value(job.hours, 'h')}")
+            if job.planned:
+                bits.append(f"planned {job.planned}")
             if job.all_notes():
                 bits.append(job.all_notes())
             out.append("      " + "  |  ".join(bits))

@@ -307,12 +307,16 @@ def _job_cells(job: SheetJob, day: dt.date | None, fmt: _Formats) -> tuple[str, 
         carries = f"<b>{_e(carries)}</b>"
         notes.append(carries + (", " + _e(translate("Sheet", "running since {time}")).format(
             time=_nb(since)) if since else ""))
+    if job.change:
+        notes.append(_e(job.change))
     if job.hours is not None:
         notes.append(_e(translate("Sheet", "run {hours}")).format(
             hours=_nb(fmt.value(job.hours, translate("Sheet", "h")))))
     if job.pinned:
         pin = translate("Sheet", "pinned here")
         notes.append(_e(pin + (f" ({job.pin_note})" if job.pin_note else "")))
+    if job.planned:
+        notes.append(f"planned {_nb(job.planned)}")
     if job.notes:
         notes.append(_e(job.notes))
     return name, _nb(fmt.value(job.setup, job.unit)), "; ".join(notes)
