@@ -103,3 +103,17 @@ def test_sheet_prints_each_change_and_the_planned_times():
         assert f"planned {start:%H:%M}-" in text
     # the cautions stay on the sheet
     assert "lockout/tagout" in text
+
+
+def test_progress_is_reported_and_cancel_is_honoured():
+    import threading
+
+    from dispatcher.engine.fill_shift import ShiftCancelled
+
+    seen = []
+    fill_shop_shift(print_plant(), progress=seen.append)
+    assert seen and all("changeovers" in t for t in seen)
+    stop = threading.Event()
+    stop.set()
+    with pytest.raises(ShiftCancelled):
+        fill_shop_shift(print_plant(), cancel=stop)

@@ -35,12 +35,23 @@ __all__ = ["fill_with_changeovers"]
 
 
 def fill_with_changeovers(shop: Shop, *, extra_must_run=(), time_limit: float | None = None,
-                          source: str = ""):
+                          source: str = "", cancel=None, progress=None):
     """The whole-shift plan of a shop with families (see the module text).
 
     Raises :class:`ShopError` (located) for missing run hours, :class:`ShopInfeasibleError`
-    when rush or pinned jobs cannot all run.
+    when rush or pinned jobs cannot all run, and
+    :class:`~dispatcher.engine.fill_shift.ShiftCancelled` when ``cancel`` (a
+    ``threading.Event``) is set before or right after the search; ``progress`` is called
+    with a short text per stage.
     """
+    from dispatcher.engine.fill_shift import ShiftCancelled
+
+    def stage(text: str) -> None:
+        if cancel is not None and cancel.is_set():
+            raise ShiftCancelled("cancelled")
+        if progress is not None:
+            progress(text)
+
     from .fill_shift import MachineShift, ShiftFill  # the container types of today's mode
 
     hours_all = shop.hours_matrix()
@@ -98,6 +109,7 @@ def fill_with_changeovers(shop: Shop, *, extra_must_run=(), time_limit: float | 
     capacity = np.maximum(capacity_all[up] - used_running[up], 0.0)
     penalty = np.array([j.wait_penalty for j in jobs], dtype=float)
     tau = 1 / 60 if shop.unit.kind == "setup_minutes" else 0.0
+    stage("whole shift with changeovers: ordering the runs on each machine")
     try:
         plan = plan_shift_runs(change, hours, capacity, end_change=end, wait_penalty=penalty,
                                must_run=must, changeover_hours=tau,
@@ -110,6 +122,8 @@ def fill_with_changeovers(shop: Shop, *, extra_must_run=(), time_limit: float | 
     except DispatchInputError as exc:
         raise ShopError([Problem("shop", str(exc))], source) from None
 
+    stage("whole shift with changeovers: " + ("proven optimal" if plan.proven_optimal else
+                                               f"best found, gap {100 * plan.gap:.1f}%"))
     machines, assignments, idle = [], [], []
     running_on: dict[int, list[str]] = {}
     for i, k in running:

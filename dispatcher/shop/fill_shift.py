@@ -152,7 +152,7 @@ def fill_shop_shift(shop: Shop, *, maximize: bool = False, extra_must_run: Itera
         # changeovers priced in run order (dispatcher.shop.fill_runs)
         from .fill_runs import fill_with_changeovers
         return fill_with_changeovers(shop, extra_must_run=extra_must_run, time_limit=time_limit,
-                                     source=source)
+                                     source=source, cancel=cancel, progress=progress)
     values_all, allowed_all = shop.matrix()
     hours_all = shop.hours_matrix()
     mindex = {m.id: k for k, m in enumerate(shop.machines)}

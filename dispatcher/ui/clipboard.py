@@ -94,7 +94,7 @@ def copy_block(shop: Shop, rows: list[int], cols: list[int], with_names: bool = 
         jid = shop.jobs[i].id
         cells = []
         for k in cols:
-            v = shop.grid.get((jid, shop.machines[k].id))
+            v = shop.value(jid, shop.machines[k].id)
             cells.append("x" if v is None else fmt(v, 10))
         lines.append("\t".join(([shop.jobs[i].name] if with_names else []) + cells))
     return "\n".join(lines) + "\n"

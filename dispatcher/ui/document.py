@@ -118,7 +118,12 @@ class ShopDocument(QObject):
         return self.shop.machines[col]
 
     def value_at(self, row: int, col: int) -> float | None:
-        return self.shop.grid.get((self.job_ids[row], self.machine_ids[col]))
+        """The pair's value: typed, else derived from the machine's changeover table."""
+        jid, mid = self.job_ids[row], self.machine_ids[col]
+        typed = self.shop.grid.get((jid, mid))
+        if typed is not None or not self.shop.changeover_tables:
+            return typed
+        return self.shop.derived_value(jid, mid)
 
     def pin_at(self, row: int, col: int) -> str | None:
         return self.pin_of.get((self.job_ids[row], self.machine_ids[col]))
