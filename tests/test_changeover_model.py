@@ -111,7 +111,7 @@ def test_document_round_trip_and_version():
     shop.machines[1].end_family = "mould A"
     text = dump_shop_text(shop)
     data = json.loads(text)
-    assert data["format_version"] == FORMAT_VERSION == 2
+    assert data["format_version"] == FORMAT_VERSION == 3
     back = parse_shop_text(text)
     assert back.changeover_tables == shop.changeover_tables
     assert [(m.mounted, m.end_family) for m in back.machines] == [
