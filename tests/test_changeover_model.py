@@ -211,3 +211,15 @@ def test_copy_shares_no_changeover_table_container():
     assert shop.changeover_tables[0].machines == ["M1", "M2"]
     assert shop.changeover_tables[0].families == ["mould A", "mould B"]
     assert shop.machines[0].mounted == "mould A"
+
+
+def test_typed_cannot_run_overrides_a_derived_value_and_is_saved():
+    shop = moulding_cell()
+    assert shop.value("J1", "M2") == 35.0                 # derived: mould B -> mould A
+    shop.set_value("J1", "M2", None)                       # typed "cannot run"
+    assert shop.value("J1", "M2") is None and shop.value_source("J1", "M2") == "typed"
+    assert not shop.matrix()[1][0, 1]
+    back = parse_shop_text(dump_shop_text(shop))
+    assert back.value("J1", "M2") is None and back.blocked == {("J1", "M2")}
+    back.set_value("J1", "M2", 7.0)
+    assert back.value("J1", "M2") == 7.0 and back.blocked == set()

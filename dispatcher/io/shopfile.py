@@ -296,7 +296,7 @@ def shop_from_dict(data: Any, source: str = "shop document", *, check: bool = Tr
     if total_slots > MAX_TOTAL_SLOTS:
         r.bad("field 'machines'", f"the machines have {total_slots:,} slots in all, more than the "
               f"limit of {MAX_TOTAL_SLOTS:,}")
-    shop.grid = _read_pairs(r, data.get("grid", {}), "grid", shop)
+    shop.grid = _read_pairs(r, data.get("grid", {}), "grid", shop, shop.blocked)
     shop.hours = _read_pairs(r, data.get("hours", {}), "hours", shop)
 
     pins = data.get("pins", [])
@@ -420,7 +420,8 @@ def _table_to_dict(t: ChangeoverTable) -> dict[str, Any]:
             "changes": changes, "from_empty": empty}
 
 
-def _read_pairs(r: _Reader, block: Any, field: str, shop: Shop) -> dict[tuple[str, str], float]:
+def _read_pairs(r: _Reader, block: Any, field: str, shop: Shop,
+                nulls: set[tuple[str, str]] | None = None) -> dict[tuple[str, str], float]:
     out: dict[tuple[str, str], float] = {}
     if not isinstance(block, dict):
         r.bad(f"field '{field}'", f"expected an object job id -> {{machine id: number}}, got {_kind(block)}")
@@ -432,6 +433,8 @@ def _read_pairs(r: _Reader, block: Any, field: str, shop: Shop) -> dict[tuple[st
             continue
         for mid, v in row.items():
             if v is None:
+                if nulls is not None and shop.changeover_tables:
+                    nulls.add((jid, mid))   # typed "cannot run" (matters with changeover tables)
                 continue  # cannot run
             if isinstance(v, bool) or not isinstance(v, (int, float)) or not math.isfinite(v):
                 r.bad(f"{field}, {shop.describe_job(jid)}, {shop.describe_machine(mid)}",
@@ -542,7 +545,8 @@ def shop_to_dict(shop: Shop) -> dict[str, Any]:
         order = {j.id: i for i, j in enumerate(shop.jobs)}
         morder = {m.id: i for i, m in enumerate(shop.machines)}
         for (jid, mid) in sorted(d, key=lambda k: (order.get(k[0], 1 << 30), morder.get(k[1], 1 << 30))):
-            out.setdefault(jid, {})[mid] = json_number(d[(jid, mid)])
+            v = d[(jid, mid)]
+            out.setdefault(jid, {})[mid] = None if v is None else json_number(v)
         return out
 
     families = uses_changeovers(shop)
@@ -567,7 +571,8 @@ def shop_to_dict(shop: Shop) -> dict[str, Any]:
             "state": j.state, "machine": j.machine, "since": _stamp(j.since),
             "run_hours": opt(j.run_hours), "move_penalty": opt(j.move_penalty),
             **({"family": j.family} if families else {})} for j in shop.jobs],
-        "grid": pairs(shop.grid),
+        "grid": pairs({**shop.grid, **{b: None for b in shop.blocked if b not in shop.grid}}
+                      if families else shop.grid),
         "hours": pairs(shop.hours),
         "pins": [{"job": p.job, "machine": p.machine, "kind": p.kind, "note": p.note}
                  for p in shop.pins],

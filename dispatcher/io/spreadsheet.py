@@ -152,12 +152,18 @@ def import_table(table: GridTable, shop: Shop | None = None, *, name: str = "") 
         for k, mn in enumerate(table.machines):
             mid = machines[mn].id
             old = out.grid.get((jid, mid))
+            derived = None
+            if old is None and out.changeover_tables and (jid, mid) not in out.blocked:
+                derived = old = out.derived_value(jid, mid)   # what the shop shows there
             new = float(table.values[i, k]) if table.allowed[i, k] else None
             if old != new:
                 if new is None:
-                    del out.grid[(jid, mid)]
+                    out.grid.pop((jid, mid), None)
+                    if derived is not None:
+                        out.blocked.add((jid, mid))
                 else:
                     out.grid[(jid, mid)] = new
+                    out.blocked.discard((jid, mid))
                 if jn not in report.added_jobs and mn not in report.added_machines:
                     report.changed_cells.append((jn, mn, old, new))
     in_table_j, in_table_m = set(table.jobs), set(table.machines)

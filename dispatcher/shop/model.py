@@ -225,7 +225,8 @@ class Shop:
     ``changeover_tables`` price changeovers between setup families: where a job has a
     family and a machine a table, the value of the pair is derived from the table (the
     change from what the machine has mounted to the job's family); a value typed into
-    ``grid`` overrides the derived one (:meth:`value_source` tells which).
+    ``grid`` overrides the derived one (:meth:`value_source` tells which); ``blocked``
+    holds the pairs typed as "cannot run", which overrides a derived value too.
     """
 
     name: str = ""
@@ -241,6 +242,7 @@ class Shop:
     plan_in_force: dict[str, list[str]] = field(default_factory=dict)
     crew: Crew = field(default_factory=Crew)
     changeover_tables: list[ChangeoverTable] = field(default_factory=list)
+    blocked: set[tuple[str, str]] = field(default_factory=set)
 
     # ---- look-ups -------------------------------------------------------------------
     def job(self, job_id: str) -> Job:
@@ -300,7 +302,7 @@ class Shop:
 
     def value_source(self, job_id: str, machine_id: str) -> str | None:
         """``"typed"`` (in the grid), ``"derived"`` (from the changeover table) or None."""
-        if (job_id, machine_id) in self.grid:
+        if (job_id, machine_id) in self.grid or (job_id, machine_id) in self.blocked:
             return "typed"
         if self.derived_value(job_id, machine_id) is not None:
             return "derived"
@@ -328,7 +330,137 @@ class Shop:
         """Value of a pair: typed in the grid, else derived from the changeover table; None
         when the machine cannot run the job."""
         typed = self.grid.get((job_id, machine_id))
-        if typed is not None or not self.changeover_tables:
+        if typed is not None or not self.changeover_tables or (job_id, machine_id) in self.blocked:
+            return typed
+        return self.derived_value(job_id, machine_id)
+
+    def matrix(self) -> np.ndarray:
+        """``(len(families) + 1) x len(families)``: the rows in family order, then the
+        "nothing mounted" row; NaN where a change is not allowed."""
+        rows = [*self.families, None]
+        return np.array([[self.changes.get((a, b), np.nan) for b in self.families] for a in rows],
+                        dtype=float).reshape(len(rows), len(self.families))
+
+
+@dataclass
+class Shop:
+    """A whole shop: jobs, machines, the grid of values, pins and the plan in force.
+
+    ``grid`` maps ``(job id, machine id)`` to a value >= 0; a missing pair means the machine
+    cannot run the job. ``hours`` optionally maps pairs to run hours (overriding
+    ``job.run_hours * machine.speed_factor``). ``plan_in_force`` maps a machine id to the
+    job ids it was given by the decision currently in force (empty when none recorded).
+    ``crew`` holds the operators (empty: plans ignore staffing, as for a plain grid).
+
+    ``changeover_tables`` price changeovers between setup families: where a job has a
+    family and a machine a table, the value of the pair is derived from the table (the
+    change from what the machine has mounted to the job's family); a value typed into
+    ``grid`` overrides the derived one (:meth:`value_source` tells which); ``blocked``
+    holds the pairs typed as "cannot run", which overrides a derived value too.
+    """
+
+    name: str = ""
+    unit: Unit = field(default_factory=Unit)
+    shift: Shift = field(default_factory=Shift)
+    move_penalty: float = 0.0
+    description: str = ""
+    jobs: list[Job] = field(default_factory=list)
+    machines: list[Machine] = field(default_factory=list)
+    grid: dict[tuple[str, str], float] = field(default_factory=dict)
+    pins: list[Pin] = field(default_factory=list)
+    hours: dict[tuple[str, str], float] = field(default_factory=dict)
+    plan_in_force: dict[str, list[str]] = field(default_factory=dict)
+    crew: Crew = field(default_factory=Crew)
+    changeover_tables: list[ChangeoverTable] = field(default_factory=list)
+    blocked: set[tuple[str, str]] = field(default_factory=set)
+
+    # ---- look-ups -------------------------------------------------------------------
+    def job(self, job_id: str) -> Job:
+        """The job with this id (KeyError if none)."""
+        for j in self.jobs:
+            if j.id == job_id:
+                return j
+        raise KeyError(f"no job with id {job_id!r}")
+
+    def machine(self, machine_id: str) -> Machine:
+        """The machine with this id (KeyError if none)."""
+        for m in self.machines:
+            if m.id == machine_id:
+                return m
+        raise KeyError(f"no machine with id {machine_id!r}")
+
+    def job_by_name(self, name: str) -> Job:
+        for j in self.jobs:
+            if j.name == name:
+                return j
+        raise KeyError(f"no job named {name!r}")
+
+    def machine_by_name(self, name: str) -> Machine:
+        for m in self.machines:
+            if m.name == name:
+                return m
+        raise KeyError(f"no machine named {name!r}")
+
+    def job_names(self) -> list[str]:
+        return [j.name for j in self.jobs]
+
+    def machine_names(self) -> list[str]:
+        return [m.name for m in self.machines]
+
+    # ---- changeovers ------------------------------------------------------------------
+    def table_of(self, machine_id: str) -> ChangeoverTable | None:
+        """The changeover table the machine belongs to (None: its values are typed only)."""
+        for t in self.changeover_tables:
+            if machine_id in t.machines:
+                return t
+        return None
+
+    def has_families(self) -> bool:
+        """True when the shop prices changeovers (some job has a family and a table exists)."""
+        return bool(self.changeover_tables) and any(j.family is not None for j in self.jobs)
+
+    def derived_value(self, job_id: str, machine_id: str) -> float | None:
+        """The change from the machine's mounted family to the job's family, from its table.
+
+        None when the job has no family, the machine no table, or the change is not allowed.
+        """
+        family = self.job(job_id).family
+        table = self.table_of(machine_id)
+        if family is None or table is None:
+            return None
+        return table.change(self.machine(machine_id).mounted, family)
+
+    def value_source(self, job_id: str, machine_id: str) -> str | None:
+        """``"typed"`` (in the grid), ``"derived"`` (from the changeover table) or None."""
+        if (job_id, machine_id) in self.grid or (job_id, machine_id) in self.blocked:
+            return "typed"
+        if self.derived_value(job_id, machine_id) is not None:
+            return "derived"
+        return None
+
+    def mark_running(self, job_id: str, machine_id: str, since: datetime | None = None) -> None:
+        """The job starts on the machine: the machine's mounted family becomes the job's."""
+        job, machine = self.job(job_id), self.machine(machine_id)
+        job.state, job.machine, job.since = RUNNING, machine.id, since
+        if job.family is not None:
+            machine.mounted = job.family
+
+    def mark_done(self, job_id: str) -> None:
+        """The job is done; the machine it ran on keeps the job's family mounted."""
+        job = self.job(job_id)
+        if job.machine is not None and job.family is not None:
+            try:
+                self.machine(job.machine).mounted = job.family
+            except KeyError:
+                pass
+        job.state, job.machine, job.since = DONE, None, None
+
+    # ---- the grid --------------------------------------------------------------------
+    def value(self, job_id: str, machine_id: str) -> float | None:
+        """Value of a pair: typed in the grid, else derived from the changeover table; None
+        when the machine cannot run the job."""
+        typed = self.grid.get((job_id, machine_id))
+        if typed is not None or not self.changeover_tables or (job_id, machine_id) in self.blocked:
             return typed
         return self.derived_value(job_id, machine_id)
 
@@ -338,12 +470,15 @@ class Shop:
         self.machine(machine_id)
         if value is None:
             self.grid.pop((job_id, machine_id), None)
+            if self.derived_value(job_id, machine_id) is not None:
+                self.blocked.add((job_id, machine_id))   # typed "cannot run" over the table
             return
         value = float(value)
         if not math.isfinite(value) or value < 0:
             raise ValueError(f"value {value!r} for job {job_id!r}, machine {machine_id!r} "
                              "must be a finite number >= 0")
         self.grid[(job_id, machine_id)] = value
+        self.blocked.discard((job_id, machine_id))
 
     def matrix(self) -> tuple[np.ndarray, np.ndarray]:
         """``(values, allowed)`` over all jobs x all machines in list order (typed values
@@ -363,6 +498,10 @@ class Shop:
                         if v is not None:
                             values[i, k] = v
                             allowed[i, k] = True
+        for jid, mid in self.blocked:
+            i, k = jpos.get(jid), mpos.get(mid)
+            if i is not None and k is not None:
+                allowed[i, k] = False
         for (jid, mid), v in self.grid.items():
             i, k = jpos.get(jid), mpos.get(mid)
             if i is not None and k is not None:
@@ -418,6 +557,7 @@ class Shop:
             hours=dict(self.hours),
             plan_in_force={k: list(v) for k, v in self.plan_in_force.items()},
             crew=self.crew.copy(),
+            blocked=set(self.blocked),
             changeover_tables=[replace(t, machines=list(t.machines), families=list(t.families),
                                        changes=dict(t.changes)) for t in self.changeover_tables],
         )

@@ -267,6 +267,11 @@ def changeover_problems(shop: Shop) -> list[Problem]:
             if not _finite(v) or v < 0:
                 add(cell, f"value {v!r} must be a number >= 0 (leave the entry out when the "
                     "change is not allowed)")
+    job_ids = {j.id for j in shop.jobs}
+    for jid, mid in sorted(shop.blocked):
+        if jid not in job_ids or mid not in machine_ids:
+            add(f"grid, {shop.describe_job(jid)}, {shop.describe_machine(mid)}",
+                "a pair typed as cannot run names an unknown job or machine id")
     every_family = {f for t in shop.changeover_tables for f in t.families}
     for m in shop.machines:
         table = shop.table_of(m.id)

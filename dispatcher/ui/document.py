@@ -121,7 +121,7 @@ class ShopDocument(QObject):
         """The pair's value: typed, else derived from the machine's changeover table."""
         jid, mid = self.job_ids[row], self.machine_ids[col]
         typed = self.shop.grid.get((jid, mid))
-        if typed is not None or not self.shop.changeover_tables:
+        if typed is not None or not self.shop.changeover_tables or (jid, mid) in self.shop.blocked:
             return typed
         return self.shop.derived_value(jid, mid)
 
