@@ -32,7 +32,7 @@ from scipy.sparse import coo_array
 ROOT = Path(__file__).resolve().parent.parent
 sys.path.insert(0, str(ROOT))
 
-from dispatcher.engine import order_runs
+from dispatcher.engine import order_runs  # noqa: E402
 
 
 def data_dir() -> Path:
@@ -92,10 +92,12 @@ def main() -> int:
     if not (folder / "README.md").exists():
         print(f"TSPLIB asymmetric data not found at {folder}", file=sys.stderr)
         return 2
-    optima = {name: float(opt) for name, opt in
-              re.findall(r"^\|\s*(\w+)\.atsp\s*\|\s*\d+\s*\|\s*(\d+)\s*\|", (folder / "README.md").read_text(), re.MULTILINE)}
+    table = re.findall(r"^\|\s*(\w+)\.atsp\s*\|\s*\d+\s*\|\s*(\d+)\s*\|",
+                       (folder / "README.md").read_text(), re.MULTILINE)
+    optima = {name: float(opt) for name, opt in table}
     names = [n for n in optima if not args.only or n in args.only.split(",")]
-    print("CPU seconds per instance (process time, so other work on shared cores does not skew it), best of", max(1, args.repeat), "runs")
+    print("CPU seconds per instance (process time, so other work on shared cores does not skew it),",
+          "best of", max(1, args.repeat), "runs")
     print(f"{'instance':<9} {'n':>4} {'optimum':>8} {'ours s':>8} {'textbook s':>11} {'ratio':>7}  proven")
     ratios, ok = [], True
     for name in names:

@@ -154,9 +154,11 @@ def table(data):
 
 @pytest.mark.parametrize("edit,message", [
     (lambda d: table(d)["changes"]["mould A"].update({"mould B": -5}),
-     r"changeover table 'presses 80-200 t' \(#1\), change from 'mould A' to 'mould B': value -5\.0 must be a number >= 0"),
+     r"changeover table 'presses 80-200 t' \(#1\), change from 'mould A' to 'mould B': "
+     r"value -5\.0 must be a number >= 0"),
     (lambda d: table(d)["changes"]["mould A"].update({"mould B": "forty"}),
-     r"field 'changes', from 'mould A' to 'mould B': expected a number >= 0 \(or null: not allowed\), got the text 'forty'"),
+     r"field 'changes', from 'mould A' to 'mould B': expected a number >= 0 "
+     r"\(or null: not allowed\), got the text 'forty'"),
     (lambda d: table(d)["from_empty"].update({"mould A": True}),
      r"field 'from_empty', to 'mould A': expected a number"),
     (lambda d: table(d)["families"].append("mould A"),

@@ -15,7 +15,11 @@ from dispatcher.shop import Job, Machine, Pin, Shift, Shop, Unit
 #: Document-only keys of the top level (not model fields).
 DOCUMENT_ONLY = {"format", "format_version"}
 #: Model field -> document key where the two differ (docs/shop-format.md).
-RENAMED = {(Shift, "day"): "date"}
+RENAMED = {
+    (Shift, "day"): "date",
+    # pairs typed as "cannot run" are stored in the grid, as null
+    (Shop, "blocked"): "grid",
+}
 
 
 def _document_keys(cls) -> set[str]:

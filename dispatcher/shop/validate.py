@@ -232,7 +232,10 @@ def changeover_problems(shop: Shop) -> list[Problem]:
     machine's table is not an error: the job cannot run there (it waits, with the reason).
     """
     out: list[Problem] = []
-    add = lambda where, msg: out.append(Problem(where, msg))
+
+    def add(where: str, msg: str) -> None:
+        out.append(Problem(where, msg))
+
     machine_ids = {m.id for m in shop.machines}
     owner: dict[str, str] = {}
     for ident, n in Counter(t.id for t in shop.changeover_tables).items():
