@@ -98,7 +98,7 @@ def _rows(path: Path) -> list[list[object]]:
     except UnicodeDecodeError:
         raise JobListError("is not UTF-8 text", source=source) from None
     text = text.replace("\r\n", "\n").replace("\r", "\n")
-    return _bounded_rows(csv.reader(io.StringIO(text), delimiter=_sniff_delimiter(text)), source)
+    return _bounded_rows(csv.reader(io.StringIO(text), delimiter=_sniff_delimiter(text, source)), source)
 
 
 def read_job_list(path: str | os.PathLike, columns: Mapping[str, str] | None = None) -> list[JobRow]:
