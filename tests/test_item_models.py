@@ -1,8 +1,9 @@
 """Every item model of the app passes pytest-qt's ``qtmodeltester`` (Qt's own model checks:
 row and column counts, parents, indexes, data for every role, signals on change).
 
-The models: the shop grid (ui/grid_model.py), the what-if map (ui/whatif_view.py) and the
-decision list of the history dock (ui/history_panel.py). Each is checked empty, filled
+The models: the shop grid (ui/grid_model.py), the what-if map (ui/whatif_view.py), the
+decision list of the history dock (ui/history_panel.py) and the crew table
+(ui/crew_model.py). Each is checked empty, filled
 from an invented sample shop, and after a change.
 """
 
@@ -14,13 +15,14 @@ from dispatcher.history import HistoryStore
 from dispatcher.io.shopfile import load_shop, shop_to_dict
 from dispatcher.shop import solve_shop
 from dispatcher.shop.whatif import what_if_grid
+from dispatcher.ui.crew_model import CrewModel
 from dispatcher.ui.document import ShopDocument
 from dispatcher.ui.edits import SetPin
 from dispatcher.ui.grid_model import GridModel
 from dispatcher.ui.history_panel import DecisionListModel
 from dispatcher.ui.whatif_view import WhatIfModel
 
-ITEM_MODELS = (GridModel, WhatIfModel, DecisionListModel)
+ITEM_MODELS = (GridModel, WhatIfModel, DecisionListModel, CrewModel)
 
 
 @pytest.fixture
@@ -81,4 +83,20 @@ def test_decision_list_model(qtmodeltester, shop, tmp_path):
     assert model.rowCount() == 2
     qtmodeltester.check(model)
     model.set_decisions([])
+    qtmodeltester.check(model)
+
+
+def test_crew_model(qtmodeltester, samples):
+    from dispatcher.ui.edits import SetAuthorisations, SetOperatorField
+
+    doc = ShopDocument(load_shop(samples / "small_moulding_cell.dshop"))
+    model = CrewModel(doc)
+    qtmodeltester.check(model)  # no crew: no rows
+    doc.replace(load_shop(samples / "crewed_fabrication_cell.dshop"))
+    qtmodeltester.check(model)
+    doc.undo_stack.push(SetAuthorisations(doc, [(0, 1, True)], "authorise"))
+    doc.undo_stack.push(SetOperatorField(doc, 1, "attendance", "absent", "absent"))
+    qtmodeltester.check(model)
+    doc.undo_stack.undo()
+    doc.undo_stack.undo()
     qtmodeltester.check(model)

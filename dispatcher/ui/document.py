@@ -14,6 +14,7 @@ from pathlib import Path
 from PySide6.QtCore import QObject, Signal, Slot
 from PySide6.QtGui import QUndoStack
 
+from dispatcher.shop.crew import Authorisation
 from dispatcher.shop.model import MUST, MUST_NOT, Job, Machine, Pin, Shop
 
 
@@ -36,6 +37,7 @@ class ShopDocument(QObject):
     ``cells_changed(rows, cols)`` - grid values or pins of these (row, col) pairs changed.
     ``jobs_changed(rows)`` - per-job fields (rush, wait penalty, state) changed.
     ``machines_changed(cols)`` - per-machine fields (state, slots) changed.
+    ``crew_changed`` - operators, attendance, capacities or authorisations changed.
     ``edited`` - any change at all (the plan must be re-solved).
     ``path_changed`` / ``dirty_changed(bool)`` - for the window title.
     """
@@ -44,6 +46,7 @@ class ShopDocument(QObject):
     cells_changed = Signal(object, object)
     jobs_changed = Signal(object)
     machines_changed = Signal(object)
+    crew_changed = Signal()
     edited = Signal()
     path_changed = Signal()
     dirty_changed = Signal(bool)
@@ -155,6 +158,40 @@ class ShopDocument(QObject):
             setattr(machine, name, value)
         self.machines_changed.emit([col])
         self.edited.emit()
+
+    def _apply_authorisations(self, cells: list[tuple[int, int, bool]]) -> None:
+        """Give (True) or take (False) operator ``op``'s own authorisation for machine
+        ``col``; authorisations through a machine group are left as they are."""
+        crew = self.shop.crew
+        for op, col, on in cells:
+            oid, mid = crew.operators[op].id, self.machine_ids[col]
+            crew.authorisations = [a for a in crew.authorisations
+                                   if not (a.operator == oid and a.machine == mid)]
+            if on:
+                crew.authorisations.append(Authorisation(oid, machine=mid))
+        self.crew_changed.emit()
+        self.edited.emit()
+
+    def _restore_authorisations(self, authorisations: list) -> None:
+        self.shop.crew.authorisations = list(authorisations)
+        self.crew_changed.emit()
+        self.edited.emit()
+
+    def _apply_operator_field(self, op: int, field: str, value) -> None:
+        setattr(self.shop.crew.operators[op], field, value)
+        self.crew_changed.emit()
+        self.edited.emit()
+
+    def _insert_operator(self, index: int, operator) -> None:
+        self.shop.crew.operators.insert(index, operator)
+        self.crew_changed.emit()
+        self.edited.emit()
+
+    def _remove_operator(self, index: int):
+        operator = self.shop.crew.operators.pop(index)
+        self.crew_changed.emit()
+        self.edited.emit()
+        return operator
 
     def _apply_jobs_state(self, jobs: list[tuple[int, dict]]) -> None:
         for row, fields in jobs:

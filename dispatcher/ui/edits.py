@@ -178,3 +178,49 @@ class RemoveJob(QUndoCommand):
 
     def undo(self) -> None:
         self._doc._insert_job(self._row, self._saved)
+
+
+class SetAuthorisations(QUndoCommand):
+    """Give or take operators' own authorisations for machines (a click or a paste)."""
+
+    def __init__(self, doc: ShopDocument, cells: list[tuple[int, int, bool]], text: str):
+        super().__init__(text)
+        self._doc = doc
+        self._new = list(cells)
+        self._old = list(doc.shop.crew.authorisations)
+
+    def redo(self) -> None:
+        self._doc._apply_authorisations(self._new)
+
+    def undo(self) -> None:
+        self._doc._restore_authorisations(self._old)
+
+
+class SetOperatorField(QUndoCommand):
+    """Change one field of one operator (label, attendance, minding capacity)."""
+
+    def __init__(self, doc: ShopDocument, op: int, field: str, value: Any, text: str):
+        super().__init__(text)
+        self._doc, self._op, self._field = doc, op, field
+        self._new = value
+        self._old = getattr(doc.shop.crew.operators[op], field)
+
+    def redo(self) -> None:
+        self._doc._apply_operator_field(self._op, self._field, self._new)
+
+    def undo(self) -> None:
+        self._doc._apply_operator_field(self._op, self._field, self._old)
+
+
+class AddOperator(QUndoCommand):
+    """Add an operator at the end of the crew (undo takes them out again)."""
+
+    def __init__(self, doc: ShopDocument, operator, text: str):
+        super().__init__(text)
+        self._doc, self._operator = doc, operator
+
+    def redo(self) -> None:
+        self._doc._insert_operator(len(self._doc.shop.crew.operators), self._operator)
+
+    def undo(self) -> None:
+        self._doc._remove_operator(len(self._doc.shop.crew.operators) - 1)

@@ -52,6 +52,7 @@ class GridModel(QAbstractTableModel):
         super().__init__(parent)
         self._doc = doc
         self._plan: Plan | None = None
+        self._operators: dict[str, str] = {}   # machine name -> who minds it (crewed shops)
         self._planned: dict[int, int] = {}     # row -> machine col (newly dispatched)
         self._running: dict[int, int] = {}     # row -> machine col (already running)
         self._waiting: set[int] = set()
@@ -105,6 +106,12 @@ class GridModel(QAbstractTableModel):
             waiting = {rows[n] for n in plan.waiting_jobs if n in rows}
         touched = {(r, c) for r, c in self._planned.items()} ^ {(r, c) for r, c in planned.items()}
         self._plan, self._planned, self._running, self._waiting = plan, planned, running, waiting
+        operators = _operators_by_machine(plan)
+        if operators != self._operators:
+            self._operators = operators
+            if self._doc.n_machines():
+                self.headerDataChanged.emit(Qt.Orientation.Horizontal, FIRST_MACHINE_COL,
+                                            FIRST_MACHINE_COL + self._doc.n_machines() - 1)
         for r, c in touched:
             idx = self.index(r, FIRST_MACHINE_COL + c)
             self.dataChanged.emit(idx, idx, _PLAN_ROLES)
@@ -293,10 +300,13 @@ class GridModel(QAbstractTableModel):
             m = self._doc.machine_at(section - FIRST_MACHINE_COL)
             state = STATE_TEXT.get(m.state, m.state)
             slots = f" \u00d7{m.slots}" if m.slots != 1 else ""
+            who = self._operators.get(m.name)
             if role in (Qt.ItemDataRole.DisplayRole, Qt.ItemDataRole.AccessibleTextRole):
-                return f"{m.name}\n{state}{slots}"
+                return f"{m.name}\n{state}{slots}" + (f"\n{who}" if who else "")
             if role == Qt.ItemDataRole.ToolTipRole:
                 tip = f"{m.name}: {m.state}, takes {m.slots} job(s) per round"
+                if who:
+                    tip += f"\nOperator in the plan shown: {who}"
                 if m.state_note:
                     tip += f"\nNote: {m.state_note}"
                 return tip + "\nRight-click (or Shift+F10) for machine actions"
@@ -431,3 +441,15 @@ class GridModel(QAbstractTableModel):
         self.headerDataChanged.emit(Qt.Orientation.Horizontal, lo, hi)
         self.dataChanged.emit(self.index(0, lo), self.index(self.rowCount() - 1, hi),
                               [Qt.ItemDataRole.BackgroundRole, Qt.ItemDataRole.ToolTipRole])
+
+
+def _operators_by_machine(plan) -> dict[str, str]:
+    """Machine name -> the operator minding it in ``plan`` (empty without a crew)."""
+    staffing = getattr(plan, "staffing", None) if plan is not None else None
+    if not staffing:
+        return {}
+    out = {m: "unattended" for m in staffing.get("unattended_machines", [])}
+    for who, machines in staffing.get("minding", {}).items():
+        for m in machines:
+            out[m] = who
+    return out

@@ -32,6 +32,7 @@ from dispatcher.shop import MUST, MUST_NOT, Plan, Shop
 from dispatcher.shop.fill_shift import ShiftFill
 from dispatcher.ui import palette
 from dispatcher.ui.alternatives_tab import AlternativesTab
+from dispatcher.ui.crew_tab import CrewTab
 from dispatcher.ui.decision_flow import DecisionFlow
 from dispatcher.ui.document import ShopDocument
 from dispatcher.ui.files import FileController
@@ -108,6 +109,8 @@ class MainWindow(QMainWindow):
         self.tabs.addTab(self.whatif_tab.view, self.tr("&What-if map"))
         self.alternatives_tab = AlternativesTab(self)
         self.tabs.addTab(self.alternatives_tab.view, self.tr("&Alternatives"))
+        self.crew_tab = CrewTab(self)
+        self.tabs.addTab(self.crew_tab.view, "C&rew")
         self.history_dock = HistoryDock(self)
         self.addDockWidget(Qt.DockWidgetArea.BottomDockWidgetArea, self.history_dock)
         self.history_dock.hide()
@@ -121,6 +124,13 @@ class MainWindow(QMainWindow):
         self.resize(1280, 760)
         self.view.setFocus()
         self.request_solve()
+
+    def _paste(self) -> None:
+        """Edit > Paste: into the crew table on the Crew tab, else into the grid."""
+        if self.crew_tab.is_current():
+            self.crew_tab.paste()
+        else:
+            self.edits.paste()
 
     @property
     def messenger(self) -> Messenger:
@@ -172,7 +182,7 @@ class MainWindow(QMainWindow):
         self.act_copy = self._action("&Copy", self.edits.copy, S.Copy, "Copy the selected values")
         self.act_copy_names = self._action("Copy with &names", lambda: self.edits.copy(True), "Ctrl+Shift+C",
                                            "Copy the selection with job and machine names")
-        self.act_paste = self._action("&Paste", self.edits.paste, S.Paste,
+        self.act_paste = self._action("&Paste", self._paste, S.Paste,
                                       "Paste a tab-separated block from a spreadsheet")
         self.act_cannot = self._action("Mark &cannot run", self.edits.cannot_run, S.Delete,
                                        "The machine cannot run the job (selected cells)")

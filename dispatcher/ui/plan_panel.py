@@ -147,6 +147,36 @@ class PlanPanel(QWidget):
         self.cancel.setVisible(False)
         self.status.setText("Solve cancelled; the plan shown is out of date (edit or F5 to re-solve)")
 
+    def _crew_section(self, staffing: dict) -> None:
+        """Who is short, which running machine has nobody, whose authorisation runs out."""
+        lines = []
+        for r in staffing.get("unstaffed_running", []):
+            lines.append((f"{palette.MARK_FORBIDDEN} {r['machine']}",
+                          f"runs {r['job']} with no qualified operator present",
+                          "Stop it only by the site's procedure: the plan never stops a "
+                          "running machine"))
+        shortage = staffing.get("shortage")
+        if shortage:
+            lines.append((f"{palette.MARK_RUSH} short of operators",
+                          f"{shortage['waiting']} job(s) wait for an operator", shortage["text"]))
+        for w in staffing.get("expiring", []):
+            lines.append((f"{palette.MARK_RUSH} {w['operator']}",
+                          f"authorisation ends {w['expires']}", w["text"]))
+        for who in staffing.get("operators_not_yet_here", []):
+            lines.append((who, "not here yet", f"{who} arrives later in the shift"))
+        for who in staffing.get("operators_absent", []):
+            lines.append((who, "absent", f"{who} is absent this shift"))
+        crew = QTreeWidgetItem(self.tree, [f"Crew ({len(staffing.get('operators_present', []))} "
+                                           "present)", "", ""])
+        crew.setFirstColumnSpanned(True)
+        if not lines:
+            QTreeWidgetItem(crew, ["every machine in the plan is staffed", "", ""])
+        for first, second, tip in lines:
+            item = QTreeWidgetItem(crew, [first, second, ""])
+            item.setToolTip(0, tip)
+            item.setToolTip(1, tip)
+        crew.setExpanded(True)
+
     def show_plan(self, plan: Plan | ShiftFill | None, unit: str, seconds: float = 0.0,
                   machine_order: list[str] | None = None) -> None:
         self._unit = unit
@@ -187,6 +217,12 @@ class PlanPanel(QWidget):
 
         entries_by_machine = machine_entries(plan, machine_order)
         hours = shift_hours(plan)
+        staffing = getattr(plan, "staffing", None)
+        minder = {}
+        if staffing:
+            minder = {m: "unattended" for m in staffing.get("unattended_machines", [])}
+            for who, ms in staffing.get("minding", {}).items():
+                minder.update({m: who for m in ms})
         machines = QTreeWidgetItem(self.tree, [f"Machines ({len(entries_by_machine)})", "", ""])
         machines.setFirstColumnSpanned(True)
         for machine, entries in entries_by_machine:
@@ -200,7 +236,10 @@ class PlanPanel(QWidget):
                     item = QTreeWidgetItem(machines, [f"   {n}.", mark + job, fmt(value)])
                     item.setToolTip(0, f"Position {n} in {machine}'s run order")
                 else:
-                    item = QTreeWidgetItem(machines, [machine, mark + job, fmt(value)])
+                    label = f"{machine} ({minder[machine]})" if machine in minder else machine
+                    item = QTreeWidgetItem(machines, [label, mark + job, fmt(value)])
+                    if machine in minder:
+                        item.setToolTip(0, f"{machine} is minded by {minder[machine]} in this plan")
                 item.setTextAlignment(2, Qt.AlignmentFlag.AlignRight | Qt.AlignmentFlag.AlignVCenter)
                 item.setToolTip(2, f"Value of {job} on {machine} ({unit})"
                                 + (" - already running, not counted in the total" if running else ""))
@@ -225,6 +264,8 @@ class PlanPanel(QWidget):
             more.setToolTip(0, "Long lists are cut here to keep the window quick; every job's "
                                "place or reason is in the grid")
         waiting.setExpanded(True)
+        if staffing:
+            self._crew_section(staffing)
         idle = QTreeWidgetItem(self.tree, [f"Idle machines ({len(plan.idle_machines)})", "", ""])
         idle.setFirstColumnSpanned(True)
         for m in plan.idle_machines:
