@@ -58,7 +58,7 @@ def atomic_write(path: str | os.PathLike, write: Callable[[Path], None], *,
     is removed and ``path`` is left as it was.
     """
     path = Path(path)
-    folder = path.parent if str(path.parent) else Path(".")
+    folder = path.parent  # "." for a bare file name
     fd, tmp_name = tempfile.mkstemp(prefix=f".{path.name}.", suffix=suffix, dir=folder)
     os.close(fd)
     tmp = Path(tmp_name)

@@ -150,15 +150,24 @@ def test_keeps_the_permissions_of_the_file_it_replaces(tmp_path):
     assert stat.S_IMODE(target.stat().st_mode) == 0o640
 
 
-def test_a_new_file_gets_the_usual_mode_minus_the_umask(tmp_path):
-    old = os.umask(0o027)
+@pytest.mark.parametrize("umask, mode", [(0o027, 0o640), (0o022, 0o644), (0o002, 0o664)])
+def test_a_new_file_gets_the_usual_mode_minus_the_umask(tmp_path, umask, mode):
+    old = os.umask(umask)
     try:
         atomic_write_bytes(tmp_path / "a.dshop", b"x")
-        assert os.umask(0o027) == 0o027  # the umask is left as it was
+        assert os.umask(umask) == umask  # the umask is left as it was
     finally:
         os.umask(old)
-    # 0o666 & ~0o027 (mkstemp alone would give 0o600)
-    assert stat.S_IMODE((tmp_path / "a.dshop").stat().st_mode) == 0o640
+    # 0o666 & ~umask, as open() would create it (mkstemp alone would give 0o600)
+    assert stat.S_IMODE((tmp_path / "a.dshop").stat().st_mode) == mode
+
+
+def test_a_bare_file_name_is_written_in_the_current_folder(tmp_path, monkeypatch):
+    monkeypatch.chdir(tmp_path)
+    seen = []
+    atomic_write("plan.json", lambda tmp: (seen.append(tmp), tmp.write_bytes(b"{}")))
+    assert (tmp_path / "plan.json").read_bytes() == b"{}"
+    assert seen[0].name.endswith(".tmp") and seen[0].parent.resolve() == tmp_path.resolve()
 
 
 def test_folder_sync_failures_are_ignored_and_the_folder_closed(tmp_path, monkeypatch):

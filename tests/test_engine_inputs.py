@@ -42,6 +42,7 @@ OBJECTIVES = ("total", "maximize", "bottleneck")
      r"maximize=True conflicts with objective='bottleneck'"),
 ])
 def test_bad_input_messages(kwargs, message):
+    kwargs = dict(kwargs)  # the parameter table is shared by every run of the test
     costs = kwargs.pop("costs")
     with pytest.raises(DispatchInputError, match=message):
         solve(costs, **kwargs)

@@ -1,0 +1,67 @@
+#!/usr/bin/env bash
+# Mutation testing with mutmut over the engine, the history store and atomic writes.
+#
+# Usage: tools/mutation.sh TARGET [MAX_CHILDREN]
+#   TARGET: certificate | atomic | schema | engine | history | a path under dispatcher/
+#   MAX_CHILDREN: parallel test runs (default 1: the cores are shared)
+#
+# Not part of CI (slow: every mutant re-runs the related tests). It works on a scratch
+# copy of the checkout under ${MUTATION_DIR:-/tmp/dispatcher-mutation}/TARGET, so the
+# working tree never holds mutants. At the end it prints mutmut's results (one line per
+# surviving mutant) and a summary line "killed K of N, survived S (P %)".
+# Inspect a survivor with: cd SCRATCH && mutmut show NAME
+set -euo pipefail
+
+target=${1:?usage: tools/mutation.sh certificate|atomic|schema|engine|history|PATH [MAX_CHILDREN]}
+children=${2:-1}
+root=$(cd "$(dirname "$0")/.." && pwd)
+python=${PYTHON:-python}
+mutmut=${MUTMUT:-mutmut}
+
+engine_tests="tests/test_engine_properties.py tests/test_engine_inputs.py
+tests/test_engine_reference.py tests/test_structured_square.py tests/test_verify_refuses.py
+tests/test_ranking.py tests/test_ranking_slots.py tests/test_whatif.py
+tests/test_redispatch.py tests/test_fill_shift.py"
+history_tests=$(cd "$root" && ls tests/test_history_*.py)
+case "$target" in
+  certificate) mutate=dispatcher/engine/certificate.py
+               tests="tests/test_verify_refuses.py tests/test_structured_square.py
+tests/test_engine_inputs.py tests/test_whatif.py" ;;
+  atomic)      mutate=dispatcher/atomic.py; tests="tests/test_atomic.py" ;;
+  schema)      mutate=dispatcher/history/schema.py; tests="$history_tests" ;;
+  engine)      mutate="dispatcher/engine/*"; tests="$engine_tests" ;;
+  history)     mutate="dispatcher/history/*"; tests="$history_tests" ;;
+  dispatcher/*) mutate=$target; tests="$engine_tests $history_tests tests/test_atomic.py" ;;
+  *) echo "unknown target: $target" >&2; exit 2 ;;
+esac
+
+scratch=${MUTATION_DIR:-/tmp/dispatcher-mutation}/$(echo "$target" | tr '/*' '__')
+rm -rf "$scratch"
+mkdir -p "$scratch"
+(cd "$root" && git ls-files -co --exclude-standard -z | tar --null -cf - -T -) | tar -xf - -C "$scratch"
+cd "$scratch"
+# mutmut reads [tool.mutmut] from pyproject.toml, else [mutmut] from setup.cfg.
+{
+  echo "[mutmut]"
+  echo "source_paths=dispatcher"
+  echo "only_mutate=$mutate"
+  echo "pytest_add_cli_args=-p no:cacheprovider -x -q"
+  echo "pytest_add_cli_args_test_selection="
+  for t in $tests; do echo "    $t"; done
+} > setup.cfg
+export QT_QPA_PLATFORM=offscreen
+"$mutmut" run --max-children "$children" || true
+"$mutmut" results || true
+"$python" - <<'PY'
+import json, pathlib
+counts = {}
+for meta in pathlib.Path("mutants").rglob("*.meta"):
+    for name, code in json.loads(meta.read_text()).get("exit_code_by_key", {}).items():
+        kind = ("killed" if code not in (0, None, 33, 34) else
+                "survived" if code == 0 else "other")
+        counts[kind] = counts.get(kind, 0) + 1
+total = sum(counts.values())
+survived = counts.get("survived", 0)
+print(f"killed {counts.get('killed', 0)} of {total}, survived {survived} "
+      f"({100.0 * survived / max(total, 1):.1f} %), other {counts.get('other', 0)}")
+PY
