@@ -72,7 +72,6 @@ def test_redispatch_text_names_lockout_tagout_for_the_machine_down(tmp_path, cap
 
 def test_breakdown_dialog_shows_every_caution(qtbot, tmp_path, monkeypatch):
     from PySide6.QtWidgets import QLabel
-
     from ui_support import make_window
     window = make_window(qtbot, tmp_path, monkeypatch, SAMPLE)
     shop = window.doc.shop

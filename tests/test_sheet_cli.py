@@ -11,16 +11,15 @@ import datetime as dt
 import re
 from pathlib import Path
 
+import pypdf
+import PySide6.QtGui  # noqa: F401  (a runtime dependency: a missing one must fail, not skip)
 import pytest
 
-pypdf = pytest.importorskip("pypdf")
-pytest.importorskip("PySide6.QtGui")
-
-from dispatcher.cli import main  # noqa: E402
-from dispatcher.io.shopfile import save_shop, shop_to_dict  # noqa: E402
-from dispatcher.sheet.build import build_sheet  # noqa: E402
-from dispatcher.sheet.content import SAFETY_CAUTIONS, sheet_text  # noqa: E402
-from dispatcher.shop import (  # noqa: E402
+from dispatcher.cli import main
+from dispatcher.io.shopfile import save_shop, shop_to_dict
+from dispatcher.sheet.build import build_sheet
+from dispatcher.sheet.content import SAFETY_CAUTIONS, sheet_text
+from dispatcher.shop import (
     DOWN,
     MAINTENANCE,
     MUST,
@@ -199,7 +198,7 @@ def test_cli_missing_output_folder(tmp_path, capsys):
 class TestRecordedDecision:
     @pytest.fixture
     def recorded(self, tmp_path):
-        history = pytest.importorskip("dispatcher.history")
+        from dispatcher import history
         shop = invented_shop()
         # one job per machine: the history (as of this writing) refuses a plan that gives
         # a machine two jobs, which a two-slot machine would
@@ -211,7 +210,7 @@ class TestRecordedDecision:
         plan = solve_shop(shop)
         number = store.record(shop_to_dict(shop), plan.to_json(), by="early-shift lead",
                               reason="shift start", time=dt.datetime(2026, 3, 9, 5, 58,
-                                                                     tzinfo=dt.timezone.utc))
+                                                                     tzinfo=dt.UTC))
         return shop, doc, db, number, plan
 
     def test_sheet_of_a_recorded_decision(self, recorded, tmp_path, capsys):

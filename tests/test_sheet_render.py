@@ -12,15 +12,16 @@ import re
 import sys
 from pathlib import Path
 
+import pypdf
+import PySide6.QtGui  # noqa: F401  (a runtime dependency)
 import pytest
+from PySide6.QtCore import (
+    QLocale,
+    QMarginsF,
+)
+from PySide6.QtGui import QPageLayout, QPageSize
 
-pytest.importorskip("PySide6.QtGui")
-pypdf = pytest.importorskip("pypdf")
-
-from PySide6.QtCore import QLocale  # noqa: E402
-from PySide6.QtGui import QPageSize  # noqa: E402
-
-from dispatcher.sheet.content import (  # noqa: E402
+from dispatcher.sheet.content import (
     SAFETY_CAUTIONS,
     SheetContent,
     SheetDownMachine,
@@ -29,7 +30,8 @@ from dispatcher.sheet.content import (  # noqa: E402
     SheetTotals,
     SheetWaitingJob,
 )
-from dispatcher.sheet.render import (  # noqa: E402
+from dispatcher.sheet.render import (
+    MARGIN_MM,
     SheetRenderError,
     ensure_gui_application,
     page_size_for,
@@ -201,13 +203,19 @@ def test_printer_and_pdf_share_the_layout(app, tmp_path):
     printer = QPrinter(QPrinter.PrinterMode.HighResolution)
     printer.setOutputFormat(QPrinter.OutputFormat.PdfFormat)
     printer.setOutputFileName(str(tmp_path / "printer.pdf"))
-    printer.setPageSize(QPageSize(QPageSize.PageSizeId.Letter))
+    # The same page layout as write_pdf (paper and margins): the layout is the caller's.
+    printer.setPageLayout(QPageLayout(QPageSize(QPageSize.PageSizeId.Letter),
+                                      QPageLayout.Orientation.Portrait,
+                                      QMarginsF(MARGIN_MM, MARGIN_MM, MARGIN_MM, MARGIN_MM),
+                                      QPageLayout.Unit.Millimeter))
     assert print_sheet(content, printer) == pages
     del printer
     ours, theirs = pdf_pages(direct), pdf_pages(tmp_path / "printer.pdf")
     assert len(ours) == len(theirs) == pages
     for i in range(pages):
         assert f"Page {i + 1} of {pages}" in theirs[i]
+        # the same words on the same page, whichever way the page was produced
+        assert theirs[i].split() == ours[i].split(), f"page {i + 1} differs"
 
 
 def test_print_preview_paints_every_page(app):

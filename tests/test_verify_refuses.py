@@ -14,15 +14,18 @@ import dataclasses
 
 import numpy as np
 import pytest
+from helpers_reference import check_result, scipy_reference
 from hypothesis import given, settings
 from hypothesis import strategies as st
 
 from dispatcher.engine import fill_shift, solve
-from dispatcher.engine.certificate import Certificate, CertificateError, potentials_from_plan
+from dispatcher.engine.certificate import (
+    Certificate,
+    CertificateError,
+    potentials_from_plan,
+)
 from dispatcher.engine.fill_shift import _plan_total as shift_total
 from dispatcher.engine.fill_shift import run_order
-
-from helpers_reference import check_result, scipy_reference
 
 
 def _replace_certificate(result, **fields):
