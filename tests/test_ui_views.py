@@ -82,8 +82,16 @@ def test_alternatives_are_ranked_and_one_can_be_put_in_force(qtbot, grid_window,
     assert len(plans) == 4
     totals = [p.total for p in plans]
     assert totals == sorted(totals) and totals[0] == pytest.approx(window.plan.total)
-    # The second best is at least as dear as the cheapest plan that differs in one pair,
-    # which is the least positive what-if extra (checked by forced scipy solves above).
+    # The second best plan costs exactly the plan's total plus the least extra of forcing a
+    # pair the plan does not use: it holds such a pair (as many pairs, a different set),
+    # and the best plan holding any one pair is a plan. Forced totals by scipy, as above.
+    values, allowed = window.doc.shop.matrix()
+    planned = {(window.doc.shop.job_names().index(a.job),
+                window.doc.shop.machine_names().index(a.machine)) for a in window.plan.assignments}
+    forced = [_forced_total(values, allowed, i, k) for i, k in zip(*np.nonzero(allowed))
+              if (i, k) not in planned]
+    least_extra = min(f for f in forced if f < BIG) - window.plan.total
+    assert totals[1] == pytest.approx(totals[0] + least_extra)
     assert len({frozenset((a.job, a.machine) for a in p.assignments) for p in plans}) == 4
     dialog = window.alternatives_tab.put_in_force(plans[1], 2)
     dialog.confirm("day-shift lead", "customer asked for the laser on WO-4102")

@@ -4,15 +4,20 @@ refused without touching the open document."""
 
 from __future__ import annotations
 
+import itertools
+
 import numpy as np
 import pytest
 from PySide6.QtCore import Qt
+from PySide6.QtGui import QGuiApplication
 
 from dispatcher.history import HistoryStore
 from dispatcher.io.shopfile import load_shop, shop_to_dict
 from dispatcher.shop import DOWN, solve_shop
+from dispatcher.shop.translate import build_problem
 from dispatcher.ui.decision import SAFETY_REMINDER
 from dispatcher.ui.grid_model import COL_HOURS, FIRST_MACHINE_COL, PlannedRole
+from helpers_reference import scipy_reference
 from ui_support import activate, make_window, reference_total, save_shot, wait_plan
 
 
@@ -146,8 +151,27 @@ def test_breakdown_that_strands_a_rush_job_still_offers_a_plan(qtbot, shop_windo
     col = shop.machine_names().index(rush_machine)
     dialog = window.decisions.machine_event("down", col)
     text = dialog.findChild(object, "proposalDiff").text()
-    if "Not every rush job can be placed" in text:
-        assert "rush flags stay set" in text
+    assert "Not every rush job can be placed" in text and "rush flags stay set" in text
+    # Brute force over machine choices: with the machine down, how many of the jobs that
+    # must run (rush, or pinned to a machine) fit at most; the proposal leaves exactly the
+    # others waiting, and names them.
+    values, allowed = shop.matrix()
+    allowed = allowed.copy()
+    allowed[:, col] = False
+    for p in shop.pins:
+        if p.kind == "must":
+            i = next(n for n, j in enumerate(shop.jobs) if j.id == p.job)
+            keep = allowed[i, [m.id for m in shop.machines].index(p.machine)]
+            allowed[i] = False
+            allowed[i, [m.id for m in shop.machines].index(p.machine)] = keep
+    pinned = {p.job for p in shop.pins if p.kind == "must"}
+    rush = [i for i, j in enumerate(shop.jobs) if (j.rush or j.id in pinned) and j.state == "waiting"]
+    most = max(sum(1 for i, k in zip(rush, pick) if k is not None and allowed[i, k])
+               for pick in itertools.product(*[[None, *np.flatnonzero(allowed[i])] for i in rush])
+               if len({k for k in pick if k is not None}) == sum(k is not None for k in pick))
+    waiting_rush = [shop.jobs[i].name for i in rush if shop.jobs[i].name in dialog.proposal.plan.waiting_jobs]
+    assert len(waiting_rush) == len(rush) - most >= 1
+    assert all(name in text for name in waiting_rush)
     dialog.confirm("night-shift lead")
     wait_plan(qtbot, window)
     assert shop.machines[col].state == DOWN
@@ -243,7 +267,8 @@ def test_switching_the_objective_re_solves(qtbot, grid_window):
         best = t
         break
     assert window.plan.bottleneck == pytest.approx(best)
-    assert total is not None
+    # and among plans within that bottleneck, the least total (scipy on those pairs)
+    assert window.plan.total == pytest.approx(total)
 
 
 def test_no_exception_escapes_during_a_session(qtbot, shop_window, samples, tmp_path):
@@ -252,14 +277,30 @@ def test_no_exception_escapes_during_a_session(qtbot, shop_window, samples, tmp_
         for objective in ("maximize", "bottleneck", "total"):
             window.set_objective(objective)
         window.view.setCurrentIndex(window.model.index(2, FIRST_MACHINE_COL + 1))
+        doc = window.doc
+        job, machine = doc.job_at(2), doc.machine_at(1)
+        value = doc.value_at(2, 1)
+        assert value is not None  # the cell has a setup value to take away below
         window.edits.pin("must")
+        assert doc.pin_at(2, 1) == "must"
+        others = [p for p in doc.shop.pins_of(job.id) if p.machine != machine.id]
+        assert [(p.job, p.machine, p.kind) for p in doc.shop.pins_of(job.id)
+                if p.machine == machine.id] == [(job.id, machine.id, "must")]
         window.edits.pin("must_not")
+        assert doc.pin_at(2, 1) == "must_not"
         window.edits.pin(None)
+        assert doc.pin_at(2, 1) is None and doc.shop.pins_of(job.id) == others
         window.edits.cannot_run()
+        assert doc.value_at(2, 1) is None and (job.id, machine.id) not in doc.shop.grid
+        QGuiApplication.clipboard().clear()
         window.edits.copy(True)
+        copied = QGuiApplication.clipboard().text()
+        assert job.name in copied and machine.name in copied
         window.edits.paste_text("")
         window.doc.undo_stack.undo()
+        assert doc.value_at(2, 1) == value  # the cannot-run edit undone
         window.doc.undo_stack.redo()
+        assert doc.value_at(2, 1) is None
         window.request_solve()
         window.runner.cancel()
         wait_plan(qtbot, window)
@@ -299,13 +340,26 @@ def test_breakdown_after_a_recorded_plan_redispatches_from_it(qtbot, tmp_path, m
     assert window.plan.total == pytest.approx(decision.plan["total"])
     assert "decision #2" in window.plan_panel.status.text()
     assert decision.diff_from_replaced is not None and decision.diff_from_replaced.from_id == 1
-    # Jobs placed in both plans and not on the broken machine stay put unless it pays:
-    # with the shop's move penalty, every moved job must have had a reason (its machine
-    # went down, or a cheaper total); at least most placements are unchanged.
+    # Jobs dispatched by the plan in force move only when it pays: the new plan plus the
+    # move penalties it pays is the optimum of the round with a move penalty on every
+    # other choice of a dispatched job (none for the jobs of the broken machine), by
+    # scipy's linear_sum_assignment on that problem (encoding in helpers_reference).
     before = {a.job: a.machine for a in in_force.assignments}
     after = {a["job"]: a["machine"] for a in decision.plan["assignments"]}
-    kept = sum(1 for j, m in before.items() if after.get(j) == m)
-    assert kept >= len(before) - 3
+    problem = build_problem(shop)
+    values, penalty = problem.values.copy(), problem.wait_penalty.copy()
+    paid = 0.0
+    for n in range(len(problem.rows)):
+        job = shop.jobs[problem.rows[n]]
+        if before.get(job.name) in (None, busy):
+            continue
+        move = job.move_penalty if job.move_penalty is not None else shop.move_penalty
+        values[n, [problem.machine_name(c) != before[job.name] for c in range(len(problem.columns))]] += move
+        penalty[n] += move
+        paid += move if after.get(job.name) != before[job.name] else 0.0
+    reference = scipy_reference(values, problem.allowed, penalty, problem.must_run)
+    assert reference.feasible
+    assert decision.plan["total"] + paid == pytest.approx(reference.total)
 
 
 def test_whole_shift_mode_fills_machines_within_their_hours(qtbot, tmp_path, monkeypatch, samples):
