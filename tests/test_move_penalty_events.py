@@ -26,7 +26,7 @@ from dispatcher.shop.translate import ShopInfeasibleError
 
 
 def best_by_enumeration(values, allowed, penalty, must, before, move, exempt=(), *,
-                        charge_waiting=True):
+                        charge_waiting=True, rush=None):
     """Least total over every plan (None: no plan places every must-run job), by brute
     force; ``before[i]`` is job i's machine in force (-1: none); jobs in ``exempt`` pay no
     move penalty (their machine went down). ``charge_waiting=False`` is the bug of a
@@ -47,10 +47,12 @@ def best_by_enumeration(values, allowed, penalty, must, before, move, exempt=(),
     extend(0, frozenset(), [])
     # The most jobs any plan places, must-run or not (every plan counts for the maximum).
     most = _most_placed(allowed)
+    plans = [p for p in plans if sum(c >= 0 for c in p) == most]
+    if rush is not None and plans:
+        top = max(sum(1 for i, c in enumerate(p) if c >= 0 and rush[i]) for p in plans)
+        plans = [p for p in plans if sum(1 for i, c in enumerate(p) if c >= 0 and rush[i]) == top]
     best = None
     for plan in plans:
-        if sum(c >= 0 for c in plan) != most:
-            continue
         total = 0.0
         for i, c in enumerate(plan):
             total += values[i, c] if c >= 0 else penalty[i]
@@ -161,18 +163,19 @@ def shop_case(case):
         all_allowed[:, down] = False
         exempt = tuple(i for i, k in enumerate(prev.machine_of_job) if k == down)
     penalties = np.r_[penalty, 0.0]
-    must = np.r_[np.zeros(n_jobs, bool), True]
+    must = np.zeros(n_jobs + 1, bool)  # a rush job is a priority, not a hard constraint
     before = np.r_[prev.machine_of_job, -1]
     moves = np.r_[move, 0.0]
-    return shop, events, (all_values, all_allowed, penalties, must, before, moves, exempt)
+    return shop, events, (all_values, all_allowed, penalties, must, before, moves, exempt), \
+        np.r_[np.zeros(n_jobs, bool), True]
 
 
 @pytest.mark.slow
 @settings(max_examples=300, deadline=None, suppress_health_check=[HealthCheck.too_slow])
 @given(shops_with_a_plan())
 def test_shop_rush_arrival_with_move_penalties_equals_brute_force(case):
-    shop, events, problem = shop_case(case)
-    expect = best_by_enumeration(*problem)
+    shop, events, problem, rush = shop_case(case)
+    expect = best_by_enumeration(*problem, rush=rush)
     try:
         out = redispatch_shop(shop, events)
     except ShopInfeasibleError:
