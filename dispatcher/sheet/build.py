@@ -16,6 +16,7 @@ import dataclasses
 import datetime as dt
 from typing import Any, Protocol
 
+from dispatcher.shop.staffed import operators_by_machine
 from dispatcher.shop import MUST, UP, Shop
 
 from .content import (
@@ -240,7 +241,7 @@ def build_sheet(shop: Shop, plan: Any, decision: Any | None = None, *,
     pinned = _must_pins(shop)
     order = order if order is not None else run_order(plan)
     staffing = getattr(plan, "staffing", None)
-    operator_of = _operators(staffing, shop)
+    operator_of = operators_by_machine(staffing)
     runs = _runs(plan)
     machines = []
     # A whole-shift plan says how many of each machine's hours it uses (as the app does).
@@ -332,17 +333,6 @@ def build_sheet(shop: Shop, plan: Any, decision: Any | None = None, *,
         staffed=staffing is not None,
         crew_notes=tuple(crew_notes(staffing)) if staffing is not None else (),
     )
-
-
-def _operators(staffing: dict | None, shop: Shop) -> dict[str, str]:
-    """Machine name -> who minds it ("unattended" for machines that need nobody)."""
-    if staffing is None:
-        return {}
-    out = {m: "unattended" for m in staffing.get("unattended_machines", [])}
-    for who, machines in staffing.get("minding", {}).items():
-        for m in machines:
-            out[m] = who
-    return out
 
 
 def crew_notes(staffing: dict) -> list[str]:

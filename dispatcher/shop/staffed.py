@@ -168,6 +168,17 @@ def _summary(shop, sp, x, label, unstaffed_running) -> dict:
     return out
 
 
+def operators_by_machine(staffing: dict | None) -> dict[str, str]:
+    """Machine name -> who minds it in a plan's staffing summary ("unattended" for
+    machines that need nobody); empty for a plan without a crew."""
+    if not staffing:
+        return {}
+    out = {m: "unattended" for m in staffing.get("unattended_machines", [])}
+    for who, machines in staffing.get("minding", {}).items():
+        out.update({m: who for m in machines})
+    return out
+
+
 def staffing_lines(staffing: dict) -> list[str]:
     """The staffing summary as lines of text (command line and printed sheet)."""
     lines = ["Crew:"]

@@ -11,6 +11,7 @@ from __future__ import annotations
 
 from PySide6.QtCore import QAbstractTableModel, QModelIndex, QPersistentModelIndex, Qt, Signal
 
+from dispatcher.shop.staffed import operators_by_machine
 from dispatcher.shop import DONE, DOWN, MAINTENANCE, MUST, MUST_NOT, RUNNING, UP, Plan
 from dispatcher.ui import palette
 from dispatcher.ui.document import ShopDocument
@@ -106,7 +107,7 @@ class GridModel(QAbstractTableModel):
             waiting = {rows[n] for n in plan.waiting_jobs if n in rows}
         touched = {(r, c) for r, c in self._planned.items()} ^ {(r, c) for r, c in planned.items()}
         self._plan, self._planned, self._running, self._waiting = plan, planned, running, waiting
-        operators = _operators_by_machine(plan)
+        operators = operators_by_machine(getattr(plan, "staffing", None))
         if operators != self._operators:
             self._operators = operators
             if self._doc.n_machines():
@@ -441,15 +442,3 @@ class GridModel(QAbstractTableModel):
         self.headerDataChanged.emit(Qt.Orientation.Horizontal, lo, hi)
         self.dataChanged.emit(self.index(0, lo), self.index(self.rowCount() - 1, hi),
                               [Qt.ItemDataRole.BackgroundRole, Qt.ItemDataRole.ToolTipRole])
-
-
-def _operators_by_machine(plan) -> dict[str, str]:
-    """Machine name -> the operator minding it in ``plan`` (empty without a crew)."""
-    staffing = getattr(plan, "staffing", None) if plan is not None else None
-    if not staffing:
-        return {}
-    out = {m: "unattended" for m in staffing.get("unattended_machines", [])}
-    for who, machines in staffing.get("minding", {}).items():
-        for m in machines:
-            out[m] = who
-    return out

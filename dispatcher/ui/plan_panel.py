@@ -18,6 +18,7 @@ from PySide6.QtWidgets import (
     QWidget,
 )
 
+from dispatcher.shop.staffed import operators_by_machine
 from dispatcher.shop import Plan
 from dispatcher.shop.fill_shift import ShiftFill
 from dispatcher.shop.plan import parts_text
@@ -218,11 +219,7 @@ class PlanPanel(QWidget):
         entries_by_machine = machine_entries(plan, machine_order)
         hours = shift_hours(plan)
         staffing = getattr(plan, "staffing", None)
-        minder = {}
-        if staffing:
-            minder = {m: "unattended" for m in staffing.get("unattended_machines", [])}
-            for who, ms in staffing.get("minding", {}).items():
-                minder.update({m: who for m in ms})
+        minder = operators_by_machine(staffing)
         machines = QTreeWidgetItem(self.tree, [f"Machines ({len(entries_by_machine)})", "", ""])
         machines.setFirstColumnSpanned(True)
         for machine, entries in entries_by_machine:
