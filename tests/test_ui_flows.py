@@ -243,8 +243,13 @@ def test_ctrl_1_to_5_switch_objective_and_mode(qtbot, open_window):
 
 
 def _open_menu(qtbot, before: set) -> QMenu:
-    menus = [m for m in QApplication.topLevelWidgets()
-             if isinstance(m, QMenu) and m.isVisible() and id(m) not in before]
+    def new_menus():
+        return [m for m in QApplication.topLevelWidgets()
+                if isinstance(m, QMenu) and m.isVisible() and id(m) not in before]
+
+    # A loaded machine may show the menu a few event-loop turns later: wait for it.
+    qtbot.waitUntil(lambda: len(new_menus()) >= 1, timeout=5000)
+    menus = new_menus()
     assert len(menus) == 1
     return menus[0]
 
