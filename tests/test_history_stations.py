@@ -40,3 +40,24 @@ def test_confirming_after_another_station_recorded_is_refused(qtbot, tmp_path, m
     assert window.messenger.messages == [] and shop.machines[col].state == DOWN
     latest = other.latest()
     assert (latest.id, latest.replaces, latest.based_on) == (2, 1, 1)
+
+
+def test_history_dock_shows_another_stations_decision_within_seconds(qtbot, tmp_path,
+                                                                     monkeypatch, samples):
+    from dispatcher.ui.history_dock import POLL_MS
+
+    window = make_window(qtbot, tmp_path, monkeypatch, samples / "small_moulding_cell.dshop")
+    window.show()
+    dock = window.history_dock
+    dock.toggleViewAction().trigger()
+    qtbot.waitUntil(dock.isVisible)
+    assert dock.panel.model.rowCount() == 0 and dock.poll_timer.isActive()
+    other = HistoryStore(tmp_path / "history.sqlite", station="B")
+    number = other.record(shop_to_dict(window.doc.shop), window.plan.to_json(),
+                          by="night-shift lead", reason="other")
+    qtbot.waitUntil(lambda: dock.panel.model.rowCount() == 1, timeout=POLL_MS + 7000)
+    assert dock.panel.model.decision(0).id == number
+    assert dock.panel.model.decision(0).station == "B"
+    dock.toggleViewAction().trigger()
+    qtbot.waitUntil(lambda: not dock.isVisible())
+    assert not dock.poll_timer.isActive()

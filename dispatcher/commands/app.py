@@ -13,7 +13,8 @@ def register(sub: argparse._SubParsersAction) -> None:
     p.add_argument("shop", metavar="SHOP", nargs="?", default=None,
                    help="shop document (.dshop) or grid file (.csv, .xlsx) to open")
     p.add_argument("--history", metavar="PATH", default=None,
-                   help="decision history file (default: the per-user data folder)")
+                   help="decision history file, or postgresql://... / service=NAME "
+                        "(default: the per-user data folder)")
     p.set_defaults(func=run)
 
 

@@ -453,6 +453,12 @@ class DecisionStore:
         return self._read(lambda c: int(c.one("SELECT count(*) FROM decisions")[0]),
                           "reading the history", 0)
 
+    def newest_id(self) -> int:
+        """The newest decision's number (0 when none): a cheap check, for a view that
+        refreshes when another station records (the refresh then verifies the seals)."""
+        return self._read(lambda c: int(c.one("SELECT coalesce(max(id), 0) FROM decisions")[0]),
+                          "reading the history", 0)
+
     def diff(self, a: int, b: int) -> PlanDiff:
         """What changed from decision ``a`` to decision ``b`` (any two, in either order)."""
         first, second = self.get(a), self.get(b)

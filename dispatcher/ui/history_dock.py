@@ -6,6 +6,7 @@ widget (View ▸ History, Ctrl+H), and *Restore…*.
 
 from __future__ import annotations
 
+from PySide6.QtCore import QTimer
 from PySide6.QtGui import QKeySequence
 from PySide6.QtWidgets import QDockWidget, QInputDialog
 
@@ -13,6 +14,10 @@ from dispatcher.history import HistoryError, HistoryInputError, HistoryStore
 from dispatcher.io.shopfile import ShopFileError, shop_from_dict
 from dispatcher.ui.history_panel import HistoryPanel
 from dispatcher.ui.settings_keys import KEY_SUPERVISOR
+from dispatcher.ui.worker import BackgroundRunner
+
+#: While the dock is shown, how often it looks for decisions recorded by other stations.
+POLL_MS = 3000
 
 
 class HistoryDock(QDockWidget):
@@ -32,6 +37,27 @@ class HistoryDock(QDockWidget):
         self.visibilityChanged.connect(lambda visible: self.panel.refresh() if visible else None)
         self.panel.message.connect(window.show_warning)
         self.panel.restore_requested.connect(lambda n: self.restore(n))
+        # Other stations' decisions appear within a few seconds: a cheap newest-number check
+        # off the GUI thread while the dock is visible; the list is re-read when it changes.
+        self._seen = -1
+        self.poller = BackgroundRunner(self)
+        self.poller.finished.connect(self._polled)
+        self.poll_timer = QTimer(self)
+        self.poll_timer.setInterval(POLL_MS)
+        self.poll_timer.timeout.connect(self._poll)
+        self.visibilityChanged.connect(
+            lambda visible: self.poll_timer.start() if visible else self.poll_timer.stop())
+
+    def _poll(self) -> None:
+        if not self.poller.is_busy():
+            store = self.window_.history
+            self.poller.submit(lambda cancel: (store, store.newest_id()), "history poll")
+
+    def _polled(self, result) -> None:
+        store, newest = result
+        if store is self.window_.history and newest != self._seen:
+            self._seen = newest
+            self.panel.refresh()
 
     def set_store(self, store: HistoryStore) -> None:
         self.panel.set_store(store)
