@@ -44,7 +44,7 @@ from dispatcher.ui.messages import Messenger
 from dispatcher.ui.plan_panel import PlanPanel
 from dispatcher.ui.printing import SheetPrinting
 from dispatcher.ui.settings_dialog import SettingsController
-from dispatcher.shop.planning import MODE_ROUND, MODE_SHIFT, MODES
+from dispatcher.shop.planning import MODE_ROUND, MODE_SHIFT
 from dispatcher.shop.proposal import EVENT_DOWN, EVENT_UP
 from dispatcher.ui.solving import SolveOutcome, solve_outcome, solve_round_in_process
 from dispatcher.ui.whatif_tab import WhatIfTab
@@ -52,8 +52,7 @@ from dispatcher.ui.worker import BackgroundRunner
 from dispatcher.ui.settings_keys import KEY_HISTORY
 
 APP_TITLE = "Dispatcher"
-FILE_FILTER = f"Shop documents (*{SHOP_SUFFIX});;Grid files (*.csv *.tsv *.txt *.xlsx);;All files (*)"
-GRID_FILTER = "Grid files (*.csv *.tsv *.txt *.xlsx)"
+GRID_PATTERNS = "*.csv *.tsv *.txt *.xlsx"
 
 
 class MainWindow(QMainWindow):
@@ -83,6 +82,10 @@ class MainWindow(QMainWindow):
         self.model = GridModel(self.doc, self)
         self.view = GridView(self)
         self.view.setModel(self.model)
+        self.view.setAccessibleName(self.tr("Dispatch grid"))
+        self.view.setAccessibleDescription(self.tr(
+            "Jobs as rows, machines as columns: each cell is the value of a job on a machine; "
+            "Shift+F10 opens the actions of the current cell"))
         self.plan_panel = PlanPanel(self)
         self.runner = BackgroundRunner(self)
 
@@ -90,16 +93,20 @@ class MainWindow(QMainWindow):
         self.tabs.setObjectName("centralTabs")
         self.tabs.addTab(self.view, self.tr("&Grid"))
         self.setCentralWidget(self.tabs)
-        plan_dock = QDockWidget("Plan", self)
+        plan_dock = QDockWidget(self.tr("Plan"), self)
         plan_dock.setObjectName("planDock")
         plan_dock.setWidget(self.plan_panel)
         self.addDockWidget(Qt.DockWidgetArea.RightDockWidgetArea, plan_dock)
         self.plan_dock = plan_dock
         self._legend = QLabel(
-            f"{palette.MARK_PLANNED} planned   \u25b6 running   {palette.MARK_PINNED} pinned   "
-            f"{palette.MARK_FORBIDDEN} forbidden   {palette.MARK_CANNOT} cannot run   "
-            f"{palette.MARK_DOWN} machine down   {palette.MARK_RUSH} rush")
-        self._legend.setToolTip("What the marks in the grid mean (colours repeat them)")
+            self.tr("{planned} planned   {running} running   {pinned} pinned   {forbidden} forbidden   "
+                    "{cannot} cannot run   {down} machine down   {rush} rush").format(
+                planned=palette.MARK_PLANNED, running="\u25b6", pinned=palette.MARK_PINNED,
+                forbidden=palette.MARK_FORBIDDEN, cannot=palette.MARK_CANNOT, down=palette.MARK_DOWN,
+                rush=palette.MARK_RUSH))
+        self._legend.setToolTip(self.tr("What the marks in the grid mean (colours repeat them)"))
+        self._legend.setAccessibleName(self.tr("Legend of the grid's marks"))
+        self._legend.setAccessibleDescription(self.tr("What the marks in the grid mean (colours repeat them)"))
         self.statusBar().addPermanentWidget(self._legend)
 
         # The parts of the window.
@@ -110,7 +117,11 @@ class MainWindow(QMainWindow):
         self.alternatives_tab = AlternativesTab(self)
         self.tabs.addTab(self.alternatives_tab.view, self.tr("&Alternatives"))
         self.crew_tab = CrewTab(self)
-        self.tabs.addTab(self.crew_tab.view, "C&rew")
+        self.tabs.addTab(self.crew_tab.view, self.tr("C&rew"))
+        self.tabs.setAccessibleName(self.tr("Views of the shop"))
+        self.tabs.setAccessibleDescription(self.tr("The grid, the what-if map, the alternatives and the crew"))
+        self.plan_dock.setAccessibleName(self.tr("Plan"))
+        self.plan_dock.setAccessibleDescription(self.tr("The plan for the grid as it is now"))
         self.history_dock = HistoryDock(self)
         self.addDockWidget(Qt.DockWidgetArea.BottomDockWidgetArea, self.history_dock)
         self.history_dock.hide()
@@ -157,94 +168,99 @@ class MainWindow(QMainWindow):
 
     def _build_actions(self) -> None:
         S = QKeySequence.StandardKey
-        self.act_new = self._action("&New", self.on_new, S.New, "Start an empty shop")
-        self.act_open = self._action("&Open\u2026", self.on_open, S.Open, "Open a shop document or grid file")
-        self.act_save = self._action("&Save", self.on_save, S.Save, "Save the shop document")
-        self.act_save_as = self._action("Save &As\u2026", self.on_save_as, S.SaveAs, "Save under a new name")
-        self.act_import = self._action("&Import grid (CSV/XLSX)\u2026", self.on_import, None,
-                                       "Start a shop from a grid file")
-        self.act_export = self._action("&Export grid (CSV/XLSX)\u2026", self.on_export, None,
-                                       "Write the grid to a CSV or XLSX file")
-        self.act_import_into = self._action("Import grid &into this shop\u2026", self.on_import_into, None,
-                                            "Merge a grid file into this shop by job and machine names")
-        self.act_export_plan = self._action("Export p&lan (CSV/XLSX)\u2026", self.on_export_plan, None,
-                                            "Write the plan shown to a CSV or XLSX file")
-        self.act_quit = self._action("&Quit", self.close, S.Quit, "Close the app")
-        self.act_undo = self.doc.undo_stack.createUndoAction(self, "&Undo")
+        self.act_new = self._action(self.tr("&New"), self.on_new, S.New, self.tr("Start an empty shop"))
+        self.act_open = self._action(self.tr("&Open\u2026"), self.on_open, S.Open,
+                                     self.tr("Open a shop document or grid file"))
+        self.act_save = self._action(self.tr("&Save"), self.on_save, S.Save, self.tr("Save the shop document"))
+        self.act_save_as = self._action(self.tr("Save &As\u2026"), self.on_save_as, S.SaveAs,
+                                        self.tr("Save under a new name"))
+        self.act_import = self._action(self.tr("&Import grid (CSV/XLSX)\u2026"), self.on_import, None,
+                                       self.tr("Start a shop from a grid file"))
+        self.act_export = self._action(self.tr("&Export grid (CSV/XLSX)\u2026"), self.on_export, None,
+                                       self.tr("Write the grid to a CSV or XLSX file"))
+        self.act_import_into = self._action(self.tr("Import grid &into this shop\u2026"), self.on_import_into, None,
+                                            self.tr("Merge a grid file into this shop by job and machine names"))
+        self.act_export_plan = self._action(self.tr("Export p&lan (CSV/XLSX)\u2026"), self.on_export_plan, None,
+                                            self.tr("Write the plan shown to a CSV or XLSX file"))
+        self.act_quit = self._action(self.tr("&Quit"), self.close, S.Quit, self.tr("Close the app"))
+        self.act_undo = self.doc.undo_stack.createUndoAction(self, self.tr("&Undo"))
         self.act_undo.setShortcut(S.Undo)
-        self.act_redo = self.doc.undo_stack.createRedoAction(self, "&Redo")
+        self.act_redo = self.doc.undo_stack.createRedoAction(self, self.tr("&Redo"))
         redo_keys = QKeySequence.keyBindings(S.Redo)
         if QKeySequence("Ctrl+Y") not in redo_keys:
             redo_keys.append(QKeySequence("Ctrl+Y"))
         self.act_redo.setShortcuts(redo_keys)
         self.addAction(self.act_undo)
         self.addAction(self.act_redo)
-        self.act_copy = self._action("&Copy", self.edits.copy, S.Copy, "Copy the selected values")
-        self.act_copy_names = self._action("Copy with &names", lambda: self.edits.copy(True), "Ctrl+Shift+C",
-                                           "Copy the selection with job and machine names")
-        self.act_paste = self._action("&Paste", self._paste, S.Paste,
-                                      "Paste a tab-separated block from a spreadsheet")
-        self.act_cannot = self._action("Mark &cannot run", self.edits.cannot_run, S.Delete,
-                                       "The machine cannot run the job (selected cells)")
-        self.act_pin = self._action("&Pin job to this machine", lambda: self.edits.pin(MUST), "Ctrl+Shift+M",
-                                    "The job must go to this machine")
-        self.act_forbid = self._action("&Forbid this pair", lambda: self.edits.pin(MUST_NOT), "Ctrl+Shift+F",
-                                       "The job must not go to this machine")
-        self.act_unpin = self._action("C&lear pin", lambda: self.edits.pin(None), "Ctrl+Shift+U",
-                                      "Remove the pin or ban of this pair")
-        self.act_rush = self._action("&Rush job arrived\u2026", lambda: self.decisions.rush(), "Ctrl+R",
-                                     "Make the current job a rush job and re-dispatch")
-        self.act_add_job = self._action("&Add job\u2026", self.edits.ask_add_job, "Ctrl+Shift+J",
-                                        "Add a job (for example a rush order that just arrived)")
-        self.act_add_machine = self._action("Add &machine\u2026", self.edits.ask_add_machine, None,
-                                            "Add a machine column")
-        self.act_done = self._action("Mark job &done", self.edits.job_done, None,
-                                     "The current job is finished: it takes no part any more")
-        self.act_pull = self._action("Job &pulled\u2026", lambda: self.decisions.pull(), None,
-                                     "The current job is cancelled or put on hold: re-dispatch "
-                                     "without it and take it out of the shop")
-        self.act_penalty = self._action("Set &wait penalty\u2026", self.edits.ask_penalty, "Ctrl+W",
-                                        "Cost of leaving the current job waiting")
-        self.act_down = self._action("Machine &down\u2026", lambda: self.decisions.machine_event(EVENT_DOWN),
-                                     "Ctrl+D", "Mark the current machine down and re-dispatch")
-        self.act_up = self._action("Machine back &up\u2026", lambda: self.decisions.machine_event(EVENT_UP),
-                                   "Ctrl+U", "Mark the current machine up again and re-dispatch")
-        self.act_maint = self._action("Machine in &maintenance", self.edits.toggle_maintenance, None,
-                                      "The current machine takes no jobs (planned maintenance)")
-        self.act_slots = self._action("Set &slots\u2026", self.edits.ask_slots, None,
-                                      "How many jobs the current machine takes per round")
-        self.act_confirm = self._action("&Put plan in force\u2026", lambda: self.decisions.confirm_plan(),
-                                        "Ctrl+Return", "Record the plan shown as the decision in force")
-        self.act_resolve = self._action("Re-&solve now", self.request_solve, "F5", "Solve again")
-        self.act_cancel = self._action("&Cancel solve", self.cancel_solve, "Esc",
-                                       "Stop waiting for a long solve")
+        self.act_copy = self._action(self.tr("&Copy"), self.edits.copy, S.Copy, self.tr("Copy the selected values"))
+        self.act_copy_names = self._action(self.tr("Copy with &names"), lambda: self.edits.copy(True), "Ctrl+Shift+C",
+                                           self.tr("Copy the selection with job and machine names"))
+        self.act_paste = self._action(self.tr("&Paste"), self._paste, S.Paste,
+                                      self.tr("Paste a tab-separated block from a spreadsheet"))
+        self.act_cannot = self._action(self.tr("Mark &cannot run"), self.edits.cannot_run, S.Delete,
+                                       self.tr("The machine cannot run the job (selected cells)"))
+        self.act_pin = self._action(self.tr("&Pin job to this machine"), lambda: self.edits.pin(MUST), "Ctrl+Shift+M",
+                                    self.tr("The job must go to this machine"))
+        self.act_forbid = self._action(self.tr("&Forbid this pair"), lambda: self.edits.pin(MUST_NOT), "Ctrl+Shift+F",
+                                       self.tr("The job must not go to this machine"))
+        self.act_unpin = self._action(self.tr("C&lear pin"), lambda: self.edits.pin(None), "Ctrl+Shift+U",
+                                      self.tr("Remove the pin or ban of this pair"))
+        self.act_rush = self._action(self.tr("&Rush job arrived\u2026"), lambda: self.decisions.rush(), "Ctrl+R",
+                                     self.tr("Make the current job a rush job and re-dispatch"))
+        self.act_add_job = self._action(self.tr("&Add job\u2026"), self.edits.ask_add_job, "Ctrl+Shift+J",
+                                        self.tr("Add a job (for example a rush order that just arrived)"))
+        self.act_add_machine = self._action(self.tr("Add &machine\u2026"), self.edits.ask_add_machine, None,
+                                            self.tr("Add a machine column"))
+        self.act_done = self._action(self.tr("Mark job &done"), self.edits.job_done, None,
+                                     self.tr("The current job is finished: it takes no part any more"))
+        self.act_pull = self._action(self.tr("Job &pulled\u2026"), lambda: self.decisions.pull(), None,
+                                     self.tr("The current job is cancelled or put on hold: re-dispatch "
+                                             "without it and take it out of the shop"))
+        self.act_penalty = self._action(self.tr("Set &wait penalty\u2026"), self.edits.ask_penalty, "Ctrl+W",
+                                        self.tr("Cost of leaving the current job waiting"))
+        self.act_down = self._action(self.tr("Machine &down\u2026"), lambda: self.decisions.machine_event(EVENT_DOWN),
+                                     "Ctrl+D", self.tr("Mark the current machine down and re-dispatch"))
+        self.act_up = self._action(self.tr("Machine back &up\u2026"), lambda: self.decisions.machine_event(EVENT_UP),
+                                   "Ctrl+U", self.tr("Mark the current machine up again and re-dispatch"))
+        self.act_maint = self._action(self.tr("Machine in &maintenance"), self.edits.toggle_maintenance, None,
+                                      self.tr("The current machine takes no jobs (planned maintenance)"))
+        self.act_slots = self._action(self.tr("Set &slots\u2026"), self.edits.ask_slots, None,
+                                      self.tr("How many jobs the current machine takes per round"))
+        self.act_confirm = self._action(self.tr("&Put plan in force\u2026"), lambda: self.decisions.confirm_plan(),
+                                        "Ctrl+Return", self.tr("Record the plan shown as the decision in force"))
+        self.act_resolve = self._action(self.tr("Re-&solve now"), self.request_solve, "F5", self.tr("Solve again"))
+        self.act_cancel = self._action(self.tr("&Cancel solve"), self.cancel_solve, "Esc",
+                                       self.tr("Stop waiting for a long solve"))
         self.objective_group = QActionGroup(self)
         self.act_objectives = {}
-        for key, label, keyseq in (("total", "Least &total", "Ctrl+1"),
-                                   ("maximize", "Most &value", "Ctrl+2"),
-                                   ("bottleneck", "Smallest &largest value", "Ctrl+3")):
+        for key, label, keyseq in (("total", self.tr("Least &total"), "Ctrl+1"),
+                                   ("maximize", self.tr("Most &value"), "Ctrl+2"),
+                                   ("bottleneck", self.tr("Smallest &largest value"), "Ctrl+3")):
             a = self._action(label, lambda _=False, k=key: self.set_objective(k), keyseq,
-                             f"Objective: {label.replace('&', '')}", checkable=True)
+                             self.tr("Objective: {objective}").format(objective=label.replace("&", "")),
+                             checkable=True)
             self.objective_group.addAction(a)
             self.act_objectives[key] = a
         self.act_objectives["total"].setChecked(True)
         self.mode_group = QActionGroup(self)
         self.act_modes = {}
-        for key, label, keyseq in ((MODE_ROUND, "One &round (one job per machine)", "Ctrl+4"),
-                                   (MODE_SHIFT, "Whole &shift (several jobs per machine)", "Ctrl+5")):
-            a = self._action(label, lambda _=False, k=key: self.set_mode(k), keyseq, MODES[key],
+        mode_tips = {MODE_ROUND: self.tr("One round: one job per free machine slot"),
+                     MODE_SHIFT: self.tr("Whole shift: several jobs per machine within its hours")}
+        for key, label, keyseq in ((MODE_ROUND, self.tr("One &round (one job per machine)"), "Ctrl+4"),
+                                   (MODE_SHIFT, self.tr("Whole &shift (several jobs per machine)"), "Ctrl+5")):
+            a = self._action(label, lambda _=False, k=key: self.set_mode(k), keyseq, mode_tips[key],
                              checkable=True)
             self.mode_group.addAction(a)
             self.act_modes[key] = a
         self.act_modes[MODE_ROUND].setChecked(True)
-        self.act_preview = self._action("Print pre&view\u2026", self.printing.preview, None,
-                                        "See the dispatch sheet as it will print")
-        self.act_print = self._action("&Print sheet\u2026", self.printing.print_now, S.Print,
-                                      "Print the dispatch sheet")
-        self.act_export_pdf = self._action("Export sheet as P&DF\u2026", self.printing.ask_export_pdf,
-                                           None, "Write the dispatch sheet to a PDF")
-        self.act_settings = self._action("Se&ttings\u2026", self.settings_ctl.open, None,
-                                         "History file, default supervisor name, autosave interval")
+        self.act_preview = self._action(self.tr("Print pre&view\u2026"), self.printing.preview, None,
+                                        self.tr("See the dispatch sheet as it will print"))
+        self.act_print = self._action(self.tr("&Print sheet\u2026"), self.printing.print_now, S.Print,
+                                      self.tr("Print the dispatch sheet"))
+        self.act_export_pdf = self._action(self.tr("Export sheet as P&DF\u2026"), self.printing.ask_export_pdf,
+                                           None, self.tr("Write the dispatch sheet to a PDF"))
+        self.act_settings = self._action(self.tr("Se&ttings\u2026"), self.settings_ctl.open, None,
+                                         self.tr("History file, default supervisor name, autosave interval"))
         # The platform's Preferences keys; Ctrl+, where the platform defines none.
         self.act_settings.setShortcuts(QKeySequence.keyBindings(S.Preferences)
                                        or [QKeySequence("Ctrl+,")])
@@ -328,7 +344,7 @@ class MainWindow(QMainWindow):
 
     # ---- title, status ----------------------------------------------------------------------
     def _update_title(self, *_args) -> None:
-        name = self.doc.path.name if self.doc.path else (self.doc.shop.name or "Untitled")
+        name = self.doc.path.name if self.doc.path else (self.doc.shop.name or self.tr("Untitled"))
         self.setWindowTitle(f"{name}[*] - {APP_TITLE}")
         self.setWindowModified(self.doc.dirty)
 
@@ -413,11 +429,11 @@ class MainWindow(QMainWindow):
         ignore the move penalties a re-dispatch paid) until the next edit."""
         self.runner.discard()
         self._on_solved(SolveOutcome(self.objective, plan, "", False, 0.0))
-        self.plan_panel.show_note(f"Plan in force: {what}. Any edit re-solves from scratch.")
+        self.plan_panel.show_note(self.tr("Plan in force: {what}. Any edit re-solves from scratch.").format(what=what))
 
     def _on_solve_failed(self, exc: Exception) -> None:
-        self.plan_panel.show_problem(f"internal error while solving: {exc}")
-        self.show_warning(f"Solving failed: {exc}")
+        self.plan_panel.show_problem(self.tr("internal error while solving: {error}").format(error=exc))
+        self.show_warning(self.tr("Solving failed: {error}").format(error=exc))
 
     def _on_reset(self) -> None:
         self.plan = None
@@ -443,6 +459,14 @@ class MainWindow(QMainWindow):
             view.setColumnWidth(FIRST_MACHINE_COL + k, min(max(widest + 16, floor), 220))
 
     # ---- files ------------------------------------------------------------------------------
+    def file_filter(self) -> str:
+        """The Open dialog's file types."""
+        return self.tr("Shop documents (*{suffix});;Grid files ({grids});;All files (*)").format(
+            suffix=SHOP_SUFFIX, grids=GRID_PATTERNS)
+
+    def grid_filter(self) -> str:
+        return self.tr("Grid files ({grids})").format(grids=GRID_PATTERNS)
+
     def on_new(self) -> None:
         self.files.new()
 
@@ -450,12 +474,12 @@ class MainWindow(QMainWindow):
         return self.files.open_path(path)
 
     def on_open(self) -> None:
-        path, _ = QFileDialog.getOpenFileName(self, "Open", self.folder(), FILE_FILTER)
+        path, _ = QFileDialog.getOpenFileName(self, self.tr("Open"), self.folder(), self.file_filter())
         if path:
             self.open_path(path)
 
     def on_import(self) -> None:
-        path, _ = QFileDialog.getOpenFileName(self, "Import grid", self.folder(), GRID_FILTER)
+        path, _ = QFileDialog.getOpenFileName(self, self.tr("Import grid"), self.folder(), self.grid_filter())
         if path:
             self.open_path(path)
 
@@ -465,25 +489,27 @@ class MainWindow(QMainWindow):
         return self.files.save()
 
     def on_save_as(self) -> bool:
-        path, _ = QFileDialog.getSaveFileName(self, "Save shop", self.folder(),
-                                              f"Shop documents (*{SHOP_SUFFIX})")
+        path, _ = QFileDialog.getSaveFileName(self, self.tr("Save shop"), self.folder(),
+                                              self.tr("Shop documents (*{suffix})").format(suffix=SHOP_SUFFIX))
         return self.files.save_as(path) if path else False
 
     def on_export(self) -> None:
-        path, _ = QFileDialog.getSaveFileName(self, "Export grid", self.folder(), GRID_FILTER)
+        path, _ = QFileDialog.getSaveFileName(self, self.tr("Export grid"), self.folder(), self.grid_filter())
         if path:
             self.files.export_grid(path)
 
     def on_import_into(self) -> None:
-        path, _ = QFileDialog.getOpenFileName(self, "Import grid into this shop", self.folder(), GRID_FILTER)
+        path, _ = QFileDialog.getOpenFileName(self, self.tr("Import grid into this shop"), self.folder(),
+                                              self.grid_filter())
         if path:
             self.files.import_into(path)
 
     def on_export_plan(self) -> None:
         if self.plan is None:
-            self.show_warning("there is no plan to export yet")
+            self.show_warning(self.tr("there is no plan to export yet"))
             return
-        path, _ = QFileDialog.getSaveFileName(self, "Export plan", self.folder(), "Plan (*.csv *.xlsx)")
+        path, _ = QFileDialog.getSaveFileName(self, self.tr("Export plan"), self.folder(),
+                                              self.tr("Plan (*.csv *.xlsx)"))
         if path:
             self.files.export_plan(self.plan, path)
 

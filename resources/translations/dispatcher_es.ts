@@ -4,8 +4,32 @@
 <context>
     <name>MainWindow</name>
     <message>
+        <source>Dispatch grid</source>
+        <translation>Cuadrícula de asignación</translation>
+    </message>
+    <message>
+        <source>Jobs as rows, machines as columns: each cell is the value of a job on a machine; Shift+F10 opens the actions of the current cell</source>
+        <translation>Trabajos en filas, máquinas en columnas: cada celda es el valor de un trabajo en una máquina; Mayús+F10 abre las acciones de la celda actual</translation>
+    </message>
+    <message>
         <source>&amp;Grid</source>
         <translation>&amp;Cuadrícula</translation>
+    </message>
+    <message>
+        <source>Plan</source>
+        <translation>Plan</translation>
+    </message>
+    <message>
+        <source>{planned} planned   {running} running   {pinned} pinned   {forbidden} forbidden   {cannot} cannot run   {down} machine down   {rush} rush</source>
+        <translation>{planned} planificado   {running} en marcha   {pinned} fijado   {forbidden} prohibido   {cannot} no puede   {down} máquina averiada   {rush} urgente</translation>
+    </message>
+    <message>
+        <source>What the marks in the grid mean (colours repeat them)</source>
+        <translation>Qué significan las marcas de la cuadrícula (los colores las repiten)</translation>
+    </message>
+    <message>
+        <source>Legend of the grid&apos;s marks</source>
+        <translation>Leyenda de las marcas de la cuadrícula</translation>
     </message>
     <message>
         <source>&amp;What-if map</source>
@@ -14,6 +38,326 @@
     <message>
         <source>&amp;Alternatives</source>
         <translation>A&amp;lternativas</translation>
+    </message>
+    <message>
+        <source>C&amp;rew</source>
+        <translation>&amp;Personal</translation>
+    </message>
+    <message>
+        <source>Views of the shop</source>
+        <translation>Vistas del taller</translation>
+    </message>
+    <message>
+        <source>The grid, the what-if map, the alternatives and the crew</source>
+        <translation>La cuadrícula, el mapa qué pasaría si, las alternativas y el personal</translation>
+    </message>
+    <message>
+        <source>The plan for the grid as it is now</source>
+        <translation>El plan para la cuadrícula tal como está ahora</translation>
+    </message>
+    <message>
+        <source>&amp;New</source>
+        <translation>&amp;Nuevo</translation>
+    </message>
+    <message>
+        <source>Start an empty shop</source>
+        <translation>Empezar un taller vacío</translation>
+    </message>
+    <message>
+        <source>&amp;Open…</source>
+        <translation>&amp;Abrir…</translation>
+    </message>
+    <message>
+        <source>Open a shop document or grid file</source>
+        <translation>Abrir un documento de taller o un archivo de cuadrícula</translation>
+    </message>
+    <message>
+        <source>&amp;Save</source>
+        <translation>&amp;Guardar</translation>
+    </message>
+    <message>
+        <source>Save the shop document</source>
+        <translation>Guardar el documento del taller</translation>
+    </message>
+    <message>
+        <source>Save &amp;As…</source>
+        <translation>Guardar &amp;como…</translation>
+    </message>
+    <message>
+        <source>Save under a new name</source>
+        <translation>Guardar con un nombre nuevo</translation>
+    </message>
+    <message>
+        <source>&amp;Import grid (CSV/XLSX)…</source>
+        <translation>&amp;Importar cuadrícula (CSV/XLSX)…</translation>
+    </message>
+    <message>
+        <source>Start a shop from a grid file</source>
+        <translation>Empezar un taller a partir de un archivo de cuadrícula</translation>
+    </message>
+    <message>
+        <source>&amp;Export grid (CSV/XLSX)…</source>
+        <translation>&amp;Exportar cuadrícula (CSV/XLSX)…</translation>
+    </message>
+    <message>
+        <source>Write the grid to a CSV or XLSX file</source>
+        <translation>Escribir la cuadrícula en un archivo CSV o XLSX</translation>
+    </message>
+    <message>
+        <source>Import grid &amp;into this shop…</source>
+        <translation>Importar cuadrícula &amp;en este taller…</translation>
+    </message>
+    <message>
+        <source>Merge a grid file into this shop by job and machine names</source>
+        <translation>Combinar un archivo de cuadrícula con este taller por nombres de trabajo y máquina</translation>
+    </message>
+    <message>
+        <source>Export p&amp;lan (CSV/XLSX)…</source>
+        <translation>Exportar p&amp;lan (CSV/XLSX)…</translation>
+    </message>
+    <message>
+        <source>Write the plan shown to a CSV or XLSX file</source>
+        <translation>Escribir el plan mostrado en un archivo CSV o XLSX</translation>
+    </message>
+    <message>
+        <source>&amp;Quit</source>
+        <translation>&amp;Salir</translation>
+    </message>
+    <message>
+        <source>Close the app</source>
+        <translation>Cerrar la aplicación</translation>
+    </message>
+    <message>
+        <source>&amp;Undo</source>
+        <translation>&amp;Deshacer</translation>
+    </message>
+    <message>
+        <source>&amp;Redo</source>
+        <translation>&amp;Rehacer</translation>
+    </message>
+    <message>
+        <source>&amp;Copy</source>
+        <translation>&amp;Copiar</translation>
+    </message>
+    <message>
+        <source>Copy the selected values</source>
+        <translation>Copiar los valores seleccionados</translation>
+    </message>
+    <message>
+        <source>Copy with &amp;names</source>
+        <translation>Copiar con &amp;nombres</translation>
+    </message>
+    <message>
+        <source>Copy the selection with job and machine names</source>
+        <translation>Copiar la selección con los nombres de trabajos y máquinas</translation>
+    </message>
+    <message>
+        <source>&amp;Paste</source>
+        <translation>&amp;Pegar</translation>
+    </message>
+    <message>
+        <source>Paste a tab-separated block from a spreadsheet</source>
+        <translation>Pegar un bloque separado por tabuladores desde una hoja de cálculo</translation>
+    </message>
+    <message>
+        <source>Mark &amp;cannot run</source>
+        <translation>Marcar como &amp;no puede</translation>
+    </message>
+    <message>
+        <source>The machine cannot run the job (selected cells)</source>
+        <translation>La máquina no puede hacer el trabajo (celdas seleccionadas)</translation>
+    </message>
+    <message>
+        <source>&amp;Pin job to this machine</source>
+        <translation>&amp;Fijar el trabajo a esta máquina</translation>
+    </message>
+    <message>
+        <source>The job must go to this machine</source>
+        <translation>El trabajo debe ir a esta máquina</translation>
+    </message>
+    <message>
+        <source>&amp;Forbid this pair</source>
+        <translation>&amp;Prohibir esta pareja</translation>
+    </message>
+    <message>
+        <source>The job must not go to this machine</source>
+        <translation>El trabajo no debe ir a esta máquina</translation>
+    </message>
+    <message>
+        <source>C&amp;lear pin</source>
+        <translation>&amp;Quitar fijación</translation>
+    </message>
+    <message>
+        <source>Remove the pin or ban of this pair</source>
+        <translation>Quitar la fijación o la prohibición de esta pareja</translation>
+    </message>
+    <message>
+        <source>&amp;Rush job arrived…</source>
+        <translation>Llegó un trabajo &amp;urgente…</translation>
+    </message>
+    <message>
+        <source>Make the current job a rush job and re-dispatch</source>
+        <translation>Convertir el trabajo actual en urgente y reasignar</translation>
+    </message>
+    <message>
+        <source>&amp;Add job…</source>
+        <translation>&amp;Añadir trabajo…</translation>
+    </message>
+    <message>
+        <source>Add a job (for example a rush order that just arrived)</source>
+        <translation>Añadir un trabajo (por ejemplo un pedido urgente que acaba de llegar)</translation>
+    </message>
+    <message>
+        <source>Add &amp;machine…</source>
+        <translation>Añadir &amp;máquina…</translation>
+    </message>
+    <message>
+        <source>Add a machine column</source>
+        <translation>Añadir una columna de máquina</translation>
+    </message>
+    <message>
+        <source>Mark job &amp;done</source>
+        <translation>Marcar trabajo como &amp;terminado</translation>
+    </message>
+    <message>
+        <source>The current job is finished: it takes no part any more</source>
+        <translation>El trabajo actual está terminado: ya no participa</translation>
+    </message>
+    <message>
+        <source>Job &amp;pulled…</source>
+        <translation>Trabajo &amp;retirado…</translation>
+    </message>
+    <message>
+        <source>The current job is cancelled or put on hold: re-dispatch without it and take it out of the shop</source>
+        <translation>El trabajo actual se cancela o se suspende: reasignar sin él y sacarlo del taller</translation>
+    </message>
+    <message>
+        <source>Set &amp;wait penalty…</source>
+        <translation>Fijar &amp;penalización por espera…</translation>
+    </message>
+    <message>
+        <source>Cost of leaving the current job waiting</source>
+        <translation>Coste de dejar esperando el trabajo actual</translation>
+    </message>
+    <message>
+        <source>Machine &amp;down…</source>
+        <translation>Máquina &amp;averiada…</translation>
+    </message>
+    <message>
+        <source>Mark the current machine down and re-dispatch</source>
+        <translation>Marcar la máquina actual como averiada y reasignar</translation>
+    </message>
+    <message>
+        <source>Machine back &amp;up…</source>
+        <translation>Máquina de nuevo en &amp;marcha…</translation>
+    </message>
+    <message>
+        <source>Mark the current machine up again and re-dispatch</source>
+        <translation>Marcar la máquina actual de nuevo en marcha y reasignar</translation>
+    </message>
+    <message>
+        <source>Machine in &amp;maintenance</source>
+        <translation>Máquina en man&amp;tenimiento</translation>
+    </message>
+    <message>
+        <source>The current machine takes no jobs (planned maintenance)</source>
+        <translation>La máquina actual no acepta trabajos (mantenimiento planificado)</translation>
+    </message>
+    <message>
+        <source>Set &amp;slots…</source>
+        <translation>Fijar &amp;puestos…</translation>
+    </message>
+    <message>
+        <source>How many jobs the current machine takes per round</source>
+        <translation>Cuántos trabajos acepta la máquina actual por ronda</translation>
+    </message>
+    <message>
+        <source>&amp;Put plan in force…</source>
+        <translation>&amp;Poner el plan en vigor…</translation>
+    </message>
+    <message>
+        <source>Record the plan shown as the decision in force</source>
+        <translation>Registrar el plan mostrado como la decisión vigente</translation>
+    </message>
+    <message>
+        <source>Re-&amp;solve now</source>
+        <translation>&amp;Recalcular ahora</translation>
+    </message>
+    <message>
+        <source>Solve again</source>
+        <translation>Calcular de nuevo</translation>
+    </message>
+    <message>
+        <source>&amp;Cancel solve</source>
+        <translation>&amp;Cancelar cálculo</translation>
+    </message>
+    <message>
+        <source>Stop waiting for a long solve</source>
+        <translation>Dejar de esperar un cálculo largo</translation>
+    </message>
+    <message>
+        <source>Least &amp;total</source>
+        <translation>Menor &amp;total</translation>
+    </message>
+    <message>
+        <source>Most &amp;value</source>
+        <translation>Mayor &amp;valor</translation>
+    </message>
+    <message>
+        <source>Smallest &amp;largest value</source>
+        <translation>Menor valor &amp;máximo</translation>
+    </message>
+    <message>
+        <source>Objective: {objective}</source>
+        <translation>Objetivo: {objective}</translation>
+    </message>
+    <message>
+        <source>One round: one job per free machine slot</source>
+        <translation>Una ronda: un trabajo por puesto de máquina libre</translation>
+    </message>
+    <message>
+        <source>Whole shift: several jobs per machine within its hours</source>
+        <translation>Turno completo: varios trabajos por máquina dentro de sus horas</translation>
+    </message>
+    <message>
+        <source>One &amp;round (one job per machine)</source>
+        <translation>Una &amp;ronda (un trabajo por máquina)</translation>
+    </message>
+    <message>
+        <source>Whole &amp;shift (several jobs per machine)</source>
+        <translation>&amp;Turno completo (varios trabajos por máquina)</translation>
+    </message>
+    <message>
+        <source>Print pre&amp;view…</source>
+        <translation>&amp;Vista previa de impresión…</translation>
+    </message>
+    <message>
+        <source>See the dispatch sheet as it will print</source>
+        <translation>Ver la hoja de asignación tal como se imprimirá</translation>
+    </message>
+    <message>
+        <source>&amp;Print sheet…</source>
+        <translation>Im&amp;primir hoja…</translation>
+    </message>
+    <message>
+        <source>Print the dispatch sheet</source>
+        <translation>Imprimir la hoja de asignación</translation>
+    </message>
+    <message>
+        <source>Export sheet as P&amp;DF…</source>
+        <translation>Exportar hoja como P&amp;DF…</translation>
+    </message>
+    <message>
+        <source>Write the dispatch sheet to a PDF</source>
+        <translation>Escribir la hoja de asignación en un PDF</translation>
+    </message>
+    <message>
+        <source>Se&amp;ttings…</source>
+        <translation>Con&amp;figuración…</translation>
+    </message>
+    <message>
+        <source>History file, default supervisor name, autosave interval</source>
+        <translation>Archivo de historial, nombre predeterminado del supervisor, intervalo de guardado automático</translation>
     </message>
     <message>
         <source>&amp;File</source>
@@ -42,6 +386,66 @@
     <message>
         <source>&amp;View</source>
         <translation>&amp;Ver</translation>
+    </message>
+    <message>
+        <source>Untitled</source>
+        <translation>Sin título</translation>
+    </message>
+    <message>
+        <source>Plan in force: {what}. Any edit re-solves from scratch.</source>
+        <translation>Plan vigente: {what}. Cualquier cambio recalcula desde cero.</translation>
+    </message>
+    <message>
+        <source>internal error while solving: {error}</source>
+        <translation>error interno durante el cálculo: {error}</translation>
+    </message>
+    <message>
+        <source>Solving failed: {error}</source>
+        <translation>El cálculo falló: {error}</translation>
+    </message>
+    <message>
+        <source>Shop documents (*{suffix});;Grid files ({grids});;All files (*)</source>
+        <translation>Documentos de taller (*{suffix});;Archivos de cuadrícula ({grids});;Todos los archivos (*)</translation>
+    </message>
+    <message>
+        <source>Grid files ({grids})</source>
+        <translation>Archivos de cuadrícula ({grids})</translation>
+    </message>
+    <message>
+        <source>Open</source>
+        <translation>Abrir</translation>
+    </message>
+    <message>
+        <source>Import grid</source>
+        <translation>Importar cuadrícula</translation>
+    </message>
+    <message>
+        <source>Save shop</source>
+        <translation>Guardar taller</translation>
+    </message>
+    <message>
+        <source>Shop documents (*{suffix})</source>
+        <translation>Documentos de taller (*{suffix})</translation>
+    </message>
+    <message>
+        <source>Export grid</source>
+        <translation>Exportar cuadrícula</translation>
+    </message>
+    <message>
+        <source>Import grid into this shop</source>
+        <translation>Importar cuadrícula en este taller</translation>
+    </message>
+    <message>
+        <source>there is no plan to export yet</source>
+        <translation>todavía no hay ningún plan que exportar</translation>
+    </message>
+    <message>
+        <source>Export plan</source>
+        <translation>Exportar plan</translation>
+    </message>
+    <message>
+        <source>Plan (*.csv *.xlsx)</source>
+        <translation>Plan (*.csv *.xlsx)</translation>
     </message>
 </context>
 <context>
