@@ -17,7 +17,7 @@ from PySide6.QtCore import QCoreApplication, QLibraryInfo, QLocale, QTranslator
 
 from dispatcher import resources
 
-__all__ = ["KEY_LANGUAGE", "LANGUAGE_NAMES", "app_locale", "current_language",
+__all__ = ["KEY_LANGUAGE", "LANGUAGE_NAMES", "app_locale", "current_language", "decimal_point",
            "ensure_plurals", "install", "remove", "system_language"]
 
 #: QSettings key of the interface language chosen in Settings ("" or absent: the system's).
@@ -30,6 +30,7 @@ _installed: list[QTranslator] = []
 _keep: list[bytes] = []  # QTranslator.load(bytes) reads the data in place: keep it alive
 _language: str | None = None
 _locale: QLocale | None = None
+_decimal = "."   # the decimal separator of _locale, kept as text (read for every grid cell)
 
 
 def system_language(locale: QLocale | None = None) -> str:
@@ -50,6 +51,11 @@ def current_language() -> str:
 def app_locale() -> QLocale | None:
     """The locale :func:`install` chose for numbers, dates and times (None before it ran)."""
     return _locale
+
+
+def decimal_point() -> str:
+    """The decimal separator of :func:`app_locale` ("," in German); "." before :func:`install`."""
+    return _decimal
 
 
 def locale_for(language: str, system: QLocale | None = None) -> QLocale:
@@ -73,12 +79,13 @@ def _add(translator: QTranslator) -> None:
 
 def remove() -> None:
     """Take every translator this module installed off the application."""
-    global _language, _locale
+    global _language, _locale, _decimal
     for translator in _installed:
         QCoreApplication.removeTranslator(translator)
     _installed.clear()
     _keep.clear()
     _language = _locale = None
+    _decimal = "."
 
 
 def ensure_plurals() -> None:
@@ -98,7 +105,7 @@ def install(language: str | None = None, set_default_locale: bool = False) -> st
     (:func:`locale_for`); ``set_default_locale`` also makes it Qt's default locale (the
     app does, so that its widgets format numbers the same way).
     """
-    global _language, _locale
+    global _language, _locale, _decimal
     remove()
     language = system_language() if language is None else language
     if language not in LANGUAGE_NAMES:
@@ -116,6 +123,7 @@ def install(language: str | None = None, set_default_locale: bool = False) -> st
             _add(qt_own)
     _language = language
     _locale = locale_for(language)
+    _decimal = _locale.decimalPoint() or "."
     if set_default_locale:
         QLocale.setDefault(_locale)
     return language

@@ -107,7 +107,7 @@ def test_trade_words_and_safety_cautions_in_each_language():
     assert de["Setup"] == "Rüstzeit" and de["Work order"] == "Arbeitsauftrag"
     assert de["Shift"] == "Schicht" and "Umrüsten" in de[
         "Follow the machine's own setup instructions for every changeover."]
-    assert "Verriegeln und Kennzeichnen" in de[
+    assert "Sperren und Kennzeichnen" in de[
         "Apply lockout/tagout before any work on a machine that is down."]
     assert es["Work order"] == "Orden de trabajo" and es["Shift"] == "Turno"
     assert "bloqueo y etiquetado" in es[
@@ -177,7 +177,7 @@ def test_sheet_prints_in_german_with_decimal_comma(qapp, installed, tmp_path):
     write_pdf(_content(), out, paper="a4", text_locale=translation.app_locale())
     text = _pdf_text(out)
     for phrase in ("Zuteilungsblatt - Invented test shop", "Arbeitsauftrag", "Rüstzeit",
-                   "Schicht", "SICHERHEIT:", "Verriegeln und Kennzeichnen (LOTO)",
+                   "Schicht", "SICHERHEIT:", "Sperren und Kennzeichnen (LOTO)",
                    "Umrüsten", "12,5 min", "1.250 min", "1.262,5 min", "AUSGEFALLEN",
                    "3 Aufträge können nur auf Press 1 laufen, also muss 1 davon warten",
                    "Seite 1 von 1", "09.03.26", "2 Maschinen, 2 Aufträge"):

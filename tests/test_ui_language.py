@@ -30,3 +30,17 @@ def test_settings_language_is_stored_and_installed_at_start(qtbot, tmp_path, mon
         translation.remove()
         QLocale.setDefault(QLocale.system())
     assert QCoreApplication.translate("Sheet", "Work order") == "Work order"
+
+
+def test_numbers_shown_follow_the_language_and_the_clipboard_keeps_a_point(qapp):
+    from dispatcher.ui.format import fmt, parse_cell
+
+    try:
+        translation.install("de")
+        assert fmt(12.5) == "12,5" and fmt(3.0) == "3" and fmt(12.5, plain=True) == "12.5"
+        assert parse_cell(fmt(0.25)) == 0.25   # what the grid shows can be typed back
+        # the plan panel's words are German too
+        assert QCoreApplication.translate("PlanPanel", "Idle machines (%n)", "", 2) == "Freie Maschinen (2)"
+    finally:
+        translation.remove()
+    assert fmt(12.5) == "12.5"

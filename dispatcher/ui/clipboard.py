@@ -95,6 +95,6 @@ def copy_block(shop: Shop, rows: list[int], cols: list[int], with_names: bool = 
         cells = []
         for k in cols:
             v = shop.value(jid, shop.machines[k].id)
-            cells.append("x" if v is None else fmt(v, 10))
+            cells.append("x" if v is None else fmt(v, 10, plain=True))
         lines.append("\t".join(([shop.jobs[i].name] if with_names else []) + cells))
     return "\n".join(lines) + "\n"

@@ -1,20 +1,42 @@
-"""Number and name formatting shared by the app's views (Qt-free)."""
+"""Number and unit formatting shared by the app's views (QtCore only, no widgets).
+
+Numbers shown follow the interface's locale (:func:`dispatcher.translation.decimal_point`:
+``12,5`` in German); text meant for other programs (the clipboard, files) uses
+``fmt(value, plain=True)``, always with a decimal point.
+"""
 
 from __future__ import annotations
 
 import math
 
+from PySide6.QtCore import QCoreApplication
+
+from dispatcher import translation
 from dispatcher.io.grid import CANNOT_RUN
 
 
-def fmt(value: float | None, digits: int = 4) -> str:
-    """A value as a supervisor reads it: no exponent, no trailing zeros; '' for None."""
+def fmt(value: float | None, digits: int = 4, plain: bool = False) -> str:
+    """A value as a supervisor reads it: no exponent, no trailing zeros; '' for None.
+
+    The decimal separator is the interface locale's unless ``plain``.
+    """
     if value is None or (isinstance(value, float) and math.isnan(value)):
         return ""
     v = float(value)
     if v.is_integer() and abs(v) < 1e15:
         return str(int(v))
-    return f"{v:.{digits}f}".rstrip("0").rstrip(".")
+    text = f"{v:.{digits}f}".rstrip("0").rstrip(".")
+    point = "." if plain else translation.decimal_point()
+    return text if point == "." else text.replace(".", point)
+
+
+def unit_text(label: str) -> str:
+    """A shop's unit label (:meth:`dispatcher.shop.model.Unit.label`) in the interface's
+    language: ``setup min`` and ``cost`` are ours; a currency stays as the shop names it."""
+    words = {"setup min": QCoreApplication.translate("Format", "setup min"),
+             "cost": QCoreApplication.translate("Format", "cost"),
+             "value": QCoreApplication.translate("Format", "value")}
+    return words.get(label, label)
 
 
 class CellTextError(ValueError):
@@ -34,10 +56,13 @@ def parse_cell(text: str) -> float | None:
     try:
         v = float(t)
     except ValueError:
-        raise CellTextError(f"{text.strip()!r} is not a number (type x or leave empty when "
-                            "the machine cannot run the job)") from None
+        raise CellTextError(QCoreApplication.translate(
+            "Format", "{text} is not a number (type x or leave empty when the machine cannot "
+            "run the job)").format(text=repr(text.strip()))) from None
     if not math.isfinite(v):
-        raise CellTextError(f"{text.strip()!r} is not a finite number")
+        raise CellTextError(QCoreApplication.translate("Format", "{text} is not a finite number").format(
+            text=repr(text.strip())))
     if v < 0:
-        raise CellTextError(f"{fmt(v)} is negative; values must be >= 0")
+        raise CellTextError(QCoreApplication.translate(
+            "Format", "{value} is negative; values must be >= 0").format(value=fmt(v)))
     return v

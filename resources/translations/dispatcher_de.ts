@@ -2,6 +2,33 @@
 <!DOCTYPE TS>
 <TS version="2.1" language="de_DE">
 <context>
+    <name>Format</name>
+    <message>
+        <source>setup min</source>
+        <translation>Rüstmin.</translation>
+    </message>
+    <message>
+        <source>cost</source>
+        <translation>Kosten</translation>
+    </message>
+    <message>
+        <source>value</source>
+        <translation>Wert</translation>
+    </message>
+    <message>
+        <source>{text} is not a number (type x or leave empty when the machine cannot run the job)</source>
+        <translation>{text} ist keine Zahl (x eingeben oder leer lassen, wenn die Maschine den Auftrag nicht ausführen kann)</translation>
+    </message>
+    <message>
+        <source>{text} is not a finite number</source>
+        <translation>{text} ist keine endliche Zahl</translation>
+    </message>
+    <message>
+        <source>{value} is negative; values must be &gt;= 0</source>
+        <translation>{value} ist negativ; Werte müssen &gt;= 0 sein</translation>
+    </message>
+</context>
+<context>
     <name>MainWindow</name>
     <message>
         <source>Dispatch grid</source>
@@ -449,6 +476,389 @@
     </message>
 </context>
 <context>
+    <name>PlanPanel</name>
+    <message>
+        <source>Least total (setup + wait penalties)</source>
+        <extracomment>Waiting jobs listed one by one in the panel; the rest are counted (the grid shows all).</extracomment>
+        <translation>Geringste Summe (Rüstzeit + Wartekosten)</translation>
+    </message>
+    <message>
+        <source>Most total value (values are gains)</source>
+        <translation>Größter Gesamtwert (Werte sind Gewinne)</translation>
+    </message>
+    <message>
+        <source>Smallest largest single value, then least total</source>
+        <translation>Kleinster größter Einzelwert, dann geringste Summe</translation>
+    </message>
+    <message>
+        <source>One round: one job per free machine slot</source>
+        <translation>Eine Runde: ein Auftrag je freiem Maschinenplatz</translation>
+    </message>
+    <message>
+        <source>Whole shift: several jobs per machine within its hours</source>
+        <translation>Ganze Schicht: mehrere Aufträge je Maschine innerhalb ihrer Stunden</translation>
+    </message>
+    <message>
+        <source>What the plan optimises; changing it re-solves at once</source>
+        <translation>Was der Plan optimiert; eine Änderung berechnet sofort neu</translation>
+    </message>
+    <message>
+        <source>Objective</source>
+        <translation>Ziel</translation>
+    </message>
+    <message>
+        <source>&amp;Objective:</source>
+        <translation>&amp;Ziel:</translation>
+    </message>
+    <message>
+        <source>Plan one dispatch round, or fill each machine&apos;s whole shift (needs run hours; may take longer, with progress and cancel)</source>
+        <translation>Eine Zuteilungsrunde planen oder die ganze Schicht jeder Maschine füllen (braucht Laufzeiten; kann länger dauern, mit Fortschritt und Abbruch)</translation>
+    </message>
+    <message>
+        <source>Planning mode</source>
+        <translation>Planungsart</translation>
+    </message>
+    <message>
+        <source>&amp;Mode:</source>
+        <translation>&amp;Art:</translation>
+    </message>
+    <message>
+        <source>Plan total</source>
+        <translation>Plansumme</translation>
+    </message>
+    <message>
+        <source>The plan&apos;s total and what it is made of</source>
+        <translation>Die Summe des Plans und woraus sie besteht</translation>
+    </message>
+    <message>
+        <source>Total:</source>
+        <translation>Summe:</translation>
+    </message>
+    <message>
+        <source>Jobs placed</source>
+        <translation>Eingeplante Aufträge</translation>
+    </message>
+    <message>
+        <source>Jobs dispatched, running and waiting</source>
+        <translation>Zugeteilte, laufende und wartende Aufträge</translation>
+    </message>
+    <message>
+        <source>Placed:</source>
+        <translation>Eingeplant:</translation>
+    </message>
+    <message>
+        <source>Proof of optimality</source>
+        <translation>Nachweis der Optimalität</translation>
+    </message>
+    <message>
+        <source>Whether the plan is proven the best</source>
+        <translation>Ob der Plan nachweislich der beste ist</translation>
+    </message>
+    <message>
+        <source>Proof:</source>
+        <translation>Nachweis:</translation>
+    </message>
+    <message>
+        <source>No plan yet</source>
+        <translation>Noch kein Plan</translation>
+    </message>
+    <message>
+        <source>Plan status</source>
+        <translation>Planstatus</translation>
+    </message>
+    <message>
+        <source>Whether the plan shown is up to date, and why not</source>
+        <translation>Ob der angezeigte Plan aktuell ist, und warum nicht</translation>
+    </message>
+    <message>
+        <source>Solving in the background; the grid stays editable</source>
+        <translation>Berechnung im Hintergrund; das Raster bleibt bearbeitbar</translation>
+    </message>
+    <message>
+        <source>Solving</source>
+        <translation>Berechnung</translation>
+    </message>
+    <message>
+        <source>Cancel</source>
+        <translation>Abbrechen</translation>
+    </message>
+    <message>
+        <source>Stop waiting for this solve (Esc)</source>
+        <translation>Nicht länger auf diese Berechnung warten (Esc)</translation>
+    </message>
+    <message>
+        <source>Cancel solve</source>
+        <translation>Berechnung abbrechen</translation>
+    </message>
+    <message>
+        <source>Machine</source>
+        <translation>Maschine</translation>
+    </message>
+    <message>
+        <source>Job / why it waits</source>
+        <translation>Auftrag / warum er wartet</translation>
+    </message>
+    <message>
+        <source>Value</source>
+        <translation>Wert</translation>
+    </message>
+    <message>
+        <source>Plan by machine</source>
+        <translation>Plan nach Maschinen</translation>
+    </message>
+    <message>
+        <source>Each machine&apos;s jobs, the waiting jobs with their reasons, the crew and idle machines</source>
+        <translation>Die Aufträge jeder Maschine, die wartenden Aufträge mit Gründen, das Personal und freie Maschinen</translation>
+    </message>
+    <message>
+        <source>Solving… {progress}</source>
+        <translation>Berechnung läuft… {progress}</translation>
+    </message>
+    <message>
+        <source>Solving…</source>
+        <translation>Berechnung läuft…</translation>
+    </message>
+    <message>
+        <source>… (hover for all)</source>
+        <translation>… (alles im Tooltip)</translation>
+    </message>
+    <message>
+        <source>{mark} No plan: {why}</source>
+        <translation>{mark} Kein Plan: {why}</translation>
+    </message>
+    <message>
+        <source>Solve cancelled; the plan shown is out of date (edit or F5 to re-solve)</source>
+        <translation>Berechnung abgebrochen; der angezeigte Plan ist veraltet (ändern oder F5 zum Neuberechnen)</translation>
+    </message>
+    <message>
+        <source>runs {job} with no qualified operator present</source>
+        <translation>führt {job} aus, ohne dass ein qualifizierter Bediener anwesend ist</translation>
+    </message>
+    <message>
+        <source>Stop it only by the site&apos;s procedure: the plan never stops a running machine</source>
+        <translation>Nur nach dem Verfahren des Standorts anhalten: der Plan hält nie eine laufende Maschine an</translation>
+    </message>
+    <message>
+        <source>{mark} short of operators</source>
+        <translation>{mark} zu wenig Bediener</translation>
+    </message>
+    <message numerus="yes">
+        <source>%n job(s) wait for an operator</source>
+        <translation>
+            <numerusform>%n Auftrag wartet auf einen Bediener</numerusform>
+            <numerusform>%n Aufträge warten auf einen Bediener</numerusform>
+        </translation>
+    </message>
+    <message>
+        <source>authorisation ends {date}</source>
+        <translation>Befugnis endet am {date}</translation>
+    </message>
+    <message>
+        <source>not here yet</source>
+        <translation>noch nicht da</translation>
+    </message>
+    <message>
+        <source>{operator} arrives later in the shift</source>
+        <translation>{operator} kommt später in der Schicht</translation>
+    </message>
+    <message>
+        <source>absent</source>
+        <translation>abwesend</translation>
+    </message>
+    <message>
+        <source>{operator} is absent this shift</source>
+        <translation>{operator} fehlt in dieser Schicht</translation>
+    </message>
+    <message numerus="yes">
+        <source>Crew (%n present)</source>
+        <translation>
+            <numerusform>Personal (%n anwesend)</numerusform>
+            <numerusform>Personal (%n anwesend)</numerusform>
+        </translation>
+    </message>
+    <message>
+        <source>every machine in the plan is staffed</source>
+        <translation>jede Maschine im Plan ist besetzt</translation>
+    </message>
+    <message>
+        <source>{mark} Up to date (solved in {ms} ms)</source>
+        <translation>{mark} Aktuell (berechnet in {ms} ms)</translation>
+    </message>
+    <message>
+        <source>The plan shown matches the grid as it is now</source>
+        <translation>Der angezeigte Plan passt zum Raster, wie es jetzt ist</translation>
+    </message>
+    <message>
+        <source>Sum of the values of newly dispatched jobs minus the wait penalties of waiting jobs (running jobs are not counted)</source>
+        <translation>Summe der Werte neu zugeteilter Aufträge minus die Wartekosten wartender Aufträge (laufende Aufträge zählen nicht)</translation>
+    </message>
+    <message>
+        <source>Sum of the values of newly dispatched jobs plus the wait penalties of waiting jobs (running jobs are not counted)</source>
+        <translation>Summe der Werte neu zugeteilter Aufträge plus die Wartekosten wartender Aufträge (laufende Aufträge zählen nicht)</translation>
+    </message>
+    <message>
+        <source>{dispatched} dispatched, {running} running, {waiting} waiting</source>
+        <translation>zugeteilt: {dispatched}, laufend: {running}, wartend: {waiting}</translation>
+    </message>
+    <message>
+        <source>Jobs newly dispatched this round, jobs already running, jobs waiting</source>
+        <translation>In dieser Runde neu zugeteilte Aufträge, bereits laufende Aufträge, wartende Aufträge</translation>
+    </message>
+    <message>
+        <source>{mark} optimal (proven by the MILP solver)</source>
+        <translation>{mark} optimal (vom MILP-Löser bewiesen)</translation>
+    </message>
+    <message>
+        <source>{mark} optimal (certificate checked)</source>
+        <translation>{mark} optimal (Zertifikat geprüft)</translation>
+    </message>
+    <message>
+        <source>Dual potentials prove no other plan placing as many jobs has a better total</source>
+        <translation>Duale Potenziale beweisen, dass kein anderer Plan mit ebenso vielen eingeplanten Aufträgen eine bessere Summe hat</translation>
+    </message>
+    <message>
+        <source>{mark} certificate did NOT check</source>
+        <translation>{mark} Zertifikat NICHT bestätigt</translation>
+    </message>
+    <message>
+        <source>; largest value {value}</source>
+        <translation>; größter Wert {value}</translation>
+    </message>
+    <message numerus="yes">
+        <source>Machines (%n)</source>
+        <translation>
+            <numerusform>Maschinen (%n)</numerusform>
+            <numerusform>Maschinen (%n)</numerusform>
+        </translation>
+    </message>
+    <message>
+        <source>{used} of {hours} h used</source>
+        <translation>{used} von {hours} h belegt</translation>
+    </message>
+    <message>
+        <source>Run hours planned on {machine} this shift, of the hours it has</source>
+        <translation>Auf {machine} in dieser Schicht geplante Laufstunden, von ihren verfügbaren Stunden</translation>
+    </message>
+    <message>
+        <source>Position {n} in {machine}&apos;s run order</source>
+        <translation>Position {n} in der Reihenfolge von {machine}</translation>
+    </message>
+    <message>
+        <source>{machine} is minded by {operator} in this plan</source>
+        <translation>{machine} wird in diesem Plan von {operator} bedient</translation>
+    </message>
+    <message>
+        <source>Value of {job} on {machine} ({unit}) - already running, not counted in the total</source>
+        <translation>Wert von {job} auf {machine} ({unit}) - läuft bereits, zählt nicht zur Summe</translation>
+    </message>
+    <message>
+        <source>Value of {job} on {machine} ({unit})</source>
+        <translation>Wert von {job} auf {machine} ({unit})</translation>
+    </message>
+    <message>
+        <source>already running, stays</source>
+        <translation>läuft bereits, bleibt</translation>
+    </message>
+    <message>
+        <source>newly dispatched</source>
+        <translation>neu zugeteilt</translation>
+    </message>
+    <message numerus="yes">
+        <source>Waiting jobs (%n)</source>
+        <translation>
+            <numerusform>Wartende Aufträge (%n)</numerusform>
+            <numerusform>Wartende Aufträge (%n)</numerusform>
+        </translation>
+    </message>
+    <message>
+        <source>{jobs} for {machines}</source>
+        <translation>{jobs} für {machines}</translation>
+    </message>
+    <message numerus="yes">
+        <source>%n job(s)</source>
+        <translation>
+            <numerusform>%n Auftrag</numerusform>
+            <numerusform>%n Aufträge</numerusform>
+        </translation>
+    </message>
+    <message numerus="yes">
+        <source>%n machine(s)</source>
+        <translation>
+            <numerusform>%n Maschine</numerusform>
+            <numerusform>%n Maschinen</numerusform>
+        </translation>
+    </message>
+    <message>
+        <source>no available machine can run it</source>
+        <translation>keine verfügbare Maschine kann ihn ausführen</translation>
+    </message>
+    <message>
+        <source>cheaper to leave it waiting</source>
+        <translation>Warten ist günstiger</translation>
+    </message>
+    <message>
+        <source>left waiting: cheaper overall</source>
+        <translation>wartet: insgesamt günstiger</translation>
+    </message>
+    <message numerus="yes">
+        <source>… and %n more</source>
+        <translation>
+            <numerusform>… und %n weiterer</numerusform>
+            <numerusform>… und %n weitere</numerusform>
+        </translation>
+    </message>
+    <message>
+        <source>see the grid&apos;s &apos;Plan puts it on&apos; column</source>
+        <translation>siehe die Spalte &apos;Plan setzt ihn auf&apos; im Raster</translation>
+    </message>
+    <message>
+        <source>Long lists are cut here to keep the window quick; every job&apos;s place or reason is in the grid</source>
+        <translation>Lange Listen werden hier gekürzt, damit das Fenster schnell bleibt; Platz oder Grund jedes Auftrags steht im Raster</translation>
+    </message>
+    <message numerus="yes">
+        <source>Idle machines (%n)</source>
+        <translation>
+            <numerusform>Freie Maschinen (%n)</numerusform>
+            <numerusform>Freie Maschinen (%n)</numerusform>
+        </translation>
+    </message>
+    <message>
+        <source>no job this round</source>
+        <translation>kein Auftrag in dieser Runde</translation>
+    </message>
+    <message numerus="yes">
+        <source>Not available (%n)</source>
+        <translation>
+            <numerusform>Nicht verfügbar (%n)</numerusform>
+            <numerusform>Nicht verfügbar (%n)</numerusform>
+        </translation>
+    </message>
+    <message>
+        <source>down or in maintenance - lockout/tagout before any work</source>
+        <translation>ausgefallen oder in Wartung - vor jeder Arbeit Sperren und Kennzeichnen (LOTO)</translation>
+    </message>
+    <message>
+        <source>values</source>
+        <translation>Werte</translation>
+    </message>
+    <message>
+        <source>costs</source>
+        <translation>Kosten</translation>
+    </message>
+    <message>
+        <source>setups</source>
+        <translation>Rüstzeiten</translation>
+    </message>
+    <message>
+        <source> ({planned_word} {planned} - wait penalties {penalties})</source>
+        <translation> ({planned_word} {planned} - Wartekosten {penalties})</translation>
+    </message>
+    <message>
+        <source> ({planned_word} {planned} + wait penalties {penalties})</source>
+        <translation> ({planned_word} {planned} + Wartekosten {penalties})</translation>
+    </message>
+</context>
+<context>
     <name>Sheet</name>
     <message>
         <source>no available machine can run it</source>
@@ -507,7 +917,7 @@
     <message>
         <source>Apply lockout/tagout before any work on a machine that is down.</source>
         <extracomment>The cautions printed at the foot of every page. Wording is ours; the points are the ones every sheet must carry (see the Safety section of the README).</extracomment>
-        <translation>Vor jeder Arbeit an einer ausgefallenen Maschine Verriegeln und Kennzeichnen (LOTO) anwenden.</translation>
+        <translation>Vor jeder Arbeit an einer ausgefallenen Maschine Sperren und Kennzeichnen (LOTO) anwenden.</translation>
     </message>
     <message>
         <source>Only operators trained and authorised for a machine may run it, whatever this sheet says.</source>
@@ -578,8 +988,8 @@
     <message numerus="yes">
         <source>Machines down (%n) - lockout/tagout before any work</source>
         <translation>
-            <numerusform>Ausgefallene Maschinen (%n) - vor jeder Arbeit Verriegeln und Kennzeichnen (LOTO)</numerusform>
-            <numerusform>Ausgefallene Maschinen (%n) - vor jeder Arbeit Verriegeln und Kennzeichnen (LOTO)</numerusform>
+            <numerusform>Ausgefallene Maschinen (%n) - vor jeder Arbeit Sperren und Kennzeichnen (LOTO)</numerusform>
+            <numerusform>Ausgefallene Maschinen (%n) - vor jeder Arbeit Sperren und Kennzeichnen (LOTO)</numerusform>
         </translation>
     </message>
     <message numerus="yes">

@@ -2,6 +2,72 @@
 <!DOCTYPE TS>
 <TS version="2.1" language="en_US">
 <context>
+    <name>PlanPanel</name>
+    <message numerus="yes">
+        <source>%n job(s) wait for an operator</source>
+        <translation>
+            <numerusform>%n job waits for an operator</numerusform>
+            <numerusform>%n jobs wait for an operator</numerusform>
+        </translation>
+    </message>
+    <message numerus="yes">
+        <source>Crew (%n present)</source>
+        <translation>
+            <numerusform>Crew (%n present)</numerusform>
+            <numerusform>Crew (%n present)</numerusform>
+        </translation>
+    </message>
+    <message numerus="yes">
+        <source>Machines (%n)</source>
+        <translation>
+            <numerusform>Machines (%n)</numerusform>
+            <numerusform>Machines (%n)</numerusform>
+        </translation>
+    </message>
+    <message numerus="yes">
+        <source>Waiting jobs (%n)</source>
+        <translation>
+            <numerusform>Waiting jobs (%n)</numerusform>
+            <numerusform>Waiting jobs (%n)</numerusform>
+        </translation>
+    </message>
+    <message numerus="yes">
+        <source>%n job(s)</source>
+        <translation>
+            <numerusform>%n job</numerusform>
+            <numerusform>%n jobs</numerusform>
+        </translation>
+    </message>
+    <message numerus="yes">
+        <source>%n machine(s)</source>
+        <translation>
+            <numerusform>%n machine</numerusform>
+            <numerusform>%n machines</numerusform>
+        </translation>
+    </message>
+    <message numerus="yes">
+        <source>… and %n more</source>
+        <translation>
+            <numerusform>… and %n more</numerusform>
+            <numerusform>… and %n more</numerusform>
+        </translation>
+    </message>
+    <message numerus="yes">
+        <source>Idle machines (%n)</source>
+        <translation>
+            <numerusform>Idle machines (%n)</numerusform>
+            <numerusform>Idle machines (%n)</numerusform>
+        </translation>
+    </message>
+    <message numerus="yes">
+        <source>Not available (%n)</source>
+        <translation>
+            <numerusform>Not available (%n)</numerusform>
+            <numerusform>Not available (%n)</numerusform>
+        </translation>
+    </message>
+</context>
+<context>
     <name>Sheet</name>
     <message numerus="yes">
         <source>%n machine(s)</source>

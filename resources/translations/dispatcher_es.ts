@@ -2,6 +2,33 @@
 <!DOCTYPE TS>
 <TS version="2.1" language="es_ES">
 <context>
+    <name>Format</name>
+    <message>
+        <source>setup min</source>
+        <translation>min de preparación</translation>
+    </message>
+    <message>
+        <source>cost</source>
+        <translation>coste</translation>
+    </message>
+    <message>
+        <source>value</source>
+        <translation>valor</translation>
+    </message>
+    <message>
+        <source>{text} is not a number (type x or leave empty when the machine cannot run the job)</source>
+        <translation>{text} no es un número (escriba x o déjelo vacío si la máquina no puede hacer el trabajo)</translation>
+    </message>
+    <message>
+        <source>{text} is not a finite number</source>
+        <translation>{text} no es un número finito</translation>
+    </message>
+    <message>
+        <source>{value} is negative; values must be &gt;= 0</source>
+        <translation>{value} es negativo; los valores deben ser &gt;= 0</translation>
+    </message>
+</context>
+<context>
     <name>MainWindow</name>
     <message>
         <source>Dispatch grid</source>
@@ -446,6 +473,389 @@
     <message>
         <source>Plan (*.csv *.xlsx)</source>
         <translation>Plan (*.csv *.xlsx)</translation>
+    </message>
+</context>
+<context>
+    <name>PlanPanel</name>
+    <message>
+        <source>Least total (setup + wait penalties)</source>
+        <extracomment>Waiting jobs listed one by one in the panel; the rest are counted (the grid shows all).</extracomment>
+        <translation>Menor total (preparación + penalizaciones por espera)</translation>
+    </message>
+    <message>
+        <source>Most total value (values are gains)</source>
+        <translation>Mayor valor total (los valores son ganancias)</translation>
+    </message>
+    <message>
+        <source>Smallest largest single value, then least total</source>
+        <translation>Menor valor individual máximo, luego menor total</translation>
+    </message>
+    <message>
+        <source>One round: one job per free machine slot</source>
+        <translation>Una ronda: un trabajo por puesto de máquina libre</translation>
+    </message>
+    <message>
+        <source>Whole shift: several jobs per machine within its hours</source>
+        <translation>Turno completo: varios trabajos por máquina dentro de sus horas</translation>
+    </message>
+    <message>
+        <source>What the plan optimises; changing it re-solves at once</source>
+        <translation>Lo que optimiza el plan; al cambiarlo se recalcula enseguida</translation>
+    </message>
+    <message>
+        <source>Objective</source>
+        <translation>Objetivo</translation>
+    </message>
+    <message>
+        <source>&amp;Objective:</source>
+        <translation>&amp;Objetivo:</translation>
+    </message>
+    <message>
+        <source>Plan one dispatch round, or fill each machine&apos;s whole shift (needs run hours; may take longer, with progress and cancel)</source>
+        <translation>Planificar una ronda de asignación o llenar el turno completo de cada máquina (necesita horas de trabajo; puede tardar más, con progreso y cancelación)</translation>
+    </message>
+    <message>
+        <source>Planning mode</source>
+        <translation>Modo de planificación</translation>
+    </message>
+    <message>
+        <source>&amp;Mode:</source>
+        <translation>&amp;Modo:</translation>
+    </message>
+    <message>
+        <source>Plan total</source>
+        <translation>Total del plan</translation>
+    </message>
+    <message>
+        <source>The plan&apos;s total and what it is made of</source>
+        <translation>El total del plan y de qué se compone</translation>
+    </message>
+    <message>
+        <source>Total:</source>
+        <translation>Total:</translation>
+    </message>
+    <message>
+        <source>Jobs placed</source>
+        <translation>Trabajos asignados</translation>
+    </message>
+    <message>
+        <source>Jobs dispatched, running and waiting</source>
+        <translation>Trabajos asignados, en marcha y en espera</translation>
+    </message>
+    <message>
+        <source>Placed:</source>
+        <translation>Asignados:</translation>
+    </message>
+    <message>
+        <source>Proof of optimality</source>
+        <translation>Prueba de optimalidad</translation>
+    </message>
+    <message>
+        <source>Whether the plan is proven the best</source>
+        <translation>Si está demostrado que el plan es el mejor</translation>
+    </message>
+    <message>
+        <source>Proof:</source>
+        <translation>Prueba:</translation>
+    </message>
+    <message>
+        <source>No plan yet</source>
+        <translation>Todavía no hay plan</translation>
+    </message>
+    <message>
+        <source>Plan status</source>
+        <translation>Estado del plan</translation>
+    </message>
+    <message>
+        <source>Whether the plan shown is up to date, and why not</source>
+        <translation>Si el plan mostrado está al día, y por qué no</translation>
+    </message>
+    <message>
+        <source>Solving in the background; the grid stays editable</source>
+        <translation>Calculando en segundo plano; la cuadrícula sigue editable</translation>
+    </message>
+    <message>
+        <source>Solving</source>
+        <translation>Cálculo</translation>
+    </message>
+    <message>
+        <source>Cancel</source>
+        <translation>Cancelar</translation>
+    </message>
+    <message>
+        <source>Stop waiting for this solve (Esc)</source>
+        <translation>Dejar de esperar este cálculo (Esc)</translation>
+    </message>
+    <message>
+        <source>Cancel solve</source>
+        <translation>Cancelar cálculo</translation>
+    </message>
+    <message>
+        <source>Machine</source>
+        <translation>Máquina</translation>
+    </message>
+    <message>
+        <source>Job / why it waits</source>
+        <translation>Trabajo / por qué espera</translation>
+    </message>
+    <message>
+        <source>Value</source>
+        <translation>Valor</translation>
+    </message>
+    <message>
+        <source>Plan by machine</source>
+        <translation>Plan por máquina</translation>
+    </message>
+    <message>
+        <source>Each machine&apos;s jobs, the waiting jobs with their reasons, the crew and idle machines</source>
+        <translation>Los trabajos de cada máquina, los trabajos en espera con sus motivos, el personal y las máquinas libres</translation>
+    </message>
+    <message>
+        <source>Solving… {progress}</source>
+        <translation>Calculando… {progress}</translation>
+    </message>
+    <message>
+        <source>Solving…</source>
+        <translation>Calculando…</translation>
+    </message>
+    <message>
+        <source>… (hover for all)</source>
+        <translation>… (pase el ratón para ver todo)</translation>
+    </message>
+    <message>
+        <source>{mark} No plan: {why}</source>
+        <translation>{mark} Sin plan: {why}</translation>
+    </message>
+    <message>
+        <source>Solve cancelled; the plan shown is out of date (edit or F5 to re-solve)</source>
+        <translation>Cálculo cancelado; el plan mostrado está desfasado (edite o pulse F5 para recalcular)</translation>
+    </message>
+    <message>
+        <source>runs {job} with no qualified operator present</source>
+        <translation>hace {job} sin ningún operario cualificado presente</translation>
+    </message>
+    <message>
+        <source>Stop it only by the site&apos;s procedure: the plan never stops a running machine</source>
+        <translation>Deténgala solo según el procedimiento de la planta: el plan nunca detiene una máquina en marcha</translation>
+    </message>
+    <message>
+        <source>{mark} short of operators</source>
+        <translation>{mark} faltan operarios</translation>
+    </message>
+    <message numerus="yes">
+        <source>%n job(s) wait for an operator</source>
+        <translation>
+            <numerusform>%n trabajo espera a un operario</numerusform>
+            <numerusform>%n trabajos esperan a un operario</numerusform>
+        </translation>
+    </message>
+    <message>
+        <source>authorisation ends {date}</source>
+        <translation>la autorización termina el {date}</translation>
+    </message>
+    <message>
+        <source>not here yet</source>
+        <translation>todavía no ha llegado</translation>
+    </message>
+    <message>
+        <source>{operator} arrives later in the shift</source>
+        <translation>{operator} llega más tarde en el turno</translation>
+    </message>
+    <message>
+        <source>absent</source>
+        <translation>ausente</translation>
+    </message>
+    <message>
+        <source>{operator} is absent this shift</source>
+        <translation>{operator} está ausente este turno</translation>
+    </message>
+    <message numerus="yes">
+        <source>Crew (%n present)</source>
+        <translation>
+            <numerusform>Personal (%n presente)</numerusform>
+            <numerusform>Personal (%n presentes)</numerusform>
+        </translation>
+    </message>
+    <message>
+        <source>every machine in the plan is staffed</source>
+        <translation>todas las máquinas del plan tienen operario</translation>
+    </message>
+    <message>
+        <source>{mark} Up to date (solved in {ms} ms)</source>
+        <translation>{mark} Al día (calculado en {ms} ms)</translation>
+    </message>
+    <message>
+        <source>The plan shown matches the grid as it is now</source>
+        <translation>El plan mostrado corresponde a la cuadrícula tal como está ahora</translation>
+    </message>
+    <message>
+        <source>Sum of the values of newly dispatched jobs minus the wait penalties of waiting jobs (running jobs are not counted)</source>
+        <translation>Suma de los valores de los trabajos recién asignados menos las penalizaciones de los trabajos en espera (los trabajos en marcha no cuentan)</translation>
+    </message>
+    <message>
+        <source>Sum of the values of newly dispatched jobs plus the wait penalties of waiting jobs (running jobs are not counted)</source>
+        <translation>Suma de los valores de los trabajos recién asignados más las penalizaciones de los trabajos en espera (los trabajos en marcha no cuentan)</translation>
+    </message>
+    <message>
+        <source>{dispatched} dispatched, {running} running, {waiting} waiting</source>
+        <translation>asignados: {dispatched}, en marcha: {running}, en espera: {waiting}</translation>
+    </message>
+    <message>
+        <source>Jobs newly dispatched this round, jobs already running, jobs waiting</source>
+        <translation>Trabajos recién asignados en esta ronda, trabajos ya en marcha, trabajos en espera</translation>
+    </message>
+    <message>
+        <source>{mark} optimal (proven by the MILP solver)</source>
+        <translation>{mark} óptimo (demostrado por el solver MILP)</translation>
+    </message>
+    <message>
+        <source>{mark} optimal (certificate checked)</source>
+        <translation>{mark} óptimo (certificado comprobado)</translation>
+    </message>
+    <message>
+        <source>Dual potentials prove no other plan placing as many jobs has a better total</source>
+        <translation>Los potenciales duales demuestran que ningún otro plan que asigne tantos trabajos tiene un total mejor</translation>
+    </message>
+    <message>
+        <source>{mark} certificate did NOT check</source>
+        <translation>{mark} el certificado NO se confirmó</translation>
+    </message>
+    <message>
+        <source>; largest value {value}</source>
+        <translation>; valor máximo {value}</translation>
+    </message>
+    <message numerus="yes">
+        <source>Machines (%n)</source>
+        <translation>
+            <numerusform>Máquinas (%n)</numerusform>
+            <numerusform>Máquinas (%n)</numerusform>
+        </translation>
+    </message>
+    <message>
+        <source>{used} of {hours} h used</source>
+        <translation>{used} de {hours} h usadas</translation>
+    </message>
+    <message>
+        <source>Run hours planned on {machine} this shift, of the hours it has</source>
+        <translation>Horas de trabajo planificadas en {machine} este turno, de las horas que tiene</translation>
+    </message>
+    <message>
+        <source>Position {n} in {machine}&apos;s run order</source>
+        <translation>Posición {n} en el orden de trabajo de {machine}</translation>
+    </message>
+    <message>
+        <source>{machine} is minded by {operator} in this plan</source>
+        <translation>{machine} la atiende {operator} en este plan</translation>
+    </message>
+    <message>
+        <source>Value of {job} on {machine} ({unit}) - already running, not counted in the total</source>
+        <translation>Valor de {job} en {machine} ({unit}) - ya en marcha, no cuenta en el total</translation>
+    </message>
+    <message>
+        <source>Value of {job} on {machine} ({unit})</source>
+        <translation>Valor de {job} en {machine} ({unit})</translation>
+    </message>
+    <message>
+        <source>already running, stays</source>
+        <translation>ya en marcha, se queda</translation>
+    </message>
+    <message>
+        <source>newly dispatched</source>
+        <translation>recién asignado</translation>
+    </message>
+    <message numerus="yes">
+        <source>Waiting jobs (%n)</source>
+        <translation>
+            <numerusform>Trabajos en espera (%n)</numerusform>
+            <numerusform>Trabajos en espera (%n)</numerusform>
+        </translation>
+    </message>
+    <message>
+        <source>{jobs} for {machines}</source>
+        <translation>{jobs} para {machines}</translation>
+    </message>
+    <message numerus="yes">
+        <source>%n job(s)</source>
+        <translation>
+            <numerusform>%n trabajo</numerusform>
+            <numerusform>%n trabajos</numerusform>
+        </translation>
+    </message>
+    <message numerus="yes">
+        <source>%n machine(s)</source>
+        <translation>
+            <numerusform>%n máquina</numerusform>
+            <numerusform>%n máquinas</numerusform>
+        </translation>
+    </message>
+    <message>
+        <source>no available machine can run it</source>
+        <translation>ninguna máquina disponible puede hacerlo</translation>
+    </message>
+    <message>
+        <source>cheaper to leave it waiting</source>
+        <translation>es más barato dejarlo esperar</translation>
+    </message>
+    <message>
+        <source>left waiting: cheaper overall</source>
+        <translation>queda en espera: más barato en total</translation>
+    </message>
+    <message numerus="yes">
+        <source>… and %n more</source>
+        <translation>
+            <numerusform>… y %n más</numerusform>
+            <numerusform>… y %n más</numerusform>
+        </translation>
+    </message>
+    <message>
+        <source>see the grid&apos;s &apos;Plan puts it on&apos; column</source>
+        <translation>vea la columna &apos;El plan lo pone en&apos; de la cuadrícula</translation>
+    </message>
+    <message>
+        <source>Long lists are cut here to keep the window quick; every job&apos;s place or reason is in the grid</source>
+        <translation>Las listas largas se cortan aquí para que la ventana siga ágil; el puesto o el motivo de cada trabajo está en la cuadrícula</translation>
+    </message>
+    <message numerus="yes">
+        <source>Idle machines (%n)</source>
+        <translation>
+            <numerusform>Máquinas libres (%n)</numerusform>
+            <numerusform>Máquinas libres (%n)</numerusform>
+        </translation>
+    </message>
+    <message>
+        <source>no job this round</source>
+        <translation>ningún trabajo en esta ronda</translation>
+    </message>
+    <message numerus="yes">
+        <source>Not available (%n)</source>
+        <translation>
+            <numerusform>No disponibles (%n)</numerusform>
+            <numerusform>No disponibles (%n)</numerusform>
+        </translation>
+    </message>
+    <message>
+        <source>down or in maintenance - lockout/tagout before any work</source>
+        <translation>averiada o en mantenimiento - bloqueo y etiquetado (LOTO) antes de cualquier trabajo</translation>
+    </message>
+    <message>
+        <source>values</source>
+        <translation>valores</translation>
+    </message>
+    <message>
+        <source>costs</source>
+        <translation>costes</translation>
+    </message>
+    <message>
+        <source>setups</source>
+        <translation>preparaciones</translation>
+    </message>
+    <message>
+        <source> ({planned_word} {planned} - wait penalties {penalties})</source>
+        <translation> ({planned_word} {planned} - penalizaciones por espera {penalties})</translation>
+    </message>
+    <message>
+        <source> ({planned_word} {planned} + wait penalties {penalties})</source>
+        <translation> ({planned_word} {planned} + penalizaciones por espera {penalties})</translation>
     </message>
 </context>
 <context>
