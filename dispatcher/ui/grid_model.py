@@ -9,22 +9,25 @@ diamond, forbidden pairs a cross and cannot-run pairs a dash, besides their colo
 
 from __future__ import annotations
 
-from PySide6.QtCore import QAbstractTableModel, QModelIndex, QPersistentModelIndex, Qt, Signal
+from PySide6.QtCore import QT_TRANSLATE_NOOP, QAbstractTableModel, QModelIndex, QPersistentModelIndex, Qt, Signal
 
 from dispatcher.shop.staffed import operators_by_machine
 from dispatcher.shop import DONE, DOWN, MAINTENANCE, MUST, MUST_NOT, RUNNING, UP, Plan
 from dispatcher.ui import palette
 from dispatcher.ui.document import ShopDocument
 from dispatcher.ui.edits import SetJobField, SetValues
-from dispatcher.ui.format import CellTextError, fmt, parse_cell
+from dispatcher.ui.format import CellTextError, fmt, parse_cell, unit_text
 
 COL_RUSH = 0
 COL_PENALTY = 1
 COL_HOURS = 2
 COL_PLAN = 3
 FIRST_MACHINE_COL = 4
-LEADING_HEADERS = {COL_RUSH: "Rush", COL_PENALTY: "Wait penalty", COL_HOURS: "Run hours",
-                   COL_PLAN: "Plan puts it on"}
+#: Heads of the leading columns (English; the model shows them translated).
+LEADING_HEADERS = {COL_RUSH: QT_TRANSLATE_NOOP("GridModel", "Rush"),
+                   COL_PENALTY: QT_TRANSLATE_NOOP("GridModel", "Wait penalty"),
+                   COL_HOURS: QT_TRANSLATE_NOOP("GridModel", "Run hours"),
+                   COL_PLAN: QT_TRANSLATE_NOOP("GridModel", "Plan puts it on")}
 
 ValueRole = Qt.ItemDataRole.UserRole + 1      # float | None: the grid value (None = cannot run)
 PlannedRole = Qt.ItemDataRole.UserRole + 2    # bool: the plan shown uses this pair
@@ -37,8 +40,14 @@ _CELL_ROLES = [Qt.ItemDataRole.DisplayRole, Qt.ItemDataRole.EditRole,
 _PLAN_ROLES = [Qt.ItemDataRole.DisplayRole, Qt.ItemDataRole.BackgroundRole,
                Qt.ItemDataRole.ToolTipRole, Qt.ItemDataRole.AccessibleTextRole, PlannedRole]
 
-STATE_TEXT = {UP: f"{palette.MARK_UP} up", DOWN: f"{palette.MARK_DOWN} DOWN",
-              MAINTENANCE: f"{palette.MARK_MAINT} maintenance"}
+#: A machine's state in its column head, after its mark (English; shown translated).
+STATE_TEXT = {UP: (palette.MARK_UP, QT_TRANSLATE_NOOP("GridModel", "up")),
+              DOWN: (palette.MARK_DOWN, QT_TRANSLATE_NOOP("GridModel", "DOWN")),
+              MAINTENANCE: (palette.MARK_MAINT, QT_TRANSLATE_NOOP("GridModel", "maintenance"))}
+#: A machine's state in a sentence (English; shown translated).
+STATE_WORDS = {UP: QT_TRANSLATE_NOOP("GridModel", "up"),
+               DOWN: QT_TRANSLATE_NOOP("GridModel", "down"),
+               MAINTENANCE: QT_TRANSLATE_NOOP("GridModel", "in maintenance")}
 
 
 class GridModel(QAbstractTableModel):
@@ -57,6 +66,7 @@ class GridModel(QAbstractTableModel):
         self._planned: dict[int, int] = {}     # row -> machine col (newly dispatched)
         self._running: dict[int, int] = {}     # row -> machine col (already running)
         self._waiting: set[int] = set()
+        self._rush_text = self.tr("{mark} RUSH").format(mark=palette.MARK_RUSH)  # painted per row
         doc.reset.connect(self._on_reset)
         doc.cells_changed.connect(self._on_cells)
         doc.jobs_changed.connect(self._on_jobs)
@@ -144,15 +154,15 @@ class GridModel(QAbstractTableModel):
         if role == Qt.ItemDataRole.CheckStateRole:
             return Qt.CheckState.Checked if job.rush else Qt.CheckState.Unchecked
         if role in (Qt.ItemDataRole.DisplayRole, Qt.ItemDataRole.AccessibleTextRole):
-            return f"{palette.MARK_RUSH} RUSH" if job.rush else ""
+            return self._rush_text if job.rush else ""
         if role == Qt.ItemDataRole.ForegroundRole and job.rush:
             return palette.colour("black")
         if role == Qt.ItemDataRole.BackgroundRole and job.rush:
             return palette.colour("rush", 110)
         if role == Qt.ItemDataRole.ToolTipRole:
-            return (f"{job.name} is a rush job: the plan must place it this round"
-                    if job.rush else f"{job.name} may wait if the machines are needed elsewhere "
-                    "(tick to make it a rush job)")
+            return (self.tr("{job} is a rush job: the plan must place it this round") if job.rush else
+                    self.tr("{job} may wait if the machines are needed elsewhere (tick to make it a rush "
+                            "job)")).format(job=job.name)
         return None
 
     def _penalty_data(self, row: int, role: int):
@@ -166,8 +176,9 @@ class GridModel(QAbstractTableModel):
         if role == Qt.ItemDataRole.TextAlignmentRole:
             return int(Qt.AlignmentFlag.AlignRight | Qt.AlignmentFlag.AlignVCenter)
         if role == Qt.ItemDataRole.ToolTipRole:
-            return (f"Wait penalty of {job.name}: {fmt(job.wait_penalty)} "
-                    f"({self._doc.shop.unit.label()}) added to the total if it is left waiting")
+            return self.tr("Wait penalty of {job}: {value} ({unit}) added to the total if it is left "
+                           "waiting").format(job=job.name, value=fmt(job.wait_penalty),
+                                             unit=unit_text(self._doc.shop.unit.label()))
         return None
 
     def _hours_data(self, row: int, role: int):
@@ -181,9 +192,10 @@ class GridModel(QAbstractTableModel):
             return int(Qt.AlignmentFlag.AlignRight | Qt.AlignmentFlag.AlignVCenter)
         if role == Qt.ItemDataRole.ToolTipRole:
             if job.run_hours is None:
-                return f"Run hours of {job.name}: not given (needed only to fill the whole shift)"
-            return (f"Run hours of {job.name}: {fmt(job.run_hours)} h (times each machine's speed "
-                    "factor; used when filling the whole shift)")
+                return self.tr("Run hours of {job}: not given (needed only to fill the whole shift)").format(
+                    job=job.name)
+            return self.tr("Run hours of {job}: {hours} h (times each machine's speed factor; used when "
+                           "filling the whole shift)").format(job=job.name, hours=fmt(job.run_hours))
         return None
 
     def _plan_data(self, row: int, role: int):
@@ -191,20 +203,23 @@ class GridModel(QAbstractTableModel):
         shop = self._doc.shop
         if row in self._running:
             m = shop.machines[self._running[row]].name
-            text, tip = f"\u25b6 runs on {m}", f"{job.name} is already running on {m}; it stays there"
+            text = self.tr("\u25b6 runs on {machine}").format(machine=m)
+            tip = self.tr("{job} is already running on {machine}; it stays there").format(job=job.name, machine=m)
         elif row in self._planned:
             m = shop.machines[self._planned[row]].name
             v = self._doc.value_at(row, self._planned[row])
             text = f"{palette.MARK_PLANNED} {m}"
-            tip = f"The plan puts {job.name} on {m} (value {fmt(v)} {shop.unit.label()})"
+            tip = self.tr("The plan puts {job} on {machine} (value {value} {unit})").format(
+                job=job.name, machine=m, value=fmt(v), unit=unit_text(shop.unit.label()))
         elif job.state == DONE:
-            text, tip = "done", f"{job.name} is done and takes no part"
+            text, tip = self.tr("done"), self.tr("{job} is done and takes no part").format(job=job.name)
         elif row in self._waiting:
-            text = "\u25cb waits"
+            text = self.tr("\u25cb waits")
             reason = self._plan.waiting_reasons.get(job.name) if self._plan else None
-            tip = f"{job.name} waits this round" + (f": {reason.text}" if reason else "")
+            tip = (self.tr("{job} waits this round: {reason}") if reason else
+                   self.tr("{job} waits this round")).format(job=job.name, reason=reason.text if reason else "")
         else:
-            text, tip = "", "no plan yet"
+            text, tip = "", self.tr("no plan yet")
         if role in (Qt.ItemDataRole.DisplayRole, Qt.ItemDataRole.AccessibleTextRole):
             return text
         if role == Qt.ItemDataRole.ToolTipRole:
@@ -268,49 +283,64 @@ class GridModel(QAbstractTableModel):
     def _cell_tip(self, row: int, col: int, value, pin, planned: bool, running: bool) -> str:
         shop = self._doc.shop
         job, machine = self._doc.job_at(row), self._doc.machine_at(col)
+        names = {"job": job.name, "machine": machine.name}
         if value is None:
-            lines = [f"{machine.name} cannot run {job.name} (type a number to allow it)"]
+            lines = [self.tr("{machine} cannot run {job} (type a number to allow it)").format(**names)]
         else:
-            lines = [f"Value of {job.name} on {machine.name}: {fmt(value)} ({shop.unit.label()})"]
+            lines = [self.tr("Value of {job} on {machine}: {value} ({unit})").format(
+                value=fmt(value), unit=unit_text(shop.unit.label()), **names)]
         if planned:
-            lines.append(f"{palette.MARK_PLANNED} the plan shown puts {job.name} here")
+            lines.append(self.tr("{mark} the plan shown puts {job} here").format(mark=palette.MARK_PLANNED, **names))
         if running:
-            lines.append(f"\u25b6 {job.name} is already running here")
+            lines.append(self.tr("{mark} {job} is already running here").format(mark="\u25b6", **names))
         if pin == MUST:
-            lines.append(f"{palette.MARK_PINNED} pinned: {job.name} must go to {machine.name}")
+            lines.append(self.tr("{mark} pinned: {job} must go to {machine}").format(
+                mark=palette.MARK_PINNED, **names))
         elif pin == MUST_NOT:
-            lines.append(f"{palette.MARK_FORBIDDEN} forbidden: {job.name} must not go to {machine.name}")
+            lines.append(self.tr("{mark} forbidden: {job} must not go to {machine}").format(
+                mark=palette.MARK_FORBIDDEN, **names))
         if machine.state != UP:
-            lines.append(f"{machine.name} is {machine.state} and takes no jobs")
+            lines.append(self.tr("{machine} is {state} and takes no jobs").format(
+                state=self._state_word(machine.state), **names))
+            if machine.state == DOWN:
+                lines.append(self.tr("Lockout/tagout before any work on {machine}").format(**names))
         return "\n".join(lines)
+
+    def _state_word(self, state: str) -> str:
+        return self.tr(STATE_WORDS[state]) if state in STATE_WORDS else state
 
     def headerData(self, section: int, orientation: Qt.Orientation, role: int = Qt.ItemDataRole.DisplayRole):
         shop = self._doc.shop
         if orientation == Qt.Orientation.Horizontal:
             if section < FIRST_MACHINE_COL:
                 if role in (Qt.ItemDataRole.DisplayRole, Qt.ItemDataRole.AccessibleTextRole):
-                    return LEADING_HEADERS[section]
+                    return self.tr(LEADING_HEADERS[section])
                 if role == Qt.ItemDataRole.ToolTipRole:
-                    return {COL_RUSH: "Rush jobs must be placed this round",
-                            COL_HOURS: "Hours each job runs (to fill the whole shift)",
-                            COL_PENALTY: f"Added to the total ({shop.unit.label()}) when the job waits",
-                            COL_PLAN: "Where the plan shown puts each job"}[section]
+                    return {COL_RUSH: self.tr("Rush jobs must be placed this round"),
+                            COL_HOURS: self.tr("Hours each job runs (to fill the whole shift)"),
+                            COL_PENALTY: self.tr("Added to the total ({unit}) when the job waits").format(
+                                unit=unit_text(shop.unit.label())),
+                            COL_PLAN: self.tr("Where the plan shown puts each job")}[section]
                 return None
             if section - FIRST_MACHINE_COL >= self._doc.n_machines():
                 return None
             m = self._doc.machine_at(section - FIRST_MACHINE_COL)
-            state = STATE_TEXT.get(m.state, m.state)
+            mark, word = STATE_TEXT.get(m.state, ("", m.state))
+            state = f"{mark} {self.tr(word)}" if m.state in STATE_TEXT else m.state
             slots = f" \u00d7{m.slots}" if m.slots != 1 else ""
             who = self._operators.get(m.name)
             if role in (Qt.ItemDataRole.DisplayRole, Qt.ItemDataRole.AccessibleTextRole):
                 return f"{m.name}\n{state}{slots}" + (f"\n{who}" if who else "")
             if role == Qt.ItemDataRole.ToolTipRole:
-                tip = f"{m.name}: {m.state}, takes {m.slots} job(s) per round"
+                tip = self.tr("{machine}: {state}, takes %n job(s) per round", "", m.slots).format(
+                    machine=m.name, state=self._state_word(m.state))
+                if m.state == DOWN:
+                    tip += "\n" + self.tr("Lockout/tagout before any work on {machine}").format(machine=m.name)
                 if who:
-                    tip += f"\nOperator in the plan shown: {who}"
+                    tip += "\n" + self.tr("Operator in the plan shown: {operator}").format(operator=who)
                 if m.state_note:
-                    tip += f"\nNote: {m.state_note}"
-                return tip + "\nRight-click (or Shift+F10) for machine actions"
+                    tip += "\n" + self.tr("Note: {note}").format(note=m.state_note)
+                return tip + "\n" + self.tr("Right-click (or Shift+F10) for machine actions")
             if role == Qt.ItemDataRole.BackgroundRole and m.state != UP:
                 return palette.colour(m.state if m.state == DOWN else "maintenance", 90)
             return None
@@ -319,19 +349,23 @@ class GridModel(QAbstractTableModel):
         job = self._doc.job_at(section)
         if role in (Qt.ItemDataRole.DisplayRole, Qt.ItemDataRole.AccessibleTextRole):
             if job.state == DONE:
-                return f"(done) {job.name}"
+                return self.tr("(done) {job}").format(job=job.name)
             return f"\u25b6 {job.name}" if job.state == RUNNING else job.name
         if role == Qt.ItemDataRole.ToolTipRole:
             parts = [job.name]
             if job.work_order:
-                parts.append(f"work order {job.work_order}")
+                parts.append(self.tr("work order {work_order}").format(work_order=job.work_order))
             if job.due:
-                parts.append(f"due {job.due:%Y-%m-%d %H:%M}")
-            parts.append(f"state: {job.state}")
+                parts.append(self.tr("due {time}").format(time=f"{job.due:%Y-%m-%d %H:%M}"))
+            parts.append(self.tr("state: {state}").format(state=self._job_state_word(job.state)))
             if job.notes:
                 parts.append(job.notes)
             return "\n".join(parts)
         return None
+
+    def _job_state_word(self, state: str) -> str:
+        words = {"waiting": self.tr("waiting"), "running": self.tr("running"), "done": self.tr("done")}
+        return words.get(state, state)
 
     def flags(self, index: QModelIndex | QPersistentModelIndex) -> Qt.ItemFlag:
         if not index.isValid():
@@ -353,38 +387,42 @@ class GridModel(QAbstractTableModel):
             rush = Qt.CheckState(value) == Qt.CheckState.Checked
             if rush != job.rush:
                 stack.push(SetJobField(self._doc, row, "rush", rush,
-                                       f"{'Mark' if rush else 'Unmark'} {job.name} as rush"))
+                                       (self.tr("Mark {job} as rush") if rush else
+                                        self.tr("Unmark {job} as rush")).format(job=job.name)))
             return True
         if role != Qt.ItemDataRole.EditRole:
             return False
         try:
             number = parse_cell(str(value))
         except CellTextError as exc:
-            self.warning.emit(f"{job.name}: {exc}")
+            self.warning.emit(self.tr("{job}: {problem}").format(job=job.name, problem=exc))
             return False
         if column == COL_HOURS:
             if number is not None and number <= 0:
-                self.warning.emit(f"{job.name}: run hours must be a number > 0 (or empty)")
+                self.warning.emit(self.tr("{job}: run hours must be a number > 0 (or empty)").format(job=job.name))
                 return False
             if number != job.run_hours:
                 stack.push(SetJobField(self._doc, row, "run_hours", number,
-                                       f"Run hours of {job.name} = {fmt(number) or 'none'}"))
+                                       self.tr("Run hours of {job} = {hours}").format(
+                                           job=job.name, hours=fmt(number) or self.tr("none"))))
             return True
         if column == COL_PENALTY:
             if number is None:
-                self.warning.emit(f"{job.name}: the wait penalty must be a number >= 0")
+                self.warning.emit(self.tr("{job}: the wait penalty must be a number >= 0").format(job=job.name))
                 return False
             if number != job.wait_penalty:
                 stack.push(SetJobField(self._doc, row, "wait_penalty", number,
-                                       f"Wait penalty of {job.name} = {fmt(number)}"))
+                                       self.tr("Wait penalty of {job} = {value}").format(
+                                           job=job.name, value=fmt(number))))
             return True
         col = column - FIRST_MACHINE_COL
         if col < 0:
             return False
         if number != self._doc.value_at(row, col):
             m = self._doc.machine_at(col)
-            what = "cannot run" if number is None else fmt(number)
-            stack.push(SetValues(self._doc, [(row, col, number)], f"{job.name} on {m.name} = {what}"))
+            what = self.tr("cannot run") if number is None else fmt(number)
+            stack.push(SetValues(self._doc, [(row, col, number)], self.tr("{job} on {machine} = {value}").format(
+                job=job.name, machine=m.name, value=what)))
         return True
 
     # ---- document signals -----------------------------------------------------------------

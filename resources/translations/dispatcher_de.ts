@@ -29,6 +29,240 @@
     </message>
 </context>
 <context>
+    <name>GridModel</name>
+    <message>
+        <source>Rush</source>
+        <extracomment>Heads of the leading columns (English; the model shows them translated).</extracomment>
+        <translation>Eilt</translation>
+    </message>
+    <message>
+        <source>Wait penalty</source>
+        <translation>Wartekosten</translation>
+    </message>
+    <message>
+        <source>Run hours</source>
+        <translation>Laufzeit (h)</translation>
+    </message>
+    <message>
+        <source>Plan puts it on</source>
+        <translation>Plan setzt ihn auf</translation>
+    </message>
+    <message>
+        <source>up</source>
+        <extracomment>A machine&apos;s state in its column head, after its mark (English; shown translated).
+----------
+A machine&apos;s state in a sentence (English; shown translated).</extracomment>
+        <translation>bereit</translation>
+    </message>
+    <message>
+        <source>DOWN</source>
+        <translation>AUSGEFALLEN</translation>
+    </message>
+    <message>
+        <source>maintenance</source>
+        <translation>Wartung</translation>
+    </message>
+    <message>
+        <source>down</source>
+        <translation>ausgefallen</translation>
+    </message>
+    <message>
+        <source>in maintenance</source>
+        <translation>in Wartung</translation>
+    </message>
+    <message>
+        <source>{mark} RUSH</source>
+        <translation>{mark} EILT</translation>
+    </message>
+    <message>
+        <source>{job} is a rush job: the plan must place it this round</source>
+        <translation>{job} ist ein Eilauftrag: der Plan muss ihn in dieser Runde einplanen</translation>
+    </message>
+    <message>
+        <source>{job} may wait if the machines are needed elsewhere (tick to make it a rush job)</source>
+        <translation>{job} darf warten, wenn die Maschinen anderswo gebraucht werden (ankreuzen für Eilauftrag)</translation>
+    </message>
+    <message>
+        <source>Wait penalty of {job}: {value} ({unit}) added to the total if it is left waiting</source>
+        <translation>Wartekosten von {job}: {value} ({unit}) kommen zur Summe hinzu, wenn er warten muss</translation>
+    </message>
+    <message>
+        <source>Run hours of {job}: not given (needed only to fill the whole shift)</source>
+        <translation>Laufzeit von {job}: nicht angegeben (nur zum Füllen der ganzen Schicht nötig)</translation>
+    </message>
+    <message>
+        <source>Run hours of {job}: {hours} h (times each machine&apos;s speed factor; used when filling the whole shift)</source>
+        <translation>Laufzeit von {job}: {hours} h (mal dem Geschwindigkeitsfaktor jeder Maschine; zum Füllen der ganzen Schicht)</translation>
+    </message>
+    <message>
+        <source>▶ runs on {machine}</source>
+        <translation>▶ läuft auf {machine}</translation>
+    </message>
+    <message>
+        <source>{job} is already running on {machine}; it stays there</source>
+        <translation>{job} läuft bereits auf {machine}; er bleibt dort</translation>
+    </message>
+    <message>
+        <source>The plan puts {job} on {machine} (value {value} {unit})</source>
+        <translation>Der Plan setzt {job} auf {machine} (Wert {value} {unit})</translation>
+    </message>
+    <message>
+        <source>done</source>
+        <translation>erledigt</translation>
+    </message>
+    <message>
+        <source>{job} is done and takes no part</source>
+        <translation>{job} ist erledigt und wird nicht mehr eingeplant</translation>
+    </message>
+    <message>
+        <source>○ waits</source>
+        <translation>○ wartet</translation>
+    </message>
+    <message>
+        <source>{job} waits this round: {reason}</source>
+        <translation>{job} wartet in dieser Runde: {reason}</translation>
+    </message>
+    <message>
+        <source>{job} waits this round</source>
+        <translation>{job} wartet in dieser Runde</translation>
+    </message>
+    <message>
+        <source>no plan yet</source>
+        <translation>noch kein Plan</translation>
+    </message>
+    <message>
+        <source>{machine} cannot run {job} (type a number to allow it)</source>
+        <translation>{machine} kann {job} nicht ausführen (eine Zahl eingeben, um es zu erlauben)</translation>
+    </message>
+    <message>
+        <source>Value of {job} on {machine}: {value} ({unit})</source>
+        <translation>Wert von {job} auf {machine}: {value} ({unit})</translation>
+    </message>
+    <message>
+        <source>{mark} the plan shown puts {job} here</source>
+        <translation>{mark} der angezeigte Plan setzt {job} hierher</translation>
+    </message>
+    <message>
+        <source>{mark} {job} is already running here</source>
+        <translation>{mark} {job} läuft hier bereits</translation>
+    </message>
+    <message>
+        <source>{mark} pinned: {job} must go to {machine}</source>
+        <translation>{mark} festgelegt: {job} muss auf {machine}</translation>
+    </message>
+    <message>
+        <source>{mark} forbidden: {job} must not go to {machine}</source>
+        <translation>{mark} verboten: {job} darf nicht auf {machine}</translation>
+    </message>
+    <message>
+        <source>{machine} is {state} and takes no jobs</source>
+        <translation>{machine} ist {state} und nimmt keine Aufträge an</translation>
+    </message>
+    <message>
+        <source>Lockout/tagout before any work on {machine}</source>
+        <translation>Vor jeder Arbeit an {machine} Sperren und Kennzeichnen (LOTO)</translation>
+    </message>
+    <message>
+        <source>Rush jobs must be placed this round</source>
+        <translation>Eilaufträge müssen in dieser Runde eingeplant werden</translation>
+    </message>
+    <message>
+        <source>Hours each job runs (to fill the whole shift)</source>
+        <translation>Stunden, die jeder Auftrag läuft (zum Füllen der ganzen Schicht)</translation>
+    </message>
+    <message>
+        <source>Added to the total ({unit}) when the job waits</source>
+        <translation>Kommt zur Summe ({unit}) hinzu, wenn der Auftrag wartet</translation>
+    </message>
+    <message>
+        <source>Where the plan shown puts each job</source>
+        <translation>Wohin der angezeigte Plan jeden Auftrag setzt</translation>
+    </message>
+    <message numerus="yes">
+        <source>{machine}: {state}, takes %n job(s) per round</source>
+        <translation>
+            <numerusform>{machine}: {state}, übernimmt %n Auftrag je Runde</numerusform>
+            <numerusform>{machine}: {state}, übernimmt %n Aufträge je Runde</numerusform>
+        </translation>
+    </message>
+    <message>
+        <source>Operator in the plan shown: {operator}</source>
+        <translation>Bediener im angezeigten Plan: {operator}</translation>
+    </message>
+    <message>
+        <source>Note: {note}</source>
+        <translation>Hinweis: {note}</translation>
+    </message>
+    <message>
+        <source>Right-click (or Shift+F10) for machine actions</source>
+        <translation>Rechtsklick (oder Umschalt+F10) für Maschinenaktionen</translation>
+    </message>
+    <message>
+        <source>(done) {job}</source>
+        <translation>(erledigt) {job}</translation>
+    </message>
+    <message>
+        <source>work order {work_order}</source>
+        <translation>Arbeitsauftrag {work_order}</translation>
+    </message>
+    <message>
+        <source>due {time}</source>
+        <translation>fällig {time}</translation>
+    </message>
+    <message>
+        <source>state: {state}</source>
+        <translation>Status: {state}</translation>
+    </message>
+    <message>
+        <source>waiting</source>
+        <translation>wartend</translation>
+    </message>
+    <message>
+        <source>running</source>
+        <translation>laufend</translation>
+    </message>
+    <message>
+        <source>Mark {job} as rush</source>
+        <translation>{job} als Eilauftrag markieren</translation>
+    </message>
+    <message>
+        <source>Unmark {job} as rush</source>
+        <translation>{job} nicht mehr als Eilauftrag</translation>
+    </message>
+    <message>
+        <source>{job}: {problem}</source>
+        <translation>{job}: {problem}</translation>
+    </message>
+    <message>
+        <source>{job}: run hours must be a number &gt; 0 (or empty)</source>
+        <translation>{job}: die Laufzeit muss eine Zahl &gt; 0 sein (oder leer)</translation>
+    </message>
+    <message>
+        <source>Run hours of {job} = {hours}</source>
+        <translation>Laufzeit von {job} = {hours}</translation>
+    </message>
+    <message>
+        <source>none</source>
+        <translation>keine</translation>
+    </message>
+    <message>
+        <source>{job}: the wait penalty must be a number &gt;= 0</source>
+        <translation>{job}: die Wartekosten müssen eine Zahl &gt;= 0 sein</translation>
+    </message>
+    <message>
+        <source>Wait penalty of {job} = {value}</source>
+        <translation>Wartekosten von {job} = {value}</translation>
+    </message>
+    <message>
+        <source>cannot run</source>
+        <translation>nicht möglich</translation>
+    </message>
+    <message>
+        <source>{job} on {machine} = {value}</source>
+        <translation>{job} auf {machine} = {value}</translation>
+    </message>
+</context>
+<context>
     <name>MainWindow</name>
     <message>
         <source>Dispatch grid</source>

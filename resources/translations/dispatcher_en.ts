@@ -2,6 +2,16 @@
 <!DOCTYPE TS>
 <TS version="2.1" language="en_US">
 <context>
+    <name>GridModel</name>
+    <message numerus="yes">
+        <source>{machine}: {state}, takes %n job(s) per round</source>
+        <translation>
+            <numerusform>{machine}: {state}, takes %n job per round</numerusform>
+            <numerusform>{machine}: {state}, takes %n jobs per round</numerusform>
+        </translation>
+    </message>
+</context>
+<context>
     <name>PlanPanel</name>
     <message numerus="yes">
         <source>%n job(s) wait for an operator</source>

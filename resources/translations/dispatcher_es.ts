@@ -29,6 +29,240 @@
     </message>
 </context>
 <context>
+    <name>GridModel</name>
+    <message>
+        <source>Rush</source>
+        <extracomment>Heads of the leading columns (English; the model shows them translated).</extracomment>
+        <translation>Urgente</translation>
+    </message>
+    <message>
+        <source>Wait penalty</source>
+        <translation>Penalización por espera</translation>
+    </message>
+    <message>
+        <source>Run hours</source>
+        <translation>Horas de trabajo</translation>
+    </message>
+    <message>
+        <source>Plan puts it on</source>
+        <translation>El plan lo pone en</translation>
+    </message>
+    <message>
+        <source>up</source>
+        <extracomment>A machine&apos;s state in its column head, after its mark (English; shown translated).
+----------
+A machine&apos;s state in a sentence (English; shown translated).</extracomment>
+        <translation>en marcha</translation>
+    </message>
+    <message>
+        <source>DOWN</source>
+        <translation>AVERIADA</translation>
+    </message>
+    <message>
+        <source>maintenance</source>
+        <translation>mantenimiento</translation>
+    </message>
+    <message>
+        <source>down</source>
+        <translation>averiada</translation>
+    </message>
+    <message>
+        <source>in maintenance</source>
+        <translation>en mantenimiento</translation>
+    </message>
+    <message>
+        <source>{mark} RUSH</source>
+        <translation>{mark} URGENTE</translation>
+    </message>
+    <message>
+        <source>{job} is a rush job: the plan must place it this round</source>
+        <translation>{job} es un trabajo urgente: el plan debe asignarlo en esta ronda</translation>
+    </message>
+    <message>
+        <source>{job} may wait if the machines are needed elsewhere (tick to make it a rush job)</source>
+        <translation>{job} puede esperar si las máquinas se necesitan en otro sitio (marque para hacerlo urgente)</translation>
+    </message>
+    <message>
+        <source>Wait penalty of {job}: {value} ({unit}) added to the total if it is left waiting</source>
+        <translation>Penalización por espera de {job}: {value} ({unit}) se suma al total si se deja esperando</translation>
+    </message>
+    <message>
+        <source>Run hours of {job}: not given (needed only to fill the whole shift)</source>
+        <translation>Horas de trabajo de {job}: sin indicar (solo hacen falta para llenar el turno completo)</translation>
+    </message>
+    <message>
+        <source>Run hours of {job}: {hours} h (times each machine&apos;s speed factor; used when filling the whole shift)</source>
+        <translation>Horas de trabajo de {job}: {hours} h (por el factor de velocidad de cada máquina; se usan al llenar el turno completo)</translation>
+    </message>
+    <message>
+        <source>▶ runs on {machine}</source>
+        <translation>▶ en marcha en {machine}</translation>
+    </message>
+    <message>
+        <source>{job} is already running on {machine}; it stays there</source>
+        <translation>{job} ya está en marcha en {machine}; se queda allí</translation>
+    </message>
+    <message>
+        <source>The plan puts {job} on {machine} (value {value} {unit})</source>
+        <translation>El plan pone {job} en {machine} (valor {value} {unit})</translation>
+    </message>
+    <message>
+        <source>done</source>
+        <translation>terminado</translation>
+    </message>
+    <message>
+        <source>{job} is done and takes no part</source>
+        <translation>{job} está terminado y ya no participa</translation>
+    </message>
+    <message>
+        <source>○ waits</source>
+        <translation>○ espera</translation>
+    </message>
+    <message>
+        <source>{job} waits this round: {reason}</source>
+        <translation>{job} espera en esta ronda: {reason}</translation>
+    </message>
+    <message>
+        <source>{job} waits this round</source>
+        <translation>{job} espera en esta ronda</translation>
+    </message>
+    <message>
+        <source>no plan yet</source>
+        <translation>todavía no hay plan</translation>
+    </message>
+    <message>
+        <source>{machine} cannot run {job} (type a number to allow it)</source>
+        <translation>{machine} no puede hacer {job} (escriba un número para permitirlo)</translation>
+    </message>
+    <message>
+        <source>Value of {job} on {machine}: {value} ({unit})</source>
+        <translation>Valor de {job} en {machine}: {value} ({unit})</translation>
+    </message>
+    <message>
+        <source>{mark} the plan shown puts {job} here</source>
+        <translation>{mark} el plan mostrado pone {job} aquí</translation>
+    </message>
+    <message>
+        <source>{mark} {job} is already running here</source>
+        <translation>{mark} {job} ya está en marcha aquí</translation>
+    </message>
+    <message>
+        <source>{mark} pinned: {job} must go to {machine}</source>
+        <translation>{mark} fijado: {job} debe ir a {machine}</translation>
+    </message>
+    <message>
+        <source>{mark} forbidden: {job} must not go to {machine}</source>
+        <translation>{mark} prohibido: {job} no debe ir a {machine}</translation>
+    </message>
+    <message>
+        <source>{machine} is {state} and takes no jobs</source>
+        <translation>{machine} está {state} y no acepta trabajos</translation>
+    </message>
+    <message>
+        <source>Lockout/tagout before any work on {machine}</source>
+        <translation>Bloqueo y etiquetado (LOTO) antes de cualquier trabajo en {machine}</translation>
+    </message>
+    <message>
+        <source>Rush jobs must be placed this round</source>
+        <translation>Los trabajos urgentes deben asignarse en esta ronda</translation>
+    </message>
+    <message>
+        <source>Hours each job runs (to fill the whole shift)</source>
+        <translation>Horas que dura cada trabajo (para llenar el turno completo)</translation>
+    </message>
+    <message>
+        <source>Added to the total ({unit}) when the job waits</source>
+        <translation>Se suma al total ({unit}) cuando el trabajo espera</translation>
+    </message>
+    <message>
+        <source>Where the plan shown puts each job</source>
+        <translation>Dónde pone el plan mostrado cada trabajo</translation>
+    </message>
+    <message numerus="yes">
+        <source>{machine}: {state}, takes %n job(s) per round</source>
+        <translation>
+            <numerusform>{machine}: {state}, acepta %n trabajo por ronda</numerusform>
+            <numerusform>{machine}: {state}, acepta %n trabajos por ronda</numerusform>
+        </translation>
+    </message>
+    <message>
+        <source>Operator in the plan shown: {operator}</source>
+        <translation>Operario en el plan mostrado: {operator}</translation>
+    </message>
+    <message>
+        <source>Note: {note}</source>
+        <translation>Nota: {note}</translation>
+    </message>
+    <message>
+        <source>Right-click (or Shift+F10) for machine actions</source>
+        <translation>Clic derecho (o Mayús+F10) para las acciones de la máquina</translation>
+    </message>
+    <message>
+        <source>(done) {job}</source>
+        <translation>(terminado) {job}</translation>
+    </message>
+    <message>
+        <source>work order {work_order}</source>
+        <translation>orden de trabajo {work_order}</translation>
+    </message>
+    <message>
+        <source>due {time}</source>
+        <translation>vence {time}</translation>
+    </message>
+    <message>
+        <source>state: {state}</source>
+        <translation>estado: {state}</translation>
+    </message>
+    <message>
+        <source>waiting</source>
+        <translation>en espera</translation>
+    </message>
+    <message>
+        <source>running</source>
+        <translation>en marcha</translation>
+    </message>
+    <message>
+        <source>Mark {job} as rush</source>
+        <translation>Marcar {job} como urgente</translation>
+    </message>
+    <message>
+        <source>Unmark {job} as rush</source>
+        <translation>Quitar urgencia a {job}</translation>
+    </message>
+    <message>
+        <source>{job}: {problem}</source>
+        <translation>{job}: {problem}</translation>
+    </message>
+    <message>
+        <source>{job}: run hours must be a number &gt; 0 (or empty)</source>
+        <translation>{job}: las horas de trabajo deben ser un número &gt; 0 (o vacías)</translation>
+    </message>
+    <message>
+        <source>Run hours of {job} = {hours}</source>
+        <translation>Horas de trabajo de {job} = {hours}</translation>
+    </message>
+    <message>
+        <source>none</source>
+        <translation>ninguna</translation>
+    </message>
+    <message>
+        <source>{job}: the wait penalty must be a number &gt;= 0</source>
+        <translation>{job}: la penalización por espera debe ser un número &gt;= 0</translation>
+    </message>
+    <message>
+        <source>Wait penalty of {job} = {value}</source>
+        <translation>Penalización por espera de {job} = {value}</translation>
+    </message>
+    <message>
+        <source>cannot run</source>
+        <translation>no puede</translation>
+    </message>
+    <message>
+        <source>{job} on {machine} = {value}</source>
+        <translation>{job} en {machine} = {value}</translation>
+    </message>
+</context>
+<context>
     <name>MainWindow</name>
     <message>
         <source>Dispatch grid</source>
