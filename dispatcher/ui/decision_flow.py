@@ -13,7 +13,7 @@ from PySide6.QtCore import QObject, Qt, Signal
 
 from dispatcher.history import UNCHECKED, HistoryError, HistoryInputError, diff_plans
 from dispatcher.io.shopfile import shop_to_dict
-from dispatcher.shop import DONE, DOWN, UP, WAITING, Shop
+from dispatcher.shop import DONE, DOWN, RUNNING, UP, WAITING, Shop
 from dispatcher.shop.planning import plan_in_force_ids
 from dispatcher.shop.proposal import (
     EVENT_CONFIRM,
@@ -24,7 +24,7 @@ from dispatcher.shop.proposal import (
     Proposal,
     propose,
 )
-from dispatcher.ui.decision import DecisionDialog
+from dispatcher.ui.decision import DecisionDialog, proposal_title
 from dispatcher.ui.edits import RemoveJob, SetJobsState, SetMachineFields, SetPlanInForce
 from dispatcher.ui.settings_keys import KEY_SUPERVISOR
 
@@ -57,9 +57,9 @@ class DecisionFlow(QObject):
         except HistoryError:
             latest = None
         if latest is not None and latest.plan:
-            return latest.plan, f"the plan in force (decision #{latest.id})"
+            return latest.plan, self.tr("the plan in force (decision #{number})").format(number=latest.id)
         plan = self.window.plan.to_json() if self.window.plan is not None else None
-        return plan, "the plan shown (no decision recorded yet)"
+        return plan, self.tr("the plan shown (no decision recorded yet)")
 
     def _latest_number(self) -> int | str | None:
         """The shop's latest decision now (None: none yet), so that confirming is refused
@@ -73,14 +73,14 @@ class DecisionFlow(QObject):
     def machine_event(self, event: str, col: int | None = None) -> DecisionDialog | None:
         col = self.view.current_machine() if col is None else col
         if col is None:
-            self.show_warning("choose a cell in a machine column first (or use the column's menu)")
+            self.show_warning(self.tr("choose a cell in a machine column first (or use the column's menu)"))
             return None
         m = self.doc.machine_at(col)
         if event == EVENT_DOWN and m.state == DOWN:
-            self.show_warning(f"{m.name} is already down")
+            self.show_warning(self.tr("{machine} is already down").format(machine=m.name))
             return None
         if event == EVENT_UP and m.state == UP:
-            self.show_warning(f"{m.name} is already up")
+            self.show_warning(self.tr("{machine} is already up").format(machine=m.name))
             return None
         return self._open(self.doc.shop, event, machine=col)
 
@@ -90,10 +90,13 @@ class DecisionFlow(QObject):
             return None
         job = self.doc.job_at(row)
         if job.rush:
-            self.show_warning(f"{job.name} is already a rush job")
+            self.show_warning(self.tr("{job} is already a rush job").format(job=job.name))
             return None
         if job.state != WAITING:
-            self.show_warning(f"{job.name} is {job.state}: only a waiting job can become a rush job")
+            self.show_warning((self.tr("{job} is running: only a waiting job can become a rush job")
+                               if job.state == RUNNING else
+                               self.tr("{job} is done: only a waiting job can become a rush job")).format(
+                job=job.name))
             return None
         return self._open(self.doc.shop, EVENT_RUSH, job=row)
 
@@ -102,11 +105,11 @@ class DecisionFlow(QObject):
         without it; confirming records the decision and takes the job out of the shop."""
         row = self.view.current_row() if row is None or row is False else row
         if row is None:
-            self.show_warning("choose a cell in the job's row first (or use the row's menu)")
+            self.show_warning(self.tr("choose a cell in the job's row first (or use the row's menu)"))
             return None
         job = self.doc.job_at(row)
         if job.state == DONE:
-            self.show_warning(f"{job.name} is already done; there is nothing to pull")
+            self.show_warning(self.tr("{job} is already done; there is nothing to pull").format(job=job.name))
             return None
         return self._open(self.doc.shop, EVENT_PULL, job=row)
 
@@ -149,27 +152,31 @@ class DecisionFlow(QObject):
             number = self.window.history.record(shop_to_dict(recorded_shop), proposal.plan.to_json(),
                                          by=by, reason=reason, note=note, based_on=self.based_on)
         except (HistoryError, HistoryInputError, OSError) as exc:
-            self.window.messenger.error("Decision not recorded", f"{exc}\n\nThe plan in force is unchanged.")
+            self.window.messenger.error(self.tr("Decision not recorded"),
+                                        self.tr("{error}\n\nThe plan in force is unchanged.").format(error=exc))
             return None
         self.window.settings.setValue(KEY_SUPERVISOR, by)
         stack = self.doc.undo_stack
-        stack.beginMacro(f"{proposal.title} (decision #{number})")
+        title = proposal_title(proposal)
+        stack.beginMacro(self.tr("{title} (decision #{number})").format(title=title, number=number))
         if proposal.event == EVENT_PULL:
-            stack.push(RemoveJob(self.doc, proposal.job, proposal.title))
+            stack.push(RemoveJob(self.doc, proposal.job, title))
         if proposal.machine is not None and proposal.event in (EVENT_DOWN, EVENT_UP):
             m = recorded_shop.machines[proposal.machine]
             stack.push(SetMachineFields(self.doc, proposal.machine,
                                         {"state": m.state, "state_note": note,
                                          "state_changed": datetime.now(timezone.utc)},
-                                        proposal.title))
+                                        title))
         if proposal.job_changes:
-            stack.push(SetJobsState(self.doc, proposal.job_changes, proposal.title))
-        stack.push(SetPlanInForce(self.doc, recorded_shop.plan_in_force, "plan in force"))
+            stack.push(SetJobsState(self.doc, proposal.job_changes, title))
+        stack.push(SetPlanInForce(self.doc, recorded_shop.plan_in_force, self.tr("plan in force")))
         stack.endMacro()
         # Show the plan just put in force (not a fresh solve of the same shop, which would
         # ignore the move penalties the re-dispatch paid) until the next edit.
-        self.window.show_plan_in_force(proposal.plan, f"decision #{number} ({proposal.title})")
-        self.window.statusBar().showMessage(f"Decision #{number} recorded: {proposal.title}", 8000)
+        self.window.show_plan_in_force(proposal.plan, self.tr("decision #{number} ({title})").format(
+            number=number, title=title))
+        self.window.statusBar().showMessage(self.tr("Decision #{number} recorded: {title}").format(
+            number=number, title=title), 8000)
         self.recorded.emit(number)
         return number
 

@@ -9,7 +9,7 @@ from __future__ import annotations
 
 import math
 
-from PySide6.QtCore import QCoreApplication
+from PySide6.QtCore import QT_TRANSLATE_NOOP, QCoreApplication
 
 from dispatcher import translation
 from dispatcher.io.grid import CANNOT_RUN
@@ -28,6 +28,23 @@ def fmt(value: float | None, digits: int = 4, plain: bool = False) -> str:
     text = f"{v:.{digits}f}".rstrip("0").rstrip(".")
     point = "." if plain else translation.decimal_point()
     return text if point == "." else text.replace(".", point)
+
+
+#: Reason kinds (:data:`dispatcher.history.REASON_KINDS`) as shown; English, translated.
+REASON_WORDS = {
+    "shift-start": QT_TRANSLATE_NOOP("Format", "shift start"),
+    "breakdown": QT_TRANSLATE_NOOP("Format", "breakdown"),
+    "repair": QT_TRANSLATE_NOOP("Format", "repair"),
+    "rush-job": QT_TRANSLATE_NOOP("Format", "rush job"),
+    "manual-change": QT_TRANSLATE_NOOP("Format", "manual change"),
+    "restored": QT_TRANSLATE_NOOP("Format", "restored"),
+    "other": QT_TRANSLATE_NOOP("Format", "other"),
+}
+
+
+def reason_text(kind: str) -> str:
+    """A decision's reason kind in the interface's language (the keyword if unknown)."""
+    return QCoreApplication.translate("Format", REASON_WORDS[kind]) if kind in REASON_WORDS else kind
 
 
 def unit_text(label: str) -> str:

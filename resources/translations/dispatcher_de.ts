@@ -2,7 +2,317 @@
 <!DOCTYPE TS>
 <TS version="2.1" language="de_DE">
 <context>
+    <name>DecisionDialog</name>
+    <message>
+        <source>⚠ Safety first: before anyone works on this machine, apply lockout/tagout and follow the site&apos;s isolation procedure. Operators run only machines they are trained and authorised for. Follow each machine&apos;s setup instructions. Local regulations and the site&apos;s safety rules take precedence over this plan.</source>
+        <translation>⚠ Sicherheit zuerst: bevor jemand an dieser Maschine arbeitet, Sperren und Kennzeichnen (LOTO) anwenden und das Freischaltverfahren des Standorts befolgen. Bediener führen nur Maschinen, für die sie geschult und befugt sind. Die Rüstanweisungen jeder Maschine befolgen. Örtliche Vorschriften und die Sicherheitsregeln des Standorts haben Vorrang vor diesem Plan.</translation>
+    </message>
+    <message>
+        <source>What happened (for example: hydraulic leak, waiting for fitter)</source>
+        <translation>Was passiert ist (zum Beispiel: Hydraulikleck, warten auf Schlosser)</translation>
+    </message>
+    <message>
+        <source>What was done (for example: seal replaced, checked by maintenance)</source>
+        <translation>Was getan wurde (zum Beispiel: Dichtung getauscht, von der Instandhaltung geprüft)</translation>
+    </message>
+    <message>
+        <source>Why it is urgent (for example: customer line stopped)</source>
+        <translation>Warum es eilt (zum Beispiel: Linie beim Kunden steht)</translation>
+    </message>
+    <message>
+        <source>Why the job is pulled (for example: order cancelled, material not arrived)</source>
+        <translation>Warum der Auftrag zurückgezogen wird (zum Beispiel: Bestellung storniert, Material nicht eingetroffen)</translation>
+    </message>
+    <message>
+        <source>Anything the next shift should know</source>
+        <translation>Was die nächste Schicht wissen sollte</translation>
+    </message>
+    <message>
+        <source>Confirm re-dispatch - {title}</source>
+        <translation>Neuzuteilung bestätigen - {title}</translation>
+    </message>
+    <message>
+        <source>Event</source>
+        <translation>Ereignis</translation>
+    </message>
+    <message>
+        <source>What happened, as the decision will record it</source>
+        <translation>Was passiert ist, wie die Entscheidung es erfasst</translation>
+    </message>
+    <message>
+        <source>Safety reminder</source>
+        <translation>Sicherheitshinweis</translation>
+    </message>
+    <message>
+        <source>Lockout/tagout and the site&apos;s rules come before the plan</source>
+        <translation>Sperren und Kennzeichnen (LOTO) und die Regeln des Standorts gehen dem Plan vor</translation>
+    </message>
+    <message>
+        <source>{mark} No plan is possible after this event: {problem}</source>
+        <translation>{mark} Nach diesem Ereignis ist kein Plan möglich: {problem}</translation>
+    </message>
+    <message>
+        <source>{mark} &lt;b&gt;Not every rush job can be placed:&lt;/b&gt; {problem}</source>
+        <translation>{mark} &lt;b&gt;Nicht jeder Eilauftrag kann eingeplant werden:&lt;/b&gt; {problem}</translation>
+    </message>
+    <message>
+        <source>Re-dispatched from the plan in force; move penalties included: {value} {unit} (jobs dispatched but not started move only when the saving is larger).</source>
+        <translation>Vom gültigen Plan aus neu zugeteilt; Umplanungskosten enthalten: {value} {unit} (zugeteilte, noch nicht begonnene Aufträge wechseln nur, wenn die Ersparnis größer ist).</translation>
+    </message>
+    <message>
+        <source>The job is taken out of the shop document (Undo brings it back); earlier decisions in the history keep it.</source>
+        <translation>Der Auftrag wird aus dem Betriebsdokument genommen (Rückgängig holt ihn zurück); frühere Entscheidungen im Verlauf behalten ihn.</translation>
+    </message>
+    <message>
+        <source>&lt;b&gt;Proposed changes against {plan}:&lt;/b&gt;</source>
+        <translation>&lt;b&gt;Vorgeschlagene Änderungen gegenüber {plan}:&lt;/b&gt;</translation>
+    </message>
+    <message>
+        <source>Proposed changes</source>
+        <translation>Vorgeschlagene Änderungen</translation>
+    </message>
+    <message>
+        <source>How the proposed plan differs from the plan in force</source>
+        <translation>Wie sich der vorgeschlagene Plan vom gültigen Plan unterscheidet</translation>
+    </message>
+    <message>
+        <source>Reason</source>
+        <translation>Grund</translation>
+    </message>
+    <message>
+        <source>The kind of reason recorded with the decision</source>
+        <translation>Die Art des Grundes, die mit der Entscheidung erfasst wird</translation>
+    </message>
+    <message>
+        <source>&amp;Reason:</source>
+        <translation>&amp;Grund:</translation>
+    </message>
+    <message>
+        <source>Note</source>
+        <translation>Notiz</translation>
+    </message>
+    <message>
+        <source>&amp;Note:</source>
+        <translation>&amp;Notiz:</translation>
+    </message>
+    <message>
+        <source>Supervisor name (required)</source>
+        <translation>Name der Schichtleitung (Pflicht)</translation>
+    </message>
+    <message>
+        <source>Supervisor</source>
+        <translation>Schichtleitung</translation>
+    </message>
+    <message>
+        <source>Who takes the decision (required)</source>
+        <translation>Wer die Entscheidung trifft (Pflicht)</translation>
+    </message>
+    <message>
+        <source>&amp;Supervisor:</source>
+        <translation>&amp;Schichtleitung:</translation>
+    </message>
+    <message>
+        <source>Confirm and record</source>
+        <translation>Bestätigen und erfassen</translation>
+    </message>
+    <message>
+        <source>Record the decision in the history and put the plan in force</source>
+        <translation>Die Entscheidung im Verlauf erfassen und den Plan in Kraft setzen</translation>
+    </message>
+</context>
+<context>
+    <name>DecisionDiff</name>
+    <message>
+        <source>{machine} is down</source>
+        <translation>{machine} ist ausgefallen</translation>
+    </message>
+    <message>
+        <source>{machine} is back up</source>
+        <translation>{machine} ist wieder bereit</translation>
+    </message>
+    <message>
+        <source>Rush job: {job}</source>
+        <translation>Eilauftrag: {job}</translation>
+    </message>
+    <message>
+        <source>Job pulled: {job}</source>
+        <translation>Auftrag zurückgezogen: {job}</translation>
+    </message>
+    <message>
+        <source>Put the plan shown in force</source>
+        <translation>Den angezeigten Plan in Kraft setzen</translation>
+    </message>
+    <message>
+        <source>values</source>
+        <translation>Werte</translation>
+    </message>
+    <message>
+        <source>costs</source>
+        <translation>Kosten</translation>
+    </message>
+    <message>
+        <source>setups</source>
+        <translation>Rüstzeiten</translation>
+    </message>
+    <message>
+        <source>{planned_word} {before} → {after}, wait penalties {penalties_before} → {penalties_after}</source>
+        <translation>{planned_word} {before} → {after}, Wartekosten {penalties_before} → {penalties_after}</translation>
+    </message>
+    <message>
+        <source>; move penalties {value} (apart)</source>
+        <translation>; Umplanungskosten {value} (gesondert)</translation>
+    </message>
+    <message>
+        <source>No plan in force to compare with.</source>
+        <translation>Kein gültiger Plan zum Vergleichen.</translation>
+    </message>
+    <message>
+        <source>&lt;b&gt;pulled&lt;/b&gt;: {job} leaves the shop (frees {machine})</source>
+        <translation>&lt;b&gt;zurückgezogen&lt;/b&gt;: {job} verlässt den Betrieb (macht {machine} frei)</translation>
+    </message>
+    <message>
+        <source>&lt;b&gt;pulled&lt;/b&gt;: {job} leaves the shop</source>
+        <translation>&lt;b&gt;zurückgezogen&lt;/b&gt;: {job} verlässt den Betrieb</translation>
+    </message>
+    <message>
+        <source>&lt;b&gt;moves&lt;/b&gt;: {job} from {machine} to {to_machine}</source>
+        <translation>&lt;b&gt;wechselt&lt;/b&gt;: {job} von {machine} auf {to_machine}</translation>
+    </message>
+    <message>
+        <source>&lt;b&gt;starts&lt;/b&gt;: {job} on {machine}</source>
+        <translation>&lt;b&gt;beginnt&lt;/b&gt;: {job} auf {machine}</translation>
+    </message>
+    <message>
+        <source>&lt;b&gt;now waits&lt;/b&gt;: {job} (was on {machine})</source>
+        <translation>&lt;b&gt;wartet jetzt&lt;/b&gt;: {job} (war auf {machine})</translation>
+    </message>
+    <message>
+        <source>&lt;b&gt;now waits&lt;/b&gt;: {job}</source>
+        <translation>&lt;b&gt;wartet jetzt&lt;/b&gt;: {job}</translation>
+    </message>
+    <message>
+        <source>&lt;b&gt;now idle&lt;/b&gt;: {machine}</source>
+        <translation>&lt;b&gt;jetzt frei&lt;/b&gt;: {machine}</translation>
+    </message>
+    <message>
+        <source>&lt;b&gt;out of the plan&lt;/b&gt;: {machine}</source>
+        <translation>&lt;b&gt;nicht mehr im Plan&lt;/b&gt;: {machine}</translation>
+    </message>
+    <message>
+        <source>No job changes machine.</source>
+        <translation>Kein Auftrag wechselt die Maschine.</translation>
+    </message>
+    <message>
+        <source>Total: {before} → &lt;b&gt;{after}&lt;/b&gt; {unit} ({change})</source>
+        <translation>Summe: {before} → &lt;b&gt;{after}&lt;/b&gt; {unit} ({change})</translation>
+    </message>
+    <message>
+        <source> - lower only because fewer jobs are dispatched: a waiting job adds just its wait penalty</source>
+        <translation> - nur niedriger, weil weniger Aufträge zugeteilt werden: ein wartender Auftrag kostet nur seine Wartekosten</translation>
+    </message>
+</context>
+<context>
+    <name>DecisionFlow</name>
+    <message>
+        <source>the plan in force (decision #{number})</source>
+        <translation>dem gültigen Plan (Entscheidung Nr. {number})</translation>
+    </message>
+    <message>
+        <source>the plan shown (no decision recorded yet)</source>
+        <translation>dem angezeigten Plan (noch keine Entscheidung erfasst)</translation>
+    </message>
+    <message>
+        <source>choose a cell in a machine column first (or use the column&apos;s menu)</source>
+        <translation>zuerst eine Zelle in einer Maschinenspalte wählen (oder das Menü der Spalte benutzen)</translation>
+    </message>
+    <message>
+        <source>{machine} is already down</source>
+        <translation>{machine} ist bereits ausgefallen</translation>
+    </message>
+    <message>
+        <source>{machine} is already up</source>
+        <translation>{machine} ist bereits bereit</translation>
+    </message>
+    <message>
+        <source>{job} is already a rush job</source>
+        <translation>{job} ist bereits ein Eilauftrag</translation>
+    </message>
+    <message>
+        <source>{job} is running: only a waiting job can become a rush job</source>
+        <translation>{job} läuft: nur ein wartender Auftrag kann Eilauftrag werden</translation>
+    </message>
+    <message>
+        <source>{job} is done: only a waiting job can become a rush job</source>
+        <translation>{job} ist erledigt: nur ein wartender Auftrag kann Eilauftrag werden</translation>
+    </message>
+    <message>
+        <source>choose a cell in the job&apos;s row first (or use the row&apos;s menu)</source>
+        <translation>zuerst eine Zelle in der Zeile des Auftrags wählen (oder das Menü der Zeile benutzen)</translation>
+    </message>
+    <message>
+        <source>{job} is already done; there is nothing to pull</source>
+        <translation>{job} ist bereits erledigt; es gibt nichts zurückzuziehen</translation>
+    </message>
+    <message>
+        <source>Decision not recorded</source>
+        <translation>Entscheidung nicht erfasst</translation>
+    </message>
+    <message>
+        <source>{error}
+
+The plan in force is unchanged.</source>
+        <translation>{error}
+
+Der gültige Plan bleibt unverändert.</translation>
+    </message>
+    <message>
+        <source>{title} (decision #{number})</source>
+        <translation>{title} (Entscheidung Nr. {number})</translation>
+    </message>
+    <message>
+        <source>plan in force</source>
+        <translation>gültiger Plan</translation>
+    </message>
+    <message>
+        <source>decision #{number} ({title})</source>
+        <translation>Entscheidung Nr. {number} ({title})</translation>
+    </message>
+    <message>
+        <source>Decision #{number} recorded: {title}</source>
+        <translation>Entscheidung Nr. {number} erfasst: {title}</translation>
+    </message>
+</context>
+<context>
     <name>Format</name>
+    <message>
+        <source>shift start</source>
+        <extracomment>Reason kinds (:data:`dispatcher.history.REASON_KINDS`) as shown; English, translated.</extracomment>
+        <translation>Schichtbeginn</translation>
+    </message>
+    <message>
+        <source>breakdown</source>
+        <translation>Störung</translation>
+    </message>
+    <message>
+        <source>repair</source>
+        <translation>Reparatur</translation>
+    </message>
+    <message>
+        <source>rush job</source>
+        <translation>Eilauftrag</translation>
+    </message>
+    <message>
+        <source>manual change</source>
+        <translation>manuelle Änderung</translation>
+    </message>
+    <message>
+        <source>restored</source>
+        <translation>wiederhergestellt</translation>
+    </message>
+    <message>
+        <source>other</source>
+        <translation>sonstiges</translation>
+    </message>
     <message>
         <source>setup min</source>
         <translation>Rüstmin.</translation>

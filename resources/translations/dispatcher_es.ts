@@ -2,7 +2,317 @@
 <!DOCTYPE TS>
 <TS version="2.1" language="es_ES">
 <context>
+    <name>DecisionDialog</name>
+    <message>
+        <source>⚠ Safety first: before anyone works on this machine, apply lockout/tagout and follow the site&apos;s isolation procedure. Operators run only machines they are trained and authorised for. Follow each machine&apos;s setup instructions. Local regulations and the site&apos;s safety rules take precedence over this plan.</source>
+        <translation>⚠ La seguridad primero: antes de que nadie trabaje en esta máquina, aplique bloqueo y etiquetado (LOTO) y siga el procedimiento de aislamiento de la planta. Los operarios solo manejan las máquinas para las que están formados y autorizados. Siga las instrucciones de preparación de cada máquina. La normativa local y las normas de seguridad de la planta prevalecen sobre este plan.</translation>
+    </message>
+    <message>
+        <source>What happened (for example: hydraulic leak, waiting for fitter)</source>
+        <translation>Qué ha pasado (por ejemplo: fuga hidráulica, esperando al mecánico)</translation>
+    </message>
+    <message>
+        <source>What was done (for example: seal replaced, checked by maintenance)</source>
+        <translation>Qué se ha hecho (por ejemplo: junta cambiada, revisada por mantenimiento)</translation>
+    </message>
+    <message>
+        <source>Why it is urgent (for example: customer line stopped)</source>
+        <translation>Por qué es urgente (por ejemplo: línea del cliente parada)</translation>
+    </message>
+    <message>
+        <source>Why the job is pulled (for example: order cancelled, material not arrived)</source>
+        <translation>Por qué se retira el trabajo (por ejemplo: pedido cancelado, material sin llegar)</translation>
+    </message>
+    <message>
+        <source>Anything the next shift should know</source>
+        <translation>Lo que debe saber el siguiente turno</translation>
+    </message>
+    <message>
+        <source>Confirm re-dispatch - {title}</source>
+        <translation>Confirmar reasignación - {title}</translation>
+    </message>
+    <message>
+        <source>Event</source>
+        <translation>Suceso</translation>
+    </message>
+    <message>
+        <source>What happened, as the decision will record it</source>
+        <translation>Qué ha pasado, tal como lo registrará la decisión</translation>
+    </message>
+    <message>
+        <source>Safety reminder</source>
+        <translation>Recordatorio de seguridad</translation>
+    </message>
+    <message>
+        <source>Lockout/tagout and the site&apos;s rules come before the plan</source>
+        <translation>El bloqueo y etiquetado (LOTO) y las normas de la planta van antes que el plan</translation>
+    </message>
+    <message>
+        <source>{mark} No plan is possible after this event: {problem}</source>
+        <translation>{mark} No hay plan posible tras este suceso: {problem}</translation>
+    </message>
+    <message>
+        <source>{mark} &lt;b&gt;Not every rush job can be placed:&lt;/b&gt; {problem}</source>
+        <translation>{mark} &lt;b&gt;No todos los trabajos urgentes se pueden asignar:&lt;/b&gt; {problem}</translation>
+    </message>
+    <message>
+        <source>Re-dispatched from the plan in force; move penalties included: {value} {unit} (jobs dispatched but not started move only when the saving is larger).</source>
+        <translation>Reasignado desde el plan vigente; penalizaciones por traslado incluidas: {value} {unit} (los trabajos asignados pero no empezados solo se trasladan si el ahorro es mayor).</translation>
+    </message>
+    <message>
+        <source>The job is taken out of the shop document (Undo brings it back); earlier decisions in the history keep it.</source>
+        <translation>El trabajo se quita del documento del taller (Deshacer lo recupera); las decisiones anteriores del historial lo conservan.</translation>
+    </message>
+    <message>
+        <source>&lt;b&gt;Proposed changes against {plan}:&lt;/b&gt;</source>
+        <translation>&lt;b&gt;Cambios propuestos frente a {plan}:&lt;/b&gt;</translation>
+    </message>
+    <message>
+        <source>Proposed changes</source>
+        <translation>Cambios propuestos</translation>
+    </message>
+    <message>
+        <source>How the proposed plan differs from the plan in force</source>
+        <translation>En qué se diferencia el plan propuesto del plan vigente</translation>
+    </message>
+    <message>
+        <source>Reason</source>
+        <translation>Motivo</translation>
+    </message>
+    <message>
+        <source>The kind of reason recorded with the decision</source>
+        <translation>El tipo de motivo que se registra con la decisión</translation>
+    </message>
+    <message>
+        <source>&amp;Reason:</source>
+        <translation>&amp;Motivo:</translation>
+    </message>
+    <message>
+        <source>Note</source>
+        <translation>Nota</translation>
+    </message>
+    <message>
+        <source>&amp;Note:</source>
+        <translation>&amp;Nota:</translation>
+    </message>
+    <message>
+        <source>Supervisor name (required)</source>
+        <translation>Nombre del supervisor (obligatorio)</translation>
+    </message>
+    <message>
+        <source>Supervisor</source>
+        <translation>Supervisor</translation>
+    </message>
+    <message>
+        <source>Who takes the decision (required)</source>
+        <translation>Quién toma la decisión (obligatorio)</translation>
+    </message>
+    <message>
+        <source>&amp;Supervisor:</source>
+        <translation>&amp;Supervisor:</translation>
+    </message>
+    <message>
+        <source>Confirm and record</source>
+        <translation>Confirmar y registrar</translation>
+    </message>
+    <message>
+        <source>Record the decision in the history and put the plan in force</source>
+        <translation>Registrar la decisión en el historial y poner el plan en vigor</translation>
+    </message>
+</context>
+<context>
+    <name>DecisionDiff</name>
+    <message>
+        <source>{machine} is down</source>
+        <translation>{machine} está averiada</translation>
+    </message>
+    <message>
+        <source>{machine} is back up</source>
+        <translation>{machine} vuelve a estar en marcha</translation>
+    </message>
+    <message>
+        <source>Rush job: {job}</source>
+        <translation>Trabajo urgente: {job}</translation>
+    </message>
+    <message>
+        <source>Job pulled: {job}</source>
+        <translation>Trabajo retirado: {job}</translation>
+    </message>
+    <message>
+        <source>Put the plan shown in force</source>
+        <translation>Poner en vigor el plan mostrado</translation>
+    </message>
+    <message>
+        <source>values</source>
+        <translation>valores</translation>
+    </message>
+    <message>
+        <source>costs</source>
+        <translation>costes</translation>
+    </message>
+    <message>
+        <source>setups</source>
+        <translation>preparaciones</translation>
+    </message>
+    <message>
+        <source>{planned_word} {before} → {after}, wait penalties {penalties_before} → {penalties_after}</source>
+        <translation>{planned_word} {before} → {after}, penalizaciones por espera {penalties_before} → {penalties_after}</translation>
+    </message>
+    <message>
+        <source>; move penalties {value} (apart)</source>
+        <translation>; penalizaciones por traslado {value} (aparte)</translation>
+    </message>
+    <message>
+        <source>No plan in force to compare with.</source>
+        <translation>No hay plan vigente con el que comparar.</translation>
+    </message>
+    <message>
+        <source>&lt;b&gt;pulled&lt;/b&gt;: {job} leaves the shop (frees {machine})</source>
+        <translation>&lt;b&gt;retirado&lt;/b&gt;: {job} sale del taller (libera {machine})</translation>
+    </message>
+    <message>
+        <source>&lt;b&gt;pulled&lt;/b&gt;: {job} leaves the shop</source>
+        <translation>&lt;b&gt;retirado&lt;/b&gt;: {job} sale del taller</translation>
+    </message>
+    <message>
+        <source>&lt;b&gt;moves&lt;/b&gt;: {job} from {machine} to {to_machine}</source>
+        <translation>&lt;b&gt;se traslada&lt;/b&gt;: {job} de {machine} a {to_machine}</translation>
+    </message>
+    <message>
+        <source>&lt;b&gt;starts&lt;/b&gt;: {job} on {machine}</source>
+        <translation>&lt;b&gt;empieza&lt;/b&gt;: {job} en {machine}</translation>
+    </message>
+    <message>
+        <source>&lt;b&gt;now waits&lt;/b&gt;: {job} (was on {machine})</source>
+        <translation>&lt;b&gt;ahora espera&lt;/b&gt;: {job} (estaba en {machine})</translation>
+    </message>
+    <message>
+        <source>&lt;b&gt;now waits&lt;/b&gt;: {job}</source>
+        <translation>&lt;b&gt;ahora espera&lt;/b&gt;: {job}</translation>
+    </message>
+    <message>
+        <source>&lt;b&gt;now idle&lt;/b&gt;: {machine}</source>
+        <translation>&lt;b&gt;ahora libre&lt;/b&gt;: {machine}</translation>
+    </message>
+    <message>
+        <source>&lt;b&gt;out of the plan&lt;/b&gt;: {machine}</source>
+        <translation>&lt;b&gt;fuera del plan&lt;/b&gt;: {machine}</translation>
+    </message>
+    <message>
+        <source>No job changes machine.</source>
+        <translation>Ningún trabajo cambia de máquina.</translation>
+    </message>
+    <message>
+        <source>Total: {before} → &lt;b&gt;{after}&lt;/b&gt; {unit} ({change})</source>
+        <translation>Total: {before} → &lt;b&gt;{after}&lt;/b&gt; {unit} ({change})</translation>
+    </message>
+    <message>
+        <source> - lower only because fewer jobs are dispatched: a waiting job adds just its wait penalty</source>
+        <translation> - menor solo porque se asignan menos trabajos: un trabajo en espera suma solo su penalización por espera</translation>
+    </message>
+</context>
+<context>
+    <name>DecisionFlow</name>
+    <message>
+        <source>the plan in force (decision #{number})</source>
+        <translation>el plan vigente (decisión n.º {number})</translation>
+    </message>
+    <message>
+        <source>the plan shown (no decision recorded yet)</source>
+        <translation>el plan mostrado (todavía sin decisión registrada)</translation>
+    </message>
+    <message>
+        <source>choose a cell in a machine column first (or use the column&apos;s menu)</source>
+        <translation>elija primero una celda en una columna de máquina (o use el menú de la columna)</translation>
+    </message>
+    <message>
+        <source>{machine} is already down</source>
+        <translation>{machine} ya está averiada</translation>
+    </message>
+    <message>
+        <source>{machine} is already up</source>
+        <translation>{machine} ya está en marcha</translation>
+    </message>
+    <message>
+        <source>{job} is already a rush job</source>
+        <translation>{job} ya es un trabajo urgente</translation>
+    </message>
+    <message>
+        <source>{job} is running: only a waiting job can become a rush job</source>
+        <translation>{job} está en marcha: solo un trabajo en espera puede pasar a urgente</translation>
+    </message>
+    <message>
+        <source>{job} is done: only a waiting job can become a rush job</source>
+        <translation>{job} está terminado: solo un trabajo en espera puede pasar a urgente</translation>
+    </message>
+    <message>
+        <source>choose a cell in the job&apos;s row first (or use the row&apos;s menu)</source>
+        <translation>elija primero una celda en la fila del trabajo (o use el menú de la fila)</translation>
+    </message>
+    <message>
+        <source>{job} is already done; there is nothing to pull</source>
+        <translation>{job} ya está terminado; no hay nada que retirar</translation>
+    </message>
+    <message>
+        <source>Decision not recorded</source>
+        <translation>Decisión no registrada</translation>
+    </message>
+    <message>
+        <source>{error}
+
+The plan in force is unchanged.</source>
+        <translation>{error}
+
+El plan vigente no cambia.</translation>
+    </message>
+    <message>
+        <source>{title} (decision #{number})</source>
+        <translation>{title} (decisión n.º {number})</translation>
+    </message>
+    <message>
+        <source>plan in force</source>
+        <translation>plan vigente</translation>
+    </message>
+    <message>
+        <source>decision #{number} ({title})</source>
+        <translation>decisión n.º {number} ({title})</translation>
+    </message>
+    <message>
+        <source>Decision #{number} recorded: {title}</source>
+        <translation>Decisión n.º {number} registrada: {title}</translation>
+    </message>
+</context>
+<context>
     <name>Format</name>
+    <message>
+        <source>shift start</source>
+        <extracomment>Reason kinds (:data:`dispatcher.history.REASON_KINDS`) as shown; English, translated.</extracomment>
+        <translation>inicio de turno</translation>
+    </message>
+    <message>
+        <source>breakdown</source>
+        <translation>avería</translation>
+    </message>
+    <message>
+        <source>repair</source>
+        <translation>reparación</translation>
+    </message>
+    <message>
+        <source>rush job</source>
+        <translation>trabajo urgente</translation>
+    </message>
+    <message>
+        <source>manual change</source>
+        <translation>cambio manual</translation>
+    </message>
+    <message>
+        <source>restored</source>
+        <translation>restaurado</translation>
+    </message>
+    <message>
+        <source>other</source>
+        <translation>otro</translation>
+    </message>
     <message>
         <source>setup min</source>
         <translation>min de preparación</translation>
