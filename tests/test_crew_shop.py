@@ -214,7 +214,7 @@ def test_crew_in_a_version_1_document_is_refused():
         parse_shop_text(json.dumps(doc))
 
 
-@pytest.mark.parametrize("option", ["--what-if", "--fill-shift", "--alternatives=3"])
+@pytest.mark.parametrize("option", ["--what-if", "--alternatives=3"])
 def test_features_that_ignore_the_crew_refuse_a_crewed_shop(option):
     proc = subprocess.run([sys.executable, "-m", "dispatcher", "solve", str(SAMPLE), option],
                           capture_output=True, text=True, check=False)

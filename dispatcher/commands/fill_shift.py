@@ -15,6 +15,7 @@ from dispatcher.commands.history import record_decision
 from dispatcher.commands.shop_input import is_shop_document, job_name, must_run_names
 from dispatcher.io.shopfile import load_shop, shop_to_dict
 from dispatcher.shop.fill_shift import ShiftFill, fill_shop_shift
+from dispatcher.shop.staffed import staffing_lines
 
 
 def run_fill_shift(args: argparse.Namespace) -> int:
@@ -46,6 +47,8 @@ def print_fill(fill: ShiftFill, unit: str = "") -> None:
     cost = {(a.job, a.machine): a.cost for a in fill.assignments}
     for m in fill.machines:
         print(f"{m.machine}  ({m.hours_used:g} of {m.capacity:g} h)")
+        if m.operators:
+            print("  minded by " + ", ".join(f"{o['operator']} ({o['hours']:g} h)" for o in m.operators))
         for job in m.running:
             print(f"  {job}  (already running)")
         for n, job in enumerate(m.jobs, start=1):
@@ -61,6 +64,9 @@ def print_fill(fill: ShiftFill, unit: str = "") -> None:
         print("Waiting for the next shift: none")
     if fill.unavailable_machines:
         print("Not available: " + ", ".join(fill.unavailable_machines))
+    if fill.staffing is not None:
+        for line in staffing_lines(fill.staffing):
+            print(line)
     label = "Total value" if fill.objective == "maximize" else "Total"
     print(f"{label}: {fill.total:g}")
     print(f"Solver: {fill.status_text}; plan re-checked: {'yes' if fill.verified else 'FAILED'}")

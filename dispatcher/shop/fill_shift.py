@@ -23,7 +23,7 @@ from __future__ import annotations
 
 import math
 from collections.abc import Iterable
-from dataclasses import dataclass, field
+from dataclasses import dataclass, field, replace
 from typing import Any
 
 import numpy as np
@@ -36,9 +36,12 @@ from dispatcher.engine import (
     fill_shift,
 )
 
+from dispatcher.engine.staffed_shift import staffed_fill_shift
+
 from .crew import refuse_with_crew
 from .model import DONE, MUST, MUST_NOT, RUNNING, UP, Problem, Shop, ShopError
 from .plan import Assignment, RunningJob, WaitReason, contract_json, json_number
+from .staffed_shift import crew_hours, shift_staffing
 from .translate import ShopInfeasibleError
 from .validate import check_shop
 
@@ -61,6 +64,7 @@ class MachineShift:
     running: list[str] = field(default_factory=list)
     runs: list[dict[str, Any]] | None = None       # shops with families: each run's change
     end_change: float | None = None                 # and the change into the end family
+    operators: list[dict[str, Any]] | None = None   # shops with a crew: who minds it, hours
 
 
 @dataclass
@@ -89,6 +93,7 @@ class ShiftFill:
     unavailable_machines: list[str] = field(default_factory=list)
     engine_plan: ShiftPlan | None = field(default=None, repr=False, compare=False)
     rush_waiting: list[str] = field(default_factory=list)
+    staffing: dict[str, Any] | None = None          # shops with a crew (see docs/crew.md)
 
     def jobs_on(self, machine: str) -> list[str]:
         """Running then planned jobs of a machine, in run order (empty if unknown)."""
@@ -108,7 +113,9 @@ class ShiftFill:
                              "capacity": json_number(m.capacity), "running": list(m.running),
                              **({} if m.runs is None else
                                 {"runs": [dict(r) for r in m.runs],
-                                 "end_change": None if m.end_change is None else json_number(m.end_change)})}
+                                 "end_change": None if m.end_change is None else json_number(m.end_change)}),
+                             **({} if m.operators is None else
+                                {"operators": [dict(o) for o in m.operators]})}
                             for m in self.machines]
         return data
 
@@ -119,7 +126,6 @@ def _json_float(x: float) -> int | float | None:
 
 def _check_fill(shop: Shop, source: str) -> None:
     """The shop's own checks, except that one machine may take several pinned jobs."""
-    refuse_with_crew(shop.crew.active, "filling the whole shift", source)
     relaxed = shop.copy()
     pinned = {}
     for p in relaxed.pins:
@@ -149,6 +155,7 @@ def fill_shop_shift(shop: Shop, *, maximize: bool = False, extra_must_run: Itera
     """
     _check_fill(shop, source)
     if shop.has_families() and not maximize:
+        refuse_with_crew(shop.crew.active, "filling the whole shift with changeovers", source)
         # changeovers priced in run order (dispatcher.shop.fill_runs)
         from .fill_runs import fill_with_changeovers
         return fill_with_changeovers(shop, extra_must_run=extra_must_run, time_limit=time_limit,
@@ -206,12 +213,19 @@ def fill_shop_shift(shop: Shop, *, maximize: bool = False, extra_must_run: Itera
     penalty = np.array([j.wait_penalty for j in jobs], dtype=float)
     names = [j.name for j in jobs]
     mnames = [shop.machines[k].name for k in up]
+    args = dict(allowed=allowed.reshape(len(rows), len(up)), maximize=maximize,
+                time_limit=time_limit, wait_penalty=penalty, must_run=must, pins=pins, rush=rush,
+                due=due, priority=rush)
+    shape = (len(rows), len(up))
     try:
-        plan = fill_shift(values.reshape(len(rows), len(up)), hours.reshape(len(rows), len(up)),
-                          capacity, allowed=allowed.reshape(len(rows), len(up)),
-                          maximize=maximize, time_limit=time_limit, wait_penalty=penalty,
-                          must_run=must, pins=pins, rush=rush, due=due, cancel=cancel,
-                          progress=progress, priority=rush)
+        if shop.crew.active:
+            if progress is not None:
+                progress("planning the shift with the crew's hours")
+            plan = staffed_fill_shift(values.reshape(shape), hours.reshape(shape), capacity,
+                                      **crew_hours(shop, up, used_running), **args)
+        else:
+            plan = fill_shift(values.reshape(shape), hours.reshape(shape), capacity,
+                              cancel=cancel, progress=progress, **args)
     except ShiftInfeasibleError as exc:
         raise ShopInfeasibleError(_infeasible_text(exc, names, mnames),
                                   [names[i] for i in exc.jobs],
@@ -220,7 +234,30 @@ def fill_shop_shift(shop: Shop, *, maximize: bool = False, extra_must_run: Itera
         raise ShiftSearchError(exc.message, source=source) from None
     except DispatchInputError as exc:
         raise ShopError([Problem("shop", str(exc))], source) from None
-    return _fill_from_plan(shop, plan, rows, up, running, capacity_all, used_running)
+    fill = _fill_from_plan(shop, plan, rows, up, running, capacity_all, used_running)
+    if shop.crew.active:
+        plain = None
+        if plan.waiting_jobs.size:  # the shift without the crew's limits: how many could run
+            plain = fill_shift(values.reshape(shape), hours.reshape(shape), capacity,
+                               **args).planned_count
+        _add_staffing(fill, shop, plan, rows, up, running, plain)
+    return fill
+
+
+def _add_staffing(fill: ShiftFill, shop: Shop, plan, rows, up, running, plain) -> None:
+    """Operators per machine and per assignment, and the plan's staffing summary."""
+    staffing, operators_of, main = shift_staffing(shop, plan, up, running, plain)
+    fill.staffing = staffing
+    fill.machines = [replace(m, operators=operators_of.get(m.machine, [])) for m in fill.machines]
+    fill.assignments = [replace(a, operator=main.get(a.machine)) for a in fill.assignments]
+    fill.running = [replace(r, operator=main.get(r.machine)) for r in fill.running]
+    if staffing["shortage"] is not None:
+        text = staffing["shortage"]["text"]
+        for name in fill.waiting_jobs:
+            reason = fill.waiting_reasons[name]
+            if "go to other jobs" in reason.text:  # it fits by hours: the crew holds it back
+                fill.waiting_reasons[name] = WaitReason(reason.competing_jobs, reason.machines,
+                                                      f"{name}: {text}")
 
 
 def _no_hours(shop: Shop, i: int, k: int) -> Problem:

@@ -189,6 +189,11 @@ def staffing_lines(staffing: dict) -> list[str]:
     idle = [o for o in staffing.get("operators_present", []) if o not in staffing.get("minding", {})]
     if idle:
         lines.append(f"  Present, no machine this round: {', '.join(idle)}")
+    for who, h in staffing.get("operator_hours", {}).items():
+        if h["present"] > 0:
+            when = f", {h['from']} to {h['to']}" if h.get("from") else ""
+            lines.append(f"  {who}: minds {h['minding']:g} machine-h of {h['present']:g} h here"
+                         f"{when} (up to {h['capacity']} at once)")
     if staffing.get("operators_not_yet_here"):
         lines.append(f"  Not here yet at the round's time: {', '.join(staffing['operators_not_yet_here'])}"
                      " (re-dispatch with --operator-in when they arrive)")
