@@ -6,7 +6,7 @@ widget (View ▸ History, Ctrl+H), and *Restore…*.
 
 from __future__ import annotations
 
-from PySide6.QtCore import QTimer
+from PySide6.QtCore import QCoreApplication, QTimer
 from PySide6.QtGui import QKeySequence
 from PySide6.QtWidgets import QDockWidget, QInputDialog
 
@@ -27,13 +27,15 @@ class HistoryDock(QDockWidget):
     """
 
     def __init__(self, window):
-        super().__init__("History", window)
+        super().__init__(QCoreApplication.translate("HistoryDock", "History"), window)
         self.setObjectName("historyDock")
         self.window_ = window
         self.panel = HistoryPanel(window.history, self)
         self.setWidget(self.panel)
+        self.setAccessibleName(self.tr("History"))
+        self.setAccessibleDescription(self.tr("The decisions recorded for this shop: filter, compare, restore"))
         self.toggleViewAction().setShortcut(QKeySequence("Ctrl+H"))
-        self.toggleViewAction().setStatusTip("Show or hide the recorded decisions")
+        self.toggleViewAction().setStatusTip(self.tr("Show or hide the recorded decisions"))
         self.visibilityChanged.connect(lambda visible: self.panel.refresh() if visible else None)
         self.panel.message.connect(window.show_warning)
         self.panel.restore_requested.connect(lambda n: self.restore(n))
@@ -71,27 +73,29 @@ class HistoryDock(QDockWidget):
         window = self.window_
         if by is None:
             by = str(window.settings.value(KEY_SUPERVISOR, ""))
-            by, ok = QInputDialog.getText(window, "Restore decision",
-                                          f"Restore decision #{decision_id}: supervisor name", text=by)
+            by, ok = QInputDialog.getText(window, self.tr("Restore decision"),
+                                          self.tr("Restore decision #{number}: supervisor name").format(
+                                              number=decision_id), text=by)
             if not ok or not by.strip():
                 return None
         try:
             decision = window.history.get(decision_id)
             shop = shop_from_dict(decision.shop_document, f"decision #{decision_id}", check=False)
         except (HistoryError, ShopFileError) as exc:
-            window.messenger.error("Cannot restore", str(exc))
+            window.messenger.error(self.tr("Cannot restore"), str(exc))
             return None
         if not window.files.maybe_keep_changes():
             return None
         try:
             number = window.history.restore(decision_id, by=by)
         except (HistoryError, HistoryInputError) as exc:
-            window.messenger.error("Cannot restore", str(exc))
+            window.messenger.error(self.tr("Cannot restore"), str(exc))
             return None
         doc = window.doc
         doc.replace(shop, doc.path)
         doc.undo_stack.resetClean()
         doc.dirty_changed.emit(True)
-        window.statusBar().showMessage(f"Decision #{decision_id} restored as #{number}", 8000)
+        window.statusBar().showMessage(self.tr("Decision #{number} restored as #{new}").format(
+            number=decision_id, new=number), 8000)
         window.decision_recorded.emit(number)
         return number

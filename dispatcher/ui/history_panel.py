@@ -8,7 +8,7 @@ from __future__ import annotations
 
 from datetime import timezone
 
-from PySide6.QtCore import QAbstractTableModel, QModelIndex, QPersistentModelIndex, Qt, Signal
+from PySide6.QtCore import QT_TRANSLATE_NOOP, QAbstractTableModel, QModelIndex, QPersistentModelIndex, Qt, Signal
 from PySide6.QtWidgets import (
     QAbstractItemView,
     QComboBox,
@@ -24,14 +24,20 @@ from PySide6.QtWidgets import (
     QWidget,
 )
 
-from dispatcher.history import REASON_KINDS, DecisionSummary, HistoryError, HistoryStore, reason_label
-from dispatcher.ui.format import fmt
+from dispatcher.history import REASON_KINDS, DecisionSummary, HistoryError, HistoryStore
+from dispatcher.ui.format import fmt, reason_text
 
 COL_ID, COL_TIME, COL_SHIFT, COL_BY, COL_REASON, COL_NOTE, COL_TOTAL, COL_PROOF = range(8)
-HEADERS = ["#", "Time (local)", "Shift", "Supervisor", "Reason", "Note", "Total", "Proof"]
+#: Column heads (English; the model shows them translated).
+HEADERS = ["#", QT_TRANSLATE_NOOP("DecisionListModel", "Time (local)"), QT_TRANSLATE_NOOP("DecisionListModel", "Shift"),
+           QT_TRANSLATE_NOOP("DecisionListModel", "Supervisor"), QT_TRANSLATE_NOOP("DecisionListModel", "Reason"),
+           QT_TRANSLATE_NOOP("DecisionListModel", "Note"), QT_TRANSLATE_NOOP("DecisionListModel", "Total"),
+           QT_TRANSLATE_NOOP("DecisionListModel", "Proof")]
 DecisionIdRole = Qt.ItemDataRole.UserRole + 1
 
-FILTER_FIELDS = {"job": "Job", "machine": "Machine", "by": "Supervisor"}
+FILTER_FIELDS = {"job": QT_TRANSLATE_NOOP("HistoryPanel", "Job"),
+                 "machine": QT_TRANSLATE_NOOP("HistoryPanel", "Machine"),
+                 "by": QT_TRANSLATE_NOOP("HistoryPanel", "Supervisor")}
 
 
 class DecisionListModel(QAbstractTableModel):
@@ -57,7 +63,7 @@ class DecisionListModel(QAbstractTableModel):
 
     def headerData(self, section: int, orientation: Qt.Orientation, role: int = Qt.ItemDataRole.DisplayRole):
         if orientation == Qt.Orientation.Horizontal and role == Qt.ItemDataRole.DisplayRole:
-            return HEADERS[section]
+            return self.tr(HEADERS[section])
         return None
 
     def data(self, index: QModelIndex | QPersistentModelIndex, role: int = Qt.ItemDataRole.DisplayRole):
@@ -73,18 +79,20 @@ class DecisionListModel(QAbstractTableModel):
                 COL_TIME: d.time.replace(tzinfo=d.time.tzinfo or timezone.utc).astimezone().strftime("%Y-%m-%d %H:%M"),
                 COL_SHIFT: f"{d.shift_date:%Y-%m-%d} {d.shift}",
                 COL_BY: d.by,
-                COL_REASON: reason_label(d.reason),
+                COL_REASON: reason_text(d.reason),
                 COL_NOTE: d.note,
                 COL_TOTAL: fmt(d.total),
-                COL_PROOF: "\u2713 checked" if d.certificate == "verified" else d.certificate,
+                COL_PROOF: self.tr("\u2713 checked") if d.certificate == "verified" else d.certificate,
             }[col]
         if role == Qt.ItemDataRole.ToolTipRole:
             if col == COL_TOTAL:
-                return f"Total of decision #{d.id} ({d.objective}); replaces #{d.replaces or '-'}"
+                return self.tr("Total of decision #{number} ({objective}); replaces #{replaces}").format(
+                    number=d.id, objective=d.objective, replaces=d.replaces or "-")
             if col == COL_ID:
-                return (f"Decision #{d.id}" + (f", restored from #{d.restored_from}" if d.restored_from else ""))
+                return (self.tr("Decision #{number}, restored from #{restored}") if d.restored_from else
+                        self.tr("Decision #{number}")).format(number=d.id, restored=d.restored_from)
             if col == COL_TIME:
-                return f"Recorded at {d.time:%Y-%m-%d %H:%M:%S} UTC"
+                return self.tr("Recorded at {time} UTC").format(time=f"{d.time:%Y-%m-%d %H:%M:%S}")
             return str(self.data(index))
         if role == Qt.ItemDataRole.TextAlignmentRole and col in (COL_ID, COL_TOTAL):
             return int(Qt.AlignmentFlag.AlignRight | Qt.AlignmentFlag.AlignVCenter)
@@ -105,16 +113,26 @@ class HistoryPanel(QWidget):
         filters = QHBoxLayout()
         self.field = QComboBox()
         for key, label in FILTER_FIELDS.items():
-            self.field.addItem(label, key)
+            self.field.addItem(self.tr(label), key)
+        self.field.setAccessibleName(self.tr("Filter by"))
+        self.field.setAccessibleDescription(self.tr("Which name the filter text looks for"))
         self.text = QLineEdit()
-        self.text.setPlaceholderText("name to look for (exact), empty = all")
+        self.text.setPlaceholderText(self.tr("name to look for (exact), empty = all"))
         self.text.setClearButtonEnabled(True)
+        self.text.setAccessibleName(self.tr("Filter text"))
+        self.text.setAccessibleDescription(self.tr("name to look for (exact), empty = all"))
         self.reason = QComboBox()
-        self.reason.addItem("any reason", None)
-        for key, label in REASON_KINDS.items():
-            self.reason.addItem(label, key)
-        self.refresh_button = QPushButton("&Refresh")
-        filters.addWidget(QLabel("Filter:"))
+        self.reason.addItem(self.tr("any reason"), None)
+        for key in REASON_KINDS:
+            self.reason.addItem(reason_text(key), key)
+        self.reason.setAccessibleName(self.tr("Reason filter"))
+        self.reason.setAccessibleDescription(self.tr("Show only decisions with this kind of reason"))
+        self.refresh_button = QPushButton(self.tr("&Refresh"))
+        self.refresh_button.setAccessibleName(self.tr("Refresh"))
+        self.refresh_button.setAccessibleDescription(self.tr("Read the decisions again with these filters"))
+        filter_label = QLabel(self.tr("Filter:"))
+        filter_label.setBuddy(self.field)
+        filters.addWidget(filter_label)
         filters.addWidget(self.field)
         filters.addWidget(self.text, 1)
         filters.addWidget(self.reason)
@@ -130,10 +148,14 @@ class HistoryPanel(QWidget):
         self.table.verticalHeader().setVisible(False)
         self.table.horizontalHeader().setSectionResizeMode(COL_NOTE, QHeaderView.ResizeMode.Stretch)
         self.table.setAlternatingRowColors(True)
+        self.table.setAccessibleName(self.tr("Recorded decisions"))
+        self.table.setAccessibleDescription(self.tr("Newest first; select one to see its plan, two to compare them"))
         self.details = QPlainTextEdit()
         self.details.setObjectName("historyDetails")
         self.details.setReadOnly(True)
-        self.details.setPlaceholderText("Select one decision to see its plan, or two to compare them.")
+        self.details.setPlaceholderText(self.tr("Select one decision to see its plan, or two to compare them."))
+        self.details.setAccessibleName(self.tr("Decision details"))
+        self.details.setAccessibleDescription(self.tr("The plan of the selected decision, or the changes between two"))
         split = QSplitter(Qt.Orientation.Horizontal)
         split.addWidget(self.table)
         split.addWidget(self.details)
@@ -143,12 +165,18 @@ class HistoryPanel(QWidget):
         self.where = QLabel()
         self.where.setObjectName("historyFile")
         self.where.setTextInteractionFlags(Qt.TextInteractionFlag.TextSelectableByMouse)
-        self.where.setToolTip("The history file these decisions come from (Edit \u25b8 Settings to change it)")
+        self.where.setToolTip(self.tr("The history file these decisions come from (Edit \u25b8 Settings to change it)"))
+        self.where.setAccessibleName(self.tr("History file"))
+        self.where.setAccessibleDescription(self.where.toolTip())
         buttons.addWidget(self.where, 1)
-        self.compare_button = QPushButton("&Compare two")
-        self.compare_button.setToolTip("Select two decisions (Ctrl+click) and compare their plans")
-        self.restore_button = QPushButton("Res&tore\u2026")
-        self.restore_button.setToolTip("Record a new decision that puts this one's plan back in force")
+        self.compare_button = QPushButton(self.tr("&Compare two"))
+        self.compare_button.setToolTip(self.tr("Select two decisions (Ctrl+click) and compare their plans"))
+        self.compare_button.setAccessibleName(self.tr("Compare two"))
+        self.compare_button.setAccessibleDescription(self.compare_button.toolTip())
+        self.restore_button = QPushButton(self.tr("Res&tore\u2026"))
+        self.restore_button.setToolTip(self.tr("Record a new decision that puts this one's plan back in force"))
+        self.restore_button.setAccessibleName(self.tr("Restore"))
+        self.restore_button.setAccessibleDescription(self.restore_button.toolTip())
         buttons.addWidget(self.compare_button)
         buttons.addWidget(self.restore_button)
         layout.addLayout(buttons)
@@ -176,7 +204,7 @@ class HistoryPanel(QWidget):
         return out
 
     def refresh(self) -> None:
-        self.where.setText(f"File: {self.store.path}")
+        self.where.setText(self.tr("File: {path}").format(path=self.store.path))
         try:
             rows = self.store.list(newest_first=True, **self.filters())
         except HistoryError as exc:
@@ -211,25 +239,28 @@ class HistoryPanel(QWidget):
             self.details.setPlainText(str(exc))
             return
         plan = d.plan or {}
-        lines = [f"Decision #{d.id} - {reason_label(d.reason)} by {d.by}",
-                 f"{d.note}" if d.note else "", f"Total: {fmt(plan.get('total'))} ({plan.get('objective')})", ""]
+        lines = [self.tr("Decision #{number} - {reason} by {supervisor}").format(
+                     number=d.id, reason=reason_text(d.reason), supervisor=d.by),
+                 f"{d.note}" if d.note else "",
+                 self.tr("Total: {total} ({objective})").format(total=fmt(plan.get("total")),
+                                                                objective=plan.get("objective")), ""]
         for a in plan.get("running", []):
-            lines.append(f"\u25b6 {a['machine']}: {a['job']} (running)")
+            lines.append(self.tr("\u25b6 {machine}: {job} (running)").format(machine=a["machine"], job=a["job"]))
         for a in plan.get("assignments", []):
             lines.append(f"\u2713 {a['machine']}: {a['job']}  {fmt(a['cost'])}")
         if plan.get("waiting_jobs"):
-            lines.append("Waiting: " + ", ".join(plan["waiting_jobs"]))
+            lines.append(self.tr("Waiting: {jobs}").format(jobs=", ".join(plan["waiting_jobs"])))
         if plan.get("idle_machines"):
-            lines.append("Idle: " + ", ".join(plan["idle_machines"]))
+            lines.append(self.tr("Idle: {machines}").format(machines=", ".join(plan["idle_machines"])))
         if d.diff_from_replaced is not None:
-            lines += ["", f"Changes from #{d.diff_from_replaced.from_id}:"]
+            lines += ["", self.tr("Changes from #{number}:").format(number=d.diff_from_replaced.from_id)]
             lines += ["  " + x for x in d.diff_from_replaced.lines()]
         self.details.setPlainText("\n".join(x for x in lines))
 
     def compare_selected(self) -> None:
         ids = self.selected_ids()
         if len(ids) != 2:
-            self.message.emit("select exactly two decisions to compare")
+            self.message.emit(self.tr("select exactly two decisions to compare"))
             return
         a, b = sorted(ids)
         try:
@@ -237,11 +268,12 @@ class HistoryPanel(QWidget):
         except HistoryError as exc:
             self.details.setPlainText(str(exc))
             return
-        self.details.setPlainText(f"From decision #{a} to #{b}:\n" + "\n".join(diff.lines()))
+        self.details.setPlainText(self.tr("From decision #{first} to #{second}:").format(first=a, second=b)
+                                  + "\n" + "\n".join(diff.lines()))
 
     def _restore_selected(self) -> None:
         ids = self.selected_ids()
         if len(ids) != 1:
-            self.message.emit("select one decision to restore")
+            self.message.emit(self.tr("select one decision to restore"))
             return
         self.restore_requested.emit(ids[0])

@@ -283,6 +283,58 @@ Der gültige Plan bleibt unverändert.</translation>
     </message>
 </context>
 <context>
+    <name>DecisionListModel</name>
+    <message>
+        <source>Time (local)</source>
+        <extracomment>Column heads (English; the model shows them translated).</extracomment>
+        <translation>Zeit (Ortszeit)</translation>
+    </message>
+    <message>
+        <source>Shift</source>
+        <translation>Schicht</translation>
+    </message>
+    <message>
+        <source>Supervisor</source>
+        <translation>Schichtleitung</translation>
+    </message>
+    <message>
+        <source>Reason</source>
+        <translation>Grund</translation>
+    </message>
+    <message>
+        <source>Note</source>
+        <translation>Notiz</translation>
+    </message>
+    <message>
+        <source>Total</source>
+        <translation>Summe</translation>
+    </message>
+    <message>
+        <source>Proof</source>
+        <translation>Nachweis</translation>
+    </message>
+    <message>
+        <source>✓ checked</source>
+        <translation>✓ geprüft</translation>
+    </message>
+    <message>
+        <source>Total of decision #{number} ({objective}); replaces #{replaces}</source>
+        <translation>Summe der Entscheidung Nr. {number} ({objective}); ersetzt Nr. {replaces}</translation>
+    </message>
+    <message>
+        <source>Decision #{number}, restored from #{restored}</source>
+        <translation>Entscheidung Nr. {number}, wiederhergestellt aus Nr. {restored}</translation>
+    </message>
+    <message>
+        <source>Decision #{number}</source>
+        <translation>Entscheidung Nr. {number}</translation>
+    </message>
+    <message>
+        <source>Recorded at {time} UTC</source>
+        <translation>Erfasst am {time} UTC</translation>
+    </message>
+</context>
+<context>
     <name>Format</name>
     <message>
         <source>shift start</source>
@@ -570,6 +622,189 @@ A machine&apos;s state in a sentence (English; shown translated).</extracomment>
     <message>
         <source>{job} on {machine} = {value}</source>
         <translation>{job} auf {machine} = {value}</translation>
+    </message>
+</context>
+<context>
+    <name>HistoryDock</name>
+    <message>
+        <source>History</source>
+        <extracomment>While the dock is shown, how often it looks for decisions recorded by other stations.</extracomment>
+        <translation>Verlauf</translation>
+    </message>
+    <message>
+        <source>The decisions recorded for this shop: filter, compare, restore</source>
+        <translation>Die für diesen Betrieb erfassten Entscheidungen: filtern, vergleichen, wiederherstellen</translation>
+    </message>
+    <message>
+        <source>Show or hide the recorded decisions</source>
+        <translation>Die erfassten Entscheidungen zeigen oder ausblenden</translation>
+    </message>
+    <message>
+        <source>Restore decision</source>
+        <translation>Entscheidung wiederherstellen</translation>
+    </message>
+    <message>
+        <source>Restore decision #{number}: supervisor name</source>
+        <translation>Entscheidung Nr. {number} wiederherstellen: Name der Schichtleitung</translation>
+    </message>
+    <message>
+        <source>Cannot restore</source>
+        <translation>Wiederherstellen nicht möglich</translation>
+    </message>
+    <message>
+        <source>Decision #{number} restored as #{new}</source>
+        <translation>Entscheidung Nr. {number} als Nr. {new} wiederhergestellt</translation>
+    </message>
+</context>
+<context>
+    <name>HistoryPanel</name>
+    <message>
+        <source>Job</source>
+        <translation>Auftrag</translation>
+    </message>
+    <message>
+        <source>Machine</source>
+        <translation>Maschine</translation>
+    </message>
+    <message>
+        <source>Supervisor</source>
+        <translation>Schichtleitung</translation>
+    </message>
+    <message>
+        <source>Filter by</source>
+        <translation>Filtern nach</translation>
+    </message>
+    <message>
+        <source>Which name the filter text looks for</source>
+        <translation>Nach welchem Namen der Filtertext sucht</translation>
+    </message>
+    <message>
+        <source>name to look for (exact), empty = all</source>
+        <translation>gesuchter Name (genau), leer = alle</translation>
+    </message>
+    <message>
+        <source>Filter text</source>
+        <translation>Filtertext</translation>
+    </message>
+    <message>
+        <source>any reason</source>
+        <translation>jeder Grund</translation>
+    </message>
+    <message>
+        <source>Reason filter</source>
+        <translation>Filter nach Grund</translation>
+    </message>
+    <message>
+        <source>Show only decisions with this kind of reason</source>
+        <translation>Nur Entscheidungen mit dieser Art von Grund zeigen</translation>
+    </message>
+    <message>
+        <source>&amp;Refresh</source>
+        <translation>A&amp;ktualisieren</translation>
+    </message>
+    <message>
+        <source>Refresh</source>
+        <translation>Aktualisieren</translation>
+    </message>
+    <message>
+        <source>Read the decisions again with these filters</source>
+        <translation>Die Entscheidungen mit diesen Filtern neu lesen</translation>
+    </message>
+    <message>
+        <source>Filter:</source>
+        <translation>Filter:</translation>
+    </message>
+    <message>
+        <source>Recorded decisions</source>
+        <translation>Erfasste Entscheidungen</translation>
+    </message>
+    <message>
+        <source>Newest first; select one to see its plan, two to compare them</source>
+        <translation>Neueste zuerst; eine auswählen, um ihren Plan zu sehen, zwei, um sie zu vergleichen</translation>
+    </message>
+    <message>
+        <source>Select one decision to see its plan, or two to compare them.</source>
+        <translation>Eine Entscheidung auswählen, um ihren Plan zu sehen, oder zwei, um sie zu vergleichen.</translation>
+    </message>
+    <message>
+        <source>Decision details</source>
+        <translation>Einzelheiten der Entscheidung</translation>
+    </message>
+    <message>
+        <source>The plan of the selected decision, or the changes between two</source>
+        <translation>Der Plan der ausgewählten Entscheidung oder die Änderungen zwischen zweien</translation>
+    </message>
+    <message>
+        <source>The history file these decisions come from (Edit ▸ Settings to change it)</source>
+        <translation>Die Verlaufsdatei, aus der diese Entscheidungen stammen (Bearbeiten ▸ Einstellungen zum Ändern)</translation>
+    </message>
+    <message>
+        <source>History file</source>
+        <translation>Verlaufsdatei</translation>
+    </message>
+    <message>
+        <source>&amp;Compare two</source>
+        <translation>Zwei &amp;vergleichen</translation>
+    </message>
+    <message>
+        <source>Select two decisions (Ctrl+click) and compare their plans</source>
+        <translation>Zwei Entscheidungen auswählen (Strg+Klick) und ihre Pläne vergleichen</translation>
+    </message>
+    <message>
+        <source>Compare two</source>
+        <translation>Zwei vergleichen</translation>
+    </message>
+    <message>
+        <source>Res&amp;tore…</source>
+        <translation>&amp;Wiederherstellen…</translation>
+    </message>
+    <message>
+        <source>Record a new decision that puts this one&apos;s plan back in force</source>
+        <translation>Eine neue Entscheidung erfassen, die den Plan dieser wieder in Kraft setzt</translation>
+    </message>
+    <message>
+        <source>Restore</source>
+        <translation>Wiederherstellen</translation>
+    </message>
+    <message>
+        <source>File: {path}</source>
+        <translation>Datei: {path}</translation>
+    </message>
+    <message>
+        <source>Decision #{number} - {reason} by {supervisor}</source>
+        <translation>Entscheidung Nr. {number} - {reason}, von {supervisor}</translation>
+    </message>
+    <message>
+        <source>Total: {total} ({objective})</source>
+        <translation>Summe: {total} ({objective})</translation>
+    </message>
+    <message>
+        <source>▶ {machine}: {job} (running)</source>
+        <translation>▶ {machine}: {job} (läuft)</translation>
+    </message>
+    <message>
+        <source>Waiting: {jobs}</source>
+        <translation>Wartend: {jobs}</translation>
+    </message>
+    <message>
+        <source>Idle: {machines}</source>
+        <translation>Frei: {machines}</translation>
+    </message>
+    <message>
+        <source>Changes from #{number}:</source>
+        <translation>Änderungen gegenüber Nr. {number}:</translation>
+    </message>
+    <message>
+        <source>select exactly two decisions to compare</source>
+        <translation>genau zwei Entscheidungen zum Vergleichen auswählen</translation>
+    </message>
+    <message>
+        <source>From decision #{first} to #{second}:</source>
+        <translation>Von Entscheidung Nr. {first} zu Nr. {second}:</translation>
+    </message>
+    <message>
+        <source>select one decision to restore</source>
+        <translation>eine Entscheidung zum Wiederherstellen auswählen</translation>
     </message>
 </context>
 <context>

@@ -283,6 +283,58 @@ El plan vigente no cambia.</translation>
     </message>
 </context>
 <context>
+    <name>DecisionListModel</name>
+    <message>
+        <source>Time (local)</source>
+        <extracomment>Column heads (English; the model shows them translated).</extracomment>
+        <translation>Hora (local)</translation>
+    </message>
+    <message>
+        <source>Shift</source>
+        <translation>Turno</translation>
+    </message>
+    <message>
+        <source>Supervisor</source>
+        <translation>Supervisor</translation>
+    </message>
+    <message>
+        <source>Reason</source>
+        <translation>Motivo</translation>
+    </message>
+    <message>
+        <source>Note</source>
+        <translation>Nota</translation>
+    </message>
+    <message>
+        <source>Total</source>
+        <translation>Total</translation>
+    </message>
+    <message>
+        <source>Proof</source>
+        <translation>Prueba</translation>
+    </message>
+    <message>
+        <source>✓ checked</source>
+        <translation>✓ comprobado</translation>
+    </message>
+    <message>
+        <source>Total of decision #{number} ({objective}); replaces #{replaces}</source>
+        <translation>Total de la decisión n.º {number} ({objective}); sustituye a la n.º {replaces}</translation>
+    </message>
+    <message>
+        <source>Decision #{number}, restored from #{restored}</source>
+        <translation>Decisión n.º {number}, restaurada de la n.º {restored}</translation>
+    </message>
+    <message>
+        <source>Decision #{number}</source>
+        <translation>Decisión n.º {number}</translation>
+    </message>
+    <message>
+        <source>Recorded at {time} UTC</source>
+        <translation>Registrada el {time} UTC</translation>
+    </message>
+</context>
+<context>
     <name>Format</name>
     <message>
         <source>shift start</source>
@@ -570,6 +622,189 @@ A machine&apos;s state in a sentence (English; shown translated).</extracomment>
     <message>
         <source>{job} on {machine} = {value}</source>
         <translation>{job} en {machine} = {value}</translation>
+    </message>
+</context>
+<context>
+    <name>HistoryDock</name>
+    <message>
+        <source>History</source>
+        <extracomment>While the dock is shown, how often it looks for decisions recorded by other stations.</extracomment>
+        <translation>Historial</translation>
+    </message>
+    <message>
+        <source>The decisions recorded for this shop: filter, compare, restore</source>
+        <translation>Las decisiones registradas para este taller: filtrar, comparar, restaurar</translation>
+    </message>
+    <message>
+        <source>Show or hide the recorded decisions</source>
+        <translation>Mostrar u ocultar las decisiones registradas</translation>
+    </message>
+    <message>
+        <source>Restore decision</source>
+        <translation>Restaurar decisión</translation>
+    </message>
+    <message>
+        <source>Restore decision #{number}: supervisor name</source>
+        <translation>Restaurar la decisión n.º {number}: nombre del supervisor</translation>
+    </message>
+    <message>
+        <source>Cannot restore</source>
+        <translation>No se puede restaurar</translation>
+    </message>
+    <message>
+        <source>Decision #{number} restored as #{new}</source>
+        <translation>Decisión n.º {number} restaurada como n.º {new}</translation>
+    </message>
+</context>
+<context>
+    <name>HistoryPanel</name>
+    <message>
+        <source>Job</source>
+        <translation>Trabajo</translation>
+    </message>
+    <message>
+        <source>Machine</source>
+        <translation>Máquina</translation>
+    </message>
+    <message>
+        <source>Supervisor</source>
+        <translation>Supervisor</translation>
+    </message>
+    <message>
+        <source>Filter by</source>
+        <translation>Filtrar por</translation>
+    </message>
+    <message>
+        <source>Which name the filter text looks for</source>
+        <translation>Qué nombre busca el texto del filtro</translation>
+    </message>
+    <message>
+        <source>name to look for (exact), empty = all</source>
+        <translation>nombre que buscar (exacto), vacío = todos</translation>
+    </message>
+    <message>
+        <source>Filter text</source>
+        <translation>Texto del filtro</translation>
+    </message>
+    <message>
+        <source>any reason</source>
+        <translation>cualquier motivo</translation>
+    </message>
+    <message>
+        <source>Reason filter</source>
+        <translation>Filtro por motivo</translation>
+    </message>
+    <message>
+        <source>Show only decisions with this kind of reason</source>
+        <translation>Mostrar solo las decisiones con este tipo de motivo</translation>
+    </message>
+    <message>
+        <source>&amp;Refresh</source>
+        <translation>&amp;Actualizar</translation>
+    </message>
+    <message>
+        <source>Refresh</source>
+        <translation>Actualizar</translation>
+    </message>
+    <message>
+        <source>Read the decisions again with these filters</source>
+        <translation>Volver a leer las decisiones con estos filtros</translation>
+    </message>
+    <message>
+        <source>Filter:</source>
+        <translation>Filtro:</translation>
+    </message>
+    <message>
+        <source>Recorded decisions</source>
+        <translation>Decisiones registradas</translation>
+    </message>
+    <message>
+        <source>Newest first; select one to see its plan, two to compare them</source>
+        <translation>Las más recientes primero; seleccione una para ver su plan, dos para compararlas</translation>
+    </message>
+    <message>
+        <source>Select one decision to see its plan, or two to compare them.</source>
+        <translation>Seleccione una decisión para ver su plan, o dos para compararlas.</translation>
+    </message>
+    <message>
+        <source>Decision details</source>
+        <translation>Detalles de la decisión</translation>
+    </message>
+    <message>
+        <source>The plan of the selected decision, or the changes between two</source>
+        <translation>El plan de la decisión seleccionada, o los cambios entre dos</translation>
+    </message>
+    <message>
+        <source>The history file these decisions come from (Edit ▸ Settings to change it)</source>
+        <translation>El archivo de historial del que vienen estas decisiones (Editar ▸ Configuración para cambiarlo)</translation>
+    </message>
+    <message>
+        <source>History file</source>
+        <translation>Archivo de historial</translation>
+    </message>
+    <message>
+        <source>&amp;Compare two</source>
+        <translation>&amp;Comparar dos</translation>
+    </message>
+    <message>
+        <source>Select two decisions (Ctrl+click) and compare their plans</source>
+        <translation>Seleccione dos decisiones (Ctrl+clic) y compare sus planes</translation>
+    </message>
+    <message>
+        <source>Compare two</source>
+        <translation>Comparar dos</translation>
+    </message>
+    <message>
+        <source>Res&amp;tore…</source>
+        <translation>Res&amp;taurar…</translation>
+    </message>
+    <message>
+        <source>Record a new decision that puts this one&apos;s plan back in force</source>
+        <translation>Registrar una nueva decisión que vuelva a poner en vigor el plan de esta</translation>
+    </message>
+    <message>
+        <source>Restore</source>
+        <translation>Restaurar</translation>
+    </message>
+    <message>
+        <source>File: {path}</source>
+        <translation>Archivo: {path}</translation>
+    </message>
+    <message>
+        <source>Decision #{number} - {reason} by {supervisor}</source>
+        <translation>Decisión n.º {number} - {reason}, por {supervisor}</translation>
+    </message>
+    <message>
+        <source>Total: {total} ({objective})</source>
+        <translation>Total: {total} ({objective})</translation>
+    </message>
+    <message>
+        <source>▶ {machine}: {job} (running)</source>
+        <translation>▶ {machine}: {job} (en marcha)</translation>
+    </message>
+    <message>
+        <source>Waiting: {jobs}</source>
+        <translation>En espera: {jobs}</translation>
+    </message>
+    <message>
+        <source>Idle: {machines}</source>
+        <translation>Libres: {machines}</translation>
+    </message>
+    <message>
+        <source>Changes from #{number}:</source>
+        <translation>Cambios respecto a la n.º {number}:</translation>
+    </message>
+    <message>
+        <source>select exactly two decisions to compare</source>
+        <translation>seleccione exactamente dos decisiones para comparar</translation>
+    </message>
+    <message>
+        <source>From decision #{first} to #{second}:</source>
+        <translation>De la decisión n.º {first} a la n.º {second}:</translation>
+    </message>
+    <message>
+        <source>select one decision to restore</source>
+        <translation>seleccione una decisión para restaurar</translation>
     </message>
 </context>
 <context>
