@@ -236,3 +236,10 @@ def test_command_line_fills_a_crewed_shift():
     data = json.loads(proc.stdout)
     assert data["certificate"]["verified"] and "staffing" in data
     assert all("operators" in m for m in data["machines"])
+
+
+def test_nothing_can_run_and_every_job_waits():
+    # no usable pair (the job needs 3 h, the machine has 2): no variable at all
+    plan = staffed_fill_shift([[0.0]], [[3.0]], [2.0], qualified=np.zeros((1, 1), bool),
+                              present=np.ones((1, 1), bool), period_hours=[8.0], wait_penalty=[4.0])
+    assert plan.verify() and plan.planned_count == 0 and plan.total == 4.0

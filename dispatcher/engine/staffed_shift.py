@@ -337,6 +337,11 @@ def _solve(problem, model, crew, search):
         # an operator minds at most capacity machines at once: sum_m w[o, m, t] <= cap L[t]
         a = block(w_o * n_t + w_t, wi, np.ones(n_w), n_ops * n_t)
         cons.append(LinearConstraint(a, -np.inf, (cap[:, None] * L[None, :]).reshape(-1)))
+    if nv == 0:  # nothing can run and nothing runs: every job waits
+        if problem.must.any():
+            raise _infeasible(problem)
+        return (np.zeros(0), np.zeros((n_ops, n_machines, n_t)), np.zeros(n_machines), True, True,
+                model.const)
     lower = np.r_[model.lower, np.zeros(n_r + n_w + n_u)]
     upper = np.r_[np.ones(n_x), L[r_t], L[w_t], run_h[u_m] / slot[u_m]]
     bounds = Bounds(lower, upper)
