@@ -28,8 +28,9 @@ class AlternativesTab(QObject):
         self.view = AlternativesView(window)
         self.runner = BackgroundRunner(self)
         self.runner.finished.connect(self._on_done)
-        self.runner.failed.connect(lambda exc: window.show_warning(f"ranking plans failed: {exc}"))
-        self.runner.cancelled.connect(lambda: self.view.show_message("Ranking cancelled"))
+        self.runner.failed.connect(lambda exc: window.show_warning(
+            self.tr("ranking plans failed: {error}").format(error=exc)))
+        self.runner.cancelled.connect(lambda: self.view.show_message(self.tr("Ranking cancelled")))
         self.view.find_requested.connect(self.find)
         self.view.put_in_force.connect(self.put_in_force)
 
@@ -38,16 +39,16 @@ class AlternativesTab(QObject):
         window, view = self.window, self.view
         plan = window.plan
         if plan is None:
-            view.show_message("No plan yet")
+            view.show_message(self.tr("No plan yet"))
             return
         if window.mode != MODE_ROUND:
-            view.show_message("Alternatives are ranked for one dispatch round (Plan menu: One round)")
+            view.show_message(self.tr("Alternatives are ranked for one dispatch round (Plan menu: One round)"))
             return
         if plan.objective == "bottleneck":
-            view.show_message("Alternatives are ranked for the 'least total' and 'most value' objectives")
+            view.show_message(self.tr("Alternatives are ranked for the 'least total' and 'most value' objectives"))
             return
         unit = window.doc.shop.unit.label()
-        view.show_message("Ranking plans\u2026")
+        view.show_message(self.tr("Ranking plans\u2026"))
         self.runner.submit(lambda cancel: (alternative_plans(plan, count, cancel), unit),
                            "alternatives")
 
@@ -61,6 +62,6 @@ class AlternativesTab(QObject):
         before, _ = flow.plan_in_force()
         shop = self.window.doc.shop.copy()
         diff = diff_plans(before, plan.to_json()) if before else None
-        proposal = Proposal(EVENT_CONFIRM, f"Put plan #{rank} of the alternatives in force",
-                            shop, plan, diff)
+        proposal = Proposal(EVENT_CONFIRM, self.tr("Put plan #{rank} of the alternatives in force").format(
+            rank=rank), shop, plan, diff)
         return flow.show(proposal)

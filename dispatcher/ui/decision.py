@@ -53,7 +53,7 @@ NOTE_HINTS = {
 
 def proposal_title(proposal: Proposal) -> str:
     """The proposal's title (:func:`dispatcher.shop.proposal.propose`'s words) in the
-    interface's language."""
+    interface's language; a title the app wrote itself (already translated) stays."""
     shop, event = proposal.shop, proposal.event
     try:
         if event == EVENT_DOWN:
@@ -65,7 +65,7 @@ def proposal_title(proposal: Proposal) -> str:
             return translate("DecisionDiff", "Rush job: {job}").format(job=shop.jobs[proposal.job].name)
         if event == EVENT_PULL and proposal.pulled_job:
             return translate("DecisionDiff", "Job pulled: {job}").format(job=proposal.pulled_job)
-        if event == EVENT_CONFIRM:
+        if event == EVENT_CONFIRM and proposal.title == "Put the plan shown in force":
             return translate("DecisionDiff", "Put the plan shown in force")
     except (IndexError, TypeError):
         pass

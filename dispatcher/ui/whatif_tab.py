@@ -26,8 +26,9 @@ class WhatIfTab(QObject):
         self.view = WhatIfView(window)
         self.runner = BackgroundRunner(self)
         self.runner.finished.connect(self._on_done)
-        self.runner.failed.connect(lambda exc: window.show_warning(f"what-if costs failed: {exc}"))
-        self.runner.cancelled.connect(lambda: self.view.show_message("What-if costs cancelled"))
+        self.runner.failed.connect(lambda exc: window.show_warning(
+            self.tr("what-if costs failed: {error}").format(error=exc)))
+        self.runner.cancelled.connect(lambda: self.view.show_message(self.tr("What-if costs cancelled")))
 
     def is_current(self) -> bool:
         return self.window.tabs.currentWidget() is self.view
@@ -39,18 +40,18 @@ class WhatIfTab(QObject):
         window, view = self.window, self.view
         plan = window.plan
         if plan is None:
-            view.show_message("No plan yet")
+            view.show_message(self.tr("No plan yet"))
             return
         if window.mode != MODE_ROUND:
-            view.show_message("What-if costs are for one dispatch round (Plan menu: One round)")
+            view.show_message(self.tr("What-if costs are for one dispatch round (Plan menu: One round)"))
             return
         if plan.objective == "bottleneck":
-            view.show_message("What-if costs are for the 'least total' and 'most value' objectives "
-                              "(switch in the Plan menu)")
+            view.show_message(self.tr("What-if costs are for the 'least total' and 'most value' objectives "
+                                      "(switch in the Plan menu)"))
             return
         shop = window.doc.shop.copy()
         unit = window.doc.shop.unit.label()
-        view.status.setText("Computing\u2026")
+        view.status.setText(self.tr("Computing\u2026"))
         self.runner.submit(lambda cancel: (shop, what_if_grid(plan, cancel), unit), "what-if")
 
     def _on_done(self, result) -> None:

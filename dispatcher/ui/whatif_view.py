@@ -13,7 +13,7 @@ from PySide6.QtWidgets import QLabel, QTableView, QVBoxLayout, QWidget
 
 from dispatcher.shop import UP, Shop
 from dispatcher.ui import palette
-from dispatcher.ui.format import fmt
+from dispatcher.ui.format import fmt, unit_text
 from dispatcher.shop.whatif import WhatIfGrid
 
 ExtraRole = Qt.ItemDataRole.UserRole + 11
@@ -44,11 +44,14 @@ class WhatIfModel(QAbstractTableModel):
             return None
         if orientation == Qt.Orientation.Horizontal:
             m = self.shop.machines[section]
-            return m.name if m.state == UP else f"{m.name}\n{palette.MARK_DOWN} {m.state}"
+            if m.state == UP:
+                return m.name
+            state = {"down": self.tr("down"), "maintenance": self.tr("maintenance")}.get(m.state, m.state)
+            return f"{m.name}\n{palette.MARK_DOWN} {state}"
         return self.shop.jobs[section].name
 
     def _word(self) -> str:
-        return "less value" if self.grid and self.grid.objective == "maximize" else "more"
+        return self.tr("less value") if self.grid and self.grid.objective == "maximize" else self.tr("more")
 
     def data(self, index: QModelIndex | QPersistentModelIndex, role: int = Qt.ItemDataRole.DisplayRole):
         if not index.isValid() or self.grid is None or self.shop is None:
@@ -84,32 +87,38 @@ class WhatIfModel(QAbstractTableModel):
         g, shop = self.grid, self.shop
         job, machine = shop.jobs[i], shop.machines[k]
         value = shop.value(job.id, machine.id)
-        lines = [f"{job.name} on {machine.name}: value "
-                 + ("- (cannot run)" if value is None else f"{fmt(value)} {self.unit}")]
+        names = {"job": job.name, "machine": machine.name}
+        lines = [self.tr("{job} on {machine}: value - (cannot run)").format(**names) if value is None else
+                 self.tr("{job} on {machine}: value {value} {unit}").format(
+                     value=fmt(value), unit=unit_text(self.unit), **names)]
         if not g.in_problem[i]:
-            lines.append(f"{job.name} is {job.state}: it is not dispatched this round")
+            lines.append(self.tr("{job} is {state}: it is not dispatched this round").format(
+                job=job.name, state={"running": self.tr("running"), "done": self.tr("done")}.get(job.state,
+                                                                                                  job.state)))
             return "\n".join(lines)
         p = int(g.planned[i])
         if p >= 0:
             pv = shop.value(job.id, shop.machines[p].id)
-            lines.append(f"The plan puts {job.name} on {shop.machines[p].name} (value {fmt(pv)})")
+            lines.append(self.tr("The plan puts {job} on {machine} (value {value})").format(
+                job=job.name, machine=shop.machines[p].name, value=fmt(pv)))
         else:
-            lines.append(f"The plan leaves {job.name} waiting")
+            lines.append(self.tr("The plan leaves {job} waiting").format(job=job.name))
         b = int(g.best_other[i])
         if b >= 0:
-            lines.append(f"Best other machine: {shop.machines[b].name} "
-                         f"({'+' + fmt(g.best_other_extra[i], 2)} {self._word()} in total)")
+            lines.append(self.tr("Best other machine: {machine} (+{extra} {more} in total)").format(
+                machine=shop.machines[b].name, extra=fmt(g.best_other_extra[i], 2), more=self._word()))
         else:
-            lines.append("No other machine can take it in any plan")
+            lines.append(self.tr("No other machine can take it in any plan"))
         x = float(g.extra[i, k])
         if p == k:
-            lines.append("This is the plan's choice: extra cost 0")
+            lines.append(self.tr("This is the plan's choice: extra cost 0"))
         elif math.isnan(x):
-            lines.append("Forcing this pair is impossible: no plan placing as many jobs contains it")
+            lines.append(self.tr("Forcing this pair is impossible: no plan placing as many jobs contains it"))
         else:
-            lines.append(f"Forcing this pair: +{fmt(x, 2)} {self._word()} in total than the plan")
+            lines.append(self.tr("Forcing this pair: +{extra} {more} in total than the plan").format(
+                extra=fmt(x, 2), more=self._word()))
         if not math.isnan(float(g.wait_extra[i])) and p >= 0:
-            lines.append(f"Keeping it waiting instead: +{fmt(g.wait_extra[i], 2)}")
+            lines.append(self.tr("Keeping it waiting instead: +{extra}").format(extra=fmt(g.wait_extra[i], 2)))
         return "\n".join(lines)
 
 
@@ -120,17 +129,24 @@ class WhatIfView(QWidget):
         super().__init__(parent)
         self.setObjectName("whatIfView")
         layout = QVBoxLayout(self)
-        self.caption = QLabel(
-            f"Extra cost against the plan shown if a job is forced onto a machine. "
-            f"{palette.MARK_PLANNED} = the plan's choice (0); darker = dearer; "
-            f"{palette.MARK_CANNOT} = impossible; \u00b7 = running or done. Hover a cell for details.")
+        self.caption = QLabel(self.tr(
+            "Extra cost against the plan shown if a job is forced onto a machine. {planned} = the plan's "
+            "choice (0); darker = dearer; {cannot} = impossible; {idle} = running or done. Hover a cell "
+            "for details.").format(planned=palette.MARK_PLANNED, cannot=palette.MARK_CANNOT, idle="\u00b7"))
         self.caption.setWordWrap(True)
+        self.caption.setAccessibleName(self.tr("What the map shows"))
+        self.caption.setAccessibleDescription(self.caption.text())
         self.status = QLabel("")
         self.status.setObjectName("whatIfStatus")
+        self.status.setAccessibleName(self.tr("What-if status"))
+        self.status.setAccessibleDescription(self.tr("The dearest forced pair, or why the map is empty"))
         self.model = WhatIfModel(self)
         self.table = QTableView()
         self.table.setObjectName("whatIfTable")
         self.table.setModel(self.model)
+        self.table.setAccessibleName(self.tr("What-if map"))
+        self.table.setAccessibleDescription(self.tr(
+            "Jobs as rows, machines as columns: the extra cost if the job is forced onto the machine"))
         self.table.horizontalHeader().setDefaultSectionSize(84)
         self.table.verticalHeader().setDefaultSectionSize(22)
         layout.addWidget(self.caption)
@@ -139,8 +155,9 @@ class WhatIfView(QWidget):
 
     def show_grid(self, shop: Shop, grid: WhatIfGrid, unit: str) -> None:
         self.model.set_grid(shop, grid, unit)
-        self.status.setText(f"Largest extra: {fmt(grid.largest, 2)} {unit}")
-        self.status.setToolTip("The dearest single forced pair, against the plan shown")
+        self.status.setText(self.tr("Largest extra: {extra} {unit}").format(extra=fmt(grid.largest, 2),
+                                                                            unit=unit_text(unit)))
+        self.status.setToolTip(self.tr("The dearest single forced pair, against the plan shown"))
 
     def show_message(self, text: str) -> None:
         self.model.set_grid(None, None)

@@ -2,6 +2,154 @@
 <!DOCTYPE TS>
 <TS version="2.1" language="de_DE">
 <context>
+    <name>AlternativesTab</name>
+    <message>
+        <source>ranking plans failed: {error}</source>
+        <translation>Rangfolge der Pläne fehlgeschlagen: {error}</translation>
+    </message>
+    <message>
+        <source>Ranking cancelled</source>
+        <translation>Rangfolge abgebrochen</translation>
+    </message>
+    <message>
+        <source>No plan yet</source>
+        <translation>Noch kein Plan</translation>
+    </message>
+    <message>
+        <source>Alternatives are ranked for one dispatch round (Plan menu: One round)</source>
+        <translation>Alternativen werden für eine Zuteilungsrunde gereiht (Menü Plan: Eine Runde)</translation>
+    </message>
+    <message>
+        <source>Alternatives are ranked for the &apos;least total&apos; and &apos;most value&apos; objectives</source>
+        <translation>Alternativen werden für die Ziele &apos;Geringste Summe&apos; und &apos;Größter Wert&apos; gereiht</translation>
+    </message>
+    <message>
+        <source>Ranking plans…</source>
+        <translation>Pläne werden gereiht…</translation>
+    </message>
+    <message>
+        <source>Put plan #{rank} of the alternatives in force</source>
+        <translation>Plan Nr. {rank} der Alternativen in Kraft setzen</translation>
+    </message>
+</context>
+<context>
+    <name>AlternativesView</name>
+    <message>
+        <source>How &amp;many plans:</source>
+        <translation>&amp;Wie viele Pläne:</translation>
+    </message>
+    <message>
+        <source>The best plans to list, best first</source>
+        <translation>Die besten Pläne, die aufgelistet werden, der beste zuerst</translation>
+    </message>
+    <message>
+        <source>How many plans</source>
+        <translation>Wie viele Pläne</translation>
+    </message>
+    <message>
+        <source>&amp;Find best plans</source>
+        <translation>Beste Pläne &amp;finden</translation>
+    </message>
+    <message>
+        <source>Find best plans</source>
+        <translation>Beste Pläne finden</translation>
+    </message>
+    <message>
+        <source>Rank the best plans of the shop as it is now</source>
+        <translation>Die besten Pläne für den Betrieb, wie er jetzt ist, reihen</translation>
+    </message>
+    <message>
+        <source>Ranking status</source>
+        <translation>Stand der Rangfolge</translation>
+    </message>
+    <message>
+        <source>How many plans were found, or why none</source>
+        <translation>Wie viele Pläne gefunden wurden, oder warum keiner</translation>
+    </message>
+    <message>
+        <source>Ranked plans</source>
+        <translation>Gereihte Pläne</translation>
+    </message>
+    <message>
+        <source>The best plans, best first, with their gap to the best</source>
+        <translation>Die besten Pläne, der beste zuerst, mit ihrem Abstand zum besten</translation>
+    </message>
+    <message>
+        <source>Plan details</source>
+        <translation>Einzelheiten des Plans</translation>
+    </message>
+    <message>
+        <source>The selected plan and what it changes against the best</source>
+        <translation>Der ausgewählte Plan und was er gegenüber dem besten ändert</translation>
+    </message>
+    <message>
+        <source>&amp;Put this plan in force…</source>
+        <translation>Diesen Plan in &amp;Kraft setzen…</translation>
+    </message>
+    <message>
+        <source>Put this plan in force</source>
+        <translation>Diesen Plan in Kraft setzen</translation>
+    </message>
+    <message>
+        <source>Confirm and record the selected plan as the decision in force</source>
+        <translation>Den ausgewählten Plan als gültige Entscheidung bestätigen und erfassen</translation>
+    </message>
+    <message>
+        <source>No plan to rank</source>
+        <translation>Kein Plan zum Reihen</translation>
+    </message>
+    <message>
+        <source>less value</source>
+        <translation>weniger Wert</translation>
+    </message>
+    <message>
+        <source>more</source>
+        <translation>mehr</translation>
+    </message>
+    <message>
+        <source>#{rank}  total {total} {unit}  (best)</source>
+        <translation>Nr. {rank}  Summe {total} {unit}  (bester)</translation>
+    </message>
+    <message>
+        <source>#{rank}  total {total} {unit}  (+{gap} {more})</source>
+        <translation>Nr. {rank}  Summe {total} {unit}  (+{gap} {more})</translation>
+    </message>
+    <message>
+        <source>Plan #{rank}: total {total} {unit}; the optimal plan</source>
+        <translation>Plan Nr. {rank}: Summe {total} {unit}; der optimale Plan</translation>
+    </message>
+    <message>
+        <source>Plan #{rank}: total {total} {unit}; {gap} {more} than the best</source>
+        <translation>Plan Nr. {rank}: Summe {total} {unit}; {gap} {more} als der beste</translation>
+    </message>
+    <message numerus="yes">
+        <source>%n distinct plan(s) found near the best (machines that take several jobs repeat the same plan in other slots), best first</source>
+        <translation>
+            <numerusform>%n verschiedener Plan nahe am besten gefunden (Maschinen mit mehreren Aufträgen wiederholen denselben Plan in anderen Plätzen), der beste zuerst</numerusform>
+            <numerusform>%n verschiedene Pläne nahe am besten gefunden (Maschinen mit mehreren Aufträgen wiederholen denselben Plan in anderen Plätzen), der beste zuerst</numerusform>
+        </translation>
+    </message>
+    <message numerus="yes">
+        <source>%n best plan(s), best first</source>
+        <translation>
+            <numerusform>%n bester Plan, der beste zuerst</numerusform>
+            <numerusform>%n beste Pläne, der beste zuerst</numerusform>
+        </translation>
+    </message>
+    <message>
+        <source>Plan #{rank}: total {total}</source>
+        <translation>Plan Nr. {rank}: Summe {total}</translation>
+    </message>
+    <message>
+        <source>Waiting: {jobs}</source>
+        <translation>Wartend: {jobs}</translation>
+    </message>
+    <message>
+        <source>Against the best plan:</source>
+        <translation>Gegenüber dem besten Plan:</translation>
+    </message>
+</context>
+<context>
     <name>DecisionDialog</name>
     <message>
         <source>⚠ Safety first: before anyone works on this machine, apply lockout/tagout and follow the site&apos;s isolation procedure. Operators run only machines they are trained and authorised for. Follow each machine&apos;s setup instructions. Local regulations and the site&apos;s safety rules take precedence over this plan.</source>
@@ -1989,6 +2137,139 @@ A machine&apos;s state in a sentence (English; shown translated).</extracomment>
     <message>
         <source>SAFETY:</source>
         <translation>SICHERHEIT:</translation>
+    </message>
+</context>
+<context>
+    <name>WhatIfModel</name>
+    <message>
+        <source>down</source>
+        <translation>ausgefallen</translation>
+    </message>
+    <message>
+        <source>maintenance</source>
+        <translation>Wartung</translation>
+    </message>
+    <message>
+        <source>less value</source>
+        <translation>weniger Wert</translation>
+    </message>
+    <message>
+        <source>more</source>
+        <translation>mehr</translation>
+    </message>
+    <message>
+        <source>{job} on {machine}: value - (cannot run)</source>
+        <translation>{job} auf {machine}: Wert - (nicht möglich)</translation>
+    </message>
+    <message>
+        <source>{job} on {machine}: value {value} {unit}</source>
+        <translation>{job} auf {machine}: Wert {value} {unit}</translation>
+    </message>
+    <message>
+        <source>{job} is {state}: it is not dispatched this round</source>
+        <translation>{job} ist {state}: er wird in dieser Runde nicht zugeteilt</translation>
+    </message>
+    <message>
+        <source>running</source>
+        <translation>laufend</translation>
+    </message>
+    <message>
+        <source>done</source>
+        <translation>erledigt</translation>
+    </message>
+    <message>
+        <source>The plan puts {job} on {machine} (value {value})</source>
+        <translation>Der Plan setzt {job} auf {machine} (Wert {value})</translation>
+    </message>
+    <message>
+        <source>The plan leaves {job} waiting</source>
+        <translation>Der Plan lässt {job} warten</translation>
+    </message>
+    <message>
+        <source>Best other machine: {machine} (+{extra} {more} in total)</source>
+        <translation>Beste andere Maschine: {machine} (+{extra} {more} insgesamt)</translation>
+    </message>
+    <message>
+        <source>No other machine can take it in any plan</source>
+        <translation>Keine andere Maschine kann ihn in irgendeinem Plan übernehmen</translation>
+    </message>
+    <message>
+        <source>This is the plan&apos;s choice: extra cost 0</source>
+        <translation>Das ist die Wahl des Plans: Mehrkosten 0</translation>
+    </message>
+    <message>
+        <source>Forcing this pair is impossible: no plan placing as many jobs contains it</source>
+        <translation>Dieses Paar zu erzwingen ist unmöglich: kein Plan mit ebenso vielen eingeplanten Aufträgen enthält es</translation>
+    </message>
+    <message>
+        <source>Forcing this pair: +{extra} {more} in total than the plan</source>
+        <translation>Dieses Paar erzwingen: +{extra} {more} insgesamt als der Plan</translation>
+    </message>
+    <message>
+        <source>Keeping it waiting instead: +{extra}</source>
+        <translation>Ihn stattdessen warten lassen: +{extra}</translation>
+    </message>
+</context>
+<context>
+    <name>WhatIfTab</name>
+    <message>
+        <source>what-if costs failed: {error}</source>
+        <translation>Was-wäre-wenn-Kosten fehlgeschlagen: {error}</translation>
+    </message>
+    <message>
+        <source>What-if costs cancelled</source>
+        <translation>Was-wäre-wenn-Kosten abgebrochen</translation>
+    </message>
+    <message>
+        <source>No plan yet</source>
+        <translation>Noch kein Plan</translation>
+    </message>
+    <message>
+        <source>What-if costs are for one dispatch round (Plan menu: One round)</source>
+        <translation>Was-wäre-wenn-Kosten gelten für eine Zuteilungsrunde (Menü Plan: Eine Runde)</translation>
+    </message>
+    <message>
+        <source>What-if costs are for the &apos;least total&apos; and &apos;most value&apos; objectives (switch in the Plan menu)</source>
+        <translation>Was-wäre-wenn-Kosten gelten für die Ziele &apos;Geringste Summe&apos; und &apos;Größter Wert&apos; (im Menü Plan umschalten)</translation>
+    </message>
+    <message>
+        <source>Computing…</source>
+        <translation>Wird berechnet…</translation>
+    </message>
+</context>
+<context>
+    <name>WhatIfView</name>
+    <message>
+        <source>Extra cost against the plan shown if a job is forced onto a machine. {planned} = the plan&apos;s choice (0); darker = dearer; {cannot} = impossible; {idle} = running or done. Hover a cell for details.</source>
+        <translation>Mehrkosten gegenüber dem angezeigten Plan, wenn ein Auftrag auf eine Maschine gezwungen wird. {planned} = Wahl des Plans (0); dunkler = teurer; {cannot} = unmöglich; {idle} = läuft oder erledigt. Für Einzelheiten auf eine Zelle zeigen.</translation>
+    </message>
+    <message>
+        <source>What the map shows</source>
+        <translation>Was die Karte zeigt</translation>
+    </message>
+    <message>
+        <source>What-if status</source>
+        <translation>Was-wäre-wenn-Status</translation>
+    </message>
+    <message>
+        <source>The dearest forced pair, or why the map is empty</source>
+        <translation>Das teuerste erzwungene Paar, oder warum die Karte leer ist</translation>
+    </message>
+    <message>
+        <source>What-if map</source>
+        <translation>Was-wäre-wenn-Karte</translation>
+    </message>
+    <message>
+        <source>Jobs as rows, machines as columns: the extra cost if the job is forced onto the machine</source>
+        <translation>Aufträge als Zeilen, Maschinen als Spalten: die Mehrkosten, wenn der Auftrag auf die Maschine gezwungen wird</translation>
+    </message>
+    <message>
+        <source>Largest extra: {extra} {unit}</source>
+        <translation>Größte Mehrkosten: {extra} {unit}</translation>
+    </message>
+    <message>
+        <source>The dearest single forced pair, against the plan shown</source>
+        <translation>Das teuerste einzelne erzwungene Paar, gegenüber dem angezeigten Plan</translation>
     </message>
 </context>
 </TS>

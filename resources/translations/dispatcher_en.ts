@@ -2,6 +2,23 @@
 <!DOCTYPE TS>
 <TS version="2.1" language="en_US">
 <context>
+    <name>AlternativesView</name>
+    <message numerus="yes">
+        <source>%n distinct plan(s) found near the best (machines that take several jobs repeat the same plan in other slots), best first</source>
+        <translation>
+            <numerusform>%n distinct plan found near the best (machines that take several jobs repeat the same plan in other slots), best first</numerusform>
+            <numerusform>%n distinct plans found near the best (machines that take several jobs repeat the same plan in other slots), best first</numerusform>
+        </translation>
+    </message>
+    <message numerus="yes">
+        <source>%n best plan(s), best first</source>
+        <translation>
+            <numerusform>%n best plan, best first</numerusform>
+            <numerusform>%n best plans, best first</numerusform>
+        </translation>
+    </message>
+</context>
+<context>
     <name>GridModel</name>
     <message numerus="yes">
         <source>{machine}: {state}, takes %n job(s) per round</source>

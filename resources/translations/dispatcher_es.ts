@@ -2,6 +2,154 @@
 <!DOCTYPE TS>
 <TS version="2.1" language="es_ES">
 <context>
+    <name>AlternativesTab</name>
+    <message>
+        <source>ranking plans failed: {error}</source>
+        <translation>la clasificación de planes falló: {error}</translation>
+    </message>
+    <message>
+        <source>Ranking cancelled</source>
+        <translation>Clasificación cancelada</translation>
+    </message>
+    <message>
+        <source>No plan yet</source>
+        <translation>Todavía no hay plan</translation>
+    </message>
+    <message>
+        <source>Alternatives are ranked for one dispatch round (Plan menu: One round)</source>
+        <translation>Las alternativas se clasifican para una ronda de asignación (menú Plan: Una ronda)</translation>
+    </message>
+    <message>
+        <source>Alternatives are ranked for the &apos;least total&apos; and &apos;most value&apos; objectives</source>
+        <translation>Las alternativas se clasifican para los objetivos &apos;Menor total&apos; y &apos;Mayor valor&apos;</translation>
+    </message>
+    <message>
+        <source>Ranking plans…</source>
+        <translation>Clasificando planes…</translation>
+    </message>
+    <message>
+        <source>Put plan #{rank} of the alternatives in force</source>
+        <translation>Poner en vigor el plan n.º {rank} de las alternativas</translation>
+    </message>
+</context>
+<context>
+    <name>AlternativesView</name>
+    <message>
+        <source>How &amp;many plans:</source>
+        <translation>&amp;Cuántos planes:</translation>
+    </message>
+    <message>
+        <source>The best plans to list, best first</source>
+        <translation>Los mejores planes que listar, el mejor primero</translation>
+    </message>
+    <message>
+        <source>How many plans</source>
+        <translation>Cuántos planes</translation>
+    </message>
+    <message>
+        <source>&amp;Find best plans</source>
+        <translation>&amp;Buscar los mejores planes</translation>
+    </message>
+    <message>
+        <source>Find best plans</source>
+        <translation>Buscar los mejores planes</translation>
+    </message>
+    <message>
+        <source>Rank the best plans of the shop as it is now</source>
+        <translation>Clasificar los mejores planes del taller tal como está ahora</translation>
+    </message>
+    <message>
+        <source>Ranking status</source>
+        <translation>Estado de la clasificación</translation>
+    </message>
+    <message>
+        <source>How many plans were found, or why none</source>
+        <translation>Cuántos planes se encontraron, o por qué ninguno</translation>
+    </message>
+    <message>
+        <source>Ranked plans</source>
+        <translation>Planes clasificados</translation>
+    </message>
+    <message>
+        <source>The best plans, best first, with their gap to the best</source>
+        <translation>Los mejores planes, el mejor primero, con su diferencia respecto al mejor</translation>
+    </message>
+    <message>
+        <source>Plan details</source>
+        <translation>Detalles del plan</translation>
+    </message>
+    <message>
+        <source>The selected plan and what it changes against the best</source>
+        <translation>El plan seleccionado y lo que cambia respecto al mejor</translation>
+    </message>
+    <message>
+        <source>&amp;Put this plan in force…</source>
+        <translation>&amp;Poner este plan en vigor…</translation>
+    </message>
+    <message>
+        <source>Put this plan in force</source>
+        <translation>Poner este plan en vigor</translation>
+    </message>
+    <message>
+        <source>Confirm and record the selected plan as the decision in force</source>
+        <translation>Confirmar y registrar el plan seleccionado como la decisión vigente</translation>
+    </message>
+    <message>
+        <source>No plan to rank</source>
+        <translation>Ningún plan que clasificar</translation>
+    </message>
+    <message>
+        <source>less value</source>
+        <translation>menos valor</translation>
+    </message>
+    <message>
+        <source>more</source>
+        <translation>más</translation>
+    </message>
+    <message>
+        <source>#{rank}  total {total} {unit}  (best)</source>
+        <translation>n.º {rank}  total {total} {unit}  (el mejor)</translation>
+    </message>
+    <message>
+        <source>#{rank}  total {total} {unit}  (+{gap} {more})</source>
+        <translation>n.º {rank}  total {total} {unit}  (+{gap} {more})</translation>
+    </message>
+    <message>
+        <source>Plan #{rank}: total {total} {unit}; the optimal plan</source>
+        <translation>Plan n.º {rank}: total {total} {unit}; el plan óptimo</translation>
+    </message>
+    <message>
+        <source>Plan #{rank}: total {total} {unit}; {gap} {more} than the best</source>
+        <translation>Plan n.º {rank}: total {total} {unit}; {gap} {more} que el mejor</translation>
+    </message>
+    <message numerus="yes">
+        <source>%n distinct plan(s) found near the best (machines that take several jobs repeat the same plan in other slots), best first</source>
+        <translation>
+            <numerusform>%n plan distinto encontrado cerca del mejor (las máquinas que aceptan varios trabajos repiten el mismo plan en otros puestos), el mejor primero</numerusform>
+            <numerusform>%n planes distintos encontrados cerca del mejor (las máquinas que aceptan varios trabajos repiten el mismo plan en otros puestos), el mejor primero</numerusform>
+        </translation>
+    </message>
+    <message numerus="yes">
+        <source>%n best plan(s), best first</source>
+        <translation>
+            <numerusform>%n mejor plan, el mejor primero</numerusform>
+            <numerusform>%n mejores planes, el mejor primero</numerusform>
+        </translation>
+    </message>
+    <message>
+        <source>Plan #{rank}: total {total}</source>
+        <translation>Plan n.º {rank}: total {total}</translation>
+    </message>
+    <message>
+        <source>Waiting: {jobs}</source>
+        <translation>En espera: {jobs}</translation>
+    </message>
+    <message>
+        <source>Against the best plan:</source>
+        <translation>Respecto al mejor plan:</translation>
+    </message>
+</context>
+<context>
     <name>DecisionDialog</name>
     <message>
         <source>⚠ Safety first: before anyone works on this machine, apply lockout/tagout and follow the site&apos;s isolation procedure. Operators run only machines they are trained and authorised for. Follow each machine&apos;s setup instructions. Local regulations and the site&apos;s safety rules take precedence over this plan.</source>
@@ -1989,6 +2137,139 @@ A machine&apos;s state in a sentence (English; shown translated).</extracomment>
     <message>
         <source>SAFETY:</source>
         <translation>SEGURIDAD:</translation>
+    </message>
+</context>
+<context>
+    <name>WhatIfModel</name>
+    <message>
+        <source>down</source>
+        <translation>averiada</translation>
+    </message>
+    <message>
+        <source>maintenance</source>
+        <translation>mantenimiento</translation>
+    </message>
+    <message>
+        <source>less value</source>
+        <translation>menos valor</translation>
+    </message>
+    <message>
+        <source>more</source>
+        <translation>más</translation>
+    </message>
+    <message>
+        <source>{job} on {machine}: value - (cannot run)</source>
+        <translation>{job} en {machine}: valor - (no puede)</translation>
+    </message>
+    <message>
+        <source>{job} on {machine}: value {value} {unit}</source>
+        <translation>{job} en {machine}: valor {value} {unit}</translation>
+    </message>
+    <message>
+        <source>{job} is {state}: it is not dispatched this round</source>
+        <translation>{job} está {state}: no se asigna en esta ronda</translation>
+    </message>
+    <message>
+        <source>running</source>
+        <translation>en marcha</translation>
+    </message>
+    <message>
+        <source>done</source>
+        <translation>terminado</translation>
+    </message>
+    <message>
+        <source>The plan puts {job} on {machine} (value {value})</source>
+        <translation>El plan pone {job} en {machine} (valor {value})</translation>
+    </message>
+    <message>
+        <source>The plan leaves {job} waiting</source>
+        <translation>El plan deja {job} en espera</translation>
+    </message>
+    <message>
+        <source>Best other machine: {machine} (+{extra} {more} in total)</source>
+        <translation>Mejor máquina alternativa: {machine} (+{extra} {more} en total)</translation>
+    </message>
+    <message>
+        <source>No other machine can take it in any plan</source>
+        <translation>Ninguna otra máquina puede aceptarlo en ningún plan</translation>
+    </message>
+    <message>
+        <source>This is the plan&apos;s choice: extra cost 0</source>
+        <translation>Esta es la elección del plan: coste extra 0</translation>
+    </message>
+    <message>
+        <source>Forcing this pair is impossible: no plan placing as many jobs contains it</source>
+        <translation>Forzar esta pareja es imposible: ningún plan que asigne tantos trabajos la contiene</translation>
+    </message>
+    <message>
+        <source>Forcing this pair: +{extra} {more} in total than the plan</source>
+        <translation>Forzar esta pareja: +{extra} {more} en total que el plan</translation>
+    </message>
+    <message>
+        <source>Keeping it waiting instead: +{extra}</source>
+        <translation>Dejarlo esperar en su lugar: +{extra}</translation>
+    </message>
+</context>
+<context>
+    <name>WhatIfTab</name>
+    <message>
+        <source>what-if costs failed: {error}</source>
+        <translation>los costes qué pasaría si fallaron: {error}</translation>
+    </message>
+    <message>
+        <source>What-if costs cancelled</source>
+        <translation>Costes qué pasaría si cancelados</translation>
+    </message>
+    <message>
+        <source>No plan yet</source>
+        <translation>Todavía no hay plan</translation>
+    </message>
+    <message>
+        <source>What-if costs are for one dispatch round (Plan menu: One round)</source>
+        <translation>Los costes qué pasaría si son para una ronda de asignación (menú Plan: Una ronda)</translation>
+    </message>
+    <message>
+        <source>What-if costs are for the &apos;least total&apos; and &apos;most value&apos; objectives (switch in the Plan menu)</source>
+        <translation>Los costes qué pasaría si son para los objetivos &apos;Menor total&apos; y &apos;Mayor valor&apos; (cámbielo en el menú Plan)</translation>
+    </message>
+    <message>
+        <source>Computing…</source>
+        <translation>Calculando…</translation>
+    </message>
+</context>
+<context>
+    <name>WhatIfView</name>
+    <message>
+        <source>Extra cost against the plan shown if a job is forced onto a machine. {planned} = the plan&apos;s choice (0); darker = dearer; {cannot} = impossible; {idle} = running or done. Hover a cell for details.</source>
+        <translation>Coste extra frente al plan mostrado si se fuerza un trabajo en una máquina. {planned} = elección del plan (0); más oscuro = más caro; {cannot} = imposible; {idle} = en marcha o terminado. Pase el ratón por una celda para ver detalles.</translation>
+    </message>
+    <message>
+        <source>What the map shows</source>
+        <translation>Qué muestra el mapa</translation>
+    </message>
+    <message>
+        <source>What-if status</source>
+        <translation>Estado del qué pasaría si</translation>
+    </message>
+    <message>
+        <source>The dearest forced pair, or why the map is empty</source>
+        <translation>La pareja forzada más cara, o por qué el mapa está vacío</translation>
+    </message>
+    <message>
+        <source>What-if map</source>
+        <translation>Mapa qué pasaría si</translation>
+    </message>
+    <message>
+        <source>Jobs as rows, machines as columns: the extra cost if the job is forced onto the machine</source>
+        <translation>Trabajos en filas, máquinas en columnas: el coste extra si el trabajo se fuerza en la máquina</translation>
+    </message>
+    <message>
+        <source>Largest extra: {extra} {unit}</source>
+        <translation>Mayor coste extra: {extra} {unit}</translation>
+    </message>
+    <message>
+        <source>The dearest single forced pair, against the plan shown</source>
+        <translation>La pareja forzada individual más cara, frente al plan mostrado</translation>
     </message>
 </context>
 </TS>
