@@ -13,7 +13,7 @@ from __future__ import annotations
 import os
 from pathlib import Path
 
-from PySide6.QtCore import QObject, Signal
+from PySide6.QtCore import QCoreApplication, QObject, Signal
 from PySide6.QtWidgets import (
     QComboBox,
     QDialog,
@@ -40,7 +40,7 @@ from dispatcher.translation import KEY_LANGUAGE, LANGUAGE_NAMES
 from dispatcher.ui.settings_keys import KEY_AUTOSAVE, KEY_HISTORY, KEY_SUPERVISOR
 
 AUTOSAVE_DEFAULT_MIN, AUTOSAVE_MAX_MIN = 1, 60
-HISTORY_FILTER = "Decision histories (*.sqlite);;All files (*)"
+translate = QCoreApplication.translate   # the name pyside6-lupdate collects
 
 
 class FileChooser:
@@ -51,8 +51,9 @@ class FileChooser:
 
     def history_file(self, current: str) -> str | None:
         path, _ = QFileDialog.getSaveFileName(
-            self.parent, "History file: choose an existing one or name a new one", current,
-            HISTORY_FILTER, options=QFileDialog.Option.DontConfirmOverwrite)
+            self.parent, translate("SettingsDialog", "History file: choose an existing one or name a new one"),
+            current, translate("SettingsDialog", "Decision histories (*.sqlite);;All files (*)"),
+            options=QFileDialog.Option.DontConfirmOverwrite)
         return path or None
 
 
@@ -86,21 +87,23 @@ def usable_history(path: str | os.PathLike) -> HistoryStore:
         return store
     p = Path(path).expanduser()
     if p.is_dir():
-        raise HistoryError(f"{p}: is a folder, not a history file")
+        raise HistoryError(translate("SettingsDialog", "{path}: is a folder, not a history file").format(path=p))
     store = HistoryStore(p)
     if p.exists():
         if store.read_only():
-            raise HistoryError(f"{p}: the file is read-only, so no decision could be recorded "
-                               "in it; it was left as it is. Make it writable or choose "
-                               "another file")
+            raise HistoryError(translate("SettingsDialog",
+                                         "{path}: the file is read-only, so no decision could be recorded "
+                                         "in it; it was left as it is. Make it writable or choose "
+                                         "another file").format(path=p))
         store.list(limit=1)
     else:
         folder = p.parent
         if not folder.is_dir():
-            raise HistoryError(f"{p}: the folder {folder} does not exist")
+            raise HistoryError(translate("SettingsDialog", "{path}: the folder {folder} does not exist").format(
+                path=p, folder=folder))
         if not os.access(folder, os.W_OK):
-            raise HistoryError(f"{p}: the folder {folder} is not writable, so the history "
-                               "cannot be created there")
+            raise HistoryError(translate("SettingsDialog", "{path}: the folder {folder} is not writable, so "
+                                         "the history cannot be created there").format(path=p, folder=folder))
     return store
 
 
@@ -127,57 +130,71 @@ class SettingsDialog(QDialog):
         super().__init__(window)
         self.setObjectName("settingsDialog")
         self.controller = controller
-        self.setWindowTitle("Settings")
+        self.setWindowTitle(self.tr("Settings"))
         layout = QVBoxLayout(self)
         form = QFormLayout()
 
         self.history_path = QLineEdit(str(window.history.path))
         self.history_path.setObjectName("historyPathEdit")
-        self.history_path.setToolTip("The file every confirmed decision is recorded in")
+        self.history_path.setToolTip(self.tr("The file every confirmed decision is recorded in"))
+        self.history_path.setAccessibleName(self.tr("History file"))
+        self.history_path.setAccessibleDescription(self.history_path.toolTip())
         self.history_path.setMinimumWidth(480)
         self.history_path.setCursorPosition(0)
-        self.choose_button = QPushButton("&Choose\u2026")
-        self.choose_button.setToolTip("Pick an existing history file, or name a new one")
-        self.default_button = QPushButton("Use &default")
-        self.default_button.setToolTip(f"The per-user file: {default_history_path()}")
+        self.choose_button = QPushButton(self.tr("&Choose\u2026"))
+        self.choose_button.setToolTip(self.tr("Pick an existing history file, or name a new one"))
+        self.choose_button.setAccessibleName(self.tr("Choose history file"))
+        self.choose_button.setAccessibleDescription(self.choose_button.toolTip())
+        self.default_button = QPushButton(self.tr("Use &default"))
+        self.default_button.setToolTip(self.tr("The per-user file: {path}").format(path=default_history_path()))
+        self.default_button.setAccessibleName(self.tr("Use the default history file"))
+        self.default_button.setAccessibleDescription(self.default_button.toolTip())
         row = QHBoxLayout()
         row.addWidget(self.history_path, 1)
         row.addWidget(self.choose_button)
         row.addWidget(self.default_button)
-        label = QLabel("&History file:")
+        label = QLabel(self.tr("&History file:"))
         label.setBuddy(self.history_path)
         form.addRow(label, row)
-        hint = QLabel("Confirmed decisions are recorded in this file. Another file takes "
-                      "effect at once: the history panel then lists its decisions. A new "
-                      "name starts an empty history; nothing is copied or deleted.")
+        hint = QLabel(self.tr("Confirmed decisions are recorded in this file. Another file takes "
+                              "effect at once: the history panel then lists its decisions. A new "
+                              "name starts an empty history; nothing is copied or deleted."))
         hint.setWordWrap(True)
         hint.setObjectName("historyHint")
+        hint.setAccessibleName(self.tr("About the history file"))
+        hint.setAccessibleDescription(hint.text())
         form.addRow("", hint)
 
         self.supervisor = QLineEdit(str(window.settings.value(KEY_SUPERVISOR, "")))
         self.supervisor.setObjectName("supervisorEdit")
-        self.supervisor.setPlaceholderText("for example: A. Supervisor")
-        self.supervisor.setToolTip("Filled in when you confirm a decision (you can change it there)")
-        form.addRow("Default &supervisor:", self.supervisor)
+        self.supervisor.setPlaceholderText(self.tr("for example: A. Supervisor"))
+        self.supervisor.setToolTip(self.tr("Filled in when you confirm a decision (you can change it there)"))
+        self.supervisor.setAccessibleName(self.tr("Default supervisor"))
+        self.supervisor.setAccessibleDescription(self.supervisor.toolTip())
+        form.addRow(self.tr("Default &supervisor:"), self.supervisor)
 
         self.autosave = QSpinBox()
         self.autosave.setObjectName("autosaveSpin")
         self.autosave.setRange(1, AUTOSAVE_MAX_MIN)
-        self.autosave.setSuffix(" min")
+        self.autosave.setSuffix(self.tr(" min"))
         self.autosave.setValue(autosave_minutes(window.settings))
-        self.autosave.setToolTip("How often unsaved changes are copied to the recovery folder")
-        form.addRow("&Autosave every:", self.autosave)
+        self.autosave.setToolTip(self.tr("How often unsaved changes are copied to the recovery folder"))
+        self.autosave.setAccessibleName(self.tr("Autosave interval"))
+        self.autosave.setAccessibleDescription(self.autosave.toolTip())
+        form.addRow(self.tr("&Autosave every:"), self.autosave)
 
         self.language = QComboBox()
         self.language.setObjectName("languageCombo")
-        self.language.addItem("System language", "")
+        self.language.addItem(self.tr("System language"), "")
         for code, name in LANGUAGE_NAMES.items():
             self.language.addItem(name, code)
         chosen = str(window.settings.value(KEY_LANGUAGE, "") or "")
         self.language.setCurrentIndex(max(0, self.language.findData(chosen)))
-        self.language.setToolTip("The interface and printed sheet language; applies at the "
-                                 "next start")
-        form.addRow("&Language:", self.language)
+        self.language.setToolTip(self.tr("The interface and printed sheet language; applies at the "
+                                         "next start"))
+        self.language.setAccessibleName(self.tr("Language"))
+        self.language.setAccessibleDescription(self.language.toolTip())
+        form.addRow(self.tr("&Language:"), self.language)
         layout.addLayout(form)
 
         self.buttons = QDialogButtonBox(QDialogButtonBox.StandardButton.Ok
@@ -234,7 +251,7 @@ class SettingsController(QObject):
         window = self.window
         text = history_path.strip()
         if not text:
-            window.messenger.error("Settings not changed", "Choose a history file.")
+            window.messenger.error(self.tr("Settings not changed"), self.tr("Choose a history file."))
             return False
         new = text if is_postgres_location(text) else Path(text).expanduser()
         if not _same_place(new, window.history.path):
@@ -242,12 +259,13 @@ class SettingsController(QObject):
                 store = usable_history(new)
             except HistoryError as exc:  # its message says what to do, not which option
                 window.messenger.error(
-                    "History file not changed",
-                    f"{exc}\n\nDecisions are still recorded in {window.history.path}.")
+                    self.tr("History file not changed"),
+                    self.tr("{error}\n\nDecisions are still recorded in {path}.").format(
+                        error=exc, path=window.history.path))
                 return False
             window.settings.setValue(KEY_HISTORY, str(new))
             self.history_changed.emit(store)
-            window.statusBar().showMessage(f"Decisions are now recorded in {new}", 8000)
+            window.statusBar().showMessage(self.tr("Decisions are now recorded in {path}").format(path=new), 8000)
         window.settings.setValue(KEY_SUPERVISOR, supervisor.strip())
         minutes = min(max(int(minutes), 1), AUTOSAVE_MAX_MIN)
         window.settings.setValue(KEY_AUTOSAVE, minutes)
@@ -255,5 +273,5 @@ class SettingsController(QObject):
         if language is not None and language != str(window.settings.value(KEY_LANGUAGE, "") or ""):
             # the language is installed at start (ui.app.install_language): say so
             window.settings.setValue(KEY_LANGUAGE, language)
-            window.statusBar().showMessage("The new language applies at the next start", 8000)
+            window.statusBar().showMessage(self.tr("The new language applies at the next start"), 8000)
         return True

@@ -1786,6 +1786,160 @@ A machine&apos;s state in a sentence (English; shown translated).</extracomment>
     </message>
 </context>
 <context>
+    <name>SettingsController</name>
+    <message>
+        <source>Settings not changed</source>
+        <translation>Einstellungen nicht geändert</translation>
+    </message>
+    <message>
+        <source>Choose a history file.</source>
+        <translation>Eine Verlaufsdatei wählen.</translation>
+    </message>
+    <message>
+        <source>History file not changed</source>
+        <translation>Verlaufsdatei nicht geändert</translation>
+    </message>
+    <message>
+        <source>{error}
+
+Decisions are still recorded in {path}.</source>
+        <translation>{error}
+
+Entscheidungen werden weiter in {path} erfasst.</translation>
+    </message>
+    <message>
+        <source>Decisions are now recorded in {path}</source>
+        <translation>Entscheidungen werden jetzt in {path} erfasst</translation>
+    </message>
+    <message>
+        <source>The new language applies at the next start</source>
+        <translation>Die neue Sprache gilt ab dem nächsten Start</translation>
+    </message>
+</context>
+<context>
+    <name>SettingsDialog</name>
+    <message>
+        <source>History file: choose an existing one or name a new one</source>
+        <translation>Verlaufsdatei: eine vorhandene wählen oder eine neue benennen</translation>
+    </message>
+    <message>
+        <source>Decision histories (*.sqlite);;All files (*)</source>
+        <translation>Entscheidungsverläufe (*.sqlite);;Alle Dateien (*)</translation>
+    </message>
+    <message>
+        <source>{path}: is a folder, not a history file</source>
+        <translation>{path}: ist ein Ordner, keine Verlaufsdatei</translation>
+    </message>
+    <message>
+        <source>{path}: the file is read-only, so no decision could be recorded in it; it was left as it is. Make it writable or choose another file</source>
+        <translation>{path}: die Datei ist schreibgeschützt, daher könnte keine Entscheidung darin erfasst werden; sie wurde unverändert gelassen. Sie beschreibbar machen oder eine andere Datei wählen</translation>
+    </message>
+    <message>
+        <source>{path}: the folder {folder} does not exist</source>
+        <translation>{path}: der Ordner {folder} existiert nicht</translation>
+    </message>
+    <message>
+        <source>{path}: the folder {folder} is not writable, so the history cannot be created there</source>
+        <translation>{path}: der Ordner {folder} ist nicht beschreibbar, daher kann der Verlauf dort nicht angelegt werden</translation>
+    </message>
+    <message>
+        <source>Settings</source>
+        <translation>Einstellungen</translation>
+    </message>
+    <message>
+        <source>The file every confirmed decision is recorded in</source>
+        <translation>Die Datei, in der jede bestätigte Entscheidung erfasst wird</translation>
+    </message>
+    <message>
+        <source>History file</source>
+        <translation>Verlaufsdatei</translation>
+    </message>
+    <message>
+        <source>&amp;Choose…</source>
+        <translation>&amp;Wählen…</translation>
+    </message>
+    <message>
+        <source>Pick an existing history file, or name a new one</source>
+        <translation>Eine vorhandene Verlaufsdatei wählen oder eine neue benennen</translation>
+    </message>
+    <message>
+        <source>Choose history file</source>
+        <translation>Verlaufsdatei wählen</translation>
+    </message>
+    <message>
+        <source>Use &amp;default</source>
+        <translation>&amp;Vorgabe verwenden</translation>
+    </message>
+    <message>
+        <source>The per-user file: {path}</source>
+        <translation>Die Datei je Benutzer: {path}</translation>
+    </message>
+    <message>
+        <source>Use the default history file</source>
+        <translation>Die vorgegebene Verlaufsdatei verwenden</translation>
+    </message>
+    <message>
+        <source>&amp;History file:</source>
+        <translation>&amp;Verlaufsdatei:</translation>
+    </message>
+    <message>
+        <source>Confirmed decisions are recorded in this file. Another file takes effect at once: the history panel then lists its decisions. A new name starts an empty history; nothing is copied or deleted.</source>
+        <translation>Bestätigte Entscheidungen werden in dieser Datei erfasst. Eine andere Datei gilt sofort: der Verlauf zeigt dann ihre Entscheidungen. Ein neuer Name beginnt einen leeren Verlauf; nichts wird kopiert oder gelöscht.</translation>
+    </message>
+    <message>
+        <source>About the history file</source>
+        <translation>Zur Verlaufsdatei</translation>
+    </message>
+    <message>
+        <source>for example: A. Supervisor</source>
+        <translation>zum Beispiel: A. Schichtleitung</translation>
+    </message>
+    <message>
+        <source>Filled in when you confirm a decision (you can change it there)</source>
+        <translation>Wird beim Bestätigen einer Entscheidung eingetragen (dort änderbar)</translation>
+    </message>
+    <message>
+        <source>Default supervisor</source>
+        <translation>Vorgegebene Schichtleitung</translation>
+    </message>
+    <message>
+        <source>Default &amp;supervisor:</source>
+        <translation>Vorgegebene &amp;Schichtleitung:</translation>
+    </message>
+    <message>
+        <source> min</source>
+        <translation> min</translation>
+    </message>
+    <message>
+        <source>How often unsaved changes are copied to the recovery folder</source>
+        <translation>Wie oft ungesicherte Änderungen in den Wiederherstellungsordner kopiert werden</translation>
+    </message>
+    <message>
+        <source>Autosave interval</source>
+        <translation>Intervall der automatischen Sicherung</translation>
+    </message>
+    <message>
+        <source>&amp;Autosave every:</source>
+        <translation>&amp;Automatisch sichern alle:</translation>
+    </message>
+    <message>
+        <source>System language</source>
+        <translation>Sprache des Systems</translation>
+    </message>
+    <message>
+        <source>The interface and printed sheet language; applies at the next start</source>
+        <translation>Die Sprache der Oberfläche und des gedruckten Blatts; gilt ab dem nächsten Start</translation>
+    </message>
+    <message>
+        <source>Language</source>
+        <translation>Sprache</translation>
+    </message>
+    <message>
+        <source>&amp;Language:</source>
+        <translation>S&amp;prache:</translation>
+    </message>
+</context>
+<context>
     <name>Sheet</name>
     <message>
         <source>no available machine can run it</source>

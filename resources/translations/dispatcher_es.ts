@@ -1786,6 +1786,160 @@ A machine&apos;s state in a sentence (English; shown translated).</extracomment>
     </message>
 </context>
 <context>
+    <name>SettingsController</name>
+    <message>
+        <source>Settings not changed</source>
+        <translation>Configuración sin cambios</translation>
+    </message>
+    <message>
+        <source>Choose a history file.</source>
+        <translation>Elija un archivo de historial.</translation>
+    </message>
+    <message>
+        <source>History file not changed</source>
+        <translation>Archivo de historial sin cambios</translation>
+    </message>
+    <message>
+        <source>{error}
+
+Decisions are still recorded in {path}.</source>
+        <translation>{error}
+
+Las decisiones se siguen registrando en {path}.</translation>
+    </message>
+    <message>
+        <source>Decisions are now recorded in {path}</source>
+        <translation>Las decisiones se registran ahora en {path}</translation>
+    </message>
+    <message>
+        <source>The new language applies at the next start</source>
+        <translation>El nuevo idioma se aplica en el próximo inicio</translation>
+    </message>
+</context>
+<context>
+    <name>SettingsDialog</name>
+    <message>
+        <source>History file: choose an existing one or name a new one</source>
+        <translation>Archivo de historial: elija uno existente o dé nombre a uno nuevo</translation>
+    </message>
+    <message>
+        <source>Decision histories (*.sqlite);;All files (*)</source>
+        <translation>Historiales de decisiones (*.sqlite);;Todos los archivos (*)</translation>
+    </message>
+    <message>
+        <source>{path}: is a folder, not a history file</source>
+        <translation>{path}: es una carpeta, no un archivo de historial</translation>
+    </message>
+    <message>
+        <source>{path}: the file is read-only, so no decision could be recorded in it; it was left as it is. Make it writable or choose another file</source>
+        <translation>{path}: el archivo es de solo lectura, así que no se podría registrar ninguna decisión en él; se ha dejado como estaba. Hágalo escribible o elija otro archivo</translation>
+    </message>
+    <message>
+        <source>{path}: the folder {folder} does not exist</source>
+        <translation>{path}: la carpeta {folder} no existe</translation>
+    </message>
+    <message>
+        <source>{path}: the folder {folder} is not writable, so the history cannot be created there</source>
+        <translation>{path}: la carpeta {folder} no es escribible, así que el historial no se puede crear allí</translation>
+    </message>
+    <message>
+        <source>Settings</source>
+        <translation>Configuración</translation>
+    </message>
+    <message>
+        <source>The file every confirmed decision is recorded in</source>
+        <translation>El archivo en el que se registra cada decisión confirmada</translation>
+    </message>
+    <message>
+        <source>History file</source>
+        <translation>Archivo de historial</translation>
+    </message>
+    <message>
+        <source>&amp;Choose…</source>
+        <translation>&amp;Elegir…</translation>
+    </message>
+    <message>
+        <source>Pick an existing history file, or name a new one</source>
+        <translation>Elegir un archivo de historial existente o dar nombre a uno nuevo</translation>
+    </message>
+    <message>
+        <source>Choose history file</source>
+        <translation>Elegir archivo de historial</translation>
+    </message>
+    <message>
+        <source>Use &amp;default</source>
+        <translation>Usar el &amp;predeterminado</translation>
+    </message>
+    <message>
+        <source>The per-user file: {path}</source>
+        <translation>El archivo de cada usuario: {path}</translation>
+    </message>
+    <message>
+        <source>Use the default history file</source>
+        <translation>Usar el archivo de historial predeterminado</translation>
+    </message>
+    <message>
+        <source>&amp;History file:</source>
+        <translation>Archivo de &amp;historial:</translation>
+    </message>
+    <message>
+        <source>Confirmed decisions are recorded in this file. Another file takes effect at once: the history panel then lists its decisions. A new name starts an empty history; nothing is copied or deleted.</source>
+        <translation>Las decisiones confirmadas se registran en este archivo. Otro archivo tiene efecto enseguida: el historial muestra entonces sus decisiones. Un nombre nuevo empieza un historial vacío; no se copia ni se borra nada.</translation>
+    </message>
+    <message>
+        <source>About the history file</source>
+        <translation>Sobre el archivo de historial</translation>
+    </message>
+    <message>
+        <source>for example: A. Supervisor</source>
+        <translation>por ejemplo: A. Supervisor</translation>
+    </message>
+    <message>
+        <source>Filled in when you confirm a decision (you can change it there)</source>
+        <translation>Se rellena al confirmar una decisión (allí puede cambiarlo)</translation>
+    </message>
+    <message>
+        <source>Default supervisor</source>
+        <translation>Supervisor predeterminado</translation>
+    </message>
+    <message>
+        <source>Default &amp;supervisor:</source>
+        <translation>&amp;Supervisor predeterminado:</translation>
+    </message>
+    <message>
+        <source> min</source>
+        <translation> min</translation>
+    </message>
+    <message>
+        <source>How often unsaved changes are copied to the recovery folder</source>
+        <translation>Con qué frecuencia se copian los cambios sin guardar en la carpeta de recuperación</translation>
+    </message>
+    <message>
+        <source>Autosave interval</source>
+        <translation>Intervalo de guardado automático</translation>
+    </message>
+    <message>
+        <source>&amp;Autosave every:</source>
+        <translation>Guardado &amp;automático cada:</translation>
+    </message>
+    <message>
+        <source>System language</source>
+        <translation>Idioma del sistema</translation>
+    </message>
+    <message>
+        <source>The interface and printed sheet language; applies at the next start</source>
+        <translation>El idioma de la interfaz y de la hoja impresa; se aplica en el próximo inicio</translation>
+    </message>
+    <message>
+        <source>Language</source>
+        <translation>Idioma</translation>
+    </message>
+    <message>
+        <source>&amp;Language:</source>
+        <translation>&amp;Idioma:</translation>
+    </message>
+</context>
+<context>
     <name>Sheet</name>
     <message>
         <source>no available machine can run it</source>
