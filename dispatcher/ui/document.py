@@ -147,9 +147,33 @@ class ShopDocument(QObject):
         self.cells_changed.emit([row], [col])
         self.edited.emit()
 
+    def cell_state(self, row: int, col: int) -> tuple[float | None, bool]:
+        """What is typed in a cell: ``(typed value or None, typed "cannot run" over the
+        changeover table)``; ``(None, False)`` where the value comes from the table."""
+        key = (self.job_ids[row], self.machine_ids[col])
+        return self.shop.grid.get(key), key in self.shop.blocked
+
+    def _restore_cells(self, states: list[tuple[int, int, float | None, bool]]) -> None:
+        """Put back what was typed in cells (see :meth:`cell_state`), table-derived included."""
+        for row, col, typed, blocked in states:
+            key = (self.job_ids[row], self.machine_ids[col])
+            if typed is None:
+                self.shop.grid.pop(key, None)
+            else:
+                self.shop.grid[key] = typed
+            if blocked:
+                self.shop.blocked.add(key)
+            else:
+                self.shop.blocked.discard(key)
+        self.cells_changed.emit([s[0] for s in states], [s[1] for s in states])
+        self.edited.emit()
+
     def _apply_job_field(self, row: int, field: str, value) -> None:
         setattr(self.shop.jobs[row], field, value)
         self.jobs_changed.emit([row])
+        if field == "family" and self.machine_ids:
+            # every derived value of the row follows the job's family
+            self.cells_changed.emit([row], [0, len(self.machine_ids) - 1])
         self.edited.emit()
 
     def _apply_machine_fields(self, col: int, fields: dict) -> None:
@@ -157,6 +181,9 @@ class ShopDocument(QObject):
         for name, value in fields.items():
             setattr(machine, name, value)
         self.machines_changed.emit([col])
+        if {"mounted", "end_family"} & set(fields) and self.job_ids:
+            # the derived values of the column follow the mounted family
+            self.cells_changed.emit([0, len(self.job_ids) - 1], [col])
         self.edited.emit()
 
     def _apply_authorisations(self, cells: list[tuple[int, int, bool]]) -> None:

@@ -14,19 +14,38 @@ from dispatcher.ui.document import RemovedRecord, ShopDocument
 
 
 class SetValues(QUndoCommand):
-    """Set grid values of several cells at once (one cell edit, a paste, or a clear)."""
+    """Set grid values of several cells at once (one cell edit, a paste, or a clear).
+
+    Undo puts back what was typed before, so a cell whose value came from the changeover
+    table goes back to following the table (not to a typed copy of the derived value).
+    """
 
     def __init__(self, doc: ShopDocument, cells: list[tuple[int, int, float | None]], text: str):
         super().__init__(text)
         self._doc = doc
         self._new = list(cells)
-        self._old = [(r, c, doc.value_at(r, c)) for r, c, _ in cells]
+        self._old = [(r, c, *doc.cell_state(r, c)) for r, c, _ in cells]
 
     def redo(self) -> None:
         self._doc._apply_values(self._new)
 
     def undo(self) -> None:
-        self._doc._apply_values(self._old)
+        self._doc._restore_cells(self._old)
+
+
+class UseTable(QUndoCommand):
+    """Drop what is typed in cells, so that their values come from the changeover table."""
+
+    def __init__(self, doc: ShopDocument, cells: list[tuple[int, int]], text: str):
+        super().__init__(text)
+        self._doc = doc
+        self._old = [(r, c, *doc.cell_state(r, c)) for r, c in cells]
+
+    def redo(self) -> None:
+        self._doc._restore_cells([(r, c, None, False) for r, c, _, _ in self._old])
+
+    def undo(self) -> None:
+        self._doc._restore_cells(self._old)
 
 
 class SetPin(QUndoCommand):

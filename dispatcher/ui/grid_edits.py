@@ -12,9 +12,11 @@ from PySide6.QtCore import QObject
 from PySide6.QtGui import QGuiApplication
 from PySide6.QtWidgets import QInputDialog
 
+from dispatcher.limits import name_problem
 from dispatcher.shop import DONE, MAINTENANCE, MUST, MUST_NOT, UP, Job, Machine
 from dispatcher.ui.clipboard import PasteError, copy_block, paste_changes
-from dispatcher.ui.edits import AddJob, AddMachine, SetJobField, SetJobsState, SetMachineFields, SetPin, SetValues
+from dispatcher.ui.edits import (AddJob, AddMachine, SetJobField, SetJobsState, SetMachineFields, SetPin,
+                                 SetValues, UseTable)
 from dispatcher.ui.grid_model import FIRST_MACHINE_COL
 
 
@@ -169,3 +171,67 @@ class GridEdits(QObject):
             self.doc, col, {"state": state, "state_changed": datetime.now(timezone.utc)},
             f"{m.name}: {state}"))
 
+
+    # ---- changeovers ----------------------------------------------------------------------
+    def use_table(self) -> None:
+        """Drop the values typed in the selected cells: they follow the changeover table."""
+        rows, cols = self.view.selected_block()
+        cells = [(r, c) for r in rows for c in cols if self.doc.cell_state(r, c) != (None, False)
+                 and self.doc.shop.table_of(self.doc.machine_ids[c]) is not None]
+        if not cells:
+            self.show_warning(self.tr("nothing typed over a changeover table in the selection"))
+            return
+        self.doc.undo_stack.push(UseTable(self.doc, cells, self.tr(
+            "Use changeover table in %n cell(s)", "", len(cells))))
+
+    def families_of(self, col: int) -> list[str]:
+        """The families the machine's changeover table lists (empty: no table)."""
+        table = self.doc.shop.table_of(self.doc.machine_ids[col])
+        return list(table.families) if table is not None else []
+
+    def ask_mounted(self, field: str = "mounted") -> None:
+        """Ask which family the current machine has mounted now (``field`` "mounted") or
+        must end the shift in ("end_family")."""
+        col = self.view.current_machine()
+        if col is None:
+            self.show_warning(self.tr("choose a cell in a machine column first"))
+            return
+        m = self.doc.machine_at(col)
+        nothing = self.tr("(nothing mounted)") if field == "mounted" else self.tr("(any family)")
+        choices = [nothing, *self.families_of(col)]
+        current = getattr(m, field)
+        title = self.tr("Mounted family") if field == "mounted" else self.tr("End family")
+        label = (self.tr("Family {machine} has mounted now:") if field == "mounted"
+                 else self.tr("Family {machine} must end the shift in:")).format(machine=m.name)
+        text, ok = QInputDialog.getItem(self.window, title, label, choices,
+                                        choices.index(current) if current in choices else 0, True)
+        if ok:
+            self.set_machine_family(col, None if text == nothing else text, field)
+
+    def set_machine_family(self, col: int, family: str | None, field: str = "mounted") -> bool:
+        """Set what the machine has mounted (or must end in); a family its table does not
+        list is refused, naming the machine and the table."""
+        m = self.doc.machine_at(col)
+        family = family.strip() if family else None
+        family = family or None
+        if family is not None:
+            problem = name_problem(family)
+            known = self.families_of(col)
+            if problem is not None:
+                self.show_warning(self.tr("{machine}: the family name {problem}").format(
+                    machine=m.name, problem=problem))
+                return False
+            if family not in known:
+                table = self.doc.shop.table_of(m.id)
+                self.show_warning(
+                    self.tr("{machine}: family {family} is not in changeover table {table}").format(
+                        machine=m.name, family=family, table=table.name or table.id) if table is not None
+                    else self.tr("{machine} has no changeover table; add it to one first").format(machine=m.name))
+                return False
+        if family == getattr(m, field):
+            return True
+        text = (self.tr("{machine} has {family} mounted") if field == "mounted"
+                else self.tr("{machine} ends the shift in {family}")).format(
+                    machine=m.name, family=family if family is not None else "-")
+        self.doc.undo_stack.push(SetMachineFields(self.doc, col, {field: family}, text))
+        return True

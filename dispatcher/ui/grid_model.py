@@ -1,7 +1,10 @@
 """The dispatch grid as a Qt table model: jobs as rows, machines as columns.
 
-Three leading columns describe the job (rush flag, wait penalty, where the plan puts it);
-machine columns follow from :data:`FIRST_MACHINE_COL`. The model reads the shop through
+Leading columns describe the job (rush flag, wait penalty, run hours, setup family, where
+the plan puts it); machine columns follow from :data:`FIRST_MACHINE_COL`. Where a machine
+has a changeover table and the job a family, a cell's value is derived from the table
+(the change from the machine's mounted family to the job's); a value typed over it carries
+the pencil mark and says so in its tooltip. The model reads the shop through
 :class:`~dispatcher.ui.document.ShopDocument` and the current plan; every edit becomes an
 undoable command on the document's stack. Planned cells carry a check mark, pins a
 diamond, forbidden pairs a cross and cannot-run pairs a dash, besides their colour.
@@ -11,6 +14,7 @@ from __future__ import annotations
 
 from PySide6.QtCore import QT_TRANSLATE_NOOP, QAbstractTableModel, QModelIndex, QPersistentModelIndex, Qt, Signal
 
+from dispatcher.limits import name_problem
 from dispatcher.shop.staffed import operators_by_machine
 from dispatcher.shop import DONE, DOWN, MAINTENANCE, MUST, MUST_NOT, RUNNING, UP, Plan
 from dispatcher.ui import palette
@@ -21,22 +25,26 @@ from dispatcher.ui.format import CellTextError, fmt, parse_cell, unit_text
 COL_RUSH = 0
 COL_PENALTY = 1
 COL_HOURS = 2
-COL_PLAN = 3
-FIRST_MACHINE_COL = 4
+COL_FAMILY = 3
+COL_PLAN = 4
+FIRST_MACHINE_COL = 5
 #: Heads of the leading columns (English; the model shows them translated).
 LEADING_HEADERS = {COL_RUSH: QT_TRANSLATE_NOOP("GridModel", "Rush"),
                    COL_PENALTY: QT_TRANSLATE_NOOP("GridModel", "Wait penalty"),
                    COL_HOURS: QT_TRANSLATE_NOOP("GridModel", "Run hours"),
+                   COL_FAMILY: QT_TRANSLATE_NOOP("GridModel", "Family"),
                    COL_PLAN: QT_TRANSLATE_NOOP("GridModel", "Plan puts it on")}
 
 ValueRole = Qt.ItemDataRole.UserRole + 1      # float | None: the grid value (None = cannot run)
 PlannedRole = Qt.ItemDataRole.UserRole + 2    # bool: the plan shown uses this pair
 PinRole = Qt.ItemDataRole.UserRole + 3        # "must" | "must_not" | None
 RunningRole = Qt.ItemDataRole.UserRole + 4    # bool: the job already runs on this machine
+SourceRole = Qt.ItemDataRole.UserRole + 5     # "typed" | "derived" | None (see Shop.value_source)
 
 _CELL_ROLES = [Qt.ItemDataRole.DisplayRole, Qt.ItemDataRole.EditRole,
                Qt.ItemDataRole.BackgroundRole, Qt.ItemDataRole.ToolTipRole,
-               Qt.ItemDataRole.AccessibleTextRole, ValueRole, PinRole]
+               Qt.ItemDataRole.AccessibleTextRole, Qt.ItemDataRole.FontRole, ValueRole, PinRole,
+               SourceRole]
 _PLAN_ROLES = [Qt.ItemDataRole.DisplayRole, Qt.ItemDataRole.BackgroundRole,
                Qt.ItemDataRole.ToolTipRole, Qt.ItemDataRole.AccessibleTextRole, PlannedRole]
 
@@ -147,6 +155,8 @@ class GridModel(QAbstractTableModel):
             return self._plan_data(row, role)
         if column == COL_HOURS:
             return self._hours_data(row, role)
+        if column == COL_FAMILY:
+            return self._family_data(row, role)
         return self._cell_data(row, column - FIRST_MACHINE_COL, role)
 
     def _rush_data(self, row: int, role: int):
@@ -198,6 +208,23 @@ class GridModel(QAbstractTableModel):
                            "filling the whole shift)").format(job=job.name, hours=fmt(job.run_hours))
         return None
 
+    def _family_data(self, row: int, role: int):
+        job = self._doc.job_at(row)
+        if role in (Qt.ItemDataRole.DisplayRole, Qt.ItemDataRole.EditRole,
+                    Qt.ItemDataRole.AccessibleTextRole):
+            return job.family or ""
+        if role == Qt.ItemDataRole.ToolTipRole:
+            if job.family is None:
+                return self.tr("{job} names no setup family: its values are typed in the grid "
+                               "(type a family to price it by the changeover tables)").format(job=job.name)
+            tables = [t.name or t.id for t in self._doc.shop.changeover_tables if job.family in t.families]
+            if not tables:
+                return self.tr("{job} needs family {family}, which no changeover table lists: "
+                               "it waits unless values are typed").format(job=job.name, family=job.family)
+            return self.tr("{job} needs family {family} (changeover tables: {tables})").format(
+                job=job.name, family=job.family, tables=", ".join(tables))
+        return None
+
     def _plan_data(self, row: int, role: int):
         job = self._doc.job_at(row)
         shop = self._doc.shop
@@ -236,6 +263,9 @@ class GridModel(QAbstractTableModel):
         pin = doc.pin_at(row, col)
         if role == PinRole:
             return pin
+        source = self._source(row, col)
+        if role == SourceRole:
+            return source
         planned = self._planned.get(row) == col
         running = self._running.get(row) == col
         if role == PlannedRole:
@@ -245,9 +275,10 @@ class GridModel(QAbstractTableModel):
         if role == Qt.ItemDataRole.EditRole:
             return "x" if value is None else fmt(value)
         if role in (Qt.ItemDataRole.DisplayRole, Qt.ItemDataRole.AccessibleTextRole):
+            typed = palette.MARK_TYPED if source == "typed" else ""
             if value is None:
-                return palette.MARK_CANNOT
-            marks = ""
+                return f"{typed}{palette.MARK_CANNOT}"
+            marks = typed
             if pin == MUST:
                 marks += palette.MARK_PINNED
             elif pin == MUST_NOT:
@@ -271,14 +302,50 @@ class GridModel(QAbstractTableModel):
             if doc.machine_at(col).state != UP:
                 return palette.colour("down", 28)
             return None
-        if role == Qt.ItemDataRole.FontRole and (planned or running):
+        if role == Qt.ItemDataRole.FontRole and (planned or running or source == "derived"):
             from PySide6.QtGui import QFont
             f = QFont()
-            f.setBold(True)
+            f.setBold(planned or running)
+            f.setItalic(source == "derived")
             return f
         if role == Qt.ItemDataRole.ToolTipRole:
-            return self._cell_tip(row, col, value, pin, planned, running)
+            return "\n".join([self._cell_tip(row, col, value, pin, planned, running),
+                              *self._source_tip(row, col, source)])
         return None
+
+    def _source(self, row: int, col: int) -> str | None:
+        """``"typed"`` or ``"derived"`` where the pair could come from a changeover table
+        (the machine has one and the job a family), else None: a plain grid's typed values
+        carry no mark."""
+        shop = self._doc.shop
+        if not shop.changeover_tables:
+            return None
+        job, machine = self._doc.job_at(row), self._doc.machine_at(col)
+        table = shop.table_of(machine.id)
+        if job.family is None or table is None:
+            return None
+        typed, blocked = self._doc.cell_state(row, col)
+        if typed is not None or blocked:
+            return "typed"
+        return "derived" if table.change(machine.mounted, job.family) is not None else None
+
+    def _source_tip(self, row: int, col: int, source: str | None) -> list[str]:
+        if source is None:
+            return []
+        shop = self._doc.shop
+        job, machine = self._doc.job_at(row), self._doc.machine_at(col)
+        table = shop.table_of(machine.id)
+        name = table.name or table.id
+        mounted = machine.mounted if machine.mounted is not None else self.tr("nothing mounted")
+        derived = table.change(machine.mounted, job.family)
+        if source == "derived":
+            return [self.tr("Derived from changeover table {table}: change from {mounted} to "
+                            "{family}").format(table=name, mounted=mounted, family=job.family)]
+        table_says = (self.tr("the table gives {value}").format(value=fmt(derived)) if derived is not None
+                      else self.tr("the table does not allow this change"))
+        return [self.tr("{mark} typed over changeover table {table} ({table_says}); "
+                        "Use changeover table puts the table's value back").format(
+                            mark=palette.MARK_TYPED, table=name, table_says=table_says)]
 
     def _cell_tip(self, row: int, col: int, value, pin, planned: bool, running: bool) -> str:
         shop = self._doc.shop
@@ -318,6 +385,8 @@ class GridModel(QAbstractTableModel):
                 if role == Qt.ItemDataRole.ToolTipRole:
                     return {COL_RUSH: self.tr("Rush jobs must be placed this round"),
                             COL_HOURS: self.tr("Hours each job runs (to fill the whole shift)"),
+                            COL_FAMILY: self.tr("Setup family each job needs (mould, die, colour "
+                                                "group); prices its changeovers"),
                             COL_PENALTY: self.tr("Added to the total ({unit}) when the job waits").format(
                                 unit=unit_text(shop.unit.label())),
                             COL_PLAN: self.tr("Where the plan shown puts each job")}[section]
@@ -329,11 +398,26 @@ class GridModel(QAbstractTableModel):
             state = f"{mark} {self.tr(word)}" if m.state in STATE_TEXT else m.state
             slots = f" \u00d7{m.slots}" if m.slots != 1 else ""
             who = self._operators.get(m.name)
+            table = shop.table_of(m.id) if shop.changeover_tables else None
+            mounted = ""
+            if table is not None or m.mounted is not None or m.end_family is not None:
+                mounted = f"\n{palette.MARK_MOUNTED} {m.mounted if m.mounted is not None else '-'}"
+                if m.end_family is not None:
+                    mounted += f" {palette.MARK_END} {m.end_family}"
             if role in (Qt.ItemDataRole.DisplayRole, Qt.ItemDataRole.AccessibleTextRole):
-                return f"{m.name}\n{state}{slots}" + (f"\n{who}" if who else "")
+                return f"{m.name}\n{state}{slots}" + mounted + (f"\n{who}" if who else "")
             if role == Qt.ItemDataRole.ToolTipRole:
                 tip = self.tr("{machine}: {state}, takes %n job(s) per round", "", m.slots).format(
                     machine=m.name, state=self._state_word(m.state))
+                if mounted:
+                    tip += "\n" + self.tr("{mark} mounted now: {family}").format(
+                        mark=palette.MARK_MOUNTED,
+                        family=m.mounted if m.mounted is not None else self.tr("nothing (cleaned)"))
+                    if m.end_family is not None:
+                        tip += "\n" + self.tr("{mark} must end the shift in: {family}").format(
+                            mark=palette.MARK_END, family=m.end_family)
+                    tip += "\n" + (self.tr("Changeover table: {table}").format(table=table.name or table.id)
+                                   if table is not None else self.tr("No changeover table: values are typed"))
                 if m.state == DOWN:
                     tip += "\n" + self.tr("Lockout/tagout before any work on {machine}").format(machine=m.name)
                 if who:
@@ -392,6 +476,8 @@ class GridModel(QAbstractTableModel):
             return True
         if role != Qt.ItemDataRole.EditRole:
             return False
+        if column == COL_FAMILY:
+            return self._set_family(row, str(value))
         try:
             number = parse_cell(str(value))
         except CellTextError as exc:
@@ -423,6 +509,19 @@ class GridModel(QAbstractTableModel):
             what = self.tr("cannot run") if number is None else fmt(number)
             stack.push(SetValues(self._doc, [(row, col, number)], self.tr("{job} on {machine} = {value}").format(
                 job=job.name, machine=m.name, value=what)))
+        return True
+
+    def _set_family(self, row: int, text: str) -> bool:
+        job = self._doc.job_at(row)
+        family = text.strip() or None
+        problem = name_problem(family) if family is not None else None
+        if problem is not None:
+            self.warning.emit(self.tr("{job}: the family name {problem}").format(job=job.name, problem=problem))
+            return False
+        if family != job.family:
+            text = (self.tr("Family of {job} = {family}").format(job=job.name, family=family)
+                    if family is not None else self.tr("Family of {job} cleared").format(job=job.name))
+            self._doc.undo_stack.push(SetJobField(self._doc, row, "family", family, text))
         return True
 
     # ---- document signals -----------------------------------------------------------------
@@ -479,4 +578,4 @@ class GridModel(QAbstractTableModel):
         lo, hi = FIRST_MACHINE_COL + min(cols), FIRST_MACHINE_COL + max(cols)
         self.headerDataChanged.emit(Qt.Orientation.Horizontal, lo, hi)
         self.dataChanged.emit(self.index(0, lo), self.index(self.rowCount() - 1, hi),
-                              [Qt.ItemDataRole.BackgroundRole, Qt.ItemDataRole.ToolTipRole])
+                              _CELL_ROLES)

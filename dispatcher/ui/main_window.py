@@ -103,7 +103,9 @@ class MainWindow(QMainWindow):
                     "{cannot} cannot run   {down} machine down   {rush} rush").format(
                 planned=palette.MARK_PLANNED, running="\u25b6", pinned=palette.MARK_PINNED,
                 forbidden=palette.MARK_FORBIDDEN, cannot=palette.MARK_CANNOT, down=palette.MARK_DOWN,
-                rush=palette.MARK_RUSH))
+                rush=palette.MARK_RUSH)
+            + "   " + self.tr("{typed} typed over the changeover table   {mounted} mounted").format(
+                typed=palette.MARK_TYPED, mounted=palette.MARK_MOUNTED))
         self._legend.setToolTip(self.tr("What the marks in the grid mean (colours repeat them)"))
         self._legend.setAccessibleName(self.tr("Legend of the grid's marks"))
         self._legend.setAccessibleDescription(self.tr("What the marks in the grid mean (colours repeat them)"))
@@ -207,6 +209,14 @@ class MainWindow(QMainWindow):
                                       self.tr("Remove the pin or ban of this pair"))
         self.act_rush = self._action(self.tr("&Rush job arrived\u2026"), lambda: self.decisions.rush(), "Ctrl+R",
                                      self.tr("Make the current job a rush job and re-dispatch"))
+        self.act_use_table = self._action(self.tr("Use changeover ta&ble"), self.edits.use_table, "Ctrl+Shift+T",
+                                          self.tr("Drop the values typed in the selected cells: "
+                                                  "they follow the changeover table again"))
+        self.act_mounted = self._action(self.tr("Mounted &family\u2026"), lambda: self.edits.ask_mounted(), None,
+                                        self.tr("Which setup family the current machine has mounted now"))
+        self.act_end_family = self._action(self.tr("&End family\u2026"),
+                                           lambda: self.edits.ask_mounted("end_family"), None,
+                                           self.tr("Which family the current machine must end the shift in"))
         self.act_add_job = self._action(self.tr("&Add job\u2026"), self.edits.ask_add_job, "Ctrl+Shift+J",
                                         self.tr("Add a job (for example a rush order that just arrived)"))
         self.act_add_machine = self._action(self.tr("Add &machine\u2026"), self.edits.ask_add_machine, None,
@@ -287,8 +297,8 @@ class MainWindow(QMainWindow):
         m = bar.addMenu(self.tr("&Edit"))
         self.edit_menu = m
         for a in (self.act_undo, self.act_redo, None, self.act_copy, self.act_copy_names,
-                  self.act_paste, None, self.act_cannot, self.act_pin, self.act_forbid, self.act_unpin,
-                  None, self.act_settings):
+                  self.act_paste, None, self.act_cannot, self.act_use_table, self.act_pin, self.act_forbid,
+                  self.act_unpin, None, self.act_settings):
             m.addSeparator() if a is None else m.addAction(a)
         m = bar.addMenu(self.tr("&Job"))
         m.addAction(self.act_add_job)
@@ -298,7 +308,8 @@ class MainWindow(QMainWindow):
         m.addAction(self.act_done)
         m = bar.addMenu(self.tr("&Machine"))
         m.addAction(self.act_add_machine)
-        for a in (self.act_down, self.act_up, self.act_maint, self.act_slots):
+        for a in (self.act_down, self.act_up, self.act_maint, self.act_slots, self.act_mounted,
+                  self.act_end_family):
             m.addAction(a)
         m = bar.addMenu(self.tr("&Plan"))
         for a in self.act_objectives.values():
@@ -539,7 +550,8 @@ class MainWindow(QMainWindow):
         return menu
 
     def _cell_menu(self, pos) -> QMenu:
-        return self._popup((self.act_pin, self.act_forbid, self.act_unpin, self.act_cannot, None,
+        return self._popup((self.act_pin, self.act_forbid, self.act_unpin, self.act_cannot,
+                            self.act_use_table, None,
                             self.act_copy, self.act_copy_names, self.act_paste, None,
                             self.act_rush, self.act_pull, self.act_penalty, self.act_done, None,
                             self.act_down, self.act_up, self.act_slots), pos)
@@ -547,7 +559,8 @@ class MainWindow(QMainWindow):
     def _machine_menu(self, col: int, pos) -> QMenu:
         self.view.setCurrentIndex(self.model.index(max(self.view.current_row() or 0, 0),
                                                     FIRST_MACHINE_COL + col))
-        return self._popup((self.act_down, self.act_up, self.act_maint, self.act_slots), pos)
+        return self._popup((self.act_down, self.act_up, self.act_maint, self.act_slots, None,
+                            self.act_mounted, self.act_end_family), pos)
 
     def _job_menu(self, row: int, pos) -> QMenu:
         self.view.setCurrentIndex(self.model.index(row, max(self.view.currentIndex().column(), 0)))

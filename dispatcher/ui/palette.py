@@ -49,6 +49,9 @@ MARK_DOWN = "\u25a0"         # black square
 MARK_UP = "\u25b2"           # triangle up
 MARK_MAINT = "\u25d2"        # circle with lower half black
 MARK_RUSH = "\u203c"         # double exclamation
+MARK_TYPED = "\u270e"        # pencil: a value typed over the changeover table
+MARK_MOUNTED = "\u2699"      # gear: the family a machine has mounted
+MARK_END = "\u21e5"          # arrow to bar: the family a machine must end the shift in
 
 
 def colour(role: str, alpha: int = 255) -> QColor:

@@ -539,6 +539,68 @@ Der gültige Plan bleibt unverändert.</translation>
     </message>
 </context>
 <context>
+    <name>GridEdits</name>
+    <message>
+        <source>nothing typed over a changeover table in the selection</source>
+        <translation>In der Auswahl ist nichts über eine Rüsttabelle getippt</translation>
+    </message>
+    <message numerus="yes">
+        <source>Use changeover table in %n cell(s)</source>
+        <translation>
+            <numerusform>Rüsttabelle in %n Zelle verwenden</numerusform>
+            <numerusform>Rüsttabelle in %n Zellen verwenden</numerusform>
+        </translation>
+    </message>
+    <message>
+        <source>choose a cell in a machine column first</source>
+        <translation>zuerst eine Zelle in einer Maschinenspalte wählen</translation>
+    </message>
+    <message>
+        <source>(nothing mounted)</source>
+        <translation>(nichts gerüstet)</translation>
+    </message>
+    <message>
+        <source>(any family)</source>
+        <translation>(beliebige Familie)</translation>
+    </message>
+    <message>
+        <source>Mounted family</source>
+        <translation>Gerüstete Familie</translation>
+    </message>
+    <message>
+        <source>End family</source>
+        <translation>Endfamilie</translation>
+    </message>
+    <message>
+        <source>Family {machine} has mounted now:</source>
+        <translation>Familie, die {machine} jetzt gerüstet hat:</translation>
+    </message>
+    <message>
+        <source>Family {machine} must end the shift in:</source>
+        <translation>Familie, in der {machine} die Schicht beenden muss:</translation>
+    </message>
+    <message>
+        <source>{machine}: the family name {problem}</source>
+        <translation>{machine}: der Familienname {problem}</translation>
+    </message>
+    <message>
+        <source>{machine}: family {family} is not in changeover table {table}</source>
+        <translation>{machine}: Familie {family} steht nicht in der Rüsttabelle {table}</translation>
+    </message>
+    <message>
+        <source>{machine} has no changeover table; add it to one first</source>
+        <translation>{machine} hat keine Rüsttabelle; zuerst einer Tabelle zuordnen</translation>
+    </message>
+    <message>
+        <source>{machine} has {family} mounted</source>
+        <translation>{machine} hat {family} gerüstet</translation>
+    </message>
+    <message>
+        <source>{machine} ends the shift in {family}</source>
+        <translation>{machine} beendet die Schicht in {family}</translation>
+    </message>
+</context>
+<context>
     <name>GridModel</name>
     <message>
         <source>Rush</source>
@@ -552,6 +614,10 @@ Der gültige Plan bleibt unverändert.</translation>
     <message>
         <source>Run hours</source>
         <translation>Laufzeit (h)</translation>
+    </message>
+    <message>
+        <source>Family</source>
+        <translation>Familie</translation>
     </message>
     <message>
         <source>Plan puts it on</source>
@@ -605,6 +671,18 @@ A machine&apos;s state in a sentence (English; shown translated).</extracomment>
         <translation>Laufzeit von {job}: {hours} h (mal dem Geschwindigkeitsfaktor jeder Maschine; zum Füllen der ganzen Schicht)</translation>
     </message>
     <message>
+        <source>{job} names no setup family: its values are typed in the grid (type a family to price it by the changeover tables)</source>
+        <translation>{job} nennt keine Rüstfamilie: seine Werte werden im Raster getippt (eine Familie eintragen, um ihn nach den Rüsttabellen zu bewerten)</translation>
+    </message>
+    <message>
+        <source>{job} needs family {family}, which no changeover table lists: it waits unless values are typed</source>
+        <translation>{job} braucht die Familie {family}, die keine Rüsttabelle führt: er wartet, solange keine Werte getippt sind</translation>
+    </message>
+    <message>
+        <source>{job} needs family {family} (changeover tables: {tables})</source>
+        <translation>{job} braucht die Familie {family} (Rüsttabellen: {tables})</translation>
+    </message>
+    <message>
         <source>▶ runs on {machine}</source>
         <translation>▶ läuft auf {machine}</translation>
     </message>
@@ -639,6 +717,26 @@ A machine&apos;s state in a sentence (English; shown translated).</extracomment>
     <message>
         <source>no plan yet</source>
         <translation>noch kein Plan</translation>
+    </message>
+    <message>
+        <source>nothing mounted</source>
+        <translation>nichts gerüstet</translation>
+    </message>
+    <message>
+        <source>Derived from changeover table {table}: change from {mounted} to {family}</source>
+        <translation>Aus der Rüsttabelle {table} abgeleitet: Wechsel von {mounted} zu {family}</translation>
+    </message>
+    <message>
+        <source>the table gives {value}</source>
+        <translation>die Tabelle ergibt {value}</translation>
+    </message>
+    <message>
+        <source>the table does not allow this change</source>
+        <translation>die Tabelle erlaubt diesen Wechsel nicht</translation>
+    </message>
+    <message>
+        <source>{mark} typed over changeover table {table} ({table_says}); Use changeover table puts the table&apos;s value back</source>
+        <translation>{mark} über die Rüsttabelle {table} getippt ({table_says}); Rüsttabelle verwenden stellt den Tabellenwert wieder her</translation>
     </message>
     <message>
         <source>{machine} cannot run {job} (type a number to allow it)</source>
@@ -681,6 +779,10 @@ A machine&apos;s state in a sentence (English; shown translated).</extracomment>
         <translation>Stunden, die jeder Auftrag läuft (zum Füllen der ganzen Schicht)</translation>
     </message>
     <message>
+        <source>Setup family each job needs (mould, die, colour group); prices its changeovers</source>
+        <translation>Rüstfamilie, die jeder Auftrag braucht (Form, Werkzeug, Farbgruppe); bestimmt seine Rüstwechsel</translation>
+    </message>
+    <message>
         <source>Added to the total ({unit}) when the job waits</source>
         <translation>Kommt zur Summe ({unit}) hinzu, wenn der Auftrag wartet</translation>
     </message>
@@ -694,6 +796,26 @@ A machine&apos;s state in a sentence (English; shown translated).</extracomment>
             <numerusform>{machine}: {state}, übernimmt %n Auftrag je Runde</numerusform>
             <numerusform>{machine}: {state}, übernimmt %n Aufträge je Runde</numerusform>
         </translation>
+    </message>
+    <message>
+        <source>{mark} mounted now: {family}</source>
+        <translation>{mark} jetzt gerüstet: {family}</translation>
+    </message>
+    <message>
+        <source>nothing (cleaned)</source>
+        <translation>nichts (gereinigt)</translation>
+    </message>
+    <message>
+        <source>{mark} must end the shift in: {family}</source>
+        <translation>{mark} muss die Schicht beenden in: {family}</translation>
+    </message>
+    <message>
+        <source>Changeover table: {table}</source>
+        <translation>Rüsttabelle: {table}</translation>
+    </message>
+    <message>
+        <source>No changeover table: values are typed</source>
+        <translation>Keine Rüsttabelle: Werte werden getippt</translation>
     </message>
     <message>
         <source>Operator in the plan shown: {operator}</source>
@@ -770,6 +892,18 @@ A machine&apos;s state in a sentence (English; shown translated).</extracomment>
     <message>
         <source>{job} on {machine} = {value}</source>
         <translation>{job} auf {machine} = {value}</translation>
+    </message>
+    <message>
+        <source>{job}: the family name {problem}</source>
+        <translation>{job}: der Familienname {problem}</translation>
+    </message>
+    <message>
+        <source>Family of {job} = {family}</source>
+        <translation>Familie von {job} = {family}</translation>
+    </message>
+    <message>
+        <source>Family of {job} cleared</source>
+        <translation>Familie von {job} gelöscht</translation>
     </message>
 </context>
 <context>
@@ -978,6 +1112,10 @@ A machine&apos;s state in a sentence (English; shown translated).</extracomment>
         <translation>{planned} eingeplant   {running} läuft   {pinned} festgelegt   {forbidden} verboten   {cannot} nicht möglich   {down} Maschine ausgefallen   {rush} Eilauftrag</translation>
     </message>
     <message>
+        <source>{typed} typed over the changeover table   {mounted} mounted</source>
+        <translation>{typed} über die Rüsttabelle getippt   {mounted} gerüstet</translation>
+    </message>
+    <message>
         <source>What the marks in the grid mean (colours repeat them)</source>
         <translation>Was die Zeichen im Raster bedeuten (die Farben wiederholen sie)</translation>
     </message>
@@ -1152,6 +1290,30 @@ A machine&apos;s state in a sentence (English; shown translated).</extracomment>
     <message>
         <source>Make the current job a rush job and re-dispatch</source>
         <translation>Den aktuellen Auftrag zum Eilauftrag machen und neu zuteilen</translation>
+    </message>
+    <message>
+        <source>Use changeover ta&amp;ble</source>
+        <translation>Rüst&amp;tabelle verwenden</translation>
+    </message>
+    <message>
+        <source>Drop the values typed in the selected cells: they follow the changeover table again</source>
+        <translation>Die in den gewählten Zellen getippten Werte verwerfen: sie folgen wieder der Rüsttabelle</translation>
+    </message>
+    <message>
+        <source>Mounted &amp;family…</source>
+        <translation>Gerüstete &amp;Familie…</translation>
+    </message>
+    <message>
+        <source>Which setup family the current machine has mounted now</source>
+        <translation>Welche Rüstfamilie die aktuelle Maschine jetzt gerüstet hat</translation>
+    </message>
+    <message>
+        <source>&amp;End family…</source>
+        <translation>&amp;Endfamilie…</translation>
+    </message>
+    <message>
+        <source>Which family the current machine must end the shift in</source>
+        <translation>In welcher Familie die aktuelle Maschine die Schicht beenden muss</translation>
     </message>
     <message>
         <source>&amp;Add job…</source>

@@ -19,6 +19,16 @@
     </message>
 </context>
 <context>
+    <name>GridEdits</name>
+    <message numerus="yes">
+        <source>Use changeover table in %n cell(s)</source>
+        <translation>
+            <numerusform>Use changeover table in %n cell</numerusform>
+            <numerusform>Use changeover table in %n cells</numerusform>
+        </translation>
+    </message>
+</context>
+<context>
     <name>GridModel</name>
     <message numerus="yes">
         <source>{machine}: {state}, takes %n job(s) per round</source>

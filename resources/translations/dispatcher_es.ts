@@ -539,6 +539,68 @@ El plan vigente no cambia.</translation>
     </message>
 </context>
 <context>
+    <name>GridEdits</name>
+    <message>
+        <source>nothing typed over a changeover table in the selection</source>
+        <translation>En la selección no hay nada escrito sobre una tabla de cambios</translation>
+    </message>
+    <message numerus="yes">
+        <source>Use changeover table in %n cell(s)</source>
+        <translation>
+            <numerusform>Usar la tabla de cambios en %n celda</numerusform>
+            <numerusform>Usar la tabla de cambios en %n celdas</numerusform>
+        </translation>
+    </message>
+    <message>
+        <source>choose a cell in a machine column first</source>
+        <translation>elija primero una celda en una columna de máquina</translation>
+    </message>
+    <message>
+        <source>(nothing mounted)</source>
+        <translation>(nada montado)</translation>
+    </message>
+    <message>
+        <source>(any family)</source>
+        <translation>(cualquier familia)</translation>
+    </message>
+    <message>
+        <source>Mounted family</source>
+        <translation>Familia montada</translation>
+    </message>
+    <message>
+        <source>End family</source>
+        <translation>Familia final</translation>
+    </message>
+    <message>
+        <source>Family {machine} has mounted now:</source>
+        <translation>Familia que {machine} tiene montada ahora:</translation>
+    </message>
+    <message>
+        <source>Family {machine} must end the shift in:</source>
+        <translation>Familia en la que {machine} debe terminar el turno:</translation>
+    </message>
+    <message>
+        <source>{machine}: the family name {problem}</source>
+        <translation>{machine}: el nombre de familia {problem}</translation>
+    </message>
+    <message>
+        <source>{machine}: family {family} is not in changeover table {table}</source>
+        <translation>{machine}: la familia {family} no está en la tabla de cambios {table}</translation>
+    </message>
+    <message>
+        <source>{machine} has no changeover table; add it to one first</source>
+        <translation>{machine} no tiene tabla de cambios; asígnela primero a una</translation>
+    </message>
+    <message>
+        <source>{machine} has {family} mounted</source>
+        <translation>{machine} tiene {family} montada</translation>
+    </message>
+    <message>
+        <source>{machine} ends the shift in {family}</source>
+        <translation>{machine} termina el turno en {family}</translation>
+    </message>
+</context>
+<context>
     <name>GridModel</name>
     <message>
         <source>Rush</source>
@@ -552,6 +614,10 @@ El plan vigente no cambia.</translation>
     <message>
         <source>Run hours</source>
         <translation>Horas de trabajo</translation>
+    </message>
+    <message>
+        <source>Family</source>
+        <translation>Familia</translation>
     </message>
     <message>
         <source>Plan puts it on</source>
@@ -605,6 +671,18 @@ A machine&apos;s state in a sentence (English; shown translated).</extracomment>
         <translation>Horas de trabajo de {job}: {hours} h (por el factor de velocidad de cada máquina; se usan al llenar el turno completo)</translation>
     </message>
     <message>
+        <source>{job} names no setup family: its values are typed in the grid (type a family to price it by the changeover tables)</source>
+        <translation>{job} no indica familia de preparación: sus valores se escriben en la cuadrícula (escriba una familia para valorarlo con las tablas de cambios)</translation>
+    </message>
+    <message>
+        <source>{job} needs family {family}, which no changeover table lists: it waits unless values are typed</source>
+        <translation>{job} necesita la familia {family}, que ninguna tabla de cambios incluye: espera salvo que se escriban valores</translation>
+    </message>
+    <message>
+        <source>{job} needs family {family} (changeover tables: {tables})</source>
+        <translation>{job} necesita la familia {family} (tablas de cambios: {tables})</translation>
+    </message>
+    <message>
         <source>▶ runs on {machine}</source>
         <translation>▶ en marcha en {machine}</translation>
     </message>
@@ -639,6 +717,26 @@ A machine&apos;s state in a sentence (English; shown translated).</extracomment>
     <message>
         <source>no plan yet</source>
         <translation>todavía no hay plan</translation>
+    </message>
+    <message>
+        <source>nothing mounted</source>
+        <translation>nada montado</translation>
+    </message>
+    <message>
+        <source>Derived from changeover table {table}: change from {mounted} to {family}</source>
+        <translation>Derivado de la tabla de cambios {table}: cambio de {mounted} a {family}</translation>
+    </message>
+    <message>
+        <source>the table gives {value}</source>
+        <translation>la tabla da {value}</translation>
+    </message>
+    <message>
+        <source>the table does not allow this change</source>
+        <translation>la tabla no permite este cambio</translation>
+    </message>
+    <message>
+        <source>{mark} typed over changeover table {table} ({table_says}); Use changeover table puts the table&apos;s value back</source>
+        <translation>{mark} escrito sobre la tabla de cambios {table} ({table_says}); Usar la tabla de cambios recupera el valor de la tabla</translation>
     </message>
     <message>
         <source>{machine} cannot run {job} (type a number to allow it)</source>
@@ -681,6 +779,10 @@ A machine&apos;s state in a sentence (English; shown translated).</extracomment>
         <translation>Horas que dura cada trabajo (para llenar el turno completo)</translation>
     </message>
     <message>
+        <source>Setup family each job needs (mould, die, colour group); prices its changeovers</source>
+        <translation>Familia de preparación que necesita cada trabajo (molde, matriz, grupo de color); valora sus cambios</translation>
+    </message>
+    <message>
         <source>Added to the total ({unit}) when the job waits</source>
         <translation>Se suma al total ({unit}) cuando el trabajo espera</translation>
     </message>
@@ -694,6 +796,26 @@ A machine&apos;s state in a sentence (English; shown translated).</extracomment>
             <numerusform>{machine}: {state}, acepta %n trabajo por ronda</numerusform>
             <numerusform>{machine}: {state}, acepta %n trabajos por ronda</numerusform>
         </translation>
+    </message>
+    <message>
+        <source>{mark} mounted now: {family}</source>
+        <translation>{mark} montado ahora: {family}</translation>
+    </message>
+    <message>
+        <source>nothing (cleaned)</source>
+        <translation>nada (limpia)</translation>
+    </message>
+    <message>
+        <source>{mark} must end the shift in: {family}</source>
+        <translation>{mark} debe terminar el turno en: {family}</translation>
+    </message>
+    <message>
+        <source>Changeover table: {table}</source>
+        <translation>Tabla de cambios: {table}</translation>
+    </message>
+    <message>
+        <source>No changeover table: values are typed</source>
+        <translation>Sin tabla de cambios: los valores se escriben</translation>
     </message>
     <message>
         <source>Operator in the plan shown: {operator}</source>
@@ -770,6 +892,18 @@ A machine&apos;s state in a sentence (English; shown translated).</extracomment>
     <message>
         <source>{job} on {machine} = {value}</source>
         <translation>{job} en {machine} = {value}</translation>
+    </message>
+    <message>
+        <source>{job}: the family name {problem}</source>
+        <translation>{job}: el nombre de familia {problem}</translation>
+    </message>
+    <message>
+        <source>Family of {job} = {family}</source>
+        <translation>Familia de {job} = {family}</translation>
+    </message>
+    <message>
+        <source>Family of {job} cleared</source>
+        <translation>Familia de {job} borrada</translation>
     </message>
 </context>
 <context>
@@ -978,6 +1112,10 @@ A machine&apos;s state in a sentence (English; shown translated).</extracomment>
         <translation>{planned} planificado   {running} en marcha   {pinned} fijado   {forbidden} prohibido   {cannot} no puede   {down} máquina averiada   {rush} urgente</translation>
     </message>
     <message>
+        <source>{typed} typed over the changeover table   {mounted} mounted</source>
+        <translation>{typed} escrito sobre la tabla de cambios   {mounted} montado</translation>
+    </message>
+    <message>
         <source>What the marks in the grid mean (colours repeat them)</source>
         <translation>Qué significan las marcas de la cuadrícula (los colores las repiten)</translation>
     </message>
@@ -1152,6 +1290,30 @@ A machine&apos;s state in a sentence (English; shown translated).</extracomment>
     <message>
         <source>Make the current job a rush job and re-dispatch</source>
         <translation>Convertir el trabajo actual en urgente y reasignar</translation>
+    </message>
+    <message>
+        <source>Use changeover ta&amp;ble</source>
+        <translation>Usar la ta&amp;bla de cambios</translation>
+    </message>
+    <message>
+        <source>Drop the values typed in the selected cells: they follow the changeover table again</source>
+        <translation>Descartar los valores escritos en las celdas seleccionadas: vuelven a seguir la tabla de cambios</translation>
+    </message>
+    <message>
+        <source>Mounted &amp;family…</source>
+        <translation>&amp;Familia montada…</translation>
+    </message>
+    <message>
+        <source>Which setup family the current machine has mounted now</source>
+        <translation>Qué familia de preparación tiene montada ahora la máquina actual</translation>
+    </message>
+    <message>
+        <source>&amp;End family…</source>
+        <translation>Familia fi&amp;nal…</translation>
+    </message>
+    <message>
+        <source>Which family the current machine must end the shift in</source>
+        <translation>En qué familia debe terminar el turno la máquina actual</translation>
     </message>
     <message>
         <source>&amp;Add job…</source>

@@ -1,0 +1,194 @@
+"""Changeovers in the app, driven headless with pytest-qt: the family column, the mounted
+family in each machine header, derived values against typed overrides, undo of each.
+
+The reference for every derived value is the sample file's own changeover table, read
+here as plain JSON (not through the shop model), so a derivation bug cannot hide itself.
+"""
+
+from __future__ import annotations
+
+import json
+
+import pytest
+from PySide6.QtCore import Qt
+from PySide6.QtWidgets import QAbstractItemView, QApplication
+
+from dispatcher.ui import palette
+from dispatcher.ui.grid_model import COL_FAMILY, FIRST_MACHINE_COL, SourceRole, ValueRole
+from ui_support import answer_next_dialog, make_window, press, save_shot, wait_plan
+
+SAMPLE = "small_moulding_cell.dshop"
+
+
+@pytest.fixture
+def window(qtbot, tmp_path, monkeypatch, samples):
+    return make_window(qtbot, tmp_path, monkeypatch, samples / SAMPLE)
+
+
+@pytest.fixture
+def raw(samples):
+    """The sample as plain JSON: machine name -> (mounted, table changes by (from, to))."""
+    data = json.loads((samples / SAMPLE).read_text(encoding="utf-8"))
+    tables = {}
+    for t in data["changeover_tables"]:
+        changes = {(a, b): v for a, row in t["changes"].items() for b, v in row.items()}
+        changes.update({(None, b): v for b, v in t.get("from_empty", {}).items()})
+        for mid in t["machines"]:
+            tables[mid] = changes
+    return data, tables
+
+
+def _cell(window, job: str, machine: str):
+    shop = window.doc.shop
+    return window.model.index(shop.job_names().index(job),
+                              FIRST_MACHINE_COL + shop.machine_names().index(machine))
+
+
+def _type_into(qtbot, window, index, text: str) -> None:
+    """Type ``text`` into a cell as a user does: select it, F2, type, Return."""
+    window.view.setCurrentIndex(index)
+    press(qtbot, window, Qt.Key.Key_F2)
+    editor = QApplication.focusWidget()
+    assert editor is not window.view, "F2 opened no editor"
+    editor.selectAll()
+    qtbot.keyClicks(editor, text)
+    qtbot.keyClick(editor, Qt.Key.Key_Return)
+    # the delegate commits the text on a later turn of the event loop
+    qtbot.waitUntil(lambda: window.view.state() != QAbstractItemView.State.EditingState)
+    wait_plan(qtbot, window)
+
+
+def test_raw_sample_has_what_the_tests_need(raw):
+    data, tables = raw
+    # the 80t press has the knob mould mounted and a table that prices the lid mould
+    press80 = next(m for m in data["machines"] if m["name"] == "Press 80t")
+    assert press80["mounted"] == "knob mould"
+    assert ("knob mould", "lid mould") in tables[press80["id"]]
+
+
+def test_typing_a_family_derives_the_row_and_undo_restores_it(qtbot, window, raw, tmp_path):
+    data, tables = raw
+    shop = window.doc.shop
+    row = shop.job_names().index("WO-7007 label set")
+    assert shop.jobs[row].family is None
+    _type_into(qtbot, window, window.model.index(row, COL_FAMILY), "lid mould")
+    assert shop.jobs[row].family == "lid mould"
+    for m in data["machines"]:
+        changes = tables.get(m["id"])
+        idx = _cell(window, "WO-7007 label set", m["name"])
+        typed = m["id"] in data["grid"].get(shop.jobs[row].id, {})
+        if changes is None or typed:
+            continue
+        expected = changes.get((m["mounted"], "lid mould"))
+        assert idx.data(ValueRole) == expected, m["name"]
+        assert idx.data(SourceRole) == ("derived" if expected is not None else None)
+    save_shot(window, tmp_path, "family-typed")
+    press(qtbot, window, Qt.Key.Key_Z, Qt.KeyboardModifier.ControlModifier)
+    wait_plan(qtbot, window)
+    assert shop.jobs[row].family is None
+    assert window.model.index(row, COL_FAMILY).data() == ""
+
+
+def test_a_bad_family_name_is_refused_and_names_the_job(qtbot, window):
+    row = window.doc.shop.job_names().index("WO-7001 lid")
+    with qtbot.waitSignal(window.model.warning) as blocker:
+        ok = window.model.setData(window.model.index(row, COL_FAMILY), "bad\x1bname")
+    assert not ok
+    assert "WO-7001 lid" in blocker.args[0] and "U+001B" in blocker.args[0]
+    assert window.doc.shop.jobs[row].family == "lid mould"
+
+
+def test_typed_value_over_the_table_is_marked_and_undo_goes_back_to_derived(qtbot, window, raw):
+    data, tables = raw
+    press80 = next(m for m in data["machines"] if m["name"] == "Press 80t")
+    idx = _cell(window, "WO-7001 lid", "Press 80t")
+    derived = tables[press80["id"]][("knob mould", "lid mould")]
+    assert idx.data(SourceRole) == "derived" and idx.data(ValueRole) == derived
+    assert palette.MARK_TYPED not in idx.data()
+    assert "Derived from changeover table" in idx.data(Qt.ItemDataRole.ToolTipRole)
+    assert idx.data(Qt.ItemDataRole.FontRole).italic()
+
+    _type_into(qtbot, window, idx, "7")
+    assert idx.data(SourceRole) == "typed" and idx.data(ValueRole) == 7
+    assert idx.data().startswith(palette.MARK_TYPED)
+    tip = idx.data(Qt.ItemDataRole.ToolTipRole)
+    assert "typed over changeover table" in tip and f"gives {derived:g}" in tip
+
+    press(qtbot, window, Qt.Key.Key_Z, Qt.KeyboardModifier.ControlModifier)
+    wait_plan(qtbot, window)
+    # back to following the table, not a typed copy of the derived value
+    assert idx.data(SourceRole) == "derived"
+    assert window.doc.cell_state(idx.row(), idx.column() - FIRST_MACHINE_COL) == (None, False)
+
+    press(qtbot, window, Qt.Key.Key_Z, Qt.KeyboardModifier.ControlModifier | Qt.KeyboardModifier.ShiftModifier)
+    wait_plan(qtbot, window)
+    assert idx.data(SourceRole) == "typed" and idx.data(ValueRole) == 7
+    window.view.setCurrentIndex(idx)
+    press(qtbot, window, Qt.Key.Key_T, Qt.KeyboardModifier.ControlModifier | Qt.KeyboardModifier.ShiftModifier)
+    wait_plan(qtbot, window)
+    assert idx.data(SourceRole) == "derived" and idx.data(ValueRole) == derived
+    press(qtbot, window, Qt.Key.Key_Z, Qt.KeyboardModifier.ControlModifier)
+    wait_plan(qtbot, window)
+    assert idx.data(ValueRole) == 7
+
+
+def test_typed_cannot_run_over_the_table_is_marked(qtbot, window):
+    idx = _cell(window, "WO-7001 lid", "Press 80t")
+    window.view.setCurrentIndex(idx)
+    press(qtbot, window, Qt.Key.Key_Delete)
+    wait_plan(qtbot, window)
+    assert idx.data(ValueRole) is None and idx.data(SourceRole) == "typed"
+    assert idx.data() == palette.MARK_TYPED + palette.MARK_CANNOT
+
+
+def test_plain_grid_cells_carry_no_typed_mark(qtbot, tmp_path, monkeypatch, samples):
+    window = make_window(qtbot, tmp_path, monkeypatch, samples / "sheet_metal_grid.csv")
+    idx = window.model.index(0, FIRST_MACHINE_COL)
+    assert idx.data(SourceRole) is None and palette.MARK_TYPED not in idx.data()
+    header = window.model.headerData(FIRST_MACHINE_COL, Qt.Orientation.Horizontal)
+    assert palette.MARK_MOUNTED not in header
+
+
+def test_header_shows_mounted_and_the_dialog_changes_it_with_undo(qtbot, window, raw, tmp_path):
+    data, tables = raw
+    shop = window.doc.shop
+    k = shop.machine_names().index("Press 80t")
+    header = window.model.headerData(FIRST_MACHINE_COL + k, Qt.Orientation.Horizontal)
+    assert f"{palette.MARK_MOUNTED} knob mould" in header
+    window.view.setCurrentIndex(window.model.index(0, FIRST_MACHINE_COL + k))
+
+    answer_next_dialog(lambda d: d.setTextValue("clip mould"))
+    window.act_mounted.trigger()
+    wait_plan(qtbot, window)
+    assert shop.machines[k].mounted == "clip mould"
+    header = window.model.headerData(FIRST_MACHINE_COL + k, Qt.Orientation.Horizontal)
+    assert f"{palette.MARK_MOUNTED} clip mould" in header
+    changes = tables[shop.machines[k].id]
+    idx = _cell(window, "WO-7001 lid", "Press 80t")
+    assert idx.data(ValueRole) == changes.get(("clip mould", "lid mould"))
+
+    answer_next_dialog(lambda d: d.setTextValue("spacer mould"))
+    window.act_end_family.trigger()
+    wait_plan(qtbot, window)
+    header = window.model.headerData(FIRST_MACHINE_COL + k, Qt.Orientation.Horizontal)
+    assert f"{palette.MARK_END} spacer mould" in header
+    assert "must end the shift in: spacer mould" in window.model.headerData(
+        FIRST_MACHINE_COL + k, Qt.Orientation.Horizontal, Qt.ItemDataRole.ToolTipRole)
+    save_shot(window, tmp_path, "mounted-header")
+
+    press(qtbot, window, Qt.Key.Key_Z, Qt.KeyboardModifier.ControlModifier)
+    press(qtbot, window, Qt.Key.Key_Z, Qt.KeyboardModifier.ControlModifier)
+    wait_plan(qtbot, window)
+    assert shop.machines[k].mounted == "knob mould" and shop.machines[k].end_family is None
+    assert idx.data(ValueRole) == changes[("knob mould", "lid mould")]
+
+
+def test_a_family_the_table_does_not_list_is_refused_naming_machine_and_table(qtbot, window):
+    shop = window.doc.shop
+    k = shop.machine_names().index("Press 80t")
+    with qtbot.waitSignal(window.warning) as blocker:
+        assert not window.edits.set_machine_family(k, "no such mould")
+    assert "Press 80t" in blocker.args[0] and "no such mould" in blocker.args[0]
+    assert shop.table_of(shop.machines[k].id).name in blocker.args[0]
+    assert shop.machines[k].mounted == "knob mould"
+    assert not window.doc.undo_stack.canUndo()
