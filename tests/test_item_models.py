@@ -2,8 +2,8 @@
 row and column counts, parents, indexes, data for every role, signals on change).
 
 The models: the shop grid (ui/grid_model.py), the what-if map (ui/whatif_view.py), the
-decision list of the history dock (ui/history_panel.py) and the crew table
-(ui/crew_model.py). Each is checked empty, filled
+decision list of the history dock (ui/history_panel.py), the crew table
+(ui/crew_model.py) and the changeover table editor (ui/changeover_model.py). Each is checked empty, filled
 from an invented sample shop, and after a change.
 """
 
@@ -15,6 +15,7 @@ from dispatcher.history import HistoryStore
 from dispatcher.io.shopfile import load_shop, shop_to_dict
 from dispatcher.shop import solve_shop
 from dispatcher.shop.whatif import what_if_grid
+from dispatcher.ui.changeover_model import ChangeoverModel
 from dispatcher.ui.crew_model import CrewModel
 from dispatcher.ui.document import ShopDocument
 from dispatcher.ui.edits import SetPin
@@ -22,7 +23,7 @@ from dispatcher.ui.grid_model import GridModel
 from dispatcher.ui.history_panel import DecisionListModel
 from dispatcher.ui.whatif_view import WhatIfModel
 
-ITEM_MODELS = (GridModel, WhatIfModel, DecisionListModel, CrewModel)
+ITEM_MODELS = (GridModel, WhatIfModel, DecisionListModel, CrewModel, ChangeoverModel)
 
 
 @pytest.fixture
@@ -96,6 +97,28 @@ def test_crew_model(qtmodeltester, samples):
     qtmodeltester.check(model)
     doc.undo_stack.push(SetAuthorisations(doc, [(0, 1, True)], "authorise"))
     doc.undo_stack.push(SetOperatorField(doc, 1, "attendance", "absent", "absent"))
+    qtmodeltester.check(model)
+    doc.undo_stack.undo()
+    doc.undo_stack.undo()
+    qtmodeltester.check(model)
+
+
+def test_changeover_model(qtmodeltester, shop):
+    from dispatcher.shop import Shop
+
+    empty = ChangeoverModel(ShopDocument(Shop()))
+    qtmodeltester.check(empty)
+    assert empty.rowCount() == 0 and empty.columnCount() == 0
+    doc = ShopDocument(shop)
+    model = ChangeoverModel(doc)
+    qtmodeltester.check(model)
+    t = doc.shop.changeover_tables[0]
+    assert model.rowCount() == len(t.families) + 1 and model.columnCount() == len(t.families)
+    assert model.setData(model.index(0, 1), "17")
+    qtmodeltester.check(model)
+    assert model.setData(model.index(len(t.families), 0), "")  # nothing mounted -> not allowed
+    qtmodeltester.check(model)
+    model.set_table(len(doc.shop.changeover_tables) - 1)
     qtmodeltester.check(model)
     doc.undo_stack.undo()
     doc.undo_stack.undo()

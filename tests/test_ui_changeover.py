@@ -15,7 +15,7 @@ from PySide6.QtWidgets import QAbstractItemView, QApplication
 
 from dispatcher.ui import palette
 from dispatcher.ui.grid_model import COL_FAMILY, FIRST_MACHINE_COL, SourceRole, ValueRole
-from ui_support import answer_next_dialog, make_window, press, save_shot, wait_plan
+from ui_support import activate, answer_next_dialog, make_window, press, save_shot, wait_plan
 
 SAMPLE = "small_moulding_cell.dshop"
 
@@ -40,8 +40,7 @@ def raw(samples):
 
 def _cell(window, job: str, machine: str):
     shop = window.doc.shop
-    return window.model.index(shop.job_names().index(job),
-                              FIRST_MACHINE_COL + shop.machine_names().index(machine))
+    return window.model.index(shop.job_names().index(job), FIRST_MACHINE_COL + shop.machine_names().index(machine))
 
 
 def _type_into(qtbot, window, index, text: str) -> None:
@@ -173,7 +172,8 @@ def test_header_shows_mounted_and_the_dialog_changes_it_with_undo(qtbot, window,
     header = window.model.headerData(FIRST_MACHINE_COL + k, Qt.Orientation.Horizontal)
     assert f"{palette.MARK_END} spacer mould" in header
     assert "must end the shift in: spacer mould" in window.model.headerData(
-        FIRST_MACHINE_COL + k, Qt.Orientation.Horizontal, Qt.ItemDataRole.ToolTipRole)
+        FIRST_MACHINE_COL + k, Qt.Orientation.Horizontal, Qt.ItemDataRole.ToolTipRole
+    )
     save_shot(window, tmp_path, "mounted-header")
 
     press(qtbot, window, Qt.Key.Key_Z, Qt.KeyboardModifier.ControlModifier)
@@ -192,3 +192,99 @@ def test_a_family_the_table_does_not_list_is_refused_naming_machine_and_table(qt
     assert shop.table_of(shop.machines[k].id).name in blocker.args[0]
     assert shop.machines[k].mounted == "knob mould"
     assert not window.doc.undo_stack.canUndo()
+
+
+# ---- the changeover table editor ------------------------------------------------------------
+def _open_editor(qtbot, window):
+    window.tabs.setCurrentWidget(window.changeover_tab.view)
+    tab = window.changeover_tab
+    shop = window.doc.shop
+    k = shop.machine_names().index("Press 80t")
+    t = shop.table_of(shop.machines[k].id)
+    tab.chooser.setCurrentIndex(shop.changeover_tables.index(t))
+    return tab, t
+
+
+def test_editor_typing_moves_the_grid_and_undo_restores(qtbot, window, raw, tmp_path):
+    data, tables = raw
+    tab, t = _open_editor(qtbot, window)
+    model = tab.model
+    assert model.rowCount() == len(t.families) + 1
+    assert tab.model.headerData(len(t.families), Qt.Orientation.Vertical).endswith("nothing mounted")
+    r, c = t.families.index("knob mould"), t.families.index("lid mould")
+    grid_cell = _cell(window, "WO-7001 lid", "Press 80t")
+    before = tables["M1"][("knob mould", "lid mould")]
+    assert grid_cell.data(ValueRole) == before
+    cell = model.index(r, c)
+    tab.table.setCurrentIndex(cell)
+    activate(qtbot, window)
+    tab.table.setFocus()
+    qtbot.keyClick(tab.table, Qt.Key.Key_F2)
+    editor = QApplication.focusWidget()
+    assert editor is not None and editor is not tab.table, "F2 opened no editor"
+    editor.selectAll()
+    qtbot.keyClicks(editor, "12")
+    qtbot.keyClick(editor, Qt.Key.Key_Return)
+    qtbot.waitUntil(lambda: tab.table.state() != QAbstractItemView.State.EditingState)
+    wait_plan(qtbot, window)
+    assert cell.data() == "12"
+    assert grid_cell.data(ValueRole) == 12 and grid_cell.data(SourceRole) == "derived"
+    save_shot(window, tmp_path, "changeover-editor")
+    qtbot.keyClick(tab.table, Qt.Key.Key_Z, Qt.KeyboardModifier.ControlModifier)
+    wait_plan(qtbot, window)
+    assert grid_cell.data(ValueRole) == before
+
+
+def test_editor_paste_block_is_one_undoable_edit(qtbot, window):
+    tab, t = _open_editor(qtbot, window)
+    tab.table.setCurrentIndex(tab.model.index(0, 0))
+    QApplication.clipboard().setText("1\t2\n3\t\n")
+    activate_tab = tab.table
+    activate(qtbot, window)
+    qtbot.keyClick(activate_tab, Qt.Key.Key_V, Qt.KeyboardModifier.ControlModifier)
+    wait_plan(qtbot, window)
+    a, b = t.families[0], t.families[1]
+    assert (t.change(a, a), t.change(a, b), t.change(b, a), t.change(b, b)) == (1, 2, 3, None)
+    qtbot.keyClick(activate_tab, Qt.Key.Key_Z, Qt.KeyboardModifier.ControlModifier)
+    wait_plan(qtbot, window)
+    assert t.change(b, b) is not None and t.change(a, b) != 2
+
+
+def test_editor_paste_with_headers_goes_to_the_named_families(qtbot, window):
+    tab, t = _open_editor(qtbot, window)
+    a, b = t.families[2], t.families[0]
+    assert tab.paste_text(f"\t{a}\nnothing mounted\t9\n{b}\t8\n")
+    assert t.change(None, a) == 9 and t.change(b, a) == 8
+
+
+@pytest.mark.parametrize(
+    "block, where", [("5\t-3", "row 1, column 2"), ("abc", "row 1, column 1"), ("1\n2\nnan", "row 3, column 1")]
+)
+def test_editor_bad_paste_is_refused_naming_the_cell(qtbot, window, block, where):
+    tab, t = _open_editor(qtbot, window)
+    tab.table.setCurrentIndex(tab.model.index(0, 0))
+    before = dict(t.changes)
+    with qtbot.waitSignal(window.warning) as blocker:
+        assert not tab.paste_text(block)
+    assert where in blocker.args[0] and "change from" in blocker.args[0]
+    assert t.changes == before and not window.doc.undo_stack.canUndo()
+
+
+def test_editor_bad_typed_text_names_the_change(qtbot, window):
+    tab, t = _open_editor(qtbot, window)
+    with qtbot.waitSignal(window.warning) as blocker:
+        assert not tab.model.setData(tab.model.index(0, 1), "-4")
+    assert f"change from {t.families[0]} to {t.families[1]}" in blocker.args[0]
+    assert "negative" in blocker.args[0]
+
+
+def test_editor_delete_disallows_and_the_job_cannot_run_there(qtbot, window):
+    tab, t = _open_editor(qtbot, window)
+    r, c = t.families.index("knob mould"), t.families.index("lid mould")
+    tab.table.setCurrentIndex(tab.model.index(r, c))
+    activate(qtbot, window)
+    qtbot.keyClick(tab.table, Qt.Key.Key_Delete)
+    wait_plan(qtbot, window)
+    assert t.change("knob mould", "lid mould") is None
+    assert tab.model.index(r, c).data() == palette.MARK_CANNOT
+    assert _cell(window, "WO-7001 lid", "Press 80t").data(ValueRole) is None

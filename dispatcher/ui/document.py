@@ -38,6 +38,8 @@ class ShopDocument(QObject):
     ``jobs_changed(rows)`` - per-job fields (rush, wait penalty, state) changed.
     ``machines_changed(cols)`` - per-machine fields (state, slots) changed.
     ``crew_changed`` - operators, attendance, capacities or authorisations changed.
+    ``tables_changed(index)`` - entries of that changeover table changed (the derived
+    values of its machines too, announced with ``cells_changed``).
     ``edited`` - any change at all (the plan must be re-solved).
     ``path_changed`` / ``dirty_changed(bool)`` - for the window title.
     """
@@ -47,6 +49,7 @@ class ShopDocument(QObject):
     jobs_changed = Signal(object)
     machines_changed = Signal(object)
     crew_changed = Signal()
+    tables_changed = Signal(int)   # entries of changeover table (index) changed
     edited = Signal()
     path_changed = Signal()
     dirty_changed = Signal(bool)
@@ -166,6 +169,21 @@ class ShopDocument(QObject):
             else:
                 self.shop.blocked.discard(key)
         self.cells_changed.emit([s[0] for s in states], [s[1] for s in states])
+        self.edited.emit()
+
+    def _apply_changes(self, index: int, cells: list[tuple[str | None, str, float | None]]) -> None:
+        """Set entries of changeover table ``index``: ``(from family or None, to family,
+        value or None = not allowed)``."""
+        table = self.shop.changeover_tables[index]
+        for frm, to, value in cells:
+            if value is None:
+                table.changes.pop((frm, to), None)
+            else:
+                table.changes[(frm, to)] = float(value)
+        self.tables_changed.emit(index)
+        cols = [self.machine_col[m] for m in table.machines if m in self.machine_col]
+        if cols and self.job_ids:
+            self.cells_changed.emit([0, len(self.job_ids) - 1], [min(cols), max(cols)])
         self.edited.emit()
 
     def _apply_job_field(self, row: int, field: str, value) -> None:

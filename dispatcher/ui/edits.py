@@ -48,6 +48,24 @@ class UseTable(QUndoCommand):
         self._doc._restore_cells(self._old)
 
 
+class SetChanges(QUndoCommand):
+    """Set entries of one changeover table (a typed cell or a pasted block)."""
+
+    def __init__(self, doc: ShopDocument, index: int, cells: list[tuple[str | None, str, float | None]],
+                 text: str):
+        super().__init__(text)
+        self._doc, self._index = doc, index
+        self._new = list(cells)
+        changes = doc.shop.changeover_tables[index].changes
+        self._old = [(a, b, changes.get((a, b))) for a, b, _ in cells]
+
+    def redo(self) -> None:
+        self._doc._apply_changes(self._index, self._new)
+
+    def undo(self) -> None:
+        self._doc._apply_changes(self._index, self._old)
+
+
 class SetPin(QUndoCommand):
     """Pin a pair (``"must"``), forbid it (``"must_not"``) or clear its pin (``None``)."""
 

@@ -10,6 +10,8 @@ own widgets, signals and worker:
   rush and pulled jobs, putting a plan in force;
 * ``whatif_tab``, ``alternatives_tab`` (:mod:`~dispatcher.ui.whatif_tab`,
   :mod:`~dispatcher.ui.alternatives_tab`): the two tabs beside the grid;
+* ``changeover_tab`` (:class:`~dispatcher.ui.changeover_tab.ChangeoverTab`): the changeover
+  tables, families x families;
 * ``history_dock`` (:class:`~dispatcher.ui.history_dock.HistoryDock`);
 * ``printing`` (:class:`~dispatcher.ui.printing.SheetPrinting`);
 * ``settings_ctl`` (:class:`~dispatcher.ui.settings_dialog.SettingsController`).
@@ -32,6 +34,7 @@ from dispatcher.shop import MUST, MUST_NOT, Plan, Shop
 from dispatcher.shop.fill_shift import ShiftFill
 from dispatcher.ui import palette
 from dispatcher.ui.alternatives_tab import AlternativesTab
+from dispatcher.ui.changeover_tab import ChangeoverTab
 from dispatcher.ui.crew_tab import CrewTab
 from dispatcher.ui.decision_flow import DecisionFlow
 from dispatcher.ui.document import ShopDocument
@@ -119,7 +122,9 @@ class MainWindow(QMainWindow):
         self.alternatives_tab = AlternativesTab(self)
         self.tabs.addTab(self.alternatives_tab.view, self.tr("&Alternatives"))
         self.crew_tab = CrewTab(self)
+        self.changeover_tab = ChangeoverTab(self)
         self.tabs.addTab(self.crew_tab.view, self.tr("C&rew"))
+        self.tabs.addTab(self.changeover_tab.view, self.tr("C&hangeovers"))
         self.tabs.setAccessibleName(self.tr("Views of the shop"))
         self.tabs.setAccessibleDescription(self.tr("The grid, the what-if map, the alternatives and the crew"))
         self.plan_dock.setAccessibleName(self.tr("Plan"))
@@ -142,8 +147,18 @@ class MainWindow(QMainWindow):
         """Edit > Paste: into the crew table on the Crew tab, else into the grid."""
         if self.crew_tab.is_current():
             self.crew_tab.paste()
+        elif self.changeover_tab.is_current():
+            self.changeover_tab.paste()
         else:
             self.edits.paste()
+
+    def _cannot_run(self) -> None:
+        """Delete: the selected changes are not allowed on the Changeovers tab, else the
+        selected grid cells cannot run."""
+        if self.changeover_tab.is_current():
+            self.changeover_tab.clear()
+        else:
+            self.edits.cannot_run()
 
     @property
     def messenger(self) -> Messenger:
@@ -199,7 +214,7 @@ class MainWindow(QMainWindow):
                                            self.tr("Copy the selection with job and machine names"))
         self.act_paste = self._action(self.tr("&Paste"), self._paste, S.Paste,
                                       self.tr("Paste a tab-separated block from a spreadsheet"))
-        self.act_cannot = self._action(self.tr("Mark &cannot run"), self.edits.cannot_run, S.Delete,
+        self.act_cannot = self._action(self.tr("Mark &cannot run"), self._cannot_run, S.Delete,
                                        self.tr("The machine cannot run the job (selected cells)"))
         self.act_pin = self._action(self.tr("&Pin job to this machine"), lambda: self.edits.pin(MUST), "Ctrl+Shift+M",
                                     self.tr("The job must go to this machine"))

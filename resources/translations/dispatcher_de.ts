@@ -150,6 +150,129 @@
     </message>
 </context>
 <context>
+    <name>ChangeoverModel</name>
+    <message>
+        <source>nothing mounted</source>
+        <translation>nichts gerüstet</translation>
+    </message>
+    <message>
+        <source>Change from {a} to {b}: not allowed (a job of {b} cannot follow {a} on these machines); type a number to allow it</source>
+        <translation>Wechsel von {a} zu {b}: nicht erlaubt (ein Auftrag von {b} kann auf diesen Maschinen nicht auf {a} folgen); eine Zahl eintragen, um ihn zu erlauben</translation>
+    </message>
+    <message>
+        <source>No change: {b} stays mounted, {value} ({unit})</source>
+        <translation>Kein Wechsel: {b} bleibt gerüstet, {value} ({unit})</translation>
+    </message>
+    <message>
+        <source>Change from {a} to {b}: {value} ({unit}); empty: not allowed</source>
+        <translation>Wechsel von {a} zu {b}: {value} ({unit}); leer: nicht erlaubt</translation>
+    </message>
+    <message>
+        <source>to {family}</source>
+        <translation>zu {family}</translation>
+    </message>
+    <message>
+        <source>Changes to family {family}</source>
+        <translation>Wechsel zur Familie {family}</translation>
+    </message>
+    <message>
+        <source>from {family}</source>
+        <translation>von {family}</translation>
+    </message>
+    <message>
+        <source>Changes from family {family} (mounted now)</source>
+        <translation>Wechsel von der Familie {family} (jetzt gerüstet)</translation>
+    </message>
+    <message>
+        <source>Changes from an empty or cleaned machine</source>
+        <translation>Wechsel von einer leeren oder gereinigten Maschine</translation>
+    </message>
+    <message>
+        <source>{table}: change from {a} to {b}: {problem}</source>
+        <translation>{table}: Wechsel von {a} zu {b}: {problem}</translation>
+    </message>
+    <message>
+        <source>not allowed</source>
+        <translation>nicht erlaubt</translation>
+    </message>
+    <message>
+        <source>Change from {a} to {b} = {value}</source>
+        <translation>Wechsel von {a} zu {b} = {value}</translation>
+    </message>
+    <message>
+        <source>this shop has no changeover table to paste into</source>
+        <translation>dieser Betrieb hat keine Rüsttabelle zum Einfügen</translation>
+    </message>
+    <message numerus="yes">
+        <source>Paste %n changeover(s)</source>
+        <translation>
+            <numerusform>%n Rüstwechsel einfügen</numerusform>
+            <numerusform>%n Rüstwechsel einfügen</numerusform>
+        </translation>
+    </message>
+</context>
+<context>
+    <name>ChangeoverTab</name>
+    <message>
+        <source>Changeover tables</source>
+        <translation>Rüsttabellen</translation>
+    </message>
+    <message>
+        <source>The time or cost of changing a group of machines from one setup family to another</source>
+        <translation>Zeit oder Kosten, um eine Maschinengruppe von einer Rüstfamilie auf eine andere umzurüsten</translation>
+    </message>
+    <message>
+        <source>Changeover table</source>
+        <translation>Rüsttabelle</translation>
+    </message>
+    <message>
+        <source>Which changeover table the grid below edits</source>
+        <translation>Welche Rüsttabelle das Raster darunter bearbeitet</translation>
+    </message>
+    <message>
+        <source>&amp;Table:</source>
+        <translation>&amp;Tabelle:</translation>
+    </message>
+    <message>
+        <source>Changeover grid</source>
+        <translation>Rüstraster</translation>
+    </message>
+    <message>
+        <source>Rows: the family mounted now, last the nothing-mounted row; columns: the family changed to; an empty cell means the change is not allowed</source>
+        <translation>Zeilen: die jetzt gerüstete Familie, zuletzt die Zeile für nichts gerüstet; Spalten: die Familie, auf die gewechselt wird; eine leere Zelle heißt, der Wechsel ist nicht erlaubt</translation>
+    </message>
+    <message>
+        <source>This shop has no changeover table: every value is typed in the grid. Import one with dispatcher import-jobs --changeovers FILE.</source>
+        <translation>Dieser Betrieb hat keine Rüsttabelle: jeder Wert wird im Raster getippt. Eine Tabelle importiert dispatcher import-jobs --changeovers FILE.</translation>
+    </message>
+    <message>
+        <source>Changes need not add up: a change through a wash-up can be cheaper than the direct one, and the plans never assume otherwise. Follow each machine&apos;s setup instructions.</source>
+        <translation>Wechsel müssen sich nicht addieren: ein Wechsel über eine Reinigung kann günstiger sein als der direkte, und die Pläne setzen nichts anderes voraus. Die Rüstanweisungen jeder Maschine befolgen.</translation>
+    </message>
+    <message>
+        <source>Shared by: {machines}</source>
+        <translation>Gemeinsam für: {machines}</translation>
+    </message>
+    <message>
+        <source>paste into the changeover table refused: {problem}; nothing changed</source>
+        <translation>Einfügen in die Rüsttabelle abgelehnt: {problem}; nichts geändert</translation>
+    </message>
+    <message numerus="yes">
+        <source>Pasted; %n changeover(s) changed</source>
+        <translation>
+            <numerusform>Eingefügt; %n Rüstwechsel geändert</numerusform>
+            <numerusform>Eingefügt; %n Rüstwechsel geändert</numerusform>
+        </translation>
+    </message>
+    <message numerus="yes">
+        <source>Disallow %n changeover(s)</source>
+        <translation>
+            <numerusform>%n Rüstwechsel verbieten</numerusform>
+            <numerusform>%n Rüstwechsel verbieten</numerusform>
+        </translation>
+    </message>
+</context>
+<context>
     <name>DecisionDialog</name>
     <message>
         <source>⚠ Safety first: before anyone works on this machine, apply lockout/tagout and follow the site&apos;s isolation procedure. Operators run only machines they are trained and authorised for. Follow each machine&apos;s setup instructions. Local regulations and the site&apos;s safety rules take precedence over this plan.</source>
@@ -1134,6 +1257,10 @@ A machine&apos;s state in a sentence (English; shown translated).</extracomment>
     <message>
         <source>C&amp;rew</source>
         <translation>&amp;Personal</translation>
+    </message>
+    <message>
+        <source>C&amp;hangeovers</source>
+        <translation>Rüstwe&amp;chsel</translation>
     </message>
     <message>
         <source>Views of the shop</source>

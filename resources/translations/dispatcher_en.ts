@@ -19,6 +19,33 @@
     </message>
 </context>
 <context>
+    <name>ChangeoverModel</name>
+    <message numerus="yes">
+        <source>Paste %n changeover(s)</source>
+        <translation>
+            <numerusform>Paste %n changeover</numerusform>
+            <numerusform>Paste %n changeovers</numerusform>
+        </translation>
+    </message>
+</context>
+<context>
+    <name>ChangeoverTab</name>
+    <message numerus="yes">
+        <source>Pasted; %n changeover(s) changed</source>
+        <translation>
+            <numerusform>Pasted; %n changeover changed</numerusform>
+            <numerusform>Pasted; %n changeovers changed</numerusform>
+        </translation>
+    </message>
+    <message numerus="yes">
+        <source>Disallow %n changeover(s)</source>
+        <translation>
+            <numerusform>Disallow %n changeover</numerusform>
+            <numerusform>Disallow %n changeovers</numerusform>
+        </translation>
+    </message>
+</context>
+<context>
     <name>GridEdits</name>
     <message numerus="yes">
         <source>Use changeover table in %n cell(s)</source>

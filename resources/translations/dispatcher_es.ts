@@ -150,6 +150,129 @@
     </message>
 </context>
 <context>
+    <name>ChangeoverModel</name>
+    <message>
+        <source>nothing mounted</source>
+        <translation>nada montado</translation>
+    </message>
+    <message>
+        <source>Change from {a} to {b}: not allowed (a job of {b} cannot follow {a} on these machines); type a number to allow it</source>
+        <translation>Cambio de {a} a {b}: no permitido (un trabajo de {b} no puede seguir a {a} en estas máquinas); escriba un número para permitirlo</translation>
+    </message>
+    <message>
+        <source>No change: {b} stays mounted, {value} ({unit})</source>
+        <translation>Sin cambio: {b} sigue montada, {value} ({unit})</translation>
+    </message>
+    <message>
+        <source>Change from {a} to {b}: {value} ({unit}); empty: not allowed</source>
+        <translation>Cambio de {a} a {b}: {value} ({unit}); vacío: no permitido</translation>
+    </message>
+    <message>
+        <source>to {family}</source>
+        <translation>a {family}</translation>
+    </message>
+    <message>
+        <source>Changes to family {family}</source>
+        <translation>Cambios a la familia {family}</translation>
+    </message>
+    <message>
+        <source>from {family}</source>
+        <translation>de {family}</translation>
+    </message>
+    <message>
+        <source>Changes from family {family} (mounted now)</source>
+        <translation>Cambios desde la familia {family} (montada ahora)</translation>
+    </message>
+    <message>
+        <source>Changes from an empty or cleaned machine</source>
+        <translation>Cambios desde una máquina vacía o limpia</translation>
+    </message>
+    <message>
+        <source>{table}: change from {a} to {b}: {problem}</source>
+        <translation>{table}: cambio de {a} a {b}: {problem}</translation>
+    </message>
+    <message>
+        <source>not allowed</source>
+        <translation>no permitido</translation>
+    </message>
+    <message>
+        <source>Change from {a} to {b} = {value}</source>
+        <translation>Cambio de {a} a {b} = {value}</translation>
+    </message>
+    <message>
+        <source>this shop has no changeover table to paste into</source>
+        <translation>este taller no tiene tabla de cambios donde pegar</translation>
+    </message>
+    <message numerus="yes">
+        <source>Paste %n changeover(s)</source>
+        <translation>
+            <numerusform>Pegar %n cambio</numerusform>
+            <numerusform>Pegar %n cambios</numerusform>
+        </translation>
+    </message>
+</context>
+<context>
+    <name>ChangeoverTab</name>
+    <message>
+        <source>Changeover tables</source>
+        <translation>Tablas de cambios</translation>
+    </message>
+    <message>
+        <source>The time or cost of changing a group of machines from one setup family to another</source>
+        <translation>El tiempo o coste de cambiar un grupo de máquinas de una familia de preparación a otra</translation>
+    </message>
+    <message>
+        <source>Changeover table</source>
+        <translation>Tabla de cambios</translation>
+    </message>
+    <message>
+        <source>Which changeover table the grid below edits</source>
+        <translation>Qué tabla de cambios edita la cuadrícula de abajo</translation>
+    </message>
+    <message>
+        <source>&amp;Table:</source>
+        <translation>&amp;Tabla:</translation>
+    </message>
+    <message>
+        <source>Changeover grid</source>
+        <translation>Cuadrícula de cambios</translation>
+    </message>
+    <message>
+        <source>Rows: the family mounted now, last the nothing-mounted row; columns: the family changed to; an empty cell means the change is not allowed</source>
+        <translation>Filas: la familia montada ahora, al final la fila de nada montado; columnas: la familia a la que se cambia; una celda vacía significa que el cambio no está permitido</translation>
+    </message>
+    <message>
+        <source>This shop has no changeover table: every value is typed in the grid. Import one with dispatcher import-jobs --changeovers FILE.</source>
+        <translation>Este taller no tiene tabla de cambios: cada valor se escribe en la cuadrícula. Importe una con dispatcher import-jobs --changeovers FILE.</translation>
+    </message>
+    <message>
+        <source>Changes need not add up: a change through a wash-up can be cheaper than the direct one, and the plans never assume otherwise. Follow each machine&apos;s setup instructions.</source>
+        <translation>Los cambios no tienen por qué sumarse: un cambio pasando por un lavado puede ser más barato que el directo, y los planes nunca suponen lo contrario. Siga las instrucciones de preparación de cada máquina.</translation>
+    </message>
+    <message>
+        <source>Shared by: {machines}</source>
+        <translation>Compartida por: {machines}</translation>
+    </message>
+    <message>
+        <source>paste into the changeover table refused: {problem}; nothing changed</source>
+        <translation>pegado en la tabla de cambios rechazado: {problem}; nada cambió</translation>
+    </message>
+    <message numerus="yes">
+        <source>Pasted; %n changeover(s) changed</source>
+        <translation>
+            <numerusform>Pegado; %n cambio modificado</numerusform>
+            <numerusform>Pegado; %n cambios modificados</numerusform>
+        </translation>
+    </message>
+    <message numerus="yes">
+        <source>Disallow %n changeover(s)</source>
+        <translation>
+            <numerusform>Prohibir %n cambio</numerusform>
+            <numerusform>Prohibir %n cambios</numerusform>
+        </translation>
+    </message>
+</context>
+<context>
     <name>DecisionDialog</name>
     <message>
         <source>⚠ Safety first: before anyone works on this machine, apply lockout/tagout and follow the site&apos;s isolation procedure. Operators run only machines they are trained and authorised for. Follow each machine&apos;s setup instructions. Local regulations and the site&apos;s safety rules take precedence over this plan.</source>
@@ -1134,6 +1257,10 @@ A machine&apos;s state in a sentence (English; shown translated).</extracomment>
     <message>
         <source>C&amp;rew</source>
         <translation>&amp;Personal</translation>
+    </message>
+    <message>
+        <source>C&amp;hangeovers</source>
+        <translation>Cam&amp;bios</translation>
     </message>
     <message>
         <source>Views of the shop</source>
