@@ -95,8 +95,8 @@ class FileController(QObject):
         """True when it is fine to replace the document (saved, discarded, or not dirty)."""
         if not self.doc.dirty:
             return True
-        name = self.doc.path.name if self.doc.path else (self.doc.shop.name or "the new shop")
-        answer = self.messenger.ask_save(f"{name} has changes that are not saved. Save them?")
+        name = self.doc.path.name if self.doc.path else (self.doc.shop.name or self.tr("the new shop"))
+        answer = self.messenger.ask_save(self.tr("{name} has changes that are not saved. Save them?").format(name=name))
         if answer == CANCEL:
             return False
         if answer == SAVE:
@@ -109,7 +109,7 @@ class FileController(QObject):
         if not self.maybe_keep_changes():
             return False
         self.discard_autosave()
-        self.doc.replace(shop or Shop(name="New shop"), None)
+        self.doc.replace(shop or Shop(name=self.tr("New shop")), None)
         return True
 
     def open_path(self, path: str | os.PathLike) -> bool:
@@ -119,9 +119,9 @@ class FileController(QObject):
             shop = self._read(path)
         except (ShopError, GridFileError) as exc:
             short, detail = _problem_texts(exc)
-            self.messenger.error("Cannot open file", short, detail)
+            self.messenger.error(self.tr("Cannot open file"), short, detail)
             self.problem.emit(short)
-            self.status.emit(f"Not opened: {short.splitlines()[0]}")
+            self.status.emit(self.tr("Not opened: {problem}").format(problem=short.splitlines()[0]))
             return False
         if not self.maybe_keep_changes():
             return False
@@ -130,7 +130,7 @@ class FileController(QObject):
         self.doc.replace(shop, path if is_document else None)
         if is_document:
             self._remember(path)
-        self.status.emit(f"Opened {path}")
+        self.status.emit(self.tr("Opened {path}").format(path=path))
         return True
 
     @staticmethod
@@ -157,14 +157,14 @@ class FileController(QObject):
             save_shop(self.doc.shop, path)
         except ShopError as exc:
             short, detail = _problem_texts(exc)
-            self.messenger.error("Cannot save", short, detail)
+            self.messenger.error(self.tr("Cannot save"), short, detail)
             self.problem.emit(short)
-            self.status.emit(f"Not saved: {short.splitlines()[0]}")
+            self.status.emit(self.tr("Not saved: {problem}").format(problem=short.splitlines()[0]))
             return False
         self.discard_autosave()
         self.doc.set_path(path)
         self._remember(path)
-        self.status.emit(f"Saved {path}")
+        self.status.emit(self.tr("Saved {path}").format(path=path))
         return True
 
     def export_grid(self, path: str | os.PathLike) -> bool:
@@ -172,9 +172,9 @@ class FileController(QObject):
         try:
             export_grid(self.doc.shop, Path(path))
         except (OSError, ValueError) as exc:
-            self.messenger.error("Cannot export", f"{path}: {exc}")
+            self.messenger.error(self.tr("Cannot export"), f"{path}: {exc}")
             return False
-        self.status.emit(f"Exported the grid to {path}")
+        self.status.emit(self.tr("Exported the grid to {path}").format(path=path))
         return True
 
     def export_plan(self, plan, path: str | os.PathLike) -> bool:
@@ -182,9 +182,9 @@ class FileController(QObject):
         try:
             export_plan(plan, Path(path), self.doc.shop)
         except (OSError, ValueError) as exc:
-            self.messenger.error("Cannot export", f"{path}: {exc}")
+            self.messenger.error(self.tr("Cannot export"), f"{path}: {exc}")
             return False
-        self.status.emit(f"Exported the plan to {path}")
+        self.status.emit(self.tr("Exported the plan to {path}").format(path=path))
         return True
 
     def import_into(self, path: str | os.PathLike) -> str | None:
@@ -193,14 +193,15 @@ class FileController(QObject):
         try:
             report = import_grid_file(Path(path), self.doc.shop.copy())
         except (GridFileError, ShopError, OSError) as exc:
-            self.messenger.error("Cannot import", str(exc))
+            self.messenger.error(self.tr("Cannot import"), str(exc))
             self.problem.emit(str(exc))
             return None
         from dispatcher.ui.edits import ReplaceShop
-        self.doc.undo_stack.push(ReplaceShop(self.doc, report.shop, f"Import {Path(path).name}"))
+        self.doc.undo_stack.push(ReplaceShop(self.doc, report.shop, self.tr("Import {file}").format(
+            file=Path(path).name)))
         summary = report.summary()
-        self.messenger.info("Grid imported", f"{path}:\n{summary}")
-        self.status.emit(f"Imported {path}")
+        self.messenger.info(self.tr("Grid imported"), f"{path}:\n{summary}")
+        self.status.emit(self.tr("Imported {path}").format(path=path))
         return summary
 
     # ---- autosave -------------------------------------------------------------------------
@@ -233,14 +234,14 @@ class FileController(QObject):
             return False
         newest = copies[0]
         if not self.messenger.ask_yes_no(
-                "Recover unsaved work",
-                f"The app did not close normally last time. Recover the unsaved copy "
-                f"saved at {newest.stat().st_mtime and _mtime_text(newest)}?"):
+                self.tr("Recover unsaved work"),
+                self.tr("The app did not close normally last time. Recover the unsaved copy "
+                        "saved at {time}?").format(time=newest.stat().st_mtime and _mtime_text(newest))):
             return False
         try:
             shop = load_shop(newest, check=False)
         except ShopError as exc:
-            self.messenger.error("Cannot recover", str(exc))
+            self.messenger.error(self.tr("Cannot recover"), str(exc))
             return False
         self.doc.replace(shop, None)
         # The recovered shop is unsaved work: mark it dirty so closing asks to save it.
@@ -248,7 +249,7 @@ class FileController(QObject):
         self.doc.dirty_changed.emit(True)
         for p in copies:
             p.unlink(missing_ok=True)
-        self.status.emit("Recovered unsaved work; save it under a name")
+        self.status.emit(self.tr("Recovered unsaved work; save it under a name"))
         return True
 
     def shutdown(self) -> None:

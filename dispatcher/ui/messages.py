@@ -6,6 +6,7 @@ pass a :class:`RecordingMessenger` that records every message and answers from a
 
 from __future__ import annotations
 
+from PySide6.QtCore import QCoreApplication
 from PySide6.QtWidgets import QMessageBox, QWidget
 
 SAVE, DISCARD, CANCEL = "save", "discard", "cancel"
@@ -38,7 +39,7 @@ class Messenger:
 
     def ask_save(self, text: str) -> str:
         """Save / discard / cancel for unsaved changes."""
-        box = QMessageBox(QMessageBox.Icon.Question, "Unsaved changes", text,
+        box = QMessageBox(QMessageBox.Icon.Question, QCoreApplication.translate("Messenger", "Unsaved changes"), text,
                           QMessageBox.StandardButton.Save | QMessageBox.StandardButton.Discard
                           | QMessageBox.StandardButton.Cancel, self.parent)
         box.setDefaultButton(QMessageBox.StandardButton.Save)

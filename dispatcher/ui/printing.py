@@ -13,7 +13,7 @@ from __future__ import annotations
 import os
 from pathlib import Path
 
-from PySide6.QtCore import QObject
+from PySide6.QtCore import QCoreApplication, QObject
 from PySide6.QtWidgets import QFileDialog
 from PySide6.QtPrintSupport import QPrintDialog, QPrinter, QPrinterInfo, QPrintPreviewDialog
 
@@ -24,6 +24,13 @@ from dispatcher.sheet.build import build_sheet
 from dispatcher.sheet.content import SheetContent
 from dispatcher.sheet.render import SheetRenderError, page_size_for, print_sheet, write_pdf
 from dispatcher.ui.settings_keys import KEY_SUPERVISOR
+
+translate = QCoreApplication.translate   # the name pyside6-lupdate collects
+
+
+def _nothing_to_print(window) -> None:
+    window.messenger.error(translate("SheetPrinting", "Nothing to print"),
+                           translate("SheetPrinting", "There is no plan yet: fix the grid first."))
 
 
 def sheet_content(window) -> SheetContent | None:
@@ -50,14 +57,14 @@ def export_pdf(window, path: str | os.PathLike) -> int | None:
     """Write the sheet to ``path``; returns the page count (None, with a message, on failure)."""
     content = sheet_content(window)
     if content is None:
-        window.messenger.error("Nothing to print", "There is no plan yet: fix the grid first.")
+        _nothing_to_print(window)
         return None
     try:
         pages = write_pdf(content, Path(path), text_locale=app_locale())
     except (SheetRenderError, OSError) as exc:
-        window.messenger.error("PDF not written", str(exc))
+        window.messenger.error(translate("SheetPrinting", "PDF not written"), str(exc))
         return None
-    window.statusBar().showMessage(f"Wrote {pages} page(s) to {path}", 8000)
+    window.statusBar().showMessage(window.printing.wrote_text(pages, path), 8000)
     return pages
 
 
@@ -75,12 +82,12 @@ def preview(window) -> QPrintPreviewDialog | None:
     """Open the print preview (non-blocking); printing from it uses the same layout."""
     content = sheet_content(window)
     if content is None:
-        window.messenger.error("Nothing to print", "There is no plan yet: fix the grid first.")
+        _nothing_to_print(window)
         return None
     printer = _printer()
     dialog = QPrintPreviewDialog(printer, window)
     dialog.printer_ref = printer   # the dialog does not own the printer: keep it alive
-    dialog.setWindowTitle("Dispatch sheet - print preview")
+    dialog.setWindowTitle(translate("SheetPrinting", "Dispatch sheet - print preview"))
     dialog.paintRequested.connect(lambda printer: print_sheet(content, printer, app_locale()))
     dialog.open()
     return dialog
@@ -89,7 +96,7 @@ def preview(window) -> QPrintPreviewDialog | None:
 def print_now(window) -> None:
     content = sheet_content(window)
     if content is None:
-        window.messenger.error("Nothing to print", "There is no plan yet: fix the grid first.")
+        _nothing_to_print(window)
         return
     printer = _printer()
     dialog = QPrintDialog(printer, window)
@@ -106,6 +113,10 @@ class SheetPrinting(QObject):
         self.window = window
         self.preview_dialog: QPrintPreviewDialog | None = None
 
+    def wrote_text(self, pages: int, path) -> str:
+        """The status line after writing a PDF (a plural lupdate collects from ``self.tr``)."""
+        return self.tr("Wrote %n page(s) to {path}", "", pages).format(path=path)
+
     def preview(self) -> QPrintPreviewDialog | None:
         self.preview_dialog = preview(self.window)
         return self.preview_dialog
@@ -114,8 +125,8 @@ class SheetPrinting(QObject):
         print_now(self.window)
 
     def ask_export_pdf(self) -> int | None:
-        path, _ = QFileDialog.getSaveFileName(self.window, "Export dispatch sheet",
-                                              self.window.folder(), "PDF (*.pdf)")
+        path, _ = QFileDialog.getSaveFileName(self.window, self.tr("Export dispatch sheet"),
+                                              self.window.folder(), self.tr("PDF (*.pdf)"))
         if not path:
             return None
         return export_pdf(self.window, path if path.lower().endswith(".pdf") else path + ".pdf")

@@ -606,6 +606,89 @@ Der gültige Plan bleibt unverändert.</translation>
     </message>
 </context>
 <context>
+    <name>FileController</name>
+    <message>
+        <source>the new shop</source>
+        <translation>der neue Betrieb</translation>
+    </message>
+    <message>
+        <source>{name} has changes that are not saved. Save them?</source>
+        <translation>{name} hat Änderungen, die nicht gespeichert sind. Speichern?</translation>
+    </message>
+    <message>
+        <source>New shop</source>
+        <translation>Neuer Betrieb</translation>
+    </message>
+    <message>
+        <source>Cannot open file</source>
+        <translation>Datei kann nicht geöffnet werden</translation>
+    </message>
+    <message>
+        <source>Not opened: {problem}</source>
+        <translation>Nicht geöffnet: {problem}</translation>
+    </message>
+    <message>
+        <source>Opened {path}</source>
+        <translation>{path} geöffnet</translation>
+    </message>
+    <message>
+        <source>Cannot save</source>
+        <translation>Speichern nicht möglich</translation>
+    </message>
+    <message>
+        <source>Not saved: {problem}</source>
+        <translation>Nicht gespeichert: {problem}</translation>
+    </message>
+    <message>
+        <source>Saved {path}</source>
+        <translation>{path} gespeichert</translation>
+    </message>
+    <message>
+        <source>Cannot export</source>
+        <translation>Exportieren nicht möglich</translation>
+    </message>
+    <message>
+        <source>Exported the grid to {path}</source>
+        <translation>Raster nach {path} exportiert</translation>
+    </message>
+    <message>
+        <source>Exported the plan to {path}</source>
+        <translation>Plan nach {path} exportiert</translation>
+    </message>
+    <message>
+        <source>Cannot import</source>
+        <translation>Importieren nicht möglich</translation>
+    </message>
+    <message>
+        <source>Import {file}</source>
+        <translation>{file} importieren</translation>
+    </message>
+    <message>
+        <source>Grid imported</source>
+        <translation>Raster importiert</translation>
+    </message>
+    <message>
+        <source>Imported {path}</source>
+        <translation>{path} importiert</translation>
+    </message>
+    <message>
+        <source>Recover unsaved work</source>
+        <translation>Ungesicherte Arbeit wiederherstellen</translation>
+    </message>
+    <message>
+        <source>The app did not close normally last time. Recover the unsaved copy saved at {time}?</source>
+        <translation>Die Anwendung wurde beim letzten Mal nicht normal beendet. Die ungespeicherte Kopie vom {time} wiederherstellen?</translation>
+    </message>
+    <message>
+        <source>Cannot recover</source>
+        <translation>Wiederherstellen nicht möglich</translation>
+    </message>
+    <message>
+        <source>Recovered unsaved work; save it under a name</source>
+        <translation>Ungesicherte Arbeit wiederhergestellt; unter einem Namen speichern</translation>
+    </message>
+</context>
+<context>
     <name>Format</name>
     <message>
         <source>shift start</source>
@@ -1692,6 +1775,13 @@ A machine&apos;s state in a sentence (English; shown translated).</extracomment>
     </message>
 </context>
 <context>
+    <name>Messenger</name>
+    <message>
+        <source>Unsaved changes</source>
+        <translation>Ungespeicherte Änderungen</translation>
+    </message>
+</context>
+<context>
     <name>PlanPanel</name>
     <message>
         <source>Least total (setup + wait penalties)</source>
@@ -2580,6 +2670,40 @@ Entscheidungen werden weiter in {path} erfasst.</translation>
     <message>
         <source>SAFETY:</source>
         <translation>SICHERHEIT:</translation>
+    </message>
+</context>
+<context>
+    <name>SheetPrinting</name>
+    <message>
+        <source>Nothing to print</source>
+        <translation>Nichts zu drucken</translation>
+    </message>
+    <message>
+        <source>There is no plan yet: fix the grid first.</source>
+        <translation>Es gibt noch keinen Plan: zuerst das Raster korrigieren.</translation>
+    </message>
+    <message>
+        <source>PDF not written</source>
+        <translation>PDF nicht geschrieben</translation>
+    </message>
+    <message numerus="yes">
+        <source>Wrote %n page(s) to {path}</source>
+        <translation>
+            <numerusform>%n Seite nach {path} geschrieben</numerusform>
+            <numerusform>%n Seiten nach {path} geschrieben</numerusform>
+        </translation>
+    </message>
+    <message>
+        <source>Dispatch sheet - print preview</source>
+        <translation>Zuteilungsblatt - Druckvorschau</translation>
+    </message>
+    <message>
+        <source>Export dispatch sheet</source>
+        <translation>Zuteilungsblatt exportieren</translation>
+    </message>
+    <message>
+        <source>PDF (*.pdf)</source>
+        <translation>PDF (*.pdf)</translation>
     </message>
 </context>
 <context>

@@ -183,4 +183,14 @@
         </translation>
     </message>
 </context>
+<context>
+    <name>SheetPrinting</name>
+    <message numerus="yes">
+        <source>Wrote %n page(s) to {path}</source>
+        <translation>
+            <numerusform>Wrote %n page to {path}</numerusform>
+            <numerusform>Wrote %n pages to {path}</numerusform>
+        </translation>
+    </message>
+</context>
 </TS>

@@ -606,6 +606,89 @@ El plan vigente no cambia.</translation>
     </message>
 </context>
 <context>
+    <name>FileController</name>
+    <message>
+        <source>the new shop</source>
+        <translation>el taller nuevo</translation>
+    </message>
+    <message>
+        <source>{name} has changes that are not saved. Save them?</source>
+        <translation>{name} tiene cambios sin guardar. ¿Guardarlos?</translation>
+    </message>
+    <message>
+        <source>New shop</source>
+        <translation>Taller nuevo</translation>
+    </message>
+    <message>
+        <source>Cannot open file</source>
+        <translation>No se puede abrir el archivo</translation>
+    </message>
+    <message>
+        <source>Not opened: {problem}</source>
+        <translation>No abierto: {problem}</translation>
+    </message>
+    <message>
+        <source>Opened {path}</source>
+        <translation>Abierto {path}</translation>
+    </message>
+    <message>
+        <source>Cannot save</source>
+        <translation>No se puede guardar</translation>
+    </message>
+    <message>
+        <source>Not saved: {problem}</source>
+        <translation>No guardado: {problem}</translation>
+    </message>
+    <message>
+        <source>Saved {path}</source>
+        <translation>Guardado {path}</translation>
+    </message>
+    <message>
+        <source>Cannot export</source>
+        <translation>No se puede exportar</translation>
+    </message>
+    <message>
+        <source>Exported the grid to {path}</source>
+        <translation>Cuadrícula exportada a {path}</translation>
+    </message>
+    <message>
+        <source>Exported the plan to {path}</source>
+        <translation>Plan exportado a {path}</translation>
+    </message>
+    <message>
+        <source>Cannot import</source>
+        <translation>No se puede importar</translation>
+    </message>
+    <message>
+        <source>Import {file}</source>
+        <translation>Importar {file}</translation>
+    </message>
+    <message>
+        <source>Grid imported</source>
+        <translation>Cuadrícula importada</translation>
+    </message>
+    <message>
+        <source>Imported {path}</source>
+        <translation>Importado {path}</translation>
+    </message>
+    <message>
+        <source>Recover unsaved work</source>
+        <translation>Recuperar el trabajo sin guardar</translation>
+    </message>
+    <message>
+        <source>The app did not close normally last time. Recover the unsaved copy saved at {time}?</source>
+        <translation>La aplicación no se cerró con normalidad la última vez. ¿Recuperar la copia sin guardar del {time}?</translation>
+    </message>
+    <message>
+        <source>Cannot recover</source>
+        <translation>No se puede recuperar</translation>
+    </message>
+    <message>
+        <source>Recovered unsaved work; save it under a name</source>
+        <translation>Trabajo sin guardar recuperado; guárdelo con un nombre</translation>
+    </message>
+</context>
+<context>
     <name>Format</name>
     <message>
         <source>shift start</source>
@@ -1692,6 +1775,13 @@ A machine&apos;s state in a sentence (English; shown translated).</extracomment>
     </message>
 </context>
 <context>
+    <name>Messenger</name>
+    <message>
+        <source>Unsaved changes</source>
+        <translation>Cambios sin guardar</translation>
+    </message>
+</context>
+<context>
     <name>PlanPanel</name>
     <message>
         <source>Least total (setup + wait penalties)</source>
@@ -2580,6 +2670,40 @@ Las decisiones se siguen registrando en {path}.</translation>
     <message>
         <source>SAFETY:</source>
         <translation>SEGURIDAD:</translation>
+    </message>
+</context>
+<context>
+    <name>SheetPrinting</name>
+    <message>
+        <source>Nothing to print</source>
+        <translation>Nada que imprimir</translation>
+    </message>
+    <message>
+        <source>There is no plan yet: fix the grid first.</source>
+        <translation>Todavía no hay plan: corrija primero la cuadrícula.</translation>
+    </message>
+    <message>
+        <source>PDF not written</source>
+        <translation>PDF no escrito</translation>
+    </message>
+    <message numerus="yes">
+        <source>Wrote %n page(s) to {path}</source>
+        <translation>
+            <numerusform>%n página escrita en {path}</numerusform>
+            <numerusform>%n páginas escritas en {path}</numerusform>
+        </translation>
+    </message>
+    <message>
+        <source>Dispatch sheet - print preview</source>
+        <translation>Hoja de asignación - vista previa de impresión</translation>
+    </message>
+    <message>
+        <source>Export dispatch sheet</source>
+        <translation>Exportar hoja de asignación</translation>
+    </message>
+    <message>
+        <source>PDF (*.pdf)</source>
+        <translation>PDF (*.pdf)</translation>
     </message>
 </context>
 <context>
