@@ -10,7 +10,7 @@ from __future__ import annotations
 
 from datetime import date
 
-from PySide6.QtCore import QAbstractTableModel, QModelIndex, Qt
+from PySide6.QtCore import QT_TRANSLATE_NOOP, QAbstractTableModel, QModelIndex, Qt
 
 from dispatcher.shop.crew import ABSENT, MAX_MINDING, PRESENT
 from dispatcher.ui import palette
@@ -19,7 +19,9 @@ from dispatcher.ui.edits import SetAuthorisations, SetOperatorField
 
 COL_LABEL, COL_PRESENT, COL_MINDS = 0, 1, 2
 FIRST_MACHINE = 3
-LEADING = ("Operator", "Present", "Minds")
+#: Heads of the leading columns (English; the model shows them translated).
+LEADING = (QT_TRANSLATE_NOOP("CrewModel", "Operator"), QT_TRANSLATE_NOOP("CrewModel", "Present"),
+           QT_TRANSLATE_NOOP("CrewModel", "Minds"))
 
 #: Words read as "authorised" / "not authorised" when a block is pasted.
 YES = {"1", "x", "y", "yes", "true", "\u2713", "ja", "si", "s\u00ed"}
@@ -81,6 +83,16 @@ class CrewModel(QAbstractTableModel):
     def _expiring(self, left: int | None) -> bool:
         return left is not None and left <= self._doc.shop.crew.warn_days
 
+    def _how_text(self, how: str) -> str:
+        """:meth:`authorisation`'s ``how`` (English, read by the code) as shown."""
+        if how.startswith("expired (") and how.endswith(")"):
+            return self.tr("expired ({how})").format(how=self._how_text(how[len("expired ("):-1]))
+        if how == "own authorisation":
+            return self.tr("own authorisation")
+        if how.startswith("through group "):
+            return self.tr("through group {group}").format(group=how[len("through group "):])
+        return how
+
     # ---- data -----------------------------------------------------------------------------
     def data(self, index: QModelIndex, role: int = Qt.ItemDataRole.DisplayRole):
         if not index.isValid():
@@ -92,27 +104,29 @@ class CrewModel(QAbstractTableModel):
                         Qt.ItemDataRole.AccessibleTextRole):
                 return op.label
             if role == Qt.ItemDataRole.ToolTipRole:
-                return f"{op.label} (id {op.id})" + (f": {op.notes}" if op.notes else "")
+                return (self.tr("{operator} (id {id}): {notes}") if op.notes else
+                        self.tr("{operator} (id {id})")).format(operator=op.label, id=op.id, notes=op.notes)
             return None
         if col == COL_PRESENT:
             if role == Qt.ItemDataRole.CheckStateRole:
                 return Qt.CheckState.Checked if op.attendance == PRESENT else Qt.CheckState.Unchecked
             if role in (Qt.ItemDataRole.DisplayRole, Qt.ItemDataRole.AccessibleTextRole):
-                text = "present" if op.attendance == PRESENT else "absent"
+                text = self.tr("present") if op.attendance == PRESENT else self.tr("absent")
                 if op.attendance == PRESENT and op.arrives is not None:
-                    text += f", from {op.arrives:%H:%M}"
+                    text += self.tr(", from {time}").format(time=f"{op.arrives:%H:%M}")
                 if op.attendance == PRESENT and op.leaves is not None:
-                    text += f", until {op.leaves:%H:%M}"
+                    text += self.tr(", until {time}").format(time=f"{op.leaves:%H:%M}")
                 return text
             if role == Qt.ItemDataRole.ToolTipRole:
-                return "Space or click: mark present or absent for this shift"
+                return self.tr("Space or click: mark present or absent for this shift")
             return None
         if col == COL_MINDS:
             if role in (Qt.ItemDataRole.DisplayRole, Qt.ItemDataRole.EditRole,
                         Qt.ItemDataRole.AccessibleTextRole):
                 return op.capacity
             if role == Qt.ItemDataRole.ToolTipRole:
-                return f"How many machines {op.label} runs at once (1 to {MAX_MINDING})"
+                return self.tr("How many machines {operator} runs at once (1 to {most})").format(
+                    operator=op.label, most=MAX_MINDING)
             if role == Qt.ItemDataRole.TextAlignmentRole:
                 return int(Qt.AlignmentFlag.AlignCenter)
             return None
@@ -123,21 +137,23 @@ class CrewModel(QAbstractTableModel):
             return Qt.CheckState.Checked if authorised else Qt.CheckState.Unchecked
         if role in (Qt.ItemDataRole.DisplayRole, Qt.ItemDataRole.AccessibleTextRole):
             if left is not None and left < 0:
-                return "expired"
+                return self.tr("expired")
             if authorised and self._expiring(left):
-                return f"{palette.MARK_RUSH} {left} d"
-            return "group" if authorised and how.startswith("through") else ""
+                return self.tr("{mark} {days} d").format(mark=palette.MARK_RUSH, days=left)
+            return self.tr("group") if authorised and how.startswith("through") else ""
         if role == Qt.ItemDataRole.BackgroundRole and self._expiring(left):
             return palette.colour("rush", 70)
         if role == Qt.ItemDataRole.ToolTipRole:
             if not how:
-                return f"{op.label} is not authorised for {machine} (Space or click: authorise)"
-            tip = f"{op.label} for {machine}: {how}"
+                return self.tr("{operator} is not authorised for {machine} (Space or click: authorise)").format(
+                    operator=op.label, machine=machine)
+            tip = self.tr("{operator} for {machine}: {how}").format(operator=op.label, machine=machine,
+                                                                    how=self._how_text(how))
             if left is not None:
-                tip += (f", expired {-left} day(s) ago (counts as none)" if left < 0
-                        else f", expires in {left} day(s)")
+                tip += (self.tr(", expired %n day(s) ago (counts as none)", "", -left) if left < 0
+                        else self.tr(", expires in %n day(s)", "", left))
             if how.startswith("through"):
-                tip += "; a group authorisation is changed in the shop document"
+                tip += self.tr("; a group authorisation is changed in the shop document")
             return tip
         return None
 
@@ -149,14 +165,15 @@ class CrewModel(QAbstractTableModel):
         if orientation == Qt.Orientation.Vertical:
             return str(section + 1) if section < self.rowCount() else None
         if section < FIRST_MACHINE:
-            return LEADING[section]
+            return self.tr(LEADING[section])
         if section - FIRST_MACHINE >= self._doc.n_machines():
             return None
         m = self._doc.machine_at(section - FIRST_MACHINE)
         unattended = m.id in set(self._doc.shop.crew.unattended)
         if role == Qt.ItemDataRole.ToolTipRole:
-            return f"{m.name}" + (": runs unattended (needs no operator)" if unattended else "")
-        return m.name + ("\n(unattended)" if unattended else "")
+            return self.tr("{machine}: runs unattended (needs no operator)").format(machine=m.name) \
+                if unattended else m.name
+        return m.name + ("\n" + self.tr("(unattended)") if unattended else "")
 
     # ---- edits ----------------------------------------------------------------------------
     def setData(self, index: QModelIndex, value, role: int = Qt.ItemDataRole.EditRole) -> bool:
@@ -168,7 +185,8 @@ class CrewModel(QAbstractTableModel):
             label = str(value).strip()
             if not label or label == op.label or any(o.label == label for o in doc.shop.crew.operators):
                 return False
-            doc.undo_stack.push(SetOperatorField(doc, row, "label", label, f"Rename {op.label}"))
+            doc.undo_stack.push(SetOperatorField(doc, row, "label", label, self.tr("Rename {operator}").format(
+                operator=op.label)))
             return True
         if col == COL_MINDS and role == Qt.ItemDataRole.EditRole:
             try:
@@ -178,19 +196,23 @@ class CrewModel(QAbstractTableModel):
             if not 1 <= n <= MAX_MINDING or n == op.capacity:
                 return False
             doc.undo_stack.push(SetOperatorField(doc, row, "capacity", n,
-                                                 f"{op.label} minds {n} machine(s)"))
+                                                 self.tr("{operator} minds %n machine(s)", "", n).format(
+                                                     operator=op.label)))
             return True
         if role != Qt.ItemDataRole.CheckStateRole:
             return False
         on = Qt.CheckState(value) == Qt.CheckState.Checked if not isinstance(value, bool) else value
         if col == COL_PRESENT:
             doc.undo_stack.push(SetOperatorField(doc, row, "attendance", PRESENT if on else ABSENT,
-                                                 f"{op.label} {'present' if on else 'absent'}"))
+                                                 (self.tr("{operator} present") if on else
+                                                  self.tr("{operator} absent")).format(operator=op.label)))
             return True
         k = col - FIRST_MACHINE
         machine = doc.machine_at(k).name
         doc.undo_stack.push(SetAuthorisations(
-            doc, [(row, k, on)], f"{'Authorise' if on else 'Withdraw'} {op.label} for {machine}"))
+            doc, [(row, k, on)], (self.tr("Authorise {operator} for {machine}") if on else
+                                  self.tr("Withdraw {operator} for {machine}")).format(operator=op.label,
+                                                                                       machine=machine)))
         return True
 
     def paste_cells(self, text: str, row: int, col: int) -> list[tuple[int, int, bool]]:
@@ -201,20 +223,21 @@ class CrewModel(QAbstractTableModel):
         """
         lines = text.replace("\r\n", "\n").replace("\r", "\n").rstrip("\n").split("\n")
         if col < FIRST_MACHINE:
-            raise ValueError("paste authorisations into the machine columns")
+            raise ValueError(self.tr("paste authorisations into the machine columns"))
         out = []
         for r, line in enumerate(lines):
             for c, cell in enumerate(line.split("\t")):
                 rr, kk = row + r, col - FIRST_MACHINE + c
                 if rr >= self.rowCount() or kk >= self._doc.n_machines():
-                    raise ValueError(f"the pasted block (row {r + 1}, column {c + 1}) reaches past "
-                                     "the last operator or machine")
+                    raise ValueError(self.tr("the pasted block (row {row}, column {column}) reaches past "
+                                             "the last operator or machine").format(row=r + 1, column=c + 1))
                 word = cell.strip().lower()
                 if word in YES:
                     out.append((rr, kk, True))
                 elif word in NO:
                     out.append((rr, kk, False))
                 else:
-                    raise ValueError(f"pasted row {r + 1}, column {c + 1}: {cell!r} is neither "
-                                     "yes (1, x, yes) nor no (0, empty, no)")
+                    raise ValueError(self.tr("pasted row {row}, column {column}: {cell} is neither "
+                                             "yes (1, x, yes) nor no (0, empty, no)").format(
+                        row=r + 1, column=c + 1, cell=repr(cell)))
         return out

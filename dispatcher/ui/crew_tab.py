@@ -10,7 +10,7 @@ running machine.
 
 from __future__ import annotations
 
-from PySide6.QtCore import QObject
+from PySide6.QtCore import QT_TRANSLATE_NOOP, QObject
 from PySide6.QtGui import QGuiApplication
 from PySide6.QtWidgets import QHBoxLayout, QLabel, QPushButton, QTableView, QVBoxLayout, QWidget
 
@@ -18,8 +18,8 @@ from dispatcher.shop.crew import Operator
 from dispatcher.ui.crew_model import FIRST_MACHINE, CrewModel
 from dispatcher.ui.edits import AddOperator, SetAuthorisations
 
-CAUTION = ("Operators run only machines they are trained and authorised for; the site's "
-           "training records decide, this table only repeats them.")
+CAUTION = QT_TRANSLATE_NOOP("CrewTab", "Operators run only machines they are trained and authorised for; "
+                            "the site's training records decide, this table only repeats them.")
 
 
 class CrewTab(QObject):
@@ -32,24 +32,29 @@ class CrewTab(QObject):
         self.model = CrewModel(self.doc, self)
         self.view = QWidget(window)
         self.view.setObjectName("crewTab")
-        self.view.setAccessibleName("Crew")
-        self.view.setAccessibleDescription("Operators of this shift, who is present, and what "
-                                           "each is authorised to run")
+        self.view.setAccessibleName(self.tr("Crew"))
+        self.view.setAccessibleDescription(self.tr("Operators of this shift, who is present, and what "
+                                                   "each is authorised to run"))
         self.table = QTableView(self.view)
         self.table.setObjectName("crewTable")
-        self.table.setAccessibleName("Crew table")
-        self.table.setAccessibleDescription("One row per operator: present, machines minded at "
-                                            "once, and a check for each machine they may run")
+        self.table.setAccessibleName(self.tr("Crew table"))
+        self.table.setAccessibleDescription(self.tr("One row per operator: present, machines minded at "
+                                                    "once, and a check for each machine they may run"))
         self.table.setModel(self.model)
         self.table.setAlternatingRowColors(True)
-        self.empty = QLabel("This shop has no crew: plans do not staff machines. Add an operator "
-                            "to plan with who is here.", self.view)
+        self.empty = QLabel(self.tr("This shop has no crew: plans do not staff machines. Add an operator "
+                                    "to plan with who is here."), self.view)
         self.empty.setWordWrap(True)
-        self.add = QPushButton("&Add operator", self.view)
-        self.add.setAccessibleDescription("Add an operator to the crew (Ctrl+Z takes it back)")
+        self.empty.setAccessibleName(self.tr("No crew"))
+        self.empty.setAccessibleDescription(self.empty.text())
+        self.add = QPushButton(self.tr("&Add operator"), self.view)
+        self.add.setAccessibleName(self.tr("Add operator"))
+        self.add.setAccessibleDescription(self.tr("Add an operator to the crew (Ctrl+Z takes it back)"))
         self.add.clicked.connect(self.add_operator)
-        caution = QLabel(CAUTION, self.view)
+        caution = QLabel(self.tr(CAUTION), self.view)
         caution.setWordWrap(True)
+        caution.setAccessibleName(self.tr("Safety caution"))
+        caution.setAccessibleDescription(caution.text())
         row = QHBoxLayout()
         row.addWidget(self.add)
         row.addStretch(1)
@@ -74,7 +79,7 @@ class CrewTab(QObject):
         while f"O{n}" in ids or f"Operator {n}" in labels:
             n += 1
         self.doc.undo_stack.push(AddOperator(self.doc, Operator(f"O{n}", f"Operator {n}"),
-                                             f"Add Operator {n}"))
+                                             self.tr("Add Operator {n}").format(n=n)))
 
     def is_current(self) -> bool:
         return self.window.tabs.currentWidget() is self.view
@@ -85,9 +90,10 @@ class CrewTab(QObject):
         try:
             cells = self.model.paste_cells(QGuiApplication.clipboard().text(), row, col)
         except ValueError as exc:
-            self.window.show_warning(f"paste into the crew refused: {exc}; nothing changed")
+            self.window.show_warning(self.tr("paste into the crew refused: {problem}; nothing changed").format(
+                problem=exc))
             return False
         if cells:
             self.doc.undo_stack.push(SetAuthorisations(self.doc, cells,
-                                                       f"Paste {len(cells)} authorisation(s)"))
+                                                       self.tr("Paste %n authorisation(s)", "", len(cells))))
         return True

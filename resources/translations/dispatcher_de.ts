@@ -273,6 +273,214 @@
     </message>
 </context>
 <context>
+    <name>CrewModel</name>
+    <message>
+        <source>Operator</source>
+        <extracomment>Heads of the leading columns (English; the model shows them translated).</extracomment>
+        <translation>Bediener</translation>
+    </message>
+    <message>
+        <source>Present</source>
+        <translation>Anwesend</translation>
+    </message>
+    <message>
+        <source>Minds</source>
+        <translation>Bedient</translation>
+    </message>
+    <message>
+        <source>expired ({how})</source>
+        <extracomment>Words read as &quot;authorised&quot; / &quot;not authorised&quot; when a block is pasted.</extracomment>
+        <translation>abgelaufen ({how})</translation>
+    </message>
+    <message>
+        <source>own authorisation</source>
+        <translation>eigene Befugnis</translation>
+    </message>
+    <message>
+        <source>through group {group}</source>
+        <translation>über die Gruppe {group}</translation>
+    </message>
+    <message>
+        <source>{operator} (id {id}): {notes}</source>
+        <translation>{operator} (ID {id}): {notes}</translation>
+    </message>
+    <message>
+        <source>{operator} (id {id})</source>
+        <translation>{operator} (ID {id})</translation>
+    </message>
+    <message>
+        <source>present</source>
+        <translation>anwesend</translation>
+    </message>
+    <message>
+        <source>absent</source>
+        <translation>abwesend</translation>
+    </message>
+    <message>
+        <source>, from {time}</source>
+        <translation>, ab {time}</translation>
+    </message>
+    <message>
+        <source>, until {time}</source>
+        <translation>, bis {time}</translation>
+    </message>
+    <message>
+        <source>Space or click: mark present or absent for this shift</source>
+        <translation>Leertaste oder Klick: für diese Schicht als anwesend oder abwesend markieren</translation>
+    </message>
+    <message>
+        <source>How many machines {operator} runs at once (1 to {most})</source>
+        <translation>Wie viele Maschinen {operator} gleichzeitig bedient (1 bis {most})</translation>
+    </message>
+    <message>
+        <source>expired</source>
+        <translation>abgelaufen</translation>
+    </message>
+    <message>
+        <source>{mark} {days} d</source>
+        <translation>{mark} {days} T</translation>
+    </message>
+    <message>
+        <source>group</source>
+        <translation>Gruppe</translation>
+    </message>
+    <message>
+        <source>{operator} is not authorised for {machine} (Space or click: authorise)</source>
+        <translation>{operator} ist für {machine} nicht befugt (Leertaste oder Klick: befugen)</translation>
+    </message>
+    <message>
+        <source>{operator} for {machine}: {how}</source>
+        <translation>{operator} für {machine}: {how}</translation>
+    </message>
+    <message numerus="yes">
+        <source>, expired %n day(s) ago (counts as none)</source>
+        <translation>
+            <numerusform>, vor %n Tag abgelaufen (zählt nicht)</numerusform>
+            <numerusform>, vor %n Tagen abgelaufen (zählt nicht)</numerusform>
+        </translation>
+    </message>
+    <message numerus="yes">
+        <source>, expires in %n day(s)</source>
+        <translation>
+            <numerusform>, läuft in %n Tag ab</numerusform>
+            <numerusform>, läuft in %n Tagen ab</numerusform>
+        </translation>
+    </message>
+    <message>
+        <source>; a group authorisation is changed in the shop document</source>
+        <translation>; eine Gruppenbefugnis wird im Betriebsdokument geändert</translation>
+    </message>
+    <message>
+        <source>{machine}: runs unattended (needs no operator)</source>
+        <translation>{machine}: läuft unbeaufsichtigt (braucht keinen Bediener)</translation>
+    </message>
+    <message>
+        <source>(unattended)</source>
+        <translation>(unbeaufsichtigt)</translation>
+    </message>
+    <message>
+        <source>Rename {operator}</source>
+        <translation>{operator} umbenennen</translation>
+    </message>
+    <message numerus="yes">
+        <source>{operator} minds %n machine(s)</source>
+        <translation>
+            <numerusform>{operator} bedient %n Maschine</numerusform>
+            <numerusform>{operator} bedient %n Maschinen</numerusform>
+        </translation>
+    </message>
+    <message>
+        <source>{operator} present</source>
+        <translation>{operator} anwesend</translation>
+    </message>
+    <message>
+        <source>{operator} absent</source>
+        <translation>{operator} abwesend</translation>
+    </message>
+    <message>
+        <source>Authorise {operator} for {machine}</source>
+        <translation>{operator} für {machine} befugen</translation>
+    </message>
+    <message>
+        <source>Withdraw {operator} for {machine}</source>
+        <translation>Befugnis von {operator} für {machine} entziehen</translation>
+    </message>
+    <message>
+        <source>paste authorisations into the machine columns</source>
+        <translation>Befugnisse in die Maschinenspalten einfügen</translation>
+    </message>
+    <message>
+        <source>the pasted block (row {row}, column {column}) reaches past the last operator or machine</source>
+        <translation>der eingefügte Block (Zeile {row}, Spalte {column}) reicht über den letzten Bediener oder die letzte Maschine hinaus</translation>
+    </message>
+    <message>
+        <source>pasted row {row}, column {column}: {cell} is neither yes (1, x, yes) nor no (0, empty, no)</source>
+        <translation>eingefügte Zeile {row}, Spalte {column}: {cell} ist weder ja (1, x, ja) noch nein (0, leer, nein)</translation>
+    </message>
+</context>
+<context>
+    <name>CrewTab</name>
+    <message>
+        <source>Operators run only machines they are trained and authorised for; the site&apos;s training records decide, this table only repeats them.</source>
+        <translation>Bediener führen nur Maschinen, für die sie geschult und befugt sind; es gelten die Schulungsnachweise des Standorts, diese Tabelle gibt sie nur wieder.</translation>
+    </message>
+    <message>
+        <source>Crew</source>
+        <translation>Personal</translation>
+    </message>
+    <message>
+        <source>Operators of this shift, who is present, and what each is authorised to run</source>
+        <translation>Die Bediener dieser Schicht, wer anwesend ist und was jeder führen darf</translation>
+    </message>
+    <message>
+        <source>Crew table</source>
+        <translation>Personaltabelle</translation>
+    </message>
+    <message>
+        <source>One row per operator: present, machines minded at once, and a check for each machine they may run</source>
+        <translation>Eine Zeile je Bediener: anwesend, gleichzeitig bediente Maschinen und ein Haken für jede Maschine, die er führen darf</translation>
+    </message>
+    <message>
+        <source>This shop has no crew: plans do not staff machines. Add an operator to plan with who is here.</source>
+        <translation>Dieser Betrieb hat kein Personal: Pläne besetzen keine Maschinen. Einen Bediener hinzufügen, um mit den Anwesenden zu planen.</translation>
+    </message>
+    <message>
+        <source>No crew</source>
+        <translation>Kein Personal</translation>
+    </message>
+    <message>
+        <source>&amp;Add operator</source>
+        <translation>Bediener &amp;hinzufügen</translation>
+    </message>
+    <message>
+        <source>Add operator</source>
+        <translation>Bediener hinzufügen</translation>
+    </message>
+    <message>
+        <source>Add an operator to the crew (Ctrl+Z takes it back)</source>
+        <translation>Einen Bediener zum Personal hinzufügen (Strg+Z nimmt es zurück)</translation>
+    </message>
+    <message>
+        <source>Safety caution</source>
+        <translation>Sicherheitshinweis</translation>
+    </message>
+    <message>
+        <source>Add Operator {n}</source>
+        <translation>Bediener {n} hinzufügen</translation>
+    </message>
+    <message>
+        <source>paste into the crew refused: {problem}; nothing changed</source>
+        <translation>Einfügen ins Personal abgelehnt: {problem}; nichts geändert</translation>
+    </message>
+    <message numerus="yes">
+        <source>Paste %n authorisation(s)</source>
+        <translation>
+            <numerusform>%n Befugnis einfügen</numerusform>
+            <numerusform>%n Befugnisse einfügen</numerusform>
+        </translation>
+    </message>
+</context>
+<context>
     <name>DecisionDialog</name>
     <message>
         <source>⚠ Safety first: before anyone works on this machine, apply lockout/tagout and follow the site&apos;s isolation procedure. Operators run only machines they are trained and authorised for. Follow each machine&apos;s setup instructions. Local regulations and the site&apos;s safety rules take precedence over this plan.</source>

@@ -46,6 +46,40 @@
     </message>
 </context>
 <context>
+    <name>CrewModel</name>
+    <message numerus="yes">
+        <source>, expired %n day(s) ago (counts as none)</source>
+        <translation>
+            <numerusform>, expired %n day ago (counts as none)</numerusform>
+            <numerusform>, expired %n days ago (counts as none)</numerusform>
+        </translation>
+    </message>
+    <message numerus="yes">
+        <source>, expires in %n day(s)</source>
+        <translation>
+            <numerusform>, expires in %n day</numerusform>
+            <numerusform>, expires in %n days</numerusform>
+        </translation>
+    </message>
+    <message numerus="yes">
+        <source>{operator} minds %n machine(s)</source>
+        <translation>
+            <numerusform>{operator} minds %n machine</numerusform>
+            <numerusform>{operator} minds %n machines</numerusform>
+        </translation>
+    </message>
+</context>
+<context>
+    <name>CrewTab</name>
+    <message numerus="yes">
+        <source>Paste %n authorisation(s)</source>
+        <translation>
+            <numerusform>Paste %n authorisation</numerusform>
+            <numerusform>Paste %n authorisations</numerusform>
+        </translation>
+    </message>
+</context>
+<context>
     <name>GridEdits</name>
     <message numerus="yes">
         <source>Use changeover table in %n cell(s)</source>

@@ -273,6 +273,214 @@
     </message>
 </context>
 <context>
+    <name>CrewModel</name>
+    <message>
+        <source>Operator</source>
+        <extracomment>Heads of the leading columns (English; the model shows them translated).</extracomment>
+        <translation>Operario</translation>
+    </message>
+    <message>
+        <source>Present</source>
+        <translation>Presente</translation>
+    </message>
+    <message>
+        <source>Minds</source>
+        <translation>Atiende</translation>
+    </message>
+    <message>
+        <source>expired ({how})</source>
+        <extracomment>Words read as &quot;authorised&quot; / &quot;not authorised&quot; when a block is pasted.</extracomment>
+        <translation>caducada ({how})</translation>
+    </message>
+    <message>
+        <source>own authorisation</source>
+        <translation>autorización propia</translation>
+    </message>
+    <message>
+        <source>through group {group}</source>
+        <translation>a través del grupo {group}</translation>
+    </message>
+    <message>
+        <source>{operator} (id {id}): {notes}</source>
+        <translation>{operator} (id {id}): {notes}</translation>
+    </message>
+    <message>
+        <source>{operator} (id {id})</source>
+        <translation>{operator} (id {id})</translation>
+    </message>
+    <message>
+        <source>present</source>
+        <translation>presente</translation>
+    </message>
+    <message>
+        <source>absent</source>
+        <translation>ausente</translation>
+    </message>
+    <message>
+        <source>, from {time}</source>
+        <translation>, desde las {time}</translation>
+    </message>
+    <message>
+        <source>, until {time}</source>
+        <translation>, hasta las {time}</translation>
+    </message>
+    <message>
+        <source>Space or click: mark present or absent for this shift</source>
+        <translation>Espacio o clic: marcar presente o ausente en este turno</translation>
+    </message>
+    <message>
+        <source>How many machines {operator} runs at once (1 to {most})</source>
+        <translation>Cuántas máquinas atiende {operator} a la vez (de 1 a {most})</translation>
+    </message>
+    <message>
+        <source>expired</source>
+        <translation>caducada</translation>
+    </message>
+    <message>
+        <source>{mark} {days} d</source>
+        <translation>{mark} {days} d</translation>
+    </message>
+    <message>
+        <source>group</source>
+        <translation>grupo</translation>
+    </message>
+    <message>
+        <source>{operator} is not authorised for {machine} (Space or click: authorise)</source>
+        <translation>{operator} no está autorizado para {machine} (Espacio o clic: autorizar)</translation>
+    </message>
+    <message>
+        <source>{operator} for {machine}: {how}</source>
+        <translation>{operator} para {machine}: {how}</translation>
+    </message>
+    <message numerus="yes">
+        <source>, expired %n day(s) ago (counts as none)</source>
+        <translation>
+            <numerusform>, caducó hace %n día (no cuenta)</numerusform>
+            <numerusform>, caducó hace %n días (no cuenta)</numerusform>
+        </translation>
+    </message>
+    <message numerus="yes">
+        <source>, expires in %n day(s)</source>
+        <translation>
+            <numerusform>, caduca en %n día</numerusform>
+            <numerusform>, caduca en %n días</numerusform>
+        </translation>
+    </message>
+    <message>
+        <source>; a group authorisation is changed in the shop document</source>
+        <translation>; una autorización de grupo se cambia en el documento del taller</translation>
+    </message>
+    <message>
+        <source>{machine}: runs unattended (needs no operator)</source>
+        <translation>{machine}: funciona sin atención (no necesita operario)</translation>
+    </message>
+    <message>
+        <source>(unattended)</source>
+        <translation>(sin atención)</translation>
+    </message>
+    <message>
+        <source>Rename {operator}</source>
+        <translation>Renombrar a {operator}</translation>
+    </message>
+    <message numerus="yes">
+        <source>{operator} minds %n machine(s)</source>
+        <translation>
+            <numerusform>{operator} atiende %n máquina</numerusform>
+            <numerusform>{operator} atiende %n máquinas</numerusform>
+        </translation>
+    </message>
+    <message>
+        <source>{operator} present</source>
+        <translation>{operator} presente</translation>
+    </message>
+    <message>
+        <source>{operator} absent</source>
+        <translation>{operator} ausente</translation>
+    </message>
+    <message>
+        <source>Authorise {operator} for {machine}</source>
+        <translation>Autorizar a {operator} para {machine}</translation>
+    </message>
+    <message>
+        <source>Withdraw {operator} for {machine}</source>
+        <translation>Retirar la autorización de {operator} para {machine}</translation>
+    </message>
+    <message>
+        <source>paste authorisations into the machine columns</source>
+        <translation>pegue las autorizaciones en las columnas de máquinas</translation>
+    </message>
+    <message>
+        <source>the pasted block (row {row}, column {column}) reaches past the last operator or machine</source>
+        <translation>el bloque pegado (fila {row}, columna {column}) va más allá del último operario o máquina</translation>
+    </message>
+    <message>
+        <source>pasted row {row}, column {column}: {cell} is neither yes (1, x, yes) nor no (0, empty, no)</source>
+        <translation>fila pegada {row}, columna {column}: {cell} no es ni sí (1, x, sí) ni no (0, vacío, no)</translation>
+    </message>
+</context>
+<context>
+    <name>CrewTab</name>
+    <message>
+        <source>Operators run only machines they are trained and authorised for; the site&apos;s training records decide, this table only repeats them.</source>
+        <translation>Los operarios solo manejan las máquinas para las que están formados y autorizados; deciden los registros de formación de la planta, esta tabla solo los repite.</translation>
+    </message>
+    <message>
+        <source>Crew</source>
+        <translation>Personal</translation>
+    </message>
+    <message>
+        <source>Operators of this shift, who is present, and what each is authorised to run</source>
+        <translation>Los operarios de este turno, quién está presente y qué puede manejar cada uno</translation>
+    </message>
+    <message>
+        <source>Crew table</source>
+        <translation>Tabla de personal</translation>
+    </message>
+    <message>
+        <source>One row per operator: present, machines minded at once, and a check for each machine they may run</source>
+        <translation>Una fila por operario: presente, máquinas atendidas a la vez y una marca por cada máquina que puede manejar</translation>
+    </message>
+    <message>
+        <source>This shop has no crew: plans do not staff machines. Add an operator to plan with who is here.</source>
+        <translation>Este taller no tiene personal: los planes no asignan operarios a las máquinas. Añada un operario para planificar con quien está.</translation>
+    </message>
+    <message>
+        <source>No crew</source>
+        <translation>Sin personal</translation>
+    </message>
+    <message>
+        <source>&amp;Add operator</source>
+        <translation>&amp;Añadir operario</translation>
+    </message>
+    <message>
+        <source>Add operator</source>
+        <translation>Añadir operario</translation>
+    </message>
+    <message>
+        <source>Add an operator to the crew (Ctrl+Z takes it back)</source>
+        <translation>Añadir un operario al personal (Ctrl+Z lo deshace)</translation>
+    </message>
+    <message>
+        <source>Safety caution</source>
+        <translation>Advertencia de seguridad</translation>
+    </message>
+    <message>
+        <source>Add Operator {n}</source>
+        <translation>Añadir operario {n}</translation>
+    </message>
+    <message>
+        <source>paste into the crew refused: {problem}; nothing changed</source>
+        <translation>pegado en el personal rechazado: {problem}; no ha cambiado nada</translation>
+    </message>
+    <message numerus="yes">
+        <source>Paste %n authorisation(s)</source>
+        <translation>
+            <numerusform>Pegar %n autorización</numerusform>
+            <numerusform>Pegar %n autorizaciones</numerusform>
+        </translation>
+    </message>
+</context>
+<context>
     <name>DecisionDialog</name>
     <message>
         <source>⚠ Safety first: before anyone works on this machine, apply lockout/tagout and follow the site&apos;s isolation procedure. Operators run only machines they are trained and authorised for. Follow each machine&apos;s setup instructions. Local regulations and the site&apos;s safety rules take precedence over this plan.</source>
