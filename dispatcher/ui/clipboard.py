@@ -14,11 +14,14 @@ column of the block.
 
 from __future__ import annotations
 
+from PySide6.QtCore import QT_TRANSLATE_NOOP, QCoreApplication
+
 from dispatcher.io.grid import GridFileError, column_letter, parse_grid_text, table_from_rows
 from dispatcher.shop import Shop
 from dispatcher.ui.format import fmt
 
-SOURCE = "pasted block"
+SOURCE = QT_TRANSLATE_NOOP("Clipboard", "pasted block")   # the grid reader's source name
+translate = QCoreApplication.translate   # the name pyside6-lupdate collects
 
 
 class PasteError(ValueError):
@@ -37,7 +40,7 @@ def paste_changes(text: str, shop: Shop, anchor_row: int, anchor_col: int
     """``(row, machine col, value or None)`` for each pasted cell; raises :class:`PasteError`."""
     rows = _rows_of(text)
     if not rows or rows == [[""]]:
-        raise PasteError("the clipboard holds no text to paste")
+        raise PasteError(translate("Clipboard", "the clipboard holds no text to paste"))
     machines = {m.name: k for k, m in enumerate(shop.machines)}
     jobs = {j.name: i for i, j in enumerate(shop.jobs)}
     header = [c.strip() for c in rows[0][1:]]
@@ -49,8 +52,9 @@ def paste_changes(text: str, shop: Shop, anchor_row: int, anchor_col: int
             raise PasteError(str(exc)) from None
         unknown = [n for n in table.jobs if n not in jobs]
         if unknown:
-            raise PasteError(f"{SOURCE}: job(s) not in this shop: {', '.join(unknown[:5])}"
-                             + (" ..." if len(unknown) > 5 else ""))
+            raise PasteError(translate("Clipboard", "{source}: job(s) not in this shop: {jobs}").format(
+                source=translate("Clipboard", SOURCE),
+                jobs=", ".join(unknown[:5]) + (" ..." if len(unknown) > 5 else "")))
         out = []
         for i, job in enumerate(table.jobs):
             for k, machine in enumerate(table.machines):
@@ -60,10 +64,12 @@ def paste_changes(text: str, shop: Shop, anchor_row: int, anchor_col: int
     width = max(len(r) for r in rows)
     rows = [r + [""] * (width - len(r)) for r in rows]
     if anchor_row + len(rows) > len(shop.jobs) or anchor_col + width > len(shop.machines):
-        raise PasteError(f"{SOURCE}: {len(rows)} x {width} cells do not fit from "
-                         f"{shop.jobs[anchor_row].name} / {shop.machines[anchor_col].name}: the grid "
-                         f"has {len(shop.jobs) - anchor_row} rows and {len(shop.machines) - anchor_col} "
-                         "machine columns from there")
+        raise PasteError(translate(
+            "Clipboard", "{source}: {rows} x {width} cells do not fit from {job} / {machine}: the grid has "
+            "{free_rows} rows and {free_columns} machine columns from there").format(
+            source=translate("Clipboard", SOURCE), rows=len(rows), width=width, job=shop.jobs[anchor_row].name,
+            machine=shop.machines[anchor_col].name, free_rows=len(shop.jobs) - anchor_row,
+            free_columns=len(shop.machines) - anchor_col))
     # Give the plain block a synthetic header and job column so the grid reader checks it.
     framed = [[""] + [f"c{k}" for k in range(width)]] + [[f"r{i}"] + r for i, r in enumerate(rows)]
     try:
@@ -78,8 +84,9 @@ def paste_changes(text: str, shop: Shop, anchor_row: int, anchor_col: int
         msg = text[len(prefix) + 2:] if text.startswith(prefix + ": ") else text
         where = ""
         if exc.row is not None:
-            where = f"row {exc.row - 1}" + (f", column {exc.column - 1}" if exc.column else "") + ": "
-        raise PasteError(f"{SOURCE}: {where}{msg}") from None
+            where = (translate("Clipboard", "row {row}, column {column}: ") if exc.column else
+                     translate("Clipboard", "row {row}: ")).format(row=exc.row - 1, column=(exc.column or 1) - 1)
+        raise PasteError(f"{translate('Clipboard', SOURCE)}: {where}{msg}") from None
     return [(anchor_row + i, anchor_col + k,
              float(table.values[i, k]) if table.allowed[i, k] else None)
             for i in range(len(rows)) for k in range(width)]

@@ -50,13 +50,13 @@ class GridEdits(QObject):
         rows, cols = self.view.selected_block()
         if rows and cols:
             QGuiApplication.clipboard().setText(copy_block(self.doc.shop, rows, cols, with_names))
-            self.status(f"Copied {len(rows)} x {len(cols)} cells")
+            self.status(self.tr("Copied {rows} x {columns} cells").format(rows=len(rows), columns=len(cols)))
 
     def paste_text(self, text: str) -> bool:
         """Paste a tab-separated block at the current cell (one undoable edit)."""
         cell = self.view.current_cell() or (0, 0)
         if not self.doc.n_jobs() or not self.doc.n_machines():
-            self.show_warning("nothing to paste into: the shop has no jobs or machines")
+            self.show_warning(self.tr("nothing to paste into: the shop has no jobs or machines"))
             return False
         try:
             changes = paste_changes(text, self.doc.shop, *cell)
@@ -65,8 +65,8 @@ class GridEdits(QObject):
             return False
         changes = [c for c in changes if self.doc.value_at(c[0], c[1]) != c[2]]
         if changes:
-            self.doc.undo_stack.push(SetValues(self.doc, changes, f"Paste {len(changes)} cells"))
-        self.status(f"Pasted; {len(changes)} cells changed")
+            self.doc.undo_stack.push(SetValues(self.doc, changes, self.tr("Paste %n cell(s)", "", len(changes))))
+        self.status(self.tr("Pasted; %n cell(s) changed", "", len(changes)))
         return True
 
     def paste(self) -> None:
@@ -76,24 +76,25 @@ class GridEdits(QObject):
         rows, cols = self.view.selected_block()
         changes = [(r, c, None) for r in rows for c in cols if self.doc.value_at(r, c) is not None]
         if changes:
-            self.doc.undo_stack.push(SetValues(self.doc, changes, f"Mark {len(changes)} cells cannot run"))
+            self.doc.undo_stack.push(SetValues(self.doc, changes,
+                                               self.tr("Mark %n cell(s) cannot run", "", len(changes))))
 
     def pin(self, kind: str | None) -> None:
         cell = self.view.current_cell()
         if cell is None:
-            self.show_warning("choose a cell in a machine column first")
+            self.show_warning(self.tr("choose a cell in a machine column first"))
             return
         row, col = cell
         job, machine = self.doc.job_at(row), self.doc.machine_at(col)
         if self.doc.pin_at(row, col) == kind:
             return
-        text = {MUST: f"Pin {job.name} to {machine.name}",
-                MUST_NOT: f"Forbid {job.name} on {machine.name}",
-                None: f"Clear pin of {job.name} on {machine.name}"}[kind]
+        text = {MUST: self.tr("Pin {job} to {machine}"),
+                MUST_NOT: self.tr("Forbid {job} on {machine}"),
+                None: self.tr("Clear pin of {job} on {machine}")}[kind].format(job=job.name, machine=machine.name)
         self.doc.undo_stack.push(SetPin(self.doc, row, col, kind, text))
 
     def ask_add_job(self) -> None:
-        name, ok = QInputDialog.getText(self.window, "Add job", "Name of the new job (unique):")
+        name, ok = QInputDialog.getText(self.window, self.tr("Add job"), self.tr("Name of the new job (unique):"))
         if ok:
             self.add_job(name)
 
@@ -101,26 +102,27 @@ class GridEdits(QObject):
         """Append a waiting job (every machine 'cannot run' until values are typed in)."""
         name = name.strip()
         if not name or name in self.doc.shop.job_names():
-            self.show_warning(f"job name {name!r} is empty or already used")
+            self.show_warning(self.tr("job name {name} is empty or already used").format(name=repr(name)))
             return False
         job = Job(id=_new_id("J", [j.id for j in self.doc.shop.jobs]), name=name)
-        self.doc.undo_stack.push(AddJob(self.doc, job, f"Add job {name}"))
+        self.doc.undo_stack.push(AddJob(self.doc, job, self.tr("Add job {name}").format(name=name)))
         self.view.setCurrentIndex(self.model.index(self.doc.n_jobs() - 1, FIRST_MACHINE_COL))
-        self.status(f"Added {name}: type its values; Ctrl+R if it is a rush job", 8000)
+        self.status(self.tr("Added {name}: type its values; Ctrl+R if it is a rush job").format(name=name), 8000)
         return True
 
     def ask_add_machine(self) -> None:
-        name, ok = QInputDialog.getText(self.window, "Add machine", "Name of the new machine (unique):")
+        name, ok = QInputDialog.getText(self.window, self.tr("Add machine"),
+                                        self.tr("Name of the new machine (unique):"))
         if ok:
             self.add_machine(name)
 
     def add_machine(self, name: str) -> bool:
         name = name.strip()
         if not name or name in self.doc.shop.machine_names():
-            self.show_warning(f"machine name {name!r} is empty or already used")
+            self.show_warning(self.tr("machine name {name} is empty or already used").format(name=repr(name)))
             return False
         machine = Machine(id=_new_id("M", [m.id for m in self.doc.shop.machines]), name=name)
-        self.doc.undo_stack.push(AddMachine(self.doc, machine, f"Add machine {name}"))
+        self.doc.undo_stack.push(AddMachine(self.doc, machine, self.tr("Add machine {name}").format(name=name)))
         return True
 
     def job_done(self) -> None:
@@ -132,26 +134,29 @@ class GridEdits(QObject):
             return
         self.doc.undo_stack.push(SetJobsState(self.doc, [(row, {"state": DONE, "machine": None,
                                                                 "since": None})],
-                                              f"{job.name} done"))
+                                              self.tr("{job} done").format(job=job.name)))
 
     def ask_penalty(self) -> None:
         row = self.view.current_row()
         if row is None:
             return
         job = self.doc.job_at(row)
-        value, ok = QInputDialog.getDouble(self.window, "Wait penalty", f"Cost of leaving {job.name} waiting:",
+        value, ok = QInputDialog.getDouble(self.window, self.tr("Wait penalty"),
+                                           self.tr("Cost of leaving {job} waiting:").format(job=job.name),
                                            job.wait_penalty, 0.0, 1e12, 2)
         if ok and value != job.wait_penalty:
             self.doc.undo_stack.push(SetJobField(self.doc, row, "wait_penalty", value,
-                                                 f"Wait penalty of {job.name}"))
+                                                 self.tr("Wait penalty of {job}").format(job=job.name)))
 
     def ask_slots(self) -> None:
         col = self.view.current_machine()
         if col is None:
-            self.show_warning("choose a cell in a machine column first")
+            self.show_warning(self.tr("choose a cell in a machine column first"))
             return
         m = self.doc.machine_at(col)
-        value, ok = QInputDialog.getInt(self.window, "Slots", f"Jobs {m.name} takes per round:", m.slots, 1, 100)
+        value, ok = QInputDialog.getInt(self.window, self.tr("Slots"),
+                                        self.tr("Jobs {machine} takes per round:").format(machine=m.name),
+                                        m.slots, 1, 100)
         if ok:
             self.set_slots(col, value)
 
@@ -159,7 +164,8 @@ class GridEdits(QObject):
         m = self.doc.machine_at(col)
         if slots != m.slots:
             self.doc.undo_stack.push(SetMachineFields(self.doc, col, {"slots": slots},
-                                                      f"{m.name} takes {slots} job(s)"))
+                                                      self.tr("{machine} takes %n job(s)", "", slots).format(
+                                                          machine=m.name)))
 
     def toggle_maintenance(self) -> None:
         col = self.view.current_machine()
@@ -169,7 +175,8 @@ class GridEdits(QObject):
         state = UP if m.state == MAINTENANCE else MAINTENANCE
         self.doc.undo_stack.push(SetMachineFields(
             self.doc, col, {"state": state, "state_changed": datetime.now(timezone.utc)},
-            f"{m.name}: {state}"))
+            (self.tr("{machine}: in maintenance") if state == MAINTENANCE else
+             self.tr("{machine}: up")).format(machine=m.name)))
 
 
     # ---- changeovers ----------------------------------------------------------------------

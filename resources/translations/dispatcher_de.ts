@@ -273,6 +273,33 @@
     </message>
 </context>
 <context>
+    <name>Clipboard</name>
+    <message>
+        <source>pasted block</source>
+        <translation>eingefügter Block</translation>
+    </message>
+    <message>
+        <source>the clipboard holds no text to paste</source>
+        <translation>die Zwischenablage enthält keinen Text zum Einfügen</translation>
+    </message>
+    <message>
+        <source>{source}: job(s) not in this shop: {jobs}</source>
+        <translation>{source}: Auftrag/Aufträge nicht in diesem Betrieb: {jobs}</translation>
+    </message>
+    <message>
+        <source>{source}: {rows} x {width} cells do not fit from {job} / {machine}: the grid has {free_rows} rows and {free_columns} machine columns from there</source>
+        <translation>{source}: {rows} x {width} Zellen passen nicht ab {job} / {machine}: das Raster hat von dort {free_rows} Zeilen und {free_columns} Maschinenspalten</translation>
+    </message>
+    <message>
+        <source>row {row}, column {column}: </source>
+        <translation>Zeile {row}, Spalte {column}: </translation>
+    </message>
+    <message>
+        <source>row {row}: </source>
+        <translation>Zeile {row}: </translation>
+    </message>
+</context>
+<context>
     <name>CrewModel</name>
     <message>
         <source>Operator</source>
@@ -968,6 +995,122 @@ Der gültige Plan bleibt unverändert.</translation>
     <message>
         <source>choose a cell in a machine column first</source>
         <translation>zuerst eine Zelle in einer Maschinenspalte wählen</translation>
+    </message>
+    <message>
+        <source>Copied {rows} x {columns} cells</source>
+        <translation>{rows} x {columns} Zellen kopiert</translation>
+    </message>
+    <message>
+        <source>nothing to paste into: the shop has no jobs or machines</source>
+        <translation>nichts zum Einfügen: der Betrieb hat keine Aufträge oder Maschinen</translation>
+    </message>
+    <message numerus="yes">
+        <source>Paste %n cell(s)</source>
+        <translation>
+            <numerusform>%n Zelle einfügen</numerusform>
+            <numerusform>%n Zellen einfügen</numerusform>
+        </translation>
+    </message>
+    <message numerus="yes">
+        <source>Pasted; %n cell(s) changed</source>
+        <translation>
+            <numerusform>Eingefügt; %n Zelle geändert</numerusform>
+            <numerusform>Eingefügt; %n Zellen geändert</numerusform>
+        </translation>
+    </message>
+    <message numerus="yes">
+        <source>Mark %n cell(s) cannot run</source>
+        <translation>
+            <numerusform>%n Zelle als nicht möglich markieren</numerusform>
+            <numerusform>%n Zellen als nicht möglich markieren</numerusform>
+        </translation>
+    </message>
+    <message>
+        <source>Pin {job} to {machine}</source>
+        <translation>{job} auf {machine} festlegen</translation>
+    </message>
+    <message>
+        <source>Forbid {job} on {machine}</source>
+        <translation>{job} auf {machine} verbieten</translation>
+    </message>
+    <message>
+        <source>Clear pin of {job} on {machine}</source>
+        <translation>Festlegung von {job} auf {machine} aufheben</translation>
+    </message>
+    <message>
+        <source>Add job</source>
+        <translation>Auftrag hinzufügen</translation>
+    </message>
+    <message>
+        <source>Name of the new job (unique):</source>
+        <translation>Name des neuen Auftrags (eindeutig):</translation>
+    </message>
+    <message>
+        <source>job name {name} is empty or already used</source>
+        <translation>Auftragsname {name} ist leer oder schon vergeben</translation>
+    </message>
+    <message>
+        <source>Add job {name}</source>
+        <translation>Auftrag {name} hinzufügen</translation>
+    </message>
+    <message>
+        <source>Added {name}: type its values; Ctrl+R if it is a rush job</source>
+        <translation>{name} hinzugefügt: seine Werte eingeben; Strg+R, wenn es ein Eilauftrag ist</translation>
+    </message>
+    <message>
+        <source>Add machine</source>
+        <translation>Maschine hinzufügen</translation>
+    </message>
+    <message>
+        <source>Name of the new machine (unique):</source>
+        <translation>Name der neuen Maschine (eindeutig):</translation>
+    </message>
+    <message>
+        <source>machine name {name} is empty or already used</source>
+        <translation>Maschinenname {name} ist leer oder schon vergeben</translation>
+    </message>
+    <message>
+        <source>Add machine {name}</source>
+        <translation>Maschine {name} hinzufügen</translation>
+    </message>
+    <message>
+        <source>{job} done</source>
+        <translation>{job} erledigt</translation>
+    </message>
+    <message>
+        <source>Wait penalty</source>
+        <translation>Wartekosten</translation>
+    </message>
+    <message>
+        <source>Cost of leaving {job} waiting:</source>
+        <translation>Kosten, wenn {job} warten muss:</translation>
+    </message>
+    <message>
+        <source>Wait penalty of {job}</source>
+        <translation>Wartekosten von {job}</translation>
+    </message>
+    <message>
+        <source>Slots</source>
+        <translation>Plätze</translation>
+    </message>
+    <message>
+        <source>Jobs {machine} takes per round:</source>
+        <translation>Aufträge, die {machine} je Runde übernimmt:</translation>
+    </message>
+    <message numerus="yes">
+        <source>{machine} takes %n job(s)</source>
+        <translation>
+            <numerusform>{machine} übernimmt %n Auftrag</numerusform>
+            <numerusform>{machine} übernimmt %n Aufträge</numerusform>
+        </translation>
+    </message>
+    <message>
+        <source>{machine}: in maintenance</source>
+        <translation>{machine}: in Wartung</translation>
+    </message>
+    <message>
+        <source>{machine}: up</source>
+        <translation>{machine}: bereit</translation>
     </message>
     <message>
         <source>(nothing mounted)</source>

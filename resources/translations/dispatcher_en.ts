@@ -82,6 +82,34 @@
 <context>
     <name>GridEdits</name>
     <message numerus="yes">
+        <source>Paste %n cell(s)</source>
+        <translation>
+            <numerusform>Paste %n cell</numerusform>
+            <numerusform>Paste %n cells</numerusform>
+        </translation>
+    </message>
+    <message numerus="yes">
+        <source>Pasted; %n cell(s) changed</source>
+        <translation>
+            <numerusform>Pasted; %n cell changed</numerusform>
+            <numerusform>Pasted; %n cells changed</numerusform>
+        </translation>
+    </message>
+    <message numerus="yes">
+        <source>Mark %n cell(s) cannot run</source>
+        <translation>
+            <numerusform>Mark %n cell cannot run</numerusform>
+            <numerusform>Mark %n cells cannot run</numerusform>
+        </translation>
+    </message>
+    <message numerus="yes">
+        <source>{machine} takes %n job(s)</source>
+        <translation>
+            <numerusform>{machine} takes %n job</numerusform>
+            <numerusform>{machine} takes %n jobs</numerusform>
+        </translation>
+    </message>
+    <message numerus="yes">
         <source>Use changeover table in %n cell(s)</source>
         <translation>
             <numerusform>Use changeover table in %n cell</numerusform>

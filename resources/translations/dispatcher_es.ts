@@ -273,6 +273,33 @@
     </message>
 </context>
 <context>
+    <name>Clipboard</name>
+    <message>
+        <source>pasted block</source>
+        <translation>bloque pegado</translation>
+    </message>
+    <message>
+        <source>the clipboard holds no text to paste</source>
+        <translation>el portapapeles no contiene texto que pegar</translation>
+    </message>
+    <message>
+        <source>{source}: job(s) not in this shop: {jobs}</source>
+        <translation>{source}: trabajo(s) que no están en este taller: {jobs}</translation>
+    </message>
+    <message>
+        <source>{source}: {rows} x {width} cells do not fit from {job} / {machine}: the grid has {free_rows} rows and {free_columns} machine columns from there</source>
+        <translation>{source}: {rows} x {width} celdas no caben desde {job} / {machine}: la cuadrícula tiene desde ahí {free_rows} filas y {free_columns} columnas de máquina</translation>
+    </message>
+    <message>
+        <source>row {row}, column {column}: </source>
+        <translation>fila {row}, columna {column}: </translation>
+    </message>
+    <message>
+        <source>row {row}: </source>
+        <translation>fila {row}: </translation>
+    </message>
+</context>
+<context>
     <name>CrewModel</name>
     <message>
         <source>Operator</source>
@@ -968,6 +995,122 @@ El plan vigente no cambia.</translation>
     <message>
         <source>choose a cell in a machine column first</source>
         <translation>elija primero una celda en una columna de máquina</translation>
+    </message>
+    <message>
+        <source>Copied {rows} x {columns} cells</source>
+        <translation>{rows} x {columns} celdas copiadas</translation>
+    </message>
+    <message>
+        <source>nothing to paste into: the shop has no jobs or machines</source>
+        <translation>no hay dónde pegar: el taller no tiene trabajos ni máquinas</translation>
+    </message>
+    <message numerus="yes">
+        <source>Paste %n cell(s)</source>
+        <translation>
+            <numerusform>Pegar %n celda</numerusform>
+            <numerusform>Pegar %n celdas</numerusform>
+        </translation>
+    </message>
+    <message numerus="yes">
+        <source>Pasted; %n cell(s) changed</source>
+        <translation>
+            <numerusform>Pegado; %n celda cambiada</numerusform>
+            <numerusform>Pegado; %n celdas cambiadas</numerusform>
+        </translation>
+    </message>
+    <message numerus="yes">
+        <source>Mark %n cell(s) cannot run</source>
+        <translation>
+            <numerusform>Marcar %n celda como no puede</numerusform>
+            <numerusform>Marcar %n celdas como no puede</numerusform>
+        </translation>
+    </message>
+    <message>
+        <source>Pin {job} to {machine}</source>
+        <translation>Fijar {job} a {machine}</translation>
+    </message>
+    <message>
+        <source>Forbid {job} on {machine}</source>
+        <translation>Prohibir {job} en {machine}</translation>
+    </message>
+    <message>
+        <source>Clear pin of {job} on {machine}</source>
+        <translation>Quitar la fijación de {job} en {machine}</translation>
+    </message>
+    <message>
+        <source>Add job</source>
+        <translation>Añadir trabajo</translation>
+    </message>
+    <message>
+        <source>Name of the new job (unique):</source>
+        <translation>Nombre del trabajo nuevo (único):</translation>
+    </message>
+    <message>
+        <source>job name {name} is empty or already used</source>
+        <translation>el nombre de trabajo {name} está vacío o ya se usa</translation>
+    </message>
+    <message>
+        <source>Add job {name}</source>
+        <translation>Añadir el trabajo {name}</translation>
+    </message>
+    <message>
+        <source>Added {name}: type its values; Ctrl+R if it is a rush job</source>
+        <translation>{name} añadido: escriba sus valores; Ctrl+R si es un trabajo urgente</translation>
+    </message>
+    <message>
+        <source>Add machine</source>
+        <translation>Añadir máquina</translation>
+    </message>
+    <message>
+        <source>Name of the new machine (unique):</source>
+        <translation>Nombre de la máquina nueva (único):</translation>
+    </message>
+    <message>
+        <source>machine name {name} is empty or already used</source>
+        <translation>el nombre de máquina {name} está vacío o ya se usa</translation>
+    </message>
+    <message>
+        <source>Add machine {name}</source>
+        <translation>Añadir la máquina {name}</translation>
+    </message>
+    <message>
+        <source>{job} done</source>
+        <translation>{job} terminado</translation>
+    </message>
+    <message>
+        <source>Wait penalty</source>
+        <translation>Penalización por espera</translation>
+    </message>
+    <message>
+        <source>Cost of leaving {job} waiting:</source>
+        <translation>Coste de dejar esperando {job}:</translation>
+    </message>
+    <message>
+        <source>Wait penalty of {job}</source>
+        <translation>Penalización por espera de {job}</translation>
+    </message>
+    <message>
+        <source>Slots</source>
+        <translation>Puestos</translation>
+    </message>
+    <message>
+        <source>Jobs {machine} takes per round:</source>
+        <translation>Trabajos que acepta {machine} por ronda:</translation>
+    </message>
+    <message numerus="yes">
+        <source>{machine} takes %n job(s)</source>
+        <translation>
+            <numerusform>{machine} acepta %n trabajo</numerusform>
+            <numerusform>{machine} acepta %n trabajos</numerusform>
+        </translation>
+    </message>
+    <message>
+        <source>{machine}: in maintenance</source>
+        <translation>{machine}: en mantenimiento</translation>
+    </message>
+    <message>
+        <source>{machine}: up</source>
+        <translation>{machine}: en marcha</translation>
     </message>
     <message>
         <source>(nothing mounted)</source>
