@@ -233,6 +233,9 @@ class DecisionDialog(QDialog):
         ok.setAccessibleName(self.tr("Confirm and record"))
         ok.setAccessibleDescription(self.tr("Record the decision in the history and put the plan in force"))
         ok.setEnabled(proposal.plan is not None and bool(supervisor.strip()))
+        cancel = self.buttons.button(QDialogButtonBox.StandardButton.Cancel)
+        cancel.setAccessibleName(self.tr("Cancel"))
+        cancel.setAccessibleDescription(self.tr("Close without recording; the plan in force stays"))
         self.by.textChanged.connect(
             lambda t: ok.setEnabled(proposal.plan is not None and bool(t.strip())))
         self.buttons.accepted.connect(self._accept)

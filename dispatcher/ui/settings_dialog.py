@@ -199,6 +199,12 @@ class SettingsDialog(QDialog):
 
         self.buttons = QDialogButtonBox(QDialogButtonBox.StandardButton.Ok
                                         | QDialogButtonBox.StandardButton.Cancel)
+        ok = self.buttons.button(QDialogButtonBox.StandardButton.Ok)
+        ok.setAccessibleName(self.tr("Apply settings"))
+        ok.setAccessibleDescription(self.tr("Use these settings; a refused history file keeps the dialog open"))
+        cancel = self.buttons.button(QDialogButtonBox.StandardButton.Cancel)
+        cancel.setAccessibleName(self.tr("Cancel"))
+        cancel.setAccessibleDescription(self.tr("Close without changing anything"))
         self.buttons.accepted.connect(self.apply)
         self.buttons.rejected.connect(self.reject)
         layout.addWidget(self.buttons)

@@ -625,6 +625,14 @@
         <source>Record the decision in the history and put the plan in force</source>
         <translation>Die Entscheidung im Verlauf erfassen und den Plan in Kraft setzen</translation>
     </message>
+    <message>
+        <source>Cancel</source>
+        <translation>Abbrechen</translation>
+    </message>
+    <message>
+        <source>Close without recording; the plan in force stays</source>
+        <translation>Schließen, ohne zu erfassen; der gültige Plan bleibt</translation>
+    </message>
 </context>
 <context>
     <name>DecisionDiff</name>
@@ -2667,6 +2675,22 @@ Entscheidungen werden weiter in {path} erfasst.</translation>
     <message>
         <source>&amp;Language:</source>
         <translation>S&amp;prache:</translation>
+    </message>
+    <message>
+        <source>Apply settings</source>
+        <translation>Einstellungen übernehmen</translation>
+    </message>
+    <message>
+        <source>Use these settings; a refused history file keeps the dialog open</source>
+        <translation>Diese Einstellungen verwenden; bei einer abgelehnten Verlaufsdatei bleibt der Dialog offen</translation>
+    </message>
+    <message>
+        <source>Cancel</source>
+        <translation>Abbrechen</translation>
+    </message>
+    <message>
+        <source>Close without changing anything</source>
+        <translation>Schließen, ohne etwas zu ändern</translation>
     </message>
 </context>
 <context>

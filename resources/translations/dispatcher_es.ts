@@ -625,6 +625,14 @@
         <source>Record the decision in the history and put the plan in force</source>
         <translation>Registrar la decisión en el historial y poner el plan en vigor</translation>
     </message>
+    <message>
+        <source>Cancel</source>
+        <translation>Cancelar</translation>
+    </message>
+    <message>
+        <source>Close without recording; the plan in force stays</source>
+        <translation>Cerrar sin registrar; el plan vigente se mantiene</translation>
+    </message>
 </context>
 <context>
     <name>DecisionDiff</name>
@@ -2667,6 +2675,22 @@ Las decisiones se siguen registrando en {path}.</translation>
     <message>
         <source>&amp;Language:</source>
         <translation>&amp;Idioma:</translation>
+    </message>
+    <message>
+        <source>Apply settings</source>
+        <translation>Aplicar la configuración</translation>
+    </message>
+    <message>
+        <source>Use these settings; a refused history file keeps the dialog open</source>
+        <translation>Usar esta configuración; si se rechaza el archivo de historial, el diálogo sigue abierto</translation>
+    </message>
+    <message>
+        <source>Cancel</source>
+        <translation>Cancelar</translation>
+    </message>
+    <message>
+        <source>Close without changing anything</source>
+        <translation>Cerrar sin cambiar nada</translation>
     </message>
 </context>
 <context>
