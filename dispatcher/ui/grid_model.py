@@ -398,6 +398,8 @@ class GridModel(QAbstractTableModel):
             state = f"{mark} {self.tr(word)}" if m.state in STATE_TEXT else m.state
             slots = f" \u00d7{m.slots}" if m.slots != 1 else ""
             who = self._operators.get(m.name)
+            if who == "unattended":   # operators_by_machine's word for a machine needing no one
+                who = self.tr("unattended")
             table = shop.table_of(m.id) if shop.changeover_tables else None
             mounted = ""
             if table is not None or m.mounted is not None or m.end_family is not None:

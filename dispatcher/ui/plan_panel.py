@@ -248,7 +248,8 @@ class PlanPanel(QWidget):
         entries_by_machine = machine_entries(plan, machine_order)
         hours = shift_hours(plan)
         staffing = getattr(plan, "staffing", None)
-        minder = operators_by_machine(staffing)
+        minder = {m: self.tr("unattended") if who == "unattended" else who   # operators_by_machine's word
+                  for m, who in operators_by_machine(staffing).items()}
         machines = QTreeWidgetItem(self.tree, [self.tr("Machines (%n)", "", len(entries_by_machine)), "", ""])
         machines.setFirstColumnSpanned(True)
         for machine, entries in entries_by_machine:

@@ -1355,6 +1355,10 @@ A machine&apos;s state in a sentence (English; shown translated).</extracomment>
         <source>Where the plan shown puts each job</source>
         <translation>Wohin der angezeigte Plan jeden Auftrag setzt</translation>
     </message>
+    <message>
+        <source>unattended</source>
+        <translation>unbeaufsichtigt</translation>
+    </message>
     <message numerus="yes">
         <source>{machine}: {state}, takes %n job(s) per round</source>
         <translation>
@@ -2388,6 +2392,10 @@ A machine&apos;s state in a sentence (English; shown translated).</extracomment>
     <message>
         <source>; largest value {value}</source>
         <translation>; größter Wert {value}</translation>
+    </message>
+    <message>
+        <source>unattended</source>
+        <translation>unbeaufsichtigt</translation>
     </message>
     <message numerus="yes">
         <source>Machines (%n)</source>

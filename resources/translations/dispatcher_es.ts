@@ -1355,6 +1355,10 @@ A machine&apos;s state in a sentence (English; shown translated).</extracomment>
         <source>Where the plan shown puts each job</source>
         <translation>Dónde pone el plan mostrado cada trabajo</translation>
     </message>
+    <message>
+        <source>unattended</source>
+        <translation>sin atención</translation>
+    </message>
     <message numerus="yes">
         <source>{machine}: {state}, takes %n job(s) per round</source>
         <translation>
@@ -2388,6 +2392,10 @@ A machine&apos;s state in a sentence (English; shown translated).</extracomment>
     <message>
         <source>; largest value {value}</source>
         <translation>; valor máximo {value}</translation>
+    </message>
+    <message>
+        <source>unattended</source>
+        <translation>sin atención</translation>
     </message>
     <message numerus="yes">
         <source>Machines (%n)</source>
