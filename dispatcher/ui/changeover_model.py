@@ -9,7 +9,7 @@ derived values follow through the document's signals.
 
 from __future__ import annotations
 
-from PySide6.QtCore import QAbstractTableModel, QModelIndex, QPersistentModelIndex, Qt, Signal
+from PySide6.QtCore import QAbstractTableModel, QCoreApplication, QModelIndex, QPersistentModelIndex, Qt, Signal
 
 from dispatcher.ui import palette
 from dispatcher.ui.document import ShopDocument
@@ -17,6 +17,7 @@ from dispatcher.ui.edits import SetChanges
 from dispatcher.ui.format import CellTextError, fmt, parse_cell
 
 ChangeRole = Qt.ItemDataRole.UserRole + 1  # float | None: the entry (None = not allowed)
+translate = QCoreApplication.translate  # the name pyside6-lupdate collects
 
 
 class ChangePasteError(ValueError):
@@ -43,7 +44,7 @@ def paste_entries(
     """
     rows = _rows_of(text)
     if not rows or rows == [[""]]:
-        raise ChangePasteError("the clipboard holds no text to paste")
+        raise ChangePasteError(translate("ChangeoverModel", "the clipboard holds no text to paste"))
     from_names = [*families, None]
     header = [c.strip() for c in rows[0][1:]]
     named = len(rows) > 1 and any(header) and all(h in families for h in header if h)
@@ -56,7 +57,11 @@ def paste_entries(
             elif label in families:
                 frm = label
             else:
-                raise ChangePasteError(f"pasted block: row {r}, column 1: {label!r} is not a family of this table")
+                raise ChangePasteError(
+                    translate(
+                        "ChangeoverModel", "pasted block: row {row}, column 1: {label} is not a family of this table"
+                    ).format(row=r, label=repr(label))
+                )
             for c, to in enumerate(header, start=2):
                 if not to:
                     continue
@@ -66,9 +71,16 @@ def paste_entries(
     width = max(len(r) for r in rows)
     if anchor_row + len(rows) > len(from_names) or anchor_col + width > len(families):
         raise ChangePasteError(
-            f"pasted block: {len(rows)} x {width} cells do not fit from the current "
-            f"cell: the table has {len(from_names) - anchor_row} rows and "
-            f"{len(families) - anchor_col} columns from there"
+            translate(
+                "ChangeoverModel",
+                "pasted block: {rows} x {width} cells do not fit from the current cell: the table has "
+                "{free_rows} rows and {free_columns} columns from there",
+            ).format(
+                rows=len(rows),
+                width=width,
+                free_rows=len(from_names) - anchor_row,
+                free_columns=len(families) - anchor_col,
+            )
         )
     for r, row in enumerate(rows):
         for c in range(width):
@@ -83,8 +95,9 @@ def _number(cell: str, row: int, column: int, frm: str | None, to: str, empty_na
         return parse_cell(cell)
     except CellTextError as exc:
         raise ChangePasteError(
-            f"pasted block: row {row}, column {column} (change from "
-            f"{frm if frm is not None else empty_name} to {to}): {exc}"
+            translate(
+                "ChangeoverModel", "pasted block: row {row}, column {column} (change from {a} to {b}): {problem}"
+            ).format(row=row, column=column, a=frm if frm is not None else empty_name, b=to, problem=exc)
         ) from None
 
 

@@ -152,6 +152,22 @@
 <context>
     <name>ChangeoverModel</name>
     <message>
+        <source>the clipboard holds no text to paste</source>
+        <translation>die Zwischenablage enthält keinen Text zum Einfügen</translation>
+    </message>
+    <message>
+        <source>pasted block: row {row}, column 1: {label} is not a family of this table</source>
+        <translation>eingefügter Block: Zeile {row}, Spalte 1: {label} ist keine Familie dieser Tabelle</translation>
+    </message>
+    <message>
+        <source>pasted block: {rows} x {width} cells do not fit from the current cell: the table has {free_rows} rows and {free_columns} columns from there</source>
+        <translation>eingefügter Block: {rows} x {width} Zellen passen nicht ab der aktuellen Zelle: die Tabelle hat von dort {free_rows} Zeilen und {free_columns} Spalten</translation>
+    </message>
+    <message>
+        <source>pasted block: row {row}, column {column} (change from {a} to {b}): {problem}</source>
+        <translation>eingefügter Block: Zeile {row}, Spalte {column} (Wechsel von {a} auf {b}): {problem}</translation>
+    </message>
+    <message>
         <source>nothing mounted</source>
         <translation>nichts gerüstet</translation>
     </message>

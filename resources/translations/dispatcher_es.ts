@@ -152,6 +152,22 @@
 <context>
     <name>ChangeoverModel</name>
     <message>
+        <source>the clipboard holds no text to paste</source>
+        <translation>el portapapeles no contiene texto que pegar</translation>
+    </message>
+    <message>
+        <source>pasted block: row {row}, column 1: {label} is not a family of this table</source>
+        <translation>bloque pegado: fila {row}, columna 1: {label} no es una familia de esta tabla</translation>
+    </message>
+    <message>
+        <source>pasted block: {rows} x {width} cells do not fit from the current cell: the table has {free_rows} rows and {free_columns} columns from there</source>
+        <translation>bloque pegado: {rows} x {width} celdas no caben desde la celda actual: la tabla tiene desde ahí {free_rows} filas y {free_columns} columnas</translation>
+    </message>
+    <message>
+        <source>pasted block: row {row}, column {column} (change from {a} to {b}): {problem}</source>
+        <translation>bloque pegado: fila {row}, columna {column} (cambio de {a} a {b}): {problem}</translation>
+    </message>
+    <message>
         <source>nothing mounted</source>
         <translation>nada montado</translation>
     </message>
