@@ -105,7 +105,7 @@ def test_expiring_authorisation_is_marked_and_add_operator_is_undoable(qtbot, op
     welder = [o.label for o in _crew(window).operators].index("Welder (manual)")
     cell = model.index(welder, FIRST_MACHINE + 3)
     assert "7 d" in model.data(cell, Qt.ItemDataRole.DisplayRole)
-    assert "expires in 7 day(s)" in model.data(cell, Qt.ItemDataRole.ToolTipRole)
+    assert "expires in 7 days" in model.data(cell, Qt.ItemDataRole.ToolTipRole)
     assert model.data(cell, Qt.ItemDataRole.BackgroundRole) is not None
     n = len(_crew(window).operators)
     qtbot.mouseClick(window.crew_tab.add, Qt.MouseButton.LeftButton)

@@ -100,7 +100,7 @@ def test_maintenance_slots_and_wait_penalty_from_the_menus(qtbot, open_window):
     answer_next_dialog(lambda d: d.setIntValue(3))
     menu_action(window, "Machine", "Set slots…").trigger()
     assert shop.machines[k].slots == 3
-    assert window.doc.undo_stack.undoText() == f"{name} takes 3 job(s)"
+    assert window.doc.undo_stack.undoText() == f"{name} takes 3 jobs"
     answer_next_dialog(lambda d: d.setDoubleValue(77.5))
     menu_action(window, "Job", "Set wait penalty…").trigger()
     assert shop.jobs[1].wait_penalty == 77.5
@@ -245,7 +245,7 @@ def test_ctrl_1_to_5_switch_objective_and_mode(qtbot, open_window):
 def _open_menu(qtbot, before: set) -> QMenu:
     def new_menus():
         return [m for m in QApplication.topLevelWidgets()
-                if isinstance(m, QMenu) and m.isVisible() and id(m) not in before]
+                if isinstance(m, QMenu) and m.isVisible() and m not in before]
 
     # A loaded machine may show the menu a few event-loop turns later: wait for it.
     qtbot.waitUntil(lambda: len(new_menus()) >= 1, timeout=5000)
@@ -260,7 +260,7 @@ def test_cell_and_header_menus_run_their_actions_and_are_deleted(qtbot, open_win
     qtbot.waitExposed(window)
     view = window.view
     col = 1
-    before = {id(m) for m in QApplication.topLevelWidgets()}
+    before = set(QApplication.topLevelWidgets())   # held, so no new widget reuses an id
     # The machine header's menu (what a right click on the header asks for).
     x = view.horizontalHeader().sectionViewportPosition(FIRST_MACHINE_COL + col) + 5
     view.horizontalHeader().customContextMenuRequested.emit(view.horizontalHeader().rect().topLeft()
@@ -277,7 +277,7 @@ def test_cell_and_header_menus_run_their_actions_and_are_deleted(qtbot, open_win
     activate(qtbot, window)
     view.setCurrentIndex(window.model.index(0, FIRST_MACHINE_COL))
     view.setFocus()
-    before = {id(m) for m in QApplication.topLevelWidgets()}
+    before = set(QApplication.topLevelWidgets())   # held, so no new widget reuses an id
     qtbot.keyClick(view, Qt.Key.Key_Menu)
     menu = _open_menu(qtbot, before)
     [pin] = [a for a in menu.actions() if a.text().replace("&", "") == "Pin job to this machine"]
@@ -286,7 +286,7 @@ def test_cell_and_header_menus_run_their_actions_and_are_deleted(qtbot, open_win
     assert window.doc.pin_at(0, 0) == MUST
     # The job row's menu.
     y = view.verticalHeader().sectionViewportPosition(2) + 5
-    before = {id(m) for m in QApplication.topLevelWidgets()}
+    before = set(QApplication.topLevelWidgets())   # held, so no new widget reuses an id
     view.verticalHeader().customContextMenuRequested.emit(type(view.rect().topLeft())(5, y))
     menu = _open_menu(qtbot, before)
     assert [a.text().replace("&", "") for a in menu.actions()][:2] == ["Rush job arrived…", "Job pulled…"]

@@ -8,6 +8,7 @@ import numpy as np
 from PySide6.QtCore import QSettings
 from scipy.optimize import linear_sum_assignment
 
+from dispatcher import translation
 from dispatcher.ui.main_window import MainWindow
 from dispatcher.ui.messages import RecordingMessenger
 
@@ -15,6 +16,9 @@ from dispatcher.ui.messages import RecordingMessenger
 def make_window(qtbot, tmp_path: Path, monkeypatch, path: Path | None = None) -> MainWindow:
     """A main window with its own settings file, history file and autosave folder."""
     monkeypatch.setenv("DISPATCHER_AUTOSAVE_DIR", str(tmp_path / "autosave"))
+    # English as `dispatcher app` shows it: with the English plural forms ("7 days"),
+    # whatever earlier tests installed or removed.
+    translation.ensure_plurals()
     settings = QSettings(str(tmp_path / "settings.ini"), QSettings.Format.IniFormat)
     window = MainWindow(settings=settings, messenger=RecordingMessenger(),
                         history_path=tmp_path / "history.sqlite")

@@ -1786,7 +1786,7 @@ A machine&apos;s state in a sentence (English; shown translated).</extracomment>
     </message>
     <message>
         <source>Import grid &amp;into this shop…</source>
-        <translation>Raster in diesen Betrieb ein&amp;lesen…</translation>
+        <translation>Raster in diesen Betrieb &amp;übernehmen…</translation>
     </message>
     <message>
         <source>Merge a grid file into this shop by job and machine names</source>
@@ -1842,7 +1842,7 @@ A machine&apos;s state in a sentence (English; shown translated).</extracomment>
     </message>
     <message>
         <source>Mark &amp;cannot run</source>
-        <translation>Als &amp;nicht möglich markieren</translation>
+        <translation>Als nicht &amp;möglich markieren</translation>
     </message>
     <message>
         <source>The machine cannot run the job (selected cells)</source>
@@ -1922,7 +1922,7 @@ A machine&apos;s state in a sentence (English; shown translated).</extracomment>
     </message>
     <message>
         <source>Mark job &amp;done</source>
-        <translation>Auftrag als &amp;erledigt markieren</translation>
+        <translation>Auftrag als er&amp;ledigt markieren</translation>
     </message>
     <message>
         <source>The current job is finished: it takes no part any more</source>
@@ -1994,7 +1994,7 @@ A machine&apos;s state in a sentence (English; shown translated).</extracomment>
     </message>
     <message>
         <source>&amp;Cancel solve</source>
-        <translation>Berechnung ab&amp;brechen</translation>
+        <translation>Berechnung abbre&amp;chen</translation>
     </message>
     <message>
         <source>Stop waiting for a long solve</source>
@@ -2030,7 +2030,7 @@ A machine&apos;s state in a sentence (English; shown translated).</extracomment>
     </message>
     <message>
         <source>Whole &amp;shift (several jobs per machine)</source>
-        <translation>Ganze &amp;Schicht (mehrere Aufträge je Maschine)</translation>
+        <translation>Ganze Sc&amp;hicht (mehrere Aufträge je Maschine)</translation>
     </message>
     <message>
         <source>Print pre&amp;view…</source>
@@ -2050,7 +2050,7 @@ A machine&apos;s state in a sentence (English; shown translated).</extracomment>
     </message>
     <message>
         <source>Export sheet as P&amp;DF…</source>
-        <translation>Blatt als PD&amp;F exportieren…</translation>
+        <translation>Blatt als &amp;PDF exportieren…</translation>
     </message>
     <message>
         <source>Write the dispatch sheet to a PDF</source>

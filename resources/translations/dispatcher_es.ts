@@ -1786,7 +1786,7 @@ A machine&apos;s state in a sentence (English; shown translated).</extracomment>
     </message>
     <message>
         <source>Import grid &amp;into this shop…</source>
-        <translation>Importar cuadrícula &amp;en este taller…</translation>
+        <translation>Importar cuadrícula en es&amp;te taller…</translation>
     </message>
     <message>
         <source>Merge a grid file into this shop by job and machine names</source>
@@ -1842,7 +1842,7 @@ A machine&apos;s state in a sentence (English; shown translated).</extracomment>
     </message>
     <message>
         <source>Mark &amp;cannot run</source>
-        <translation>Marcar como &amp;no puede</translation>
+        <translation>Marcar como no p&amp;uede</translation>
     </message>
     <message>
         <source>The machine cannot run the job (selected cells)</source>
@@ -1858,7 +1858,7 @@ A machine&apos;s state in a sentence (English; shown translated).</extracomment>
     </message>
     <message>
         <source>&amp;Forbid this pair</source>
-        <translation>&amp;Prohibir esta pareja</translation>
+        <translation>Pro&amp;hibir esta pareja</translation>
     </message>
     <message>
         <source>The job must not go to this machine</source>
@@ -1954,7 +1954,7 @@ A machine&apos;s state in a sentence (English; shown translated).</extracomment>
     </message>
     <message>
         <source>Machine back &amp;up…</source>
-        <translation>Máquina de nuevo en &amp;marcha…</translation>
+        <translation>Máquina de nuevo en ma&amp;rcha…</translation>
     </message>
     <message>
         <source>Mark the current machine up again and re-dispatch</source>
@@ -1986,7 +1986,7 @@ A machine&apos;s state in a sentence (English; shown translated).</extracomment>
     </message>
     <message>
         <source>Re-&amp;solve now</source>
-        <translation>&amp;Recalcular ahora</translation>
+        <translation>Recalcu&amp;lar ahora</translation>
     </message>
     <message>
         <source>Solve again</source>
@@ -2030,7 +2030,7 @@ A machine&apos;s state in a sentence (English; shown translated).</extracomment>
     </message>
     <message>
         <source>Whole &amp;shift (several jobs per machine)</source>
-        <translation>&amp;Turno completo (varios trabajos por máquina)</translation>
+        <translation>Tur&amp;no completo (varios trabajos por máquina)</translation>
     </message>
     <message>
         <source>Print pre&amp;view…</source>
@@ -2058,7 +2058,7 @@ A machine&apos;s state in a sentence (English; shown translated).</extracomment>
     </message>
     <message>
         <source>Se&amp;ttings…</source>
-        <translation>Con&amp;figuración…</translation>
+        <translation>Confi&amp;guración…</translation>
     </message>
     <message>
         <source>History file, default supervisor name, autosave interval</source>
