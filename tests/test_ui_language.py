@@ -33,11 +33,16 @@ def test_settings_language_is_stored_and_installed_at_start(qtbot, tmp_path, mon
 
 
 def test_numbers_shown_follow_the_language_and_the_clipboard_keeps_a_point(qapp):
-    from dispatcher.ui.format import fmt, parse_cell
+    import datetime as dt
 
+    from dispatcher.ui.format import fmt, parse_cell, when_text
+
+    assert when_text(dt.datetime(2026, 3, 9, 6, 30)) == "2026-03-09 06:30"
     try:
         translation.install("de")
         assert fmt(12.5) == "12,5" and fmt(3.0) == "3" and fmt(12.5, plain=True) == "12.5"
+        assert when_text(dt.datetime(2026, 3, 9, 6, 30)) == "09.03.26 06:30"   # QLocale's short format
+        assert when_text(dt.time(6, 5)) == "06:05" and when_text(dt.date(2026, 3, 9)) == "09.03.26"
         assert parse_cell(fmt(0.25)) == 0.25   # what the grid shows can be typed back
         # the plan panel's words are German too
         assert QCoreApplication.translate("PlanPanel", "Idle machines (%n)", "", 2) == "Freie Maschinen (2)"

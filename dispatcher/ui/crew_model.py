@@ -16,6 +16,7 @@ from dispatcher.shop.crew import ABSENT, MAX_MINDING, PRESENT
 from dispatcher.ui import palette
 from dispatcher.ui.document import ShopDocument
 from dispatcher.ui.edits import SetAuthorisations, SetOperatorField
+from dispatcher.ui.format import when_text
 
 COL_LABEL, COL_PRESENT, COL_MINDS = 0, 1, 2
 FIRST_MACHINE = 3
@@ -113,9 +114,9 @@ class CrewModel(QAbstractTableModel):
             if role in (Qt.ItemDataRole.DisplayRole, Qt.ItemDataRole.AccessibleTextRole):
                 text = self.tr("present") if op.attendance == PRESENT else self.tr("absent")
                 if op.attendance == PRESENT and op.arrives is not None:
-                    text += self.tr(", from {time}").format(time=f"{op.arrives:%H:%M}")
+                    text += self.tr(", from {time}").format(time=when_text(op.arrives))
                 if op.attendance == PRESENT and op.leaves is not None:
-                    text += self.tr(", until {time}").format(time=f"{op.leaves:%H:%M}")
+                    text += self.tr(", until {time}").format(time=when_text(op.leaves))
                 return text
             if role == Qt.ItemDataRole.ToolTipRole:
                 return self.tr("Space or click: mark present or absent for this shift")

@@ -7,9 +7,10 @@ Numbers shown follow the interface's locale (:func:`dispatcher.translation.decim
 
 from __future__ import annotations
 
+import datetime as dt
 import math
 
-from PySide6.QtCore import QT_TRANSLATE_NOOP, QCoreApplication
+from PySide6.QtCore import QT_TRANSLATE_NOOP, QCoreApplication, QDate, QDateTime, QLocale, QTime
 
 from dispatcher import translation
 from dispatcher.io.grid import CANNOT_RUN
@@ -45,6 +46,23 @@ REASON_WORDS = {
 def reason_text(kind: str) -> str:
     """A decision's reason kind in the interface's language (the keyword if unknown)."""
     return QCoreApplication.translate("Format", REASON_WORDS[kind]) if kind in REASON_WORDS else kind
+
+
+def when_text(value: dt.datetime | dt.date | dt.time) -> str:
+    """A date, time or both as shown: the interface locale's short format (``09.03.26 06:30``
+    in German); ISO order (``2026-03-09 06:30``) in English and before a language is
+    installed, as the shop's files and the command line write it."""
+    locale = translation.app_locale()
+    if locale is None or translation.current_language() == "en":
+        if isinstance(value, dt.datetime):
+            return f"{value:%Y-%m-%d %H:%M}"
+        return f"{value:%H:%M}" if isinstance(value, dt.time) else f"{value:%Y-%m-%d}"
+    short = QLocale.FormatType.ShortFormat
+    if isinstance(value, dt.datetime):
+        return locale.toString(QDateTime(value), short)
+    if isinstance(value, dt.time):
+        return locale.toString(QTime(value.hour, value.minute, value.second), short)
+    return locale.toString(QDate(value.year, value.month, value.day), short)
 
 
 def unit_text(label: str) -> str:

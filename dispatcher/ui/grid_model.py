@@ -20,7 +20,7 @@ from dispatcher.shop import DONE, DOWN, MAINTENANCE, MUST, MUST_NOT, RUNNING, UP
 from dispatcher.ui import palette
 from dispatcher.ui.document import ShopDocument
 from dispatcher.ui.edits import SetJobField, SetValues
-from dispatcher.ui.format import CellTextError, fmt, parse_cell, unit_text
+from dispatcher.ui.format import CellTextError, fmt, parse_cell, unit_text, when_text
 
 COL_RUSH = 0
 COL_PENALTY = 1
@@ -442,7 +442,7 @@ class GridModel(QAbstractTableModel):
             if job.work_order:
                 parts.append(self.tr("work order {work_order}").format(work_order=job.work_order))
             if job.due:
-                parts.append(self.tr("due {time}").format(time=f"{job.due:%Y-%m-%d %H:%M}"))
+                parts.append(self.tr("due {time}").format(time=when_text(job.due)))
             parts.append(self.tr("state: {state}").format(state=self._job_state_word(job.state)))
             if job.notes:
                 parts.append(job.notes)

@@ -25,7 +25,7 @@ from PySide6.QtWidgets import (
 )
 
 from dispatcher.history import REASON_KINDS, DecisionSummary, HistoryError, HistoryStore
-from dispatcher.ui.format import fmt, reason_text
+from dispatcher.ui.format import fmt, reason_text, when_text
 
 COL_ID, COL_TIME, COL_SHIFT, COL_BY, COL_REASON, COL_NOTE, COL_TOTAL, COL_PROOF = range(8)
 #: Column heads (English; the model shows them translated).
@@ -76,8 +76,9 @@ class DecisionListModel(QAbstractTableModel):
         if role == Qt.ItemDataRole.DisplayRole:
             return {
                 COL_ID: str(d.id),
-                COL_TIME: d.time.replace(tzinfo=d.time.tzinfo or timezone.utc).astimezone().strftime("%Y-%m-%d %H:%M"),
-                COL_SHIFT: f"{d.shift_date:%Y-%m-%d} {d.shift}",
+                COL_TIME: when_text(d.time.replace(tzinfo=d.time.tzinfo or timezone.utc).astimezone()
+                                    .replace(tzinfo=None)),
+                COL_SHIFT: f"{when_text(d.shift_date)} {d.shift}",
                 COL_BY: d.by,
                 COL_REASON: reason_text(d.reason),
                 COL_NOTE: d.note,
