@@ -61,3 +61,52 @@ def test_history_dock_shows_another_stations_decision_within_seconds(qtbot, tmp_
     dock.toggleViewAction().trigger()
     qtbot.waitUntil(lambda: not dock.isVisible())
     assert not dock.poll_timer.isActive()
+
+
+def test_history_dock_learns_of_another_process_decision_by_notification(
+        qtbot, tmp_path, monkeypatch, samples, pg_location):
+    """On PostgreSQL the panel hears of another process's decision from the NOTIFY its
+    recording transaction sends: the poll is slowed to ten minutes here, so only the
+    notification can bring the decision in within the few seconds allowed. Outside
+    reference: the other station is a separate ``dispatcher solve --record`` process."""
+    import os
+    import subprocess
+    import sys
+
+    window = make_window(qtbot, tmp_path, monkeypatch, samples / "small_moulding_cell.dshop")
+    assert window.settings_ctl.apply(pg_location, "", 1), window.messenger.messages
+    window.show()
+    dock = window.history_dock
+    dock.poll_timer.setInterval(600_000)
+    dock.toggleViewAction().trigger()
+    qtbot.waitUntil(dock.isVisible)
+    assert dock.news is not None
+    qtbot.waitUntil(dock.news.listening.is_set, timeout=10_000)
+    qtbot.waitUntil(lambda: not dock.poller.is_busy())
+    assert dock.panel.model.rowCount() == 0
+    env = dict(os.environ, DISPATCHER_STATION="B", PYTHONPATH=os.getcwd())
+    done = subprocess.run(
+        [sys.executable, "-m", "dispatcher", "solve", str(samples / "small_moulding_cell.dshop"),
+         "--record", "--by", "night-shift lead", "--reason", "other", "--history", pg_location],
+        env=env, capture_output=True, text=True, timeout=120)
+    assert done.returncode == 0, done.stderr
+    qtbot.waitUntil(lambda: dock.panel.model.rowCount() == 1, timeout=4000)
+    assert dock.panel.model.decision(0).station == "B"
+    assert dock.panel.model.decision(0).by == "night-shift lead"
+    listening = dock.news
+    dock.toggleViewAction().trigger()
+    qtbot.waitUntil(lambda: not dock.isVisible())
+    assert dock.news is None and not dock.poll_timer.isActive()
+    listening.thread.join(timeout=5)
+    assert not listening.thread.is_alive()
+    window.history.close()
+
+
+def test_history_dock_on_sqlite_polls_without_a_listener(qtbot, tmp_path, monkeypatch,
+                                                         samples):
+    window = make_window(qtbot, tmp_path, monkeypatch, samples / "small_moulding_cell.dshop")
+    window.show()
+    window.history_dock.toggleViewAction().trigger()
+    qtbot.waitUntil(window.history_dock.isVisible)
+    assert window.history.listener() is None and window.history_dock.news is None
+    assert window.history_dock.poll_timer.isActive()

@@ -21,7 +21,7 @@ from .location import (
     default_history_path,
     resolve_history_path,
 )
-from .opening import is_postgres_location, open_history
+from .opening import is_postgres_location, missing_driver, open_history
 from .plans import Move, PlanDiff, certificate_status, check_plan, diff_plans
 from .reasons import REASON_KINDS, parse_reason_kind, reason_label
 from .schema import SCHEMA_VERSION
@@ -34,6 +34,7 @@ from .store import (
     DecisionStore,
     DecisionSummary,
     HistoryStore,
+    default_station,
 )
 
 __all__ = [
@@ -59,8 +60,10 @@ __all__ = [
     "check_plan",
     "data_folder",
     "default_history_path",
+    "default_station",
     "diff_plans",
     "is_postgres_location",
+    "missing_driver",
     "open_history",
     "parse_reason_kind",
     "reason_label",

@@ -25,6 +25,19 @@ def is_postgres_location(location: str | os.PathLike | None) -> bool:
         _CONNINFO.match(text))
 
 
+def missing_driver(location: str | os.PathLike | None) -> str | None:
+    """Why ``location`` cannot be used on this installation (a PostgreSQL location without
+    the psycopg driver: how to install it), or None."""
+    if not is_postgres_location(location):
+        return None
+    from .postgres import _MISSING_DRIVER
+    try:
+        import psycopg  # noqa: F401
+    except ImportError:
+        return _MISSING_DRIVER
+    return None
+
+
 def open_history(location: str | os.PathLike | None = None, **options: Any) -> DecisionStore:
     """The store for ``location``: :class:`HistoryStore` for a file, else the PostgreSQL one.
 

@@ -413,17 +413,56 @@ class PostgresStore(DecisionStore):
 
     # ------------------------------------------------------------ other stations
 
+    def listener(self) -> DecisionListener:
+        """A :class:`DecisionListener` on its own connection (opened at its first wait)."""
+        return DecisionListener(self)
+
     def wait_for_news(self, seconds: float) -> bool:
         """Block up to ``seconds`` for another station's decision (LISTEN/NOTIFY)."""
-        psycopg = _psycopg()
-        conn = self._connect()  # its own connection: notifications queue up on it
+        listener = self.listener()
         try:
-            conn.execute(f"LISTEN {CHANNEL}")
-            for _ in conn.notifies(timeout=max(0.0, seconds)):
-                return True
-            return False
-        except psycopg.Error as exc:
-            raise self._fault(exc, "waiting for new decisions") from None
+            return listener.wait(seconds)
         finally:
-            conn.close()
+            listener.close()
 
+
+class DecisionListener:
+    """Learns of decisions recorded by any station: LISTEN on channel :data:`CHANNEL`, to
+    which every recording transaction sends a NOTIFY as it commits.
+
+    The connection is its own (never the store's) and stays open between waits, so a
+    decision recorded between two waits is not missed; after a fault (server stopped or
+    restarting) :meth:`wait` raises :class:`HistoryError` and the next call connects
+    again. Use from one thread.
+    """
+
+    def __init__(self, store: PostgresStore):
+        self.store = store
+        self._conn = None
+
+    def wait(self, seconds: float) -> bool:
+        """Block up to ``seconds``; True when at least one decision was recorded since the
+        previous wait (every notification queued so far is taken)."""
+        psycopg = _psycopg()
+        try:
+            if self._conn is None or self._conn.closed or self._conn.broken:
+                self._conn = self.store._connect()
+                self._conn.execute(f"LISTEN {CHANNEL}")
+            got = False
+            for _ in self._conn.notifies(timeout=max(0.0, seconds), stop_after=1):
+                got = True
+            if got:  # take what else is queued, without waiting
+                for _ in self._conn.notifies(timeout=0):
+                    pass
+            return got
+        except psycopg.Error as exc:
+            self.close()
+            raise self.store._fault(exc, "waiting for new decisions") from None
+
+    def close(self) -> None:
+        conn, self._conn = self._conn, None
+        if conn is not None:
+            try:
+                conn.close()
+            except Exception:  # noqa: BLE001 - a dead connection cannot be closed cleanly
+                pass

@@ -161,8 +161,12 @@ def shift_of_document(shop_json: str) -> tuple[date | None, str]:
     return day, label.strip()
 
 
-def _station_default() -> str:
+def default_station() -> str:
+    """The station recorded when none is given: ``$DISPATCHER_STATION``, else the host name."""
     return os.environ.get(STATION_ENV, "").strip() or socket.gethostname()
+
+
+_station_default = default_station
 
 
 class _Cx:
@@ -452,6 +456,12 @@ class DecisionStore:
     def count(self) -> int:
         return self._read(lambda c: int(c.one("SELECT count(*) FROM decisions")[0]),
                           "reading the history", 0)
+
+    def listener(self):
+        """Something whose ``wait(seconds)`` returns True once another station recorded a
+        decision (PostgreSQL: LISTEN/NOTIFY), or None when this store has no such signal
+        and a view polls :meth:`newest_id` instead (the SQLite file)."""
+        return None
 
     def newest_id(self) -> int:
         """The newest decision's number (0 when none): a cheap check, for a view that

@@ -226,6 +226,15 @@ class DecisionDialog(QDialog):
         self.by.setAccessibleDescription(self.tr("Who takes the decision (required)"))
         form.addRow(self.tr("&Supervisor:"), self.by)
         layout.addLayout(form)
+        self._kept = False
+        self.retry_note = QLabel()
+        self.retry_note.setObjectName("retryNote")
+        self.retry_note.setWordWrap(True)
+        self.retry_note.setAccessibleName(self.tr("Not recorded yet"))
+        self.retry_note.setAccessibleDescription(self.tr(
+            "Why the last confirmation was not recorded; confirming again retries"))
+        self.retry_note.setVisible(False)
+        layout.addWidget(self.retry_note)
         self.buttons = QDialogButtonBox(QDialogButtonBox.StandardButton.Ok
                                         | QDialogButtonBox.StandardButton.Cancel)
         ok = self.buttons.button(QDialogButtonBox.StandardButton.Ok)
@@ -251,9 +260,19 @@ class DecisionDialog(QDialog):
             self.reason.setCurrentIndex(self.reason.findData(reason))
         self._accept()
 
+    def keep_open(self, why: str) -> None:
+        """Called while handling ``confirmed`` when the decision could not be recorded
+        for a passing reason (server away): the dialog stays open, filled in as it was,
+        so confirming again retries; ``why`` is shown above the buttons."""
+        self._kept = True
+        self.retry_note.setText(why)
+        self.retry_note.setVisible(True)
+
     def _accept(self) -> None:
         if self.proposal.plan is None or not self.by.text().strip():
             return
+        self._kept = False
         self.confirmed.emit(self.proposal, self.by.text().strip(), self.reason.currentData(),
                             self.note.toPlainText().strip())
-        self.accept()
+        if not self._kept:
+            self.accept()

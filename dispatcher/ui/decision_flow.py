@@ -11,7 +11,13 @@ from datetime import datetime, timezone
 
 from PySide6.QtCore import QObject, Qt, Signal
 
-from dispatcher.history import UNCHECKED, HistoryError, HistoryInputError, diff_plans
+from dispatcher.history import (
+    UNCHECKED,
+    DecisionConflict,
+    HistoryError,
+    HistoryInputError,
+    diff_plans,
+)
 from dispatcher.io.shopfile import shop_to_dict
 from dispatcher.shop import DONE, DOWN, RUNNING, UP, WAITING, Shop
 from dispatcher.shop.planning import plan_in_force_ids
@@ -151,9 +157,23 @@ class DecisionFlow(QObject):
         try:
             number = self.window.history.record(shop_to_dict(recorded_shop), proposal.plan.to_json(),
                                          by=by, reason=reason, note=note, based_on=self.based_on)
-        except (HistoryError, HistoryInputError, OSError) as exc:
+        except DecisionConflict as exc:  # the proposal is out of date: decide again
             self.window.messenger.error(self.tr("Decision not recorded"),
                                         self.tr("{error}\n\nThe plan in force is unchanged.").format(error=exc))
+            return None
+        except (HistoryError, HistoryInputError, OSError) as exc:
+            dialog = self.sender() if isinstance(self.sender(), DecisionDialog) else self.dialog
+            retry = isinstance(exc, HistoryError) and dialog is not None
+            if retry:  # a passing fault (server away...): keep the dialog for a retry
+                dialog.keep_open(self.tr(
+                    "Not recorded: the history could not be written. Nothing was changed; "
+                    "press Confirm and record to try again."))
+                self.window.messenger.error(self.tr("Decision not recorded"), f"{exc}\n\n" + self.tr(
+                    "The plan in force and the open document are unchanged; the decision "
+                    "dialog stays open so that you can confirm again."))
+            else:
+                self.window.messenger.error(self.tr("Decision not recorded"),
+                                            self.tr("{error}\n\nThe plan in force is unchanged.").format(error=exc))
             return None
         self.window.settings.setValue(KEY_SUPERVISOR, by)
         stack = self.doc.undo_stack

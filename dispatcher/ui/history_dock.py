@@ -6,7 +6,9 @@ widget (View ▸ History, Ctrl+H), and *Restore…*.
 
 from __future__ import annotations
 
-from PySide6.QtCore import QCoreApplication, QTimer
+import threading
+
+from PySide6.QtCore import QCoreApplication, QObject, QTimer, Signal
 from PySide6.QtGui import QKeySequence
 from PySide6.QtWidgets import QDockWidget, QInputDialog
 
@@ -18,6 +20,54 @@ from dispatcher.ui.worker import BackgroundRunner
 
 #: While the dock is shown, how often it looks for decisions recorded by other stations.
 POLL_MS = 3000
+#: How long the listening thread waits for a notification before looking whether it
+#: should stop, and how long it waits after a fault before connecting again (seconds).
+LISTEN_WAIT_S, LISTEN_RETRY_S = 1.0, 5.0
+
+
+class _Relay(QObject):
+    """Carries the listening thread's news to the window's thread (a queued signal)."""
+
+    news = Signal()
+
+
+class NewsListener:
+    """Off the GUI thread, waits on the store's listener (PostgreSQL LISTEN/NOTIFY) and
+    emits ``relay.news`` when another station has recorded a decision. A fault only
+    pauses it (the poll keeps the panel current meanwhile); :meth:`stop` ends it within
+    :data:`LISTEN_WAIT_S`."""
+
+    def __init__(self, store):
+        self.store = store
+        self.relay = _Relay()
+        self._stop = threading.Event()
+        self.thread = threading.Thread(target=self._run, name="history-listen", daemon=True)
+        self.listening = threading.Event()  # set while a LISTEN connection is open
+
+    def start(self) -> None:
+        self.thread.start()
+
+    def stop(self) -> None:
+        self._stop.set()
+
+    def _run(self) -> None:
+        listener = self.store.listener()
+        try:
+            while not self._stop.is_set():
+                try:
+                    got = listener.wait(LISTEN_WAIT_S)
+                    self.listening.set()
+                except HistoryError:
+                    self.listening.clear()
+                    self._stop.wait(LISTEN_RETRY_S)
+                    continue
+                if got and not self._stop.is_set():
+                    try:
+                        self.relay.news.emit()
+                    except RuntimeError:  # the window is gone
+                        return
+        finally:
+            listener.close()
 
 
 class HistoryDock(QDockWidget):
@@ -42,27 +92,54 @@ class HistoryDock(QDockWidget):
         # Other stations' decisions appear within a few seconds: a cheap newest-number check
         # off the GUI thread while the dock is visible; the list is re-read when it changes.
         self._seen = -1
+        self._again = False
         self.poller = BackgroundRunner(self)
         self.poller.finished.connect(self._polled)
         self.poll_timer = QTimer(self)
         self.poll_timer.setInterval(POLL_MS)
         self.poll_timer.timeout.connect(self._poll)
-        self.visibilityChanged.connect(
-            lambda visible: self.poll_timer.start() if visible else self.poll_timer.stop())
+        self.visibilityChanged.connect(self._watch)
+        # On PostgreSQL a notification from the recording transaction makes the check at
+        # once; the poll stays as the fallback (and is the only way on SQLite).
+        self.news: NewsListener | None = None
+
+    def _watch(self, visible: bool) -> None:
+        """Watch for other stations' decisions while shown, not while hidden."""
+        self.stop_listening()
+        if not visible:
+            self.poll_timer.stop()
+            return
+        self.poll_timer.start()
+        if self.window_.history.listener() is not None:
+            self.news = NewsListener(self.window_.history)
+            self.news.relay.news.connect(self._poll)
+            self.news.start()
+
+    def stop_listening(self) -> None:
+        if self.news is not None:
+            self.news.stop()
+            self.news = None
 
     def _poll(self) -> None:
-        if not self.poller.is_busy():
-            store = self.window_.history
-            self.poller.submit(lambda cancel: (store, store.newest_id()), "history poll")
+        if self.poller.is_busy():
+            self._again = True  # news during a check: check once more after it
+            return
+        self._again = False
+        store = self.window_.history
+        self.poller.submit(lambda cancel: (store, store.newest_id()), "history poll")
 
     def _polled(self, result) -> None:
         store, newest = result
+        if self._again:
+            QTimer.singleShot(0, self._poll)
         if store is self.window_.history and newest != self._seen:
             self._seen = newest
             self.panel.refresh()
 
     def set_store(self, store: HistoryStore) -> None:
         self.panel.set_store(store)
+        if self.isVisible():
+            self._watch(True)
 
     def refresh(self) -> None:
         self.panel.refresh()

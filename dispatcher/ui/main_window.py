@@ -46,7 +46,7 @@ from dispatcher.ui.history_dock import HistoryDock
 from dispatcher.ui.messages import Messenger
 from dispatcher.ui.plan_panel import PlanPanel
 from dispatcher.ui.printing import SheetPrinting
-from dispatcher.ui.settings_dialog import SettingsController
+from dispatcher.ui.settings_dialog import SettingsController, station_of
 from dispatcher.shop.planning import MODE_ROUND, MODE_SHIFT
 from dispatcher.shop.proposal import EVENT_DOWN, EVENT_UP
 from dispatcher.ui.solving import SolveOutcome, solve_outcome, solve_round_in_process
@@ -75,7 +75,8 @@ class MainWindow(QMainWindow):
         self._messenger = messenger or Messenger(self)
         self.doc = ShopDocument(shop, self)
         self.files = FileController(self.doc, self._messenger, self.settings, self)
-        self.history = open_history(history_path or self.settings.value(KEY_HISTORY) or None)
+        self.history = open_history(history_path or self.settings.value(KEY_HISTORY) or None,
+                                    station=station_of(self.settings))
         self.objective = "total"
         self.mode = MODE_ROUND
         self.plan: Plan | ShiftFill | None = None
@@ -550,6 +551,7 @@ class MainWindow(QMainWindow):
         # worker.BackgroundRunner), so closing never waits for a long solve.
         for runner in self.runners():
             runner.shutdown()
+        self.history_dock.stop_listening()
         self.files.shutdown()
         self.files.discard_autosave()
         event.accept()

@@ -1,6 +1,8 @@
-"""Settings of the app: the history file, the default supervisor name, the autosave interval.
+"""Settings of the app: the history file or PostgreSQL server, the default supervisor name,
+the station label, the autosave interval.
 
-Stored in QSettings (``history/path``, ``history/supervisor``, ``autosave/minutes``). A
+Stored in QSettings (``history/path``, ``history/supervisor``, ``history/station``,
+``autosave/minutes``). A
 new history file is checked with the Qt-free store before it is used (a file that is not
 a dispatcher history, cut short, read-only or written by a newer version is refused and
 the current file kept); once accepted, the open window records into it at once and the
@@ -33,11 +35,13 @@ from dispatcher.history import (
     HistoryError,
     HistoryStore,
     default_history_path,
+    default_station,
     is_postgres_location,
+    missing_driver,
     open_history,
 )
 from dispatcher.translation import KEY_LANGUAGE, LANGUAGE_NAMES
-from dispatcher.ui.settings_keys import KEY_AUTOSAVE, KEY_HISTORY, KEY_SUPERVISOR
+from dispatcher.ui.settings_keys import KEY_AUTOSAVE, KEY_HISTORY, KEY_STATION, KEY_SUPERVISOR
 
 AUTOSAVE_DEFAULT_MIN, AUTOSAVE_MAX_MIN = 1, 60
 translate = QCoreApplication.translate   # the name pyside6-lupdate collects
@@ -70,7 +74,18 @@ class ScriptedChooser(FileChooser):
         return self.answers.pop(0) if self.answers else None
 
 
-def usable_history(path: str | os.PathLike) -> HistoryStore:
+def station_label(settings) -> str:
+    """The station label stored in ``settings`` ("" when unset: the host name is recorded)."""
+    return str(settings.value(KEY_STATION, "") or "").strip()
+
+
+def station_of(settings) -> str:
+    """The station every decision recorded from the app carries: the label, else the
+    store's default (``$DISPATCHER_STATION``, else the host name)."""
+    return station_label(settings) or default_station()
+
+
+def usable_history(path: str | os.PathLike, station: str | None = None) -> HistoryStore:
     """A store for ``path`` after checking decisions can be read from and recorded into it.
 
     An existing file must be a dispatcher history this version reads (header, identity,
@@ -82,13 +97,13 @@ def usable_history(path: str | os.PathLike) -> HistoryStore:
     history of a newer schema.
     """
     if is_postgres_location(path):
-        store = open_history(str(path))
+        store = open_history(str(path), station=station)
         store.list(limit=1)
         return store
     p = Path(path).expanduser()
     if p.is_dir():
         raise HistoryError(translate("SettingsDialog", "{path}: is a folder, not a history file").format(path=p))
-    store = HistoryStore(p)
+    store = HistoryStore(p, station=station)
     if p.exists():
         if store.read_only():
             raise HistoryError(translate("SettingsDialog",
@@ -164,6 +179,25 @@ class SettingsDialog(QDialog):
         hint.setAccessibleName(self.tr("About the history file"))
         hint.setAccessibleDescription(hint.text())
         form.addRow("", hint)
+        self.server_hint = QLabel(self.tr(
+            "Several stations share one history on a PostgreSQL server: enter "
+            "postgresql://host/database or service=NAME instead of a file (the password "
+            "comes from the password or service file, never from here)."))
+        self.server_hint.setWordWrap(True)
+        self.server_hint.setObjectName("historyServerHint")
+        self.server_hint.setAccessibleName(self.tr("About a shared history"))
+        self.server_hint.setAccessibleDescription(self.server_hint.text())
+        form.addRow("", self.server_hint)
+        self.driver_note = QLabel()
+        self.driver_note.setWordWrap(True)
+        self.driver_note.setObjectName("historyDriverNote")
+        self.driver_note.setAccessibleName(self.tr("PostgreSQL driver"))
+        self.driver_note.setAccessibleDescription(self.tr(
+            "Says when the chosen PostgreSQL history cannot be used because its driver is "
+            "not installed"))
+        self.driver_note.setVisible(False)
+        form.addRow("", self.driver_note)
+        self.history_path.textChanged.connect(self._check_driver)
 
         self.supervisor = QLineEdit(str(window.settings.value(KEY_SUPERVISOR, "")))
         self.supervisor.setObjectName("supervisorEdit")
@@ -172,6 +206,21 @@ class SettingsDialog(QDialog):
         self.supervisor.setAccessibleName(self.tr("Default supervisor"))
         self.supervisor.setAccessibleDescription(self.supervisor.toolTip())
         form.addRow(self.tr("Default &supervisor:"), self.supervisor)
+
+        self.station = QLineEdit(station_label(window.settings))
+        self.station.setObjectName("stationEdit")
+        host = default_station()
+        self.station.setPlaceholderText(self.tr("empty: {host}").format(host=host))
+        self.station.setToolTip(self.tr(
+            "Recorded with every decision made here, so other stations see where it was "
+            "decided; empty records {host}").format(host=host))
+        self.station.setAccessibleName(self.tr("Station label"))
+        self.station.setAccessibleDescription(self.tr(
+            "The name of this station recorded with every decision; empty records the "
+            "host name"))
+        station_row = QLabel(self.tr("Station &label:"))
+        station_row.setBuddy(self.station)
+        form.addRow(station_row, self.station)
 
         self.autosave = QSpinBox()
         self.autosave.setObjectName("autosaveSpin")
@@ -213,6 +262,12 @@ class SettingsDialog(QDialog):
             lambda: self.history_path.setText(str(default_history_path())))
         self.resize(max(self.sizeHint().width(), 640), self.sizeHint().height())
 
+    def _check_driver(self, text: str) -> None:
+        problem = missing_driver(text.strip())
+        self.driver_note.setText(self.tr("Cannot be used here: {problem}").format(problem=problem)
+                                 if problem else "")
+        self.driver_note.setVisible(bool(problem))
+
     def choose(self) -> None:
         path = self.controller.chooser.history_file(self.history_path.text())
         if path:
@@ -222,7 +277,8 @@ class SettingsDialog(QDialog):
     def apply(self) -> bool:
         """What OK does: apply through the controller; close only if it accepted."""
         ok = self.controller.apply(self.history_path.text(), self.supervisor.text(),
-                                   self.autosave.value(), language=self.language.currentData())
+                                   self.autosave.value(), language=self.language.currentData(),
+                                   station=self.station.text())
         if ok:
             self.accept()
         return ok
@@ -252,17 +308,20 @@ class SettingsController(QObject):
         return dialog
 
     def apply(self, history_path: str, supervisor: str, minutes: int,
-              language: str | None = None) -> bool:
-        """Use these settings; False (with a message, nothing changed) when refused."""
+              language: str | None = None, station: str | None = None) -> bool:
+        """Use these settings; False (with a message, nothing changed) when refused.
+        ``station`` None keeps the stored label; "" records the host name."""
         window = self.window
         text = history_path.strip()
         if not text:
             window.messenger.error(self.tr("Settings not changed"), self.tr("Choose a history file."))
             return False
+        label = station_label(window.settings) if station is None else station.strip()
+        recorded_as = label or default_station()
         new = text if is_postgres_location(text) else Path(text).expanduser()
         if not _same_place(new, window.history.path):
             try:
-                store = usable_history(new)
+                store = usable_history(new, station=recorded_as)
             except HistoryError as exc:  # its message says what to do, not which option
                 window.messenger.error(
                     self.tr("History file not changed"),
@@ -273,6 +332,8 @@ class SettingsController(QObject):
             self.history_changed.emit(store)
             window.statusBar().showMessage(self.tr("Decisions are now recorded in {path}").format(path=new), 8000)
         window.settings.setValue(KEY_SUPERVISOR, supervisor.strip())
+        window.settings.setValue(KEY_STATION, label)
+        window.history.station = recorded_as
         minutes = min(max(int(minutes), 1), AUTOSAVE_MAX_MIN)
         window.settings.setValue(KEY_AUTOSAVE, minutes)
         window.files.set_autosave_minutes(minutes)

@@ -634,6 +634,14 @@
         <translation>&amp;Schichtleitung:</translation>
     </message>
     <message>
+        <source>Not recorded yet</source>
+        <translation>Noch nicht gespeichert</translation>
+    </message>
+    <message>
+        <source>Why the last confirmation was not recorded; confirming again retries</source>
+        <translation>Warum die letzte Bestätigung nicht gespeichert wurde; erneutes Bestätigen versucht es noch einmal</translation>
+    </message>
+    <message>
         <source>Confirm and record</source>
         <translation>Bestätigen und erfassen</translation>
     </message>
@@ -794,6 +802,14 @@ The plan in force is unchanged.</source>
         <translation>{error}
 
 Der gültige Plan bleibt unverändert.</translation>
+    </message>
+    <message>
+        <source>Not recorded: the history could not be written. Nothing was changed; press Confirm and record to try again.</source>
+        <translation>Nicht gespeichert: Die Historie konnte nicht geschrieben werden. Nichts wurde geändert; bestätigen Sie erneut, um es noch einmal zu versuchen.</translation>
+    </message>
+    <message>
+        <source>The plan in force and the open document are unchanged; the decision dialog stays open so that you can confirm again.</source>
+        <translation>Der gültige Plan und das geöffnete Dokument sind unverändert; der Entscheidungsdialog bleibt offen, damit Sie erneut bestätigen können.</translation>
     </message>
     <message>
         <source>{title} (decision #{number})</source>
@@ -1495,7 +1511,7 @@ A machine&apos;s state in a sentence (English; shown translated).</extracomment>
     <name>HistoryDock</name>
     <message>
         <source>History</source>
-        <extracomment>While the dock is shown, how often it looks for decisions recorded by other stations.</extracomment>
+        <extracomment>While the dock is shown, how often it looks for decisions recorded by other stations. How long the listening thread waits for a notification before looking whether it should stop, and how long it waits after a fault before connecting again (seconds).</extracomment>
         <translation>Verlauf</translation>
     </message>
     <message>
@@ -2653,6 +2669,22 @@ Entscheidungen werden weiter in {path} erfasst.</translation>
         <translation>Zur Verlaufsdatei</translation>
     </message>
     <message>
+        <source>Several stations share one history on a PostgreSQL server: enter postgresql://host/database or service=NAME instead of a file (the password comes from the password or service file, never from here).</source>
+        <translation>Mehrere Stationen teilen eine Historie auf einem PostgreSQL-Server: statt einer Datei postgresql://host/datenbank oder service=NAME eingeben (das Passwort kommt aus der Passwort- oder Dienstdatei, nie von hier).</translation>
+    </message>
+    <message>
+        <source>About a shared history</source>
+        <translation>Über eine gemeinsame Historie</translation>
+    </message>
+    <message>
+        <source>PostgreSQL driver</source>
+        <translation>PostgreSQL-Treiber</translation>
+    </message>
+    <message>
+        <source>Says when the chosen PostgreSQL history cannot be used because its driver is not installed</source>
+        <translation>Zeigt an, wenn die gewählte PostgreSQL-Historie nicht nutzbar ist, weil ihr Treiber nicht installiert ist</translation>
+    </message>
+    <message>
         <source>for example: A. Supervisor</source>
         <translation>zum Beispiel: A. Schichtleitung</translation>
     </message>
@@ -2667,6 +2699,26 @@ Entscheidungen werden weiter in {path} erfasst.</translation>
     <message>
         <source>Default &amp;supervisor:</source>
         <translation>Vorgegebene &amp;Schichtleitung:</translation>
+    </message>
+    <message>
+        <source>empty: {host}</source>
+        <translation>leer: {host}</translation>
+    </message>
+    <message>
+        <source>Recorded with every decision made here, so other stations see where it was decided; empty records {host}</source>
+        <translation>Wird mit jeder hier getroffenen Entscheidung gespeichert, damit andere Stationen sehen, wo entschieden wurde; leer speichert {host}</translation>
+    </message>
+    <message>
+        <source>Station label</source>
+        <translation>Stationsbezeichnung</translation>
+    </message>
+    <message>
+        <source>The name of this station recorded with every decision; empty records the host name</source>
+        <translation>Der Name dieser Station, der mit jeder Entscheidung gespeichert wird; leer speichert den Rechnernamen</translation>
+    </message>
+    <message>
+        <source>Station &amp;label:</source>
+        <translation>Stations&amp;bezeichnung:</translation>
     </message>
     <message>
         <source> min</source>
@@ -2715,6 +2767,10 @@ Entscheidungen werden weiter in {path} erfasst.</translation>
     <message>
         <source>Close without changing anything</source>
         <translation>Schließen, ohne etwas zu ändern</translation>
+    </message>
+    <message>
+        <source>Cannot be used here: {problem}</source>
+        <translation>Hier nicht nutzbar: {problem}</translation>
     </message>
 </context>
 <context>

@@ -634,6 +634,14 @@
         <translation>&amp;Supervisor:</translation>
     </message>
     <message>
+        <source>Not recorded yet</source>
+        <translation>Aún no registrada</translation>
+    </message>
+    <message>
+        <source>Why the last confirmation was not recorded; confirming again retries</source>
+        <translation>Por qué no se registró la última confirmación; confirmar de nuevo lo reintenta</translation>
+    </message>
+    <message>
         <source>Confirm and record</source>
         <translation>Confirmar y registrar</translation>
     </message>
@@ -794,6 +802,14 @@ The plan in force is unchanged.</source>
         <translation>{error}
 
 El plan vigente no cambia.</translation>
+    </message>
+    <message>
+        <source>Not recorded: the history could not be written. Nothing was changed; press Confirm and record to try again.</source>
+        <translation>No registrada: no se pudo escribir el historial. No se ha cambiado nada; confirme de nuevo para reintentarlo.</translation>
+    </message>
+    <message>
+        <source>The plan in force and the open document are unchanged; the decision dialog stays open so that you can confirm again.</source>
+        <translation>El plan vigente y el documento abierto no han cambiado; el diálogo de decisión sigue abierto para que pueda confirmar de nuevo.</translation>
     </message>
     <message>
         <source>{title} (decision #{number})</source>
@@ -1495,7 +1511,7 @@ A machine&apos;s state in a sentence (English; shown translated).</extracomment>
     <name>HistoryDock</name>
     <message>
         <source>History</source>
-        <extracomment>While the dock is shown, how often it looks for decisions recorded by other stations.</extracomment>
+        <extracomment>While the dock is shown, how often it looks for decisions recorded by other stations. How long the listening thread waits for a notification before looking whether it should stop, and how long it waits after a fault before connecting again (seconds).</extracomment>
         <translation>Historial</translation>
     </message>
     <message>
@@ -2653,6 +2669,22 @@ Las decisiones se siguen registrando en {path}.</translation>
         <translation>Sobre el archivo de historial</translation>
     </message>
     <message>
+        <source>Several stations share one history on a PostgreSQL server: enter postgresql://host/database or service=NAME instead of a file (the password comes from the password or service file, never from here).</source>
+        <translation>Varias estaciones comparten un historial en un servidor PostgreSQL: introduzca postgresql://host/base_de_datos o service=NOMBRE en lugar de un archivo (la contraseña se toma del archivo de contraseñas o de servicios, nunca de aquí).</translation>
+    </message>
+    <message>
+        <source>About a shared history</source>
+        <translation>Acerca de un historial compartido</translation>
+    </message>
+    <message>
+        <source>PostgreSQL driver</source>
+        <translation>Controlador de PostgreSQL</translation>
+    </message>
+    <message>
+        <source>Says when the chosen PostgreSQL history cannot be used because its driver is not installed</source>
+        <translation>Indica cuándo el historial PostgreSQL elegido no se puede usar porque su controlador no está instalado</translation>
+    </message>
+    <message>
         <source>for example: A. Supervisor</source>
         <translation>por ejemplo: A. Supervisor</translation>
     </message>
@@ -2667,6 +2699,26 @@ Las decisiones se siguen registrando en {path}.</translation>
     <message>
         <source>Default &amp;supervisor:</source>
         <translation>&amp;Supervisor predeterminado:</translation>
+    </message>
+    <message>
+        <source>empty: {host}</source>
+        <translation>vacío: {host}</translation>
+    </message>
+    <message>
+        <source>Recorded with every decision made here, so other stations see where it was decided; empty records {host}</source>
+        <translation>Se registra con cada decisión tomada aquí, para que otras estaciones vean dónde se decidió; vacío registra {host}</translation>
+    </message>
+    <message>
+        <source>Station label</source>
+        <translation>Nombre de la estación</translation>
+    </message>
+    <message>
+        <source>The name of this station recorded with every decision; empty records the host name</source>
+        <translation>El nombre de esta estación que se registra con cada decisión; vacío registra el nombre del equipo</translation>
+    </message>
+    <message>
+        <source>Station &amp;label:</source>
+        <translation>&amp;Nombre de la estación:</translation>
     </message>
     <message>
         <source> min</source>
@@ -2715,6 +2767,10 @@ Las decisiones se siguen registrando en {path}.</translation>
     <message>
         <source>Close without changing anything</source>
         <translation>Cerrar sin cambiar nada</translation>
+    </message>
+    <message>
+        <source>Cannot be used here: {problem}</source>
+        <translation>No se puede usar aquí: {problem}</translation>
     </message>
 </context>
 <context>
