@@ -69,7 +69,7 @@ class ShopDocument(QObject):
         self.undo_stack = QUndoStack(self)
         self.undo_stack.cleanChanged.connect(self._on_clean_changed)
         self.path: Path | None = None
-        self.shop = shop or Shop(name="Untitled shop")
+        self.shop = shop or Shop(name=self.tr("Untitled shop"))
         self._index()
 
     @Slot(bool)

@@ -3162,6 +3162,13 @@ Entscheidungen werden weiter in {path} erfasst.</translation>
     </message>
 </context>
 <context>
+    <name>ShopDocument</name>
+    <message>
+        <source>Untitled shop</source>
+        <translation>Unbenannter Betrieb</translation>
+    </message>
+</context>
+<context>
     <name>WhatIfModel</name>
     <message>
         <source>down</source>

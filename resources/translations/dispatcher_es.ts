@@ -3162,6 +3162,13 @@ Las decisiones se siguen registrando en {path}.</translation>
     </message>
 </context>
 <context>
+    <name>ShopDocument</name>
+    <message>
+        <source>Untitled shop</source>
+        <translation>Taller sin título</translation>
+    </message>
+</context>
+<context>
     <name>WhatIfModel</name>
     <message>
         <source>down</source>
