@@ -259,7 +259,9 @@ class FileController(QObject):
 
 def _mtime_text(path: Path) -> str:
     from datetime import datetime
-    return datetime.fromtimestamp(path.stat().st_mtime).strftime("%Y-%m-%d %H:%M")
+
+    from dispatcher.ui.format import when_text
+    return when_text(datetime.fromtimestamp(path.stat().st_mtime))
 
 
 def _problem_texts(exc: Exception) -> tuple[str, str]:
