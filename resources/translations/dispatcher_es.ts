@@ -587,7 +587,7 @@
     </message>
     <message>
         <source>&lt;b&gt;Proposed changes against {plan}:&lt;/b&gt;</source>
-        <translation>&lt;b&gt;Cambios propuestos frente a {plan}:&lt;/b&gt;</translation>
+        <translation>&lt;b&gt;Cambios propuestos, comparados con {plan}:&lt;/b&gt;</translation>
     </message>
     <message>
         <source>Proposed changes</source>
