@@ -418,9 +418,10 @@ def sheet_body_html(content: SheetContent, text_locale: QLocale | None = None) -
         machine_rows, write_in=True))
     if content.staffed:
         parts.append(_SPACER)
+        all_staffed = translate("Sheet", "Every running machine has a present, authorised operator.")
         crew_rows = [f"<tr><td>{_e(line)}</td></tr>" for line in content.crew_notes] or [
-            "<tr><td><i>Every running machine has a present, authorised operator.</i></td></tr>"]
-        parts.append(_table("Crew", (("", 100),), crew_rows, headings=False))
+            f"<tr><td><i>{_e(all_staffed)}</i></td></tr>"]
+        parts.append(_table(translate("Sheet", "Crew"), (("", 100),), crew_rows, headings=False))
 
     parts.append(_SPACER)
     wait_cols = ((translate("Sheet", "Job"), 26), (translate("Sheet", "Work order"), 14),

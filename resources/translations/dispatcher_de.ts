@@ -3015,6 +3015,14 @@ Entscheidungen werden weiter in {path} erfasst.</translation>
         <translation>Dieser Betrieb hat keine Maschinen.</translation>
     </message>
     <message>
+        <source>Every running machine has a present, authorised operator.</source>
+        <translation>Jede laufende Maschine hat einen anwesenden, befugten Bediener.</translation>
+    </message>
+    <message>
+        <source>Crew</source>
+        <translation>Personal</translation>
+    </message>
+    <message>
         <source>Why it waits</source>
         <translation>Warum er wartet</translation>
     </message>

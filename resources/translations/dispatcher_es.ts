@@ -3015,6 +3015,14 @@ Las decisiones se siguen registrando en {path}.</translation>
         <translation>Este taller no tiene máquinas.</translation>
     </message>
     <message>
+        <source>Every running machine has a present, authorised operator.</source>
+        <translation>Cada máquina en marcha tiene un operario presente y autorizado.</translation>
+    </message>
+    <message>
+        <source>Crew</source>
+        <translation>Personal</translation>
+    </message>
+    <message>
         <source>Why it waits</source>
         <translation>Por qué espera</translation>
     </message>
