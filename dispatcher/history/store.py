@@ -347,9 +347,14 @@ class DecisionStore:
         for i in range(0, len(ids), 500):
             chunk = ids[i:i + 500]
             marks = ", ".join("?" for _ in chunk)
+            # The range beside the list keeps the planner on the index even when its
+            # statistics are stale (a freshly filled or copied PostgreSQL table, before
+            # autovacuum analyses it, was read by a full scan: 40 ms of 10,000 decisions).
             for r in cx.all("SELECT decision_id, state, machine, job, value FROM "
                             f"decision_rows WHERE decision_id IN ({marks}) "
-                            f"ORDER BY decision_id, {self._row_order}", chunk):
+                            "AND decision_id BETWEEN ? AND ? "
+                            f"ORDER BY decision_id, {self._row_order}",
+                            [*chunk, min(chunk), max(chunk)]):
                 rows[int(r[0])].append(tuple(r[1:]))
         bad = [v["id"] for v in found if v["seal"] is None
                or seal_of(v, rows[int(v["id"])]) != v["seal"]]
