@@ -214,14 +214,6 @@ def test_crew_in_a_version_1_document_is_refused():
         parse_shop_text(json.dumps(doc))
 
 
-@pytest.mark.parametrize("option", ["--what-if", "--alternatives=3"])
-def test_features_that_ignore_the_crew_refuse_a_crewed_shop(option):
-    proc = subprocess.run([sys.executable, "-m", "dispatcher", "solve", str(SAMPLE), option],
-                          capture_output=True, text=True, check=False)
-    assert proc.returncode == 2 and "not available yet for a shop with a crew" in proc.stderr
-    assert "Traceback" not in proc.stderr
-
-
 # ---- events: an operator leaves or arrives -------------------------------------------
 
 from dispatcher.shop.redispatch import ShopEvent, redispatch_shop  # noqa: E402 - this section's own

@@ -120,3 +120,36 @@ def test_every_crew_control_has_an_accessible_name(open_window):
     for widget in (tab.view, tab.table):
         assert widget.accessibleName() and widget.accessibleDescription()
     assert tab.add.text() and tab.add.accessibleDescription()
+
+
+def _wait_side(qtbot, window) -> None:
+    runners = (window.whatif_tab.runner, window.alternatives_tab.runner)
+    qtbot.waitUntil(lambda: not any(r.is_busy() for r in runners), timeout=20_000)
+    for r in runners:
+        r.wait_idle()
+    qtbot.waitUntil(lambda: not any(r.is_busy() for r in runners), timeout=20_000)
+
+
+def test_what_if_map_and_alternatives_plan_with_the_crew(qtbot, open_window):
+    """The map's numbers are those of the staffed plan (checked against brute force in
+    tests/test_staffed_choices.py); every ranked plan staffs its machines."""
+    from dispatcher.shop.whatif import what_if_grid
+    from dispatcher.ui.whatif_view import ExtraRole
+
+    window = open_window(SAMPLE)
+    activate(qtbot, window)
+    window.tabs.setCurrentWidget(window.whatif_tab.view)
+    _wait_side(qtbot, window)
+    model = window.whatif_tab.view.model
+    grid = what_if_grid(window.plan)
+    shop = window.doc.shop
+    press2 = shop.machine_names().index("Press brake 2")
+    cover = shop.job_names().index("WO-8103 cover")
+    assert model.index(cover, press2).data(ExtraRole) == grid.extra[cover, press2] > 0
+    window.tabs.setCurrentWidget(window.alternatives_tab.view)
+    window.alternatives_tab.find(3)
+    _wait_side(qtbot, window)
+    plans = window.alternatives_tab.view.plans
+    assert len(plans) == 3 and all(p.staffing is not None for p in plans)
+    assert all(a.operator or a.machine in plans[1].staffing["unattended_machines"]
+               for a in plans[1].assignments)

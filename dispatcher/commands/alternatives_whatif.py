@@ -63,6 +63,29 @@ def added_keys(result: DispatchResult, args: argparse.Namespace, jobs: list[str]
     return out
 
 
+def staffed_added_keys(plan, args: argparse.Namespace, machines: list[str]) -> dict[str, Any]:
+    """The same keys for a shop with a crew: ranked staffed plans (each assignment with its
+    ``operator``) and staffed what-if costs (:mod:`dispatcher.engine.staffed_choices`)."""
+    from dispatcher.shop.alternatives import alternative_plans
+    from dispatcher.shop.whatif import what_if_grid
+
+    out: dict[str, Any] = {}
+    if args.alternatives is not None:
+        out["alternatives"] = [
+            {"total": json_number(p.total),
+             "assignments": [{"job": a.job, "machine": a.machine, "cost": json_number(a.cost),
+                              "operator": a.operator} for a in p.assignments]}
+            for p in alternative_plans(plan, args.alternatives)]
+    if args.what_if:
+        grid = what_if_grid(plan)
+        shop = plan.problem.shop
+        out["what_if"] = {
+            shop.jobs[i].name: {m: (None if np.isnan(grid.extra[i, k]) else json_number(float(grid.extra[i, k])))
+                                for k, m in enumerate(machines)}
+            for i in np.flatnonzero(grid.in_problem)}
+    return out
+
+
 def _alternatives(result: DispatchResult, k: int, jobs: list[str],
                   columns: list[str]) -> list[dict[str, Any]]:
     # Columns with the same machine name are slots of one machine (ranked over machines).

@@ -32,7 +32,6 @@ from dispatcher.engine import DispatchInputError, InfeasibleError, solve
 from dispatcher.errors import Infeasible
 from dispatcher.io.grid import read_grid
 from dispatcher.io.shopfile import shop_to_dict
-from dispatcher.shop.crew import refuse_with_crew
 from dispatcher.shop import shop_from_grid
 
 
@@ -105,13 +104,13 @@ def run(args: argparse.Namespace) -> int:
         shop = read_shop_arg(args.grid)
         shop_plan = solve_shop_arg(shop, args.grid, objective_of(args), args.must_run)
         problem = shop_plan.problem
-        if getattr(args, "what_if", False) or getattr(args, "alternatives", None):
-            refuse_with_crew(shop_plan.staffing is not None,
-                             "--what-if and --alternatives", args.grid)
-        added = alternatives_whatif.added_keys(
-            shop_plan.result, args, [problem.job_name(n) for n in range(len(problem.rows))],
-            [problem.machine_name(c) for c in range(len(problem.columns))],
-            shop.machine_names())
+        if shop_plan.staffing is not None:
+            added = alternatives_whatif.staffed_added_keys(shop_plan, args, shop.machine_names())
+        else:
+            added = alternatives_whatif.added_keys(
+                shop_plan.result, args, [problem.job_name(n) for n in range(len(problem.rows))],
+                [problem.machine_name(c) for c in range(len(problem.columns))],
+                shop.machine_names())
         if added and args.json:
             print_json({**shop_plan.to_json(), **added})
         else:

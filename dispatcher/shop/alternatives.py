@@ -13,8 +13,8 @@ from dataclasses import dataclass
 
 from dispatcher.engine import DispatchResult
 from dispatcher.engine.ranking import ranked_plans
+from dispatcher.engine.staffed_choices import ranked_staffed_plans
 
-from .crew import refuse_with_crew
 from .plan import Assignment, Plan
 from .planning import Cancelled
 
@@ -46,10 +46,11 @@ def alternative_plans(plan: Plan, count: int, cancel=None) -> list[Plan]:
     Raises ValueError for the bottleneck objective (the engine ranks total and maximize)
     and :class:`~dispatcher.shop.planning.Cancelled` when ``cancel`` is set.
     """
-    refuse_with_crew(plan.staffing is not None, "ranked alternative plans")
     problem, result = plan.problem, plan.result
     if problem is None or result is None:
         raise ValueError("this plan carries no solver result to rank alternatives from")
+    if plan.staffing is not None:
+        return _staffed_alternatives(plan, count, cancel)
     shop = problem.shop
     out: list[Plan] = []
     busy_running = {r.machine for r in plan.running}
@@ -72,4 +73,24 @@ def alternative_plans(plan: Plan, count: int, cancel=None) -> list[Plan]:
                         waiting_jobs=waiting, idle_machines=idle, certificate={"rank": rank},
                         status="alternative", running=list(plan.running),
                         unavailable_machines=list(plan.unavailable_machines)))
+    return out
+
+
+def _staffed_alternatives(plan: Plan, count: int, cancel=None) -> list[Plan]:
+    """Ranked plans of a shop with a crew: each staffed (an operator on every running
+    machine), with its own staffing summary (:func:`ranked_staffed_plans`)."""
+    from dataclasses import replace
+
+    from .staffed import _plan, staffing_inputs
+
+    problem = plan.problem
+    ranked = ranked_staffed_plans(plan.result, count, cancel)
+    if cancel is not None and cancel.is_set():
+        raise Cancelled("ranking cancelled")
+    x = staffing_inputs(problem)
+    out = [plan]
+    for rank, sp in enumerate(ranked[1:], start=2):
+        p = _plan(problem, sp, x)
+        out.append(replace(p, certificate={"rank": rank, "verified": p.certificate["verified"]},
+                           status="alternative"))
     return out

@@ -4,7 +4,9 @@ The numbers are the engine's exact what-if costs (:func:`dispatcher.engine.whati
 on the problem the plan was solved on; this module only maps the problem's rows (waiting
 jobs) and columns (machine slots) back to jobs and machines. A machine with several slots
 takes the least extra over its slots (any free slot will do): :func:`machine_minimum`,
-the one place that rule is written.
+the one place that rule is written. For a shop with a crew the costs are those of the
+staffed plan (:func:`dispatcher.engine.staffed_choices.staffed_what_if`): forcing a pair
+keeps a present, qualified operator on every running machine.
 """
 
 from __future__ import annotations
@@ -13,9 +15,9 @@ from dataclasses import dataclass
 
 import numpy as np
 
+from dispatcher.engine.staffed_choices import staffed_what_if
 from dispatcher.engine.whatif import what_if
 
-from .crew import refuse_with_crew
 from .model import UP
 from .plan import Plan
 from .planning import Cancelled
@@ -72,24 +74,34 @@ def what_if_grid(plan: Plan, cancel=None) -> WhatIfGrid:
     """Map the engine's what-if costs for ``plan`` onto its shop (raises ValueError for
     the bottleneck objective, where one number per pair does not describe the plans, and
     :class:`~dispatcher.shop.planning.Cancelled` when ``cancel`` is set)."""
-    refuse_with_crew(plan.staffing is not None, "the what-if map")
     problem, result = plan.problem, plan.result
     if problem is None or result is None:
         raise ValueError("this plan carries no solver result to compute what-if costs from")
-    w = what_if(result)
-    if cancel is not None and cancel.is_set():
-        raise Cancelled("what-if costs cancelled")
     shop = problem.shop
     n_jobs, n_machines = len(shop.jobs), len(shop.machines)
     rows = np.asarray(problem.rows, dtype=np.int64)
     cols = np.asarray(problem.columns, dtype=np.int64)
     extra = np.full((n_jobs, n_machines), np.nan)
-    extra[rows] = machine_minimum(w.extra, cols.tolist(), range(n_machines))
+    planned = np.full(n_jobs, -1, dtype=np.int64)
+    wait_extra = np.full(n_jobs, np.nan)
+    if plan.staffing is not None:
+        # staffed: machines are the engine's columns, placeholders of running machines follow
+        n = len(rows)
+        staffed_extra, staffed_wait = staffed_what_if(result, cancel)
+        extra[rows] = staffed_extra[:n]
+        wait_extra[rows] = staffed_wait[:n]
+        placed = result.machine_of_job[:n] >= 0
+        planned[rows[placed]] = result.machine_of_job[:n][placed]
+    else:
+        w = what_if(result)
+        extra[rows] = machine_minimum(w.extra, cols.tolist(), range(n_machines))
+        wait_extra[rows] = w.wait_extra
+        placed = result.machine_of_job >= 0
+        planned[rows[placed]] = cols[result.machine_of_job[placed]]
+    if cancel is not None and cancel.is_set():
+        raise Cancelled("what-if costs cancelled")
     in_problem = np.zeros(n_jobs, dtype=bool)
     in_problem[rows] = True
-    planned = np.full(n_jobs, -1, dtype=np.int64)
-    placed = result.machine_of_job >= 0
-    planned[rows[placed]] = cols[result.machine_of_job[placed]]
     others = extra.copy()
     has_plan = planned >= 0
     others[np.flatnonzero(has_plan), planned[has_plan]] = np.nan
@@ -99,8 +111,6 @@ def what_if_grid(plan: Plan, cancel=None) -> WhatIfGrid:
     if ok.any():
         best_other[ok] = np.nanargmin(others[ok], axis=1)
         best_other_extra[ok] = others[np.flatnonzero(ok), best_other[ok]]
-    wait_extra = np.full(n_jobs, np.nan)
-    wait_extra[rows] = w.wait_extra
     machine_up = np.array([m.state == UP for m in shop.machines], dtype=bool)
     return WhatIfGrid(result.objective, extra, in_problem, machine_up, planned, best_other,
                       best_other_extra, wait_extra)
