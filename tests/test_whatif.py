@@ -18,6 +18,7 @@ from scipy.optimize import linear_sum_assignment
 
 from dispatcher.engine import InfeasibleError, solve, what_if
 from dispatcher.engine.whatif import alternating_distances
+from helpers_reference import scipy_reference
 
 
 def forced(values, allowed, penalty, must, objective, job, machine, placed):
@@ -52,6 +53,8 @@ def test_every_cell_equals_a_forced_re_solve(n_jobs, n_machines, seed, density, 
     try:
         base = solve(values, allowed, wait_penalty=penalty, must_run=must, objective=objective)
     except InfeasibleError:
+        # Reference: scipy's linear_sum_assignment on an encoding built in the helper.
+        assert not scipy_reference(values, allowed, penalty, must).feasible
         return
     result = what_if(base)
     sign = -1.0 if objective == "maximize" else 1.0
