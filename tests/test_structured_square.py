@@ -87,3 +87,46 @@ def test_machines_going_down_share_the_grid_and_stay_exact():
         rows, cols = linear_sum_assignment(rest)
         assert np.isclose(result.total, rest[rows, cols].sum())
     assert values.flags.writeable and np.isfinite(values).all()
+
+
+@pytest.mark.parametrize(("rows", "cols"), [
+    (np.array([[0, 3], [2, 1]]), np.array([[1, 0], [3, 2]])),  # element-wise, 2-D
+    (np.array([[0], [3], [1]]), np.array([[1], [3], [2]])),    # two columns of equal length
+    (np.array([[0], [3], [1]]), np.array([[[1, 3, 2, 0]]])),   # 3-D columns broadcast
+    (np.array([[0], [3], [1]]), np.array([[1, 3, 2, 0]])),     # the outer form (np.ix_)
+    ([], []),                                                  # nothing selected
+])
+def test_index_arrays_of_any_shape_match_the_dense_matrix(rows, cols):
+    # Reference: numpy's indexing of the dense matrix built by the layout rule; 2 jobs and
+    # 3 machines (one blocked), 2 idle rows, 1 wait slot.
+    base = np.array([[1.0, 2.0, 3.0], [4.0, np.inf, 6.0]])
+    wait = np.array([7.0, np.inf])
+    sq = StructuredSquare(base, [1], wait, 2, 1)
+    dense = by_rule(base, {1}, wait, 2)
+    np.testing.assert_array_equal(sq[rows, cols], dense[rows, cols])
+    np.testing.assert_array_equal(sq[[]], dense[[]])
+    np.testing.assert_array_equal(sq[:, []], dense[:, []])
+
+
+def test_unsupported_index_is_refused_with_the_reason():
+    sq = StructuredSquare(np.zeros((2, 2)), [], np.zeros(2), 0, 0)
+    columns = r"^m\[:, cols\] needs a 1-D array of columns$"
+    with pytest.raises(TypeError, match=columns):
+        sq[:, :]
+    with pytest.raises(TypeError, match=columns):
+        sq[:, np.zeros((1, 2), dtype=int)]
+    with pytest.raises(TypeError, match=r"^column slices are not supported$"):
+        sq[np.array([0]), 0:1]
+    rows = r"^rows are selected by an int or a 1-D array of ints$"
+    with pytest.raises(TypeError, match=rows):
+        sq[np.array([True, False])]
+    with pytest.raises(TypeError, match=rows):
+        sq[np.zeros((2, 1), dtype=int)]
+
+
+def test_parts_that_do_not_make_a_square_are_refused():
+    with pytest.raises(ValueError, match=r"^wait needs 2 entries, got \(3,\)$"):
+        StructuredSquare(np.zeros((2, 2)), [], np.zeros(3), 0, 0)
+    with pytest.raises(ValueError,
+                       match=r"^rows \(jobs \+ idle\) and columns \(machines \+ wait\) differ$"):
+        StructuredSquare(np.zeros((2, 3)), [], np.zeros(2), 0, 0)

@@ -20,13 +20,15 @@ mutmut=${MUTMUT:-mutmut}
 
 engine_tests="tests/test_engine_properties.py tests/test_engine_inputs.py
 tests/test_engine_reference.py tests/test_structured_square.py tests/test_verify_refuses.py
+tests/test_certificate_details.py tests/test_engine_rush.py
 tests/test_ranking.py tests/test_ranking_slots.py tests/test_whatif.py
 tests/test_redispatch.py tests/test_fill_shift.py"
 history_tests=$(cd "$root" && ls tests/test_history_*.py)
 case "$target" in
   certificate) mutate=dispatcher/engine/certificate.py
                tests="tests/test_verify_refuses.py tests/test_structured_square.py
-tests/test_engine_inputs.py tests/test_whatif.py" ;;
+tests/test_certificate_details.py tests/test_engine_inputs.py tests/test_engine_rush.py
+tests/test_whatif.py" ;;
   atomic)      mutate=dispatcher/atomic.py; tests="tests/test_atomic.py" ;;
   schema)      mutate=dispatcher/history/schema.py; tests="$history_tests" ;;
   engine)      mutate="dispatcher/engine/*"; tests="$engine_tests" ;;

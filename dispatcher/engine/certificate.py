@@ -46,11 +46,8 @@ def tolerance(cost: np.ndarray) -> float:
     ----------
     None: floating-point slack scaled to the data (common practice, no published method).
     """
-    finite = np.isfinite(cost)
-    high = float(np.max(cost, where=finite, initial=0.0))
-    low = float(np.min(cost, where=finite, initial=0.0))
-    scale = max(abs(high), abs(low))
-    return 1e-9 * max(1.0, scale) * max(1, cost.shape[0])
+    scale = float(np.max(np.abs(cost), where=np.isfinite(cost), initial=1.0))
+    return 1e-9 * scale * max(1, cost.shape[0])
 
 
 def potentials_from_plan(cost: np.ndarray, col_of_row: np.ndarray) -> tuple[np.ndarray, np.ndarray]:
@@ -95,8 +92,9 @@ def potentials_from_plan(cost: np.ndarray, col_of_row: np.ndarray) -> tuple[np.n
     planned = cost[rows, col_of_row]
     tol = tolerance(cost) * 1e-3
     # Distance to column j through row i is v[sigma(i)] - planned(i) + cost(i, j).
-    # Start from v = 0 everywhere (a virtual source joined to every column).
-    v = np.minimum((cost - planned[:, None]).min(axis=0), 0.0)
+    # Start from v = 0 everywhere (a virtual source joined to every column) and relax once;
+    # the planned pair makes every column's minimum <= 0.
+    v = (cost - planned[:, None]).min(axis=0)
     active = row_of_col[v < 0]
     for _ in range(n + 1):
         if active.size == 0:
@@ -214,7 +212,7 @@ class StructuredSquare:
         n_jobs, n_machines = self.base.shape
         if rows.ndim == 2 and rows.shape[1] == 1 and cols.ndim <= 2 and cols.size == cols.shape[-1]:
             # Outer form (m[np.ix_(r, c)], m[:, c]): a few whole columns, then the rows.
-            r, c = rows[:, 0], cols.reshape(-1)
+            r, c = rows[:, 0], cols.ravel()
             out = np.empty((r.size, c.size))
             for k, j in enumerate(c.tolist()):
                 out[:, k] = self._column(j)[r]
@@ -254,7 +252,7 @@ class StructuredSquare:
         idx = np.asarray(key)
         if idx.dtype == bool or idx.ndim != 1:
             raise TypeError("rows are selected by an int or a 1-D array of ints")
-        return self._rows(idx.astype(np.int64, copy=False))
+        return self._rows(np.asarray(idx, dtype=np.int64))
 
 
 @dataclass(frozen=True)
@@ -299,7 +297,7 @@ class Certificate:
         return self.cost - self.row_potential[:, None] - self.col_potential[None, :]
 
     def encodes(self, job_cost: np.ndarray, wait_cost: np.ndarray,
-                last_wait_cost: np.ndarray | None = None, n_last: int = 0) -> bool:
+                last_wait_cost: np.ndarray, n_last: int) -> bool:
         """True when ``cost`` is the dispatch layout of these jobs x machines costs.
 
         ``job_cost`` holds the cost of each (job, machine) pair (``inf`` = not allowed),
@@ -309,8 +307,7 @@ class Certificate:
         row costs 0 on every machine and cannot wait. Without this check a certificate
         only proves its plan optimal for whatever square it carries.
         """
-        job_cost = np.asarray(job_cost, dtype=float)
-        wait_cost = np.asarray(wait_cost, dtype=float).reshape(-1)
+        job_cost, wait_cost = np.asarray(job_cost), np.asarray(wait_cost)
         n_jobs, n_machines = job_cost.shape
         cost = self.cost
         size = cost.shape[0]
@@ -322,15 +319,11 @@ class Certificate:
         if n_last:
             if size - n_last < n_machines:
                 return False
-            expect[:n_jobs, size - n_last:] = np.asarray(last_wait_cost, dtype=float)[:, None]
+            expect[:n_jobs, size - n_last:] = np.asarray(last_wait_cost)[:, None]
         expect[n_jobs:, :n_machines] = 0.0
         expect[n_jobs:, n_machines:] = np.inf
-        same_inf = np.isinf(expect) == np.isinf(cost)
-        if not same_inf.all():
-            return False
-        finite = np.isfinite(expect)
-        return bool(np.allclose(cost[finite], expect[finite], rtol=1e-12,
-                                atol=tolerance(cost) * 1e-3))
+        # allclose counts inf as equal only to inf (and NaN as equal to nothing).
+        return bool(np.allclose(cost, expect, rtol=1e-12, atol=tolerance(cost) * 1e-3))
 
     def verify(self) -> bool:
         """True when the potentials prove the plan optimal for ``cost``."""
@@ -343,7 +336,6 @@ class Certificate:
         if not np.isfinite(self.cost[rows, self.col_of_row]).all():
             return False
         tol = tolerance(self.cost)
-        red = self.reduced_costs()
-        finite = np.isfinite(self.cost)
-        return bool((red[finite] >= -tol).all()
+        red = self.reduced_costs()  # inf on forbidden pairs, which passes
+        return bool((red >= -tol).all()
                     and np.abs(red[rows, self.col_of_row]).max() <= tol)
