@@ -188,3 +188,29 @@ def test_encodes_refuses_parts_of_the_wrong_size():
     assert not cert.encodes(big, np.zeros(5), np.zeros(5), 0)
     assert not cert.encodes(JOB, np.r_[WAIT, 0.0], no_last, 0)  # one wait cost too many
     assert not certificate(square[:, :3]).encodes(JOB, WAIT, no_last, 0)  # not square
+
+
+def test_potentials_are_the_shortest_path_distances_of_the_residual_graph():
+    # Reference: networkx's Bellman-Ford on the residual graph of the identity plan (column
+    # i -> column j costs cost(i, j) - cost(i, i)) from a source joined to every column at
+    # 0; the potentials v are those distances. The chain 40 -> 5 -> 6 -> 7 settles only in a
+    # third pass, and another improvement (35 -> 36) lands in the second block of rows
+    # relaxed in the same pass, so the columns changed by the first block must be kept.
+    import networkx as nx
+    n = 64
+    cost = np.full((n, n), 10.0)
+    np.fill_diagonal(cost, 0.0)
+    cost[63, :40] = -0.5
+    for i, j in [(40, 5), (5, 6), (6, 7), (35, 36)]:
+        cost[i, j] = -1.0
+    plan = np.arange(n)
+    assert cost[np.arange(n), linear_sum_assignment(cost)[1]].sum() == 0.0  # identity optimal
+    graph = nx.DiGraph()
+    graph.add_weighted_edges_from(("s", j, 0.0) for j in range(n))
+    graph.add_weighted_edges_from((i, j, cost[i, j]) for i in range(n) for j in range(n)
+                                  if i != j)
+    distance = nx.single_source_bellman_ford_path_length(graph, "s")
+    u, v = potentials_from_plan(cost, plan)
+    assert v.tolist() == [distance[j] for j in range(n)]
+    assert v[7] == -3.0
+    assert (cost - u[:, None] - v[None, :] >= 0).all()

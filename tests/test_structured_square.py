@@ -94,6 +94,8 @@ def test_machines_going_down_share_the_grid_and_stay_exact():
     (np.array([[0], [3], [1]]), np.array([[1], [3], [2]])),    # two columns of equal length
     (np.array([[0], [3], [1]]), np.array([[[1, 3, 2, 0]]])),   # 3-D columns broadcast
     (np.array([[0], [3], [1]]), np.array([[1, 3, 2, 0]])),     # the outer form (np.ix_)
+    (np.array([[0, 3], [2, 1], [3, 3]]), np.array([[1, 3]])),  # rows two wide, one column row
+    (np.array([[[0]], [[3]], [[1]]]), np.array([[1, 3, 2, 0]])),  # 3-D rows broadcast
     ([], []),                                                  # nothing selected
 ])
 def test_index_arrays_of_any_shape_match_the_dense_matrix(rows, cols):
