@@ -357,7 +357,9 @@ def test_open_recent_reopens_a_saved_shop(qtbot, open_window, tmp_path):
     assert window.doc.n_jobs() == 0
     recent = window.recent_menu.actions()
     assert recent and str(target) in recent[0].text()
-    recent[0].trigger()
+    with qtbot.waitSignal(window.files.loaded) as opened:
+        recent[0].trigger()
+    assert opened.args == [True]
     assert window.doc.path == target and shop_to_dict(window.doc.shop) == saved
 
 

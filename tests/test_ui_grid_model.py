@@ -119,3 +119,40 @@ def test_copy_then_paste_round_trips(doc):
 def test_bad_blocks_are_refused_with_their_place(doc, text, message):
     with pytest.raises(PasteError, match=message):
         paste_changes(text, doc.shop, 0, 0)
+
+
+def _every_role_matches(model, roles):
+    """Each cell's answer (cached) equals the one worked out afresh from the document."""
+    for r in range(model.rowCount()):
+        for c in range(model.columnCount()):
+            idx = model.index(r, c)
+            for role in roles:
+                assert idx.data(role) == model.computed_data(r, c, role), (r, c, role)
+
+
+def test_cached_cell_answers_follow_every_kind_of_change(doc):
+    from dispatcher.shop import DOWN
+    from dispatcher.ui.edits import SetJobField, SetMachineFields, SetValues
+    from dispatcher.ui.grid_model import CACHED_ROLES
+    roles = list(CACHED_ROLES) + [int(Qt.ItemDataRole.ToolTipRole)]
+    assert any(j.family for j in doc.shop.jobs) and doc.shop.changeover_tables
+    model = GridModel(doc)
+    _every_role_matches(model, roles)
+    before = model.index(0, FIRST_MACHINE_COL).data()
+    model.set_plan(solve_shop(doc.shop))       # plan marks, bold font, colours
+    _every_role_matches(model, roles)
+    doc.undo_stack.push(SetValues(doc, [(0, 0, 71.0), (1, 1, None)], "two values"))
+    assert model.index(0, FIRST_MACHINE_COL).data(ValueRole) == 71.0 != before
+    assert model.index(1, FIRST_MACHINE_COL + 1).data(ValueRole) is None
+    doc.undo_stack.push(SetPin(doc, 2, 0, MUST_NOT, "forbid"))
+    doc.undo_stack.push(SetJobField(doc, 0, "rush", True, "rush"))
+    doc.undo_stack.push(SetMachineFields(doc, 1, {"state": DOWN}, "down"))
+    families = sorted({j.family for j in doc.shop.jobs if j.family})
+    assert len(families) >= 2            # the sample prices changeovers: derived values
+    other = next(f for f in families if f != doc.shop.jobs[3].family)
+    doc.undo_stack.push(SetJobField(doc, 3, "family", other, "family"))
+    _every_role_matches(model, roles)
+    for _ in range(5):
+        doc.undo_stack.undo()
+    _every_role_matches(model, roles)
+    assert model.index(0, FIRST_MACHINE_COL).data() == before

@@ -6,7 +6,7 @@ from __future__ import annotations
 import json
 
 from PySide6.QtWidgets import QMessageBox
-from ui_support import make_window
+from ui_support import make_window, open_file
 
 from dispatcher.ui.messages import Messenger
 
@@ -20,7 +20,7 @@ def test_every_problem_reaches_the_message_details(qtbot, tmp_path, monkeypatch)
     path = tmp_path / "bad.dshop"
     path.write_text(json.dumps(doc), encoding="utf-8")
     before = path.read_bytes()
-    assert not window.open_path(path)
+    assert not open_file(qtbot, window, path)
     kind, _title, text = window.messenger.messages[-1]
     detail = window.messenger.details[-1]
     assert kind == "error" and "202 problems:" in text and "and 194 more" in text

@@ -7,6 +7,7 @@ import pytest
 
 from dispatcher.io.shopfile import load_shop, shop_to_dict
 from dispatcher.shop.alternatives import alternative_plans
+from dispatcher.shop.packing import pack_shop, unpack_shop
 from dispatcher.shop.whatif import what_if_grid
 from dispatcher.ui import solving
 
@@ -14,7 +15,7 @@ from dispatcher.ui import solving
 def test_the_packed_shop_is_the_same_shop(samples):
     for name in ("medium_machining_shop.dshop", "large_print_plant.dshop"):
         shop = load_shop(samples / name)
-        assert shop_to_dict(solving._unpack(solving._pack(shop))) == shop_to_dict(shop)
+        assert shop_to_dict(unpack_shop(pack_shop(shop))) == shop_to_dict(shop)
 
 
 def test_a_round_solved_in_the_worker_process_is_the_plan_solved_here(samples):

@@ -18,7 +18,7 @@ from dispatcher.shop.translate import build_problem
 from dispatcher.ui.decision import SAFETY_REMINDER
 from dispatcher.ui.grid_model import COL_HOURS, FIRST_MACHINE_COL, PlannedRole
 from helpers_reference import scipy_reference
-from ui_support import activate, make_window, reference_total, save_shot, wait_plan
+from ui_support import activate, make_window, open_file, reference_total, save_shot, wait_plan
 
 
 @pytest.fixture
@@ -207,7 +207,7 @@ def test_save_and_reopen_gives_the_identical_shop(qtbot, shop_window, tmp_path):
     assert shop_to_dict(load_shop(target)) == saved
     window.files.new()
     assert window.doc.n_jobs() == 0
-    assert window.open_path(target)
+    assert open_file(qtbot, window, target)
     assert shop_to_dict(window.doc.shop) == saved
     assert str(target) in window.files.recent()
 
@@ -220,7 +220,7 @@ def test_a_bad_file_shows_a_message_and_keeps_the_document(qtbot, shop_window, t
     before, path, shop = shop_to_dict(window.doc.shop), window.doc.path, window.doc.shop
     bad = tmp_path / "broken.dshop"
     bad.write_text(content, encoding="utf-8")
-    assert not window.open_path(bad)
+    assert not open_file(qtbot, window, bad)
     kind, title, text = window.messenger.messages[-1]
     assert kind == "error" and str(bad) in text
     assert window.doc.shop is shop and window.doc.path == path and window.doc.dirty
@@ -232,7 +232,7 @@ def test_unsaved_changes_prompt_can_cancel_opening(qtbot, shop_window, samples):
     _edit(qtbot, window, 0, 0, "45")
     window.messenger.save_answer = "cancel"
     shop = window.doc.shop
-    assert not window.open_path(samples / "sheet_metal_grid.csv")
+    assert not open_file(qtbot, window, samples / "sheet_metal_grid.csv")
     assert window.doc.shop is shop
     assert window.messenger.messages[-1][0] == "save?"
 
@@ -304,8 +304,8 @@ def test_no_exception_escapes_during_a_session(qtbot, shop_window, samples, tmp_
         window.request_solve()
         window.runner.cancel()
         wait_plan(qtbot, window)
-        window.open_path(tmp_path / "missing.dshop")
-        window.open_path(samples / "medium_machining_shop.dshop")
+        assert not open_file(qtbot, window, tmp_path / "missing.dshop")
+        assert open_file(qtbot, window, samples / "medium_machining_shop.dshop")
         wait_plan(qtbot, window)
     assert exceptions == []
     assert window.plan is not None

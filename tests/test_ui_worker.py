@@ -62,3 +62,30 @@ def test_a_slow_job_reports_slow_and_errors_arrive_as_signals(qtbot):
     with qtbot.waitSignal(runner.failed, timeout=5000) as blocker:
         runner.submit(broken)
     assert isinstance(blocker.args[0], ValueError)
+
+
+def test_a_burst_of_deferred_requests_prepares_and_runs_once(qtbot):
+    runner = BackgroundRunner()
+    gate = threading.Event()
+    results, prepared = [], []
+    runner.finished.connect(results.append)
+    state = {"n": 0}
+
+    def prepare():
+        prepared.append(state["n"])          # the state when the delay ends
+        n = state["n"]
+        return lambda cancel: f"solved {n}"
+
+    runner.submit(lambda cancel: gate.wait(10) and "stale")
+    for n in range(1, 6):                     # five edits in a row
+        state["n"] = n
+        runner.submit_deferred(prepare, delay_ms=50)
+        assert runner.is_busy()
+    gate.set()
+    qtbot.waitUntil(lambda: not runner.is_busy(), timeout=10_000)
+    runner.wait_idle()
+    assert prepared == [5] and results == ["solved 5"]
+    runner.submit_deferred(prepare, delay_ms=50)
+    runner.cancel()                            # a cancel drops a deferred request too
+    qtbot.wait(120)
+    assert prepared == [5] and not runner.is_busy()

@@ -24,9 +24,17 @@ def make_window(qtbot, tmp_path: Path, monkeypatch, path: Path | None = None) ->
                         history_path=tmp_path / "history.sqlite")
     qtbot.addWidget(window)
     if path is not None:
-        assert window.open_path(path), window.messenger.messages
+        assert open_file(qtbot, window, path), window.messenger.messages
     wait_plan(qtbot, window)
     return window
+
+
+def open_file(qtbot, window: MainWindow, path: Path, timeout: int = 20_000) -> bool:
+    """Open ``path`` as the File menu does (read in the background) and wait until it
+    ends; True when the file was opened."""
+    with qtbot.waitSignal(window.files.loaded, timeout=timeout) as blocker:
+        assert window.open_path(path)
+    return blocker.args[0]
 
 
 def activate(qtbot, window) -> None:

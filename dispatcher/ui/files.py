@@ -1,8 +1,11 @@
 """Files for the window: new, open, save, save as, grid import/export, recent files,
 the unsaved-changes prompt, and autosave with recovery after a crash.
 
-Opening a file that cannot be read shows one message naming the file and the problem and
-leaves the open document exactly as it was. Autosave writes a copy of the unsaved document
+Opening reads the file off the GUI thread (:meth:`FileController.open_path` returns at
+once; ``loaded(bool)`` says how it ended): in a background thread, or for a file over
+:data:`LOAD_IN_PROCESS_BYTES` in a worker process, which a cancel (Esc) stops at once. A
+file that cannot be read shows one message naming the file and the problem and leaves the
+open document exactly as it was. Autosave writes a copy of the unsaved document
 to a per-user folder every :data:`AUTOSAVE_MS` in a background thread (the GUI thread only
 takes a cheap snapshot); a clean save or close removes it, so a copy found at start-up
 means the app did not close normally and the user is offered to recover it.
@@ -16,15 +19,42 @@ from pathlib import Path
 
 from PySide6.QtCore import QObject, QRunnable, QSettings, QStandardPaths, QThreadPool, QTimer, Signal
 
-from dispatcher.io.grid import GRID_SUFFIXES, GridFileError, read_grid
+from dispatcher.io.grid import GridFileError
+from dispatcher.io.reading import problem_texts, read_document, read_document_packed
 from dispatcher.io.shopfile import SHOP_SUFFIX, load_shop, save_shop
 from dispatcher.io.spreadsheet import export_grid, export_plan, import_grid_file
-from dispatcher.shop import Shop, ShopError, shop_from_grid
+from dispatcher.shop import Shop, ShopError
+from dispatcher.shop.packing import unpack_shop
 from dispatcher.ui.document import ShopDocument
 from dispatcher.ui.messages import CANCEL, SAVE, Messenger
 from dispatcher.ui.settings_keys import KEY_RECENT
+from dispatcher.ui.worker import BackgroundRunner, WorkerProcess
 
 AUTOSAVE_MS = 60_000
+# Files larger than this are parsed in the worker process: parsing the 2.5 MB document
+# of a 1000 x 200 shop holds the interpreter lock for about 0.7 s, which in a thread
+# would stop the window as surely as on the GUI thread. Smaller files (every sample
+# shop) are read in a background thread, quicker than starting the process.
+LOAD_IN_PROCESS_BYTES = 1_000_000
+_LOADER = WorkerProcess()
+
+
+def read_for_window(path: Path, cancel=None) -> tuple:
+    """``("ok", shop)`` or ``("refused", text, detail)``: the file read off the GUI
+    thread (in the worker process when it is large)."""
+    try:
+        size = path.stat().st_size
+    except OSError:
+        size = 0   # the reader reports the missing or unreadable file itself
+    if size > LOAD_IN_PROCESS_BYTES:
+        outcome = _LOADER.call(read_document_packed, str(path), cancel=cancel)
+        if outcome[0] == "ok":
+            return "ok", unpack_shop(outcome[1])
+        return outcome
+    try:
+        return "ok", read_document(path)
+    except (ShopError, GridFileError) as exc:
+        return ("refused",) + problem_texts(exc)
 MAX_RECENT = 8
 RECENT_KEY = KEY_RECENT
 
@@ -57,6 +87,7 @@ class FileController(QObject):
     recent_changed = Signal()
     status = Signal(str)
     problem = Signal(str)   # a file could not be opened or saved (the message shown)
+    loaded = Signal(bool)   # an open_path ended: True opened, False refused, kept or cancelled
 
     def __init__(self, doc: ShopDocument, messenger: Messenger, settings: QSettings,
                  parent: QObject | None = None):
@@ -70,6 +101,15 @@ class FileController(QObject):
         self._autosave_timer.start()
         self._pool = QThreadPool(self)
         self._pool.setMaxThreadCount(1)
+        self._opening = Path()
+        self._loading = False
+        self.loaded.connect(self._loaded)
+        self.loader = BackgroundRunner(self, QThreadPool(self))
+        self.loader.finished.connect(self._on_read)
+        self.loader.failed.connect(self._on_read_failed)
+        self.loader.cancelled.connect(self._on_read_cancelled)
+        self.loader.slow.connect(
+            lambda _: self.status.emit(self.tr("Opening {path}\u2026 (Esc cancels)").format(path=self._opening)))
 
     def set_autosave_minutes(self, minutes: int) -> None:
         """Autosave every ``minutes`` (from the settings; the timer restarts)."""
@@ -112,36 +152,67 @@ class FileController(QObject):
         self.doc.replace(shop or Shop(name=self.tr("New shop")), None)
         return True
 
-    def open_path(self, path: str | os.PathLike) -> bool:
-        """Open a shop document or a grid file. On failure: a message, document untouched."""
+    def open_path(self, path: str | os.PathLike, wait: bool = False) -> bool:
+        """Open a shop document or a grid file; on failure a message and the document as
+        it was. The file is read in the background and ``loaded(bool)`` is emitted when
+        done (True: opened); returns True once the read has started. With ``wait`` the
+        call reads at once and returns whether the file was opened (start-up)."""
         path = Path(path)
-        try:
-            shop = self._read(path)
-        except (ShopError, GridFileError) as exc:
-            short, detail = _problem_texts(exc)
+        self.status.emit(self.tr("Opening {path}\u2026").format(path=path))
+        if wait:
+            self.loader.cancel()
+            return self._finish_open(path, read_for_window(path))
+        self._opening = path
+        self._loading = True
+        self.loader.submit(lambda cancel: read_for_window(path, cancel), "opening")
+        return True
+
+    def is_loading(self) -> bool:
+        """True from :meth:`open_path` until ``loaded`` (a cancelled read is over at once,
+        though its process may take a moment to stop)."""
+        return self._loading
+
+    def cancel_open(self) -> None:
+        """Stop reading the file being opened (the document stays as it is)."""
+        self.loader.cancel()
+
+    def _loaded(self, _opened: bool) -> None:
+        self._loading = False
+
+    def _on_read(self, outcome: tuple) -> None:
+        self._finish_open(self._opening, outcome)
+
+    def _on_read_failed(self, exc: Exception) -> None:
+        text = self.tr("{path}: cannot be read ({error})").format(path=self._opening, error=exc)
+        self.messenger.error(self.tr("Cannot open file"), text)
+        self.problem.emit(text)
+        self.status.emit(self.tr("Not opened: {problem}").format(problem=text))
+        self.loaded.emit(False)
+
+    def _on_read_cancelled(self) -> None:
+        self.status.emit(self.tr("Not opened: reading {path} was cancelled").format(path=self._opening))
+        self.loaded.emit(False)
+
+    def _finish_open(self, path: Path, outcome: tuple) -> bool:
+        if outcome[0] != "ok":
+            _, short, detail = outcome
             self.messenger.error(self.tr("Cannot open file"), short, detail)
             self.problem.emit(short)
             self.status.emit(self.tr("Not opened: {problem}").format(problem=short.splitlines()[0]))
+            self.loaded.emit(False)
             return False
         if not self.maybe_keep_changes():
+            self.status.emit(self.tr("Not opened: {problem}").format(problem=path))
+            self.loaded.emit(False)
             return False
         self.discard_autosave()
         is_document = path.suffix.lower() == SHOP_SUFFIX
-        self.doc.replace(shop, path if is_document else None)
+        self.doc.replace(outcome[1], path if is_document else None)
         if is_document:
             self._remember(path)
         self.status.emit(self.tr("Opened {path}").format(path=path))
+        self.loaded.emit(True)
         return True
-
-    @staticmethod
-    def _read(path: Path) -> Shop:
-        if path.suffix.lower() in GRID_SUFFIXES:
-            table = read_grid(path)
-            return shop_from_grid(table.jobs, table.machines, table.values, table.allowed,
-                                  name=path.stem)
-        # Open without the whole-shop check: an inconsistent shop still opens so it can be
-        # fixed; the plan panel names what is wrong.
-        return load_shop(path, check=False)
 
     # ---- save -----------------------------------------------------------------------------
     def save(self) -> bool:
@@ -156,7 +227,7 @@ class FileController(QObject):
         try:
             save_shop(self.doc.shop, path)
         except ShopError as exc:
-            short, detail = _problem_texts(exc)
+            short, detail = problem_texts(exc)
             self.messenger.error(self.tr("Cannot save"), short, detail)
             self.problem.emit(short)
             self.status.emit(self.tr("Not saved: {problem}").format(problem=short.splitlines()[0]))
@@ -254,6 +325,7 @@ class FileController(QObject):
 
     def shutdown(self) -> None:
         self._autosave_timer.stop()
+        self.loader.shutdown()
         self._pool.waitForDone(30_000)
 
 
@@ -262,10 +334,3 @@ def _mtime_text(path: Path) -> str:
 
     from dispatcher.ui.format import when_text
     return when_text(datetime.fromtimestamp(path.stat().st_mtime))
-
-
-def _problem_texts(exc: Exception) -> tuple[str, str]:
-    """A message box's text (the first problems) and its detail (every problem, or "")."""
-    if isinstance(exc, ShopError) and len(exc.problems) > 8:
-        return exc.summary(8), str(exc)
-    return str(exc), ""

@@ -8,6 +8,12 @@ the pencil mark and says so in its tooltip. The model reads the shop through
 :class:`~dispatcher.ui.document.ShopDocument` and the current plan; every edit becomes an
 undoable command on the document's stack. Planned cells carry a check mark, pins a
 diamond, forbidden pairs a cross and cannot-run pairs a dash, besides their colour.
+
+Painting asks ``data()`` for about seven roles per visible cell, so a page of a big shop is
+several thousand calls. The model keeps what it derives per cell (text, colour, font,
+alignment and the plain values) in a small cache filled on the first role asked and
+emptied on every change of the document or the plan shown; tooltips are built only when
+asked. ``benchmarks/gui_stall.py`` measures the effect.
 """
 
 from __future__ import annotations
@@ -48,6 +54,30 @@ _CELL_ROLES = [Qt.ItemDataRole.DisplayRole, Qt.ItemDataRole.EditRole,
 _PLAN_ROLES = [Qt.ItemDataRole.DisplayRole, Qt.ItemDataRole.BackgroundRole,
                Qt.ItemDataRole.ToolTipRole, Qt.ItemDataRole.AccessibleTextRole, PlannedRole]
 
+_DISPLAY = int(Qt.ItemDataRole.DisplayRole)
+_DECORATION = int(Qt.ItemDataRole.DecorationRole)
+_EDIT = int(Qt.ItemDataRole.EditRole)
+_TOOLTIP = int(Qt.ItemDataRole.ToolTipRole)
+_FONT = int(Qt.ItemDataRole.FontRole)
+_ALIGNMENT = int(Qt.ItemDataRole.TextAlignmentRole)
+_BACKGROUND = int(Qt.ItemDataRole.BackgroundRole)
+_FOREGROUND = int(Qt.ItemDataRole.ForegroundRole)
+_CHECK = int(Qt.ItemDataRole.CheckStateRole)
+_ACCESSIBLE = int(Qt.ItemDataRole.AccessibleTextRole)
+_VALUE, _PIN, _PLANNED, _RUNNING = int(ValueRole), int(PinRole), int(PlannedRole), int(RunningRole)
+_SOURCE = int(SourceRole)
+#: The roles kept per cell (a role not listed, such as the tooltip, is computed when asked).
+CACHED_ROLES = (_DISPLAY, _DECORATION, _EDIT, _FONT, _ALIGNMENT, _BACKGROUND, _FOREGROUND,
+                _CHECK, _ACCESSIBLE, _VALUE, _PIN, _SOURCE, _PLANNED, _RUNNING)
+#: At most this many cells are kept (a few pages of a big shop); the cache starts afresh.
+CACHE_CELLS = 20_000
+_RIGHT = int(Qt.AlignmentFlag.AlignRight | Qt.AlignmentFlag.AlignVCenter)
+_CENTRE = int(Qt.AlignmentFlag.AlignCenter)
+_FLAGS_BASE = Qt.ItemFlag.ItemIsEnabled | Qt.ItemFlag.ItemIsSelectable
+_FLAGS_CHECK = _FLAGS_BASE | Qt.ItemFlag.ItemIsUserCheckable
+_FLAGS_EDIT = _FLAGS_BASE | Qt.ItemFlag.ItemIsEditable
+
+
 #: A machine's state in its column head, after its mark (English; shown translated).
 STATE_TEXT = {UP: (palette.MARK_UP, QT_TRANSLATE_NOOP("GridModel", "up")),
               DOWN: (palette.MARK_DOWN, QT_TRANSLATE_NOOP("GridModel", "DOWN")),
@@ -75,6 +105,12 @@ class GridModel(QAbstractTableModel):
         self._running: dict[int, int] = {}     # row -> machine col (already running)
         self._waiting: set[int] = set()
         self._rush_text = self.tr("{mark} RUSH").format(mark=palette.MARK_RUSH)  # painted per row
+        self._cache: dict[tuple[int, int], dict] = {}
+        # Connected first, so that the cache is empty before any view hears of a change.
+        for signal in (doc.reset, doc.cells_changed, doc.jobs_changed, doc.machines_changed,
+                       doc.crew_changed, doc.tables_changed, doc.edited, doc.job_inserting, doc.job_removing,
+                       doc.machine_inserting, doc.machine_removing):
+            signal.connect(self._forget)
         doc.reset.connect(self._on_reset)
         doc.cells_changed.connect(self._on_cells)
         doc.jobs_changed.connect(self._on_jobs)
@@ -125,6 +161,7 @@ class GridModel(QAbstractTableModel):
             waiting = {rows[n] for n in plan.waiting_jobs if n in rows}
         touched = {(r, c) for r, c in self._planned.items()} ^ {(r, c) for r, c in planned.items()}
         self._plan, self._planned, self._running, self._waiting = plan, planned, running, waiting
+        self._cache.clear()
         operators = operators_by_machine(getattr(plan, "staffing", None))
         if operators != self._operators:
             self._operators = operators
@@ -146,7 +183,69 @@ class GridModel(QAbstractTableModel):
     def data(self, index: QModelIndex | QPersistentModelIndex, role: int = Qt.ItemDataRole.DisplayRole):
         if not index.isValid():
             return None
-        row, column = index.row(), index.column()
+        key = (index.row(), index.column())
+        entry = self._cache.get(key)
+        if entry is None:
+            entry = self._entry(*key)
+            if len(self._cache) >= CACHE_CELLS:
+                self._cache.clear()
+            self._cache[key] = entry
+        role = int(role)
+        if role in entry:
+            return entry[role]
+        return self.computed_data(key[0], key[1], role)
+
+    def _entry(self, row: int, column: int) -> dict:
+        """Every role of :data:`CACHED_ROLES` for one cell (machine cells in one pass)."""
+        if column >= FIRST_MACHINE_COL:
+            return self._cell_entry(row, column - FIRST_MACHINE_COL)
+        return {role: self.computed_data(row, column, role) for role in CACHED_ROLES}
+
+    def _cell_entry(self, row: int, col: int) -> dict:
+        """The cached roles of one machine cell, as :meth:`_cell_data` gives them."""
+        doc = self._doc
+        value = doc.value_at(row, col)
+        pin = doc.pin_at(row, col)
+        source = self._source(row, col)
+        planned = self._planned.get(row) == col
+        running = self._running.get(row) == col
+        typed = palette.MARK_TYPED if source == "typed" else ""
+        if value is None:
+            text = f"{typed}{palette.MARK_CANNOT}"
+        else:
+            marks = typed
+            if pin == MUST:
+                marks += palette.MARK_PINNED
+            elif pin == MUST_NOT:
+                marks += palette.MARK_FORBIDDEN
+            if planned:
+                marks += palette.MARK_PLANNED
+            elif running:
+                marks += "\u25b6"
+            text = f"{marks} {fmt(value)}" if marks else fmt(value)
+        if planned or running:
+            background = _colour("planned", 150)
+        elif pin == MUST_NOT:
+            background = _colour("forbidden", 60)
+        elif value is None:
+            background = _colour("cannot", 28)
+        elif doc.machine_at(col).state != UP:
+            background = _colour("down", 28)
+        else:
+            background = None
+        bold, italic = planned or running, source == "derived"
+        return {_DISPLAY: text, _ACCESSIBLE: text, _DECORATION: None, _FOREGROUND: None,
+                _CHECK: None, _EDIT: "x" if value is None else fmt(value),
+                _ALIGNMENT: _CENTRE if value is None else _RIGHT, _BACKGROUND: background,
+                _FONT: _font(bold, italic) if bold or italic else None,
+                _VALUE: value, _PIN: pin, _SOURCE: source, _PLANNED: planned, _RUNNING: running}
+
+    def _forget(self, *_args) -> None:
+        """Drop what was derived per cell (the document or the plan shown changed)."""
+        self._cache.clear()
+
+    def computed_data(self, row: int, column: int, role: int):
+        """``data()`` worked out from the document and the plan, without the cache."""
         if column == COL_RUSH:
             return self._rush_data(row, role)
         if column == COL_PENALTY:
@@ -456,12 +555,12 @@ class GridModel(QAbstractTableModel):
     def flags(self, index: QModelIndex | QPersistentModelIndex) -> Qt.ItemFlag:
         if not index.isValid():
             return Qt.ItemFlag.NoItemFlags
-        base = Qt.ItemFlag.ItemIsEnabled | Qt.ItemFlag.ItemIsSelectable
-        if index.column() == COL_RUSH:
-            return base | Qt.ItemFlag.ItemIsUserCheckable
-        if index.column() == COL_PLAN:
-            return base
-        return base | Qt.ItemFlag.ItemIsEditable
+        column = index.column()
+        if column == COL_RUSH:
+            return _FLAGS_CHECK
+        if column == COL_PLAN:
+            return _FLAGS_BASE
+        return _FLAGS_EDIT
 
     def setData(self, index: QModelIndex | QPersistentModelIndex, value, role: int = Qt.ItemDataRole.EditRole) -> bool:
         if not index.isValid():
@@ -536,6 +635,7 @@ class GridModel(QAbstractTableModel):
         self._planned = {moved(r): c for r, c in self._planned.items() if r != gone}
         self._running = {moved(r): c for r, c in self._running.items() if r != gone}
         self._waiting = {moved(r) for r in self._waiting if r != gone}
+        self._cache.clear()
         if step > 0:
             self.endInsertRows()
         else:
@@ -547,6 +647,7 @@ class GridModel(QAbstractTableModel):
         gone = col if step < 0 else -1
         self._planned = {r: moved(c) for r, c in self._planned.items() if c != gone}
         self._running = {r: moved(c) for r, c in self._running.items() if c != gone}
+        self._cache.clear()
         if step > 0:
             self.endInsertColumns()
         else:
@@ -555,6 +656,7 @@ class GridModel(QAbstractTableModel):
     def _on_reset(self) -> None:
         self.beginResetModel()
         self._plan, self._planned, self._running, self._waiting = None, {}, {}, set()
+        self._cache.clear()
         self.endResetModel()
 
     def _on_cells(self, rows: list[int], cols: list[int]) -> None:
@@ -581,3 +683,27 @@ class GridModel(QAbstractTableModel):
         self.headerDataChanged.emit(Qt.Orientation.Horizontal, lo, hi)
         self.dataChanged.emit(self.index(0, lo), self.index(self.rowCount() - 1, hi),
                               _CELL_ROLES)
+
+
+_COLOURS: dict[tuple[str, int], object] = {}
+_FONTS: dict[tuple[bool, bool], object] = {}
+
+
+def _font(bold: bool, italic: bool):
+    """A bold and/or italic font, made once (QFont is copied on return)."""
+    f = _FONTS.get((bold, italic))
+    if f is None:
+        from PySide6.QtGui import QFont
+        f = _FONTS[(bold, italic)] = QFont()
+        f.setBold(bold)
+        f.setItalic(italic)
+    return f
+
+
+def _colour(role: str, alpha: int):
+    """:func:`palette.colour`, made once per role and alpha (QColor is copied on return)."""
+    key = (role, alpha)
+    c = _COLOURS.get(key)
+    if c is None:
+        c = _COLOURS[key] = palette.colour(role, alpha)
+    return c

@@ -397,15 +397,20 @@ class MainWindow(QMainWindow):
 
     # ---- solving ----------------------------------------------------------------------------
     def request_solve(self) -> None:
-        """Re-solve the current shop in the background; older results will be discarded."""
+        """Re-solve the current shop in the background; older results will be discarded.
+
+        The shop is copied and handed over :data:`~dispatcher.ui.worker.DEFER_MS` after the
+        first request of a burst of edits, so a burst is copied and solved once."""
+        self.runner.submit_deferred(self._solve_job, "solving", with_progress=self.mode != MODE_ROUND)
+
+    def _solve_job(self):
+        """The computation for the shop as it is now (a copy: the user keeps editing)."""
         shop = self.doc.shop.copy()
         objective, mode = self.objective, self.mode
         if mode == MODE_ROUND:
             # In a worker process: the solve never competes with the window for Python.
-            self.runner.submit(lambda cancel: solve_round_in_process(shop, objective), "solving")
-            return
-        self.runner.submit(lambda cancel, report: solve_outcome(shop, objective, cancel, report, mode),
-                           "solving", with_progress=True)
+            return lambda cancel: solve_round_in_process(shop, objective)
+        return lambda cancel, report: solve_outcome(shop, objective, cancel, report, mode)
 
     def set_mode(self, mode: str) -> None:
         """One dispatch round, or the whole shift (several jobs per machine)."""
@@ -442,12 +447,12 @@ class MainWindow(QMainWindow):
         self.plan_shown.emit(outcome.plan)
 
     def runners(self) -> list[BackgroundRunner]:
-        """The background runners of the window and its parts."""
-        return [self.runner, self.whatif_tab.runner, self.alternatives_tab.runner]
+        """The background runners of the window and its parts (the file being read too)."""
+        return [self.runner, self.whatif_tab.runner, self.alternatives_tab.runner, self.files.loader]
 
     def cancel_solve(self) -> None:
-        """Stop the solve running now, and the what-if and ranking jobs (Esc, the plan
-        panel's Cancel)."""
+        """Stop the solve running now, the what-if and ranking jobs and the reading of a
+        file being opened (Esc, the plan panel's Cancel)."""
         for runner in self.runners():
             runner.cancel()
 
@@ -497,8 +502,10 @@ class MainWindow(QMainWindow):
     def on_new(self) -> None:
         self.files.new()
 
-    def open_path(self, path: str | os.PathLike) -> bool:
-        return self.files.open_path(path)
+    def open_path(self, path: str | os.PathLike, wait: bool = False) -> bool:
+        """Open a file (read in the background; ``files.loaded(bool)`` tells how it ended;
+        see :meth:`~dispatcher.ui.files.FileController.open_path`)."""
+        return self.files.open_path(path, wait)
 
     def on_open(self) -> None:
         path, _ = QFileDialog.getOpenFileName(self, self.tr("Open"), self.folder(), self.file_filter())

@@ -15,13 +15,12 @@ import threading
 import time
 from concurrent.futures import ProcessPoolExecutor
 from concurrent.futures.process import BrokenProcessPool
-from dataclasses import dataclass, replace
-
-import numpy as np
+from dataclasses import dataclass
 
 from dispatcher.engine.fill_shift import ShiftCancelled
 from dispatcher.shop import Plan, Shop, ShopError, ShopInfeasibleError
 from dispatcher.shop.fill_shift import ShiftFill
+from dispatcher.shop.packing import pack_shop, unpack_shop
 from dispatcher.shop.planning import MODE_ROUND, solve_for_mode
 
 
@@ -81,8 +80,8 @@ def shift_hours(plan: Plan | ShiftFill) -> dict[str, tuple[float, float]]:
 # A one-round solve of a 1000 x 200 shop spends about half a second in C code that holds
 # Python's interpreter lock (matrix building, scipy's linear_sum_assignment); in a thread
 # the GUI thread cannot run meanwhile, however short the switch interval. In a worker
-# process it never competes with the window. The shop is sent with its grid as numpy
-# arrays built by an interruptible loop (pickling the 200,000-entry dict is one 80 ms call
+# process it never competes with the window. The shop is sent packed
+# (:mod:`dispatcher.shop.packing`: pickling the 200,000-entry grid dict is one 80 ms call
 # holding the lock); the plan comes back without its copy of the shop, which the caller
 # already has.
 
@@ -100,35 +99,9 @@ def _executor() -> ProcessPoolExecutor:
         return _EXECUTOR
 
 
-def _pack(shop: Shop) -> tuple:
-    """``shop`` without its grid and hours, plus both as (job index, machine index, value)."""
-    jpos = {j.id: i for i, j in enumerate(shop.jobs)}
-    mpos = {m.id: k for k, m in enumerate(shop.machines)}
-
-    def table(cells: dict) -> tuple:
-        n = len(cells)
-        rows = np.fromiter((jpos[k[0]] for k in cells), dtype=np.int32, count=n)
-        cols = np.fromiter((mpos[k[1]] for k in cells), dtype=np.int32, count=n)
-        return rows, cols, np.fromiter(cells.values(), dtype=float, count=n)
-
-    return replace(shop, grid={}, hours={}), table(shop.grid), table(shop.hours)
-
-
-def _unpack(packed: tuple) -> Shop:
-    light, grid, hours = packed
-    jids = [j.id for j in light.jobs]
-    mids = [m.id for m in light.machines]
-
-    def cells(table: tuple) -> dict:
-        rows, cols, values = table
-        return {(jids[r], mids[c]): v for r, c, v in zip(rows.tolist(), cols.tolist(), values.tolist())}
-
-    return replace(light, grid=cells(grid), hours=cells(hours))
-
-
 def _solve_packed(packed: tuple, objective: str) -> SolveOutcome:
     """In the worker process: solve one round; the plan goes back without the shop."""
-    outcome = solve_outcome(_unpack(packed), objective, mode=MODE_ROUND)
+    outcome = solve_outcome(unpack_shop(packed), objective, mode=MODE_ROUND)
     problem = getattr(outcome.plan, "problem", None)
     if problem is not None:
         problem.shop = None
@@ -140,7 +113,7 @@ def solve_round_in_process(shop: Shop, objective: str) -> SolveOutcome:
     background thread: it blocks until the result is back). Falls back to this process
     when the worker cannot be started."""
     try:
-        outcome = _executor().submit(_solve_packed, _pack(shop), objective).result()
+        outcome = _executor().submit(_solve_packed, pack_shop(shop), objective).result()
     except (BrokenProcessPool, OSError, RuntimeError):
         global _EXECUTOR
         with _EXECUTOR_LOCK:

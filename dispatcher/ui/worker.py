@@ -12,10 +12,21 @@ be discarded anyway), so a superseded whole-shift solve or ranking stops early i
 holding the pool thread. :meth:`BackgroundRunner.shutdown` cancels without waiting. Long
 computations (over :data:`PROGRESS_AFTER_MS`) report ``slow`` so the
 window can show progress and a cancel button.
+
+:meth:`BackgroundRunner.submit_deferred` waits :data:`DEFER_MS` before it asks for the
+computation, so a burst of edits (typing, undo held down) is copied and solved once, for
+the newest state, instead of once per edit; the runner counts as busy meanwhile.
+
+:class:`WorkerProcess` runs a Qt-free core call in a separate Python process (a call
+that holds the interpreter lock for long, such as parsing a big file, would stop the
+window's thread otherwise), from a background thread of a runner, and stops the process
+at once when the runner's cancel event is set.
 """
 
 from __future__ import annotations
 
+import atexit
+import multiprocessing
 import threading
 import traceback
 from collections.abc import Callable
@@ -24,8 +35,13 @@ from typing import Any
 
 from PySide6.QtCore import QObject, QRunnable, QThreadPool, QTimer, Signal, Slot
 
+from dispatcher.errors import Cancelled
+
 #: A computation taking longer than this shows progress and can be cancelled.
 PROGRESS_AFTER_MS = 500
+#: A deferred request waits this long, collecting the edits made meanwhile (common practice
+#: for "live" recomputation: shorter than a person notices, longer than key repeat).
+DEFER_MS = 100
 
 
 @dataclass
@@ -99,6 +115,10 @@ computations submitted ``with_progress``.
         self._slow_timer.setSingleShot(True)
         self._slow_timer.setInterval(PROGRESS_AFTER_MS)
         self._slow_timer.timeout.connect(self._on_slow)
+        self._deferred: tuple | None = None
+        self._defer_timer = QTimer(self)
+        self._defer_timer.setSingleShot(True)
+        self._defer_timer.timeout.connect(self._on_deferred)
 
     @property
     def generation(self) -> int:
@@ -106,12 +126,35 @@ computations submitted ``with_progress``.
         return self._generation
 
     def is_busy(self) -> bool:
-        return self._running is not None or self._pending is not None
+        return self._running is not None or self._pending is not None or self._deferred is not None
+
+    def submit_deferred(self, prepare: Callable[[], Callable[..., Any]], label: str = "solving",
+                        with_progress: bool = False, delay_ms: int = DEFER_MS) -> None:
+        """Like :meth:`submit`, but ``prepare()`` (on the GUI thread, returning the function
+        to run) is called ``delay_ms`` after the first of a burst of calls; later calls in
+        the burst only replace ``prepare``. What runs now is superseded at once."""
+        self._deferred = (prepare, label, with_progress)
+        self._pending = None
+        self._generation += 1              # the running job's result is stale already
+        if self._running_cancel is not None:
+            self._running_cancel.set()
+        if not self._defer_timer.isActive():
+            self._defer_timer.start(max(0, int(delay_ms)))
+            self.started.emit(label)
+
+    @Slot()
+    def _on_deferred(self) -> None:
+        deferred, self._deferred = self._deferred, None
+        if deferred is None:
+            return
+        prepare, label, with_progress = deferred
+        self.submit(prepare(), label, with_progress)
 
     def submit(self, fn: Callable[..., Any], label: str = "solving", with_progress: bool = False) -> int:
         """Queue ``fn(cancel_event)`` (or ``fn(cancel_event, report)`` with ``with_progress``,
         where ``report(text)`` may be called from the worker); returns its generation.
         Older waiting requests are dropped."""
+        self._drop_deferred()
         self._generation += 1
         self._pending = _Request(self._generation, label, fn, with_progress)
         if self._running_cancel is not None:
@@ -123,6 +166,7 @@ computations submitted ``with_progress``.
     def cancel(self) -> None:
         """Stop waiting for the running computation and drop any waiting one."""
         self._pending = None
+        self._drop_deferred()
         if self._running_cancel is not None:
             self._running_cancel.set()
         if self._running is not None:
@@ -134,6 +178,7 @@ computations submitted ``with_progress``.
         """Drop the waiting request and ignore the running one's result, without reporting
         a cancellation (used when the window already shows the right plan)."""
         self._pending = None
+        self._drop_deferred()
         self._generation += 1
         self._slow_timer.stop()
 
@@ -142,12 +187,17 @@ computations submitted ``with_progress``.
         The runner is idle at once; the cancelled job's result, if it still comes, is
         dropped."""
         self._pending = None
+        self._drop_deferred()
         if self._running_cancel is not None:
             self._running_cancel.set()
         self._running = None
         self._running_cancel = None
         self._generation += 1
         self._slow_timer.stop()
+
+    def _drop_deferred(self) -> None:
+        self._deferred = None
+        self._defer_timer.stop()
 
     def wait_idle(self, timeout_ms: int = 30_000) -> bool:
         """Block until the pool thread is done (for tests only)."""
@@ -156,7 +206,8 @@ computations submitted ``with_progress``.
     def _start_pending(self) -> None:
         request, self._pending = self._pending, None
         if request is None:
-            self.idle.emit()
+            if self._deferred is None:
+                self.idle.emit()
             return
         self._running = request
         self._running_cancel = threading.Event()
@@ -193,3 +244,47 @@ computations submitted ``with_progress``.
     def _on_slow(self) -> None:
         if self._running is not None:
             self.slow.emit(self._running.label)
+
+
+class WorkerProcess:
+    """One spawned Python process for core calls, started on first use; thread-safe.
+
+    :meth:`call` blocks its (background) thread until the result is back, looking at the
+    cancel event every :attr:`poll_s`; when it is set the process is terminated (a parse
+    cannot be interrupted any other way) and :class:`~dispatcher.errors.Cancelled` is
+    raised. The next call starts a fresh process. ``fn`` and its arguments and result
+    must pickle (module-level functions, plain data).
+    """
+
+    poll_s = 0.05
+
+    def __init__(self):
+        self._lock = threading.Lock()
+        self._pool = None
+        atexit.register(self.stop)
+
+    def call(self, fn: Callable[..., Any], *args, cancel: threading.Event | None = None) -> Any:
+        with self._lock:
+            if self._pool is None:
+                self._pool = multiprocessing.get_context("spawn").Pool(1)
+            pool = self._pool
+        pending = pool.apply_async(fn, args)
+        while True:
+            try:
+                return pending.get(timeout=self.poll_s)
+            except multiprocessing.TimeoutError:
+                if cancel is not None and cancel.is_set():
+                    self.stop(pool)
+                    raise Cancelled("stopped on request") from None
+
+    def running(self) -> bool:
+        """True while the process exists (started and not stopped)."""
+        return self._pool is not None
+
+    def stop(self, pool=None) -> None:
+        """Terminate the process (``pool``: only if it is still that one)."""
+        with self._lock:
+            if self._pool is None or (pool is not None and pool is not self._pool):
+                return
+            pool, self._pool = self._pool, None
+        pool.terminate()

@@ -883,6 +883,10 @@ Der gültige Plan bleibt unverändert.</translation>
 <context>
     <name>FileController</name>
     <message>
+        <source>Opening {path}… (Esc cancels)</source>
+        <translation>{path} wird geöffnet… (Esc bricht ab)</translation>
+    </message>
+    <message>
         <source>the new shop</source>
         <translation>der neue Betrieb</translation>
     </message>
@@ -895,12 +899,24 @@ Der gültige Plan bleibt unverändert.</translation>
         <translation>Neuer Betrieb</translation>
     </message>
     <message>
+        <source>Opening {path}…</source>
+        <translation>{path} wird geöffnet…</translation>
+    </message>
+    <message>
+        <source>{path}: cannot be read ({error})</source>
+        <translation>{path}: kann nicht gelesen werden ({error})</translation>
+    </message>
+    <message>
         <source>Cannot open file</source>
         <translation>Datei kann nicht geöffnet werden</translation>
     </message>
     <message>
         <source>Not opened: {problem}</source>
         <translation>Nicht geöffnet: {problem}</translation>
+    </message>
+    <message>
+        <source>Not opened: reading {path} was cancelled</source>
+        <translation>Nicht geöffnet: Lesen von {path} wurde abgebrochen</translation>
     </message>
     <message>
         <source>Opened {path}</source>
@@ -1222,7 +1238,7 @@ Der gültige Plan bleibt unverändert.</translation>
     </message>
     <message>
         <source>up</source>
-        <extracomment>A machine&apos;s state in its column head, after its mark (English; shown translated).
+        <extracomment>The roles kept per cell (a role not listed, such as the tooltip, is computed when asked). At most this many cells are kept (a few pages of a big shop); the cache starts afresh. A machine&apos;s state in its column head, after its mark (English; shown translated).
 ----------
 A machine&apos;s state in a sentence (English; shown translated).</extracomment>
         <translation>bereit</translation>

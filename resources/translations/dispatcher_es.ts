@@ -883,6 +883,10 @@ El plan vigente no cambia.</translation>
 <context>
     <name>FileController</name>
     <message>
+        <source>Opening {path}… (Esc cancels)</source>
+        <translation>Abriendo {path}… (Esc cancela)</translation>
+    </message>
+    <message>
         <source>the new shop</source>
         <translation>el taller nuevo</translation>
     </message>
@@ -895,12 +899,24 @@ El plan vigente no cambia.</translation>
         <translation>Taller nuevo</translation>
     </message>
     <message>
+        <source>Opening {path}…</source>
+        <translation>Abriendo {path}…</translation>
+    </message>
+    <message>
+        <source>{path}: cannot be read ({error})</source>
+        <translation>{path}: no se puede leer ({error})</translation>
+    </message>
+    <message>
         <source>Cannot open file</source>
         <translation>No se puede abrir el archivo</translation>
     </message>
     <message>
         <source>Not opened: {problem}</source>
         <translation>No abierto: {problem}</translation>
+    </message>
+    <message>
+        <source>Not opened: reading {path} was cancelled</source>
+        <translation>No abierto: se canceló la lectura de {path}</translation>
     </message>
     <message>
         <source>Opened {path}</source>
@@ -1222,7 +1238,7 @@ El plan vigente no cambia.</translation>
     </message>
     <message>
         <source>up</source>
-        <extracomment>A machine&apos;s state in its column head, after its mark (English; shown translated).
+        <extracomment>The roles kept per cell (a role not listed, such as the tooltip, is computed when asked). At most this many cells are kept (a few pages of a big shop); the cache starts afresh. A machine&apos;s state in its column head, after its mark (English; shown translated).
 ----------
 A machine&apos;s state in a sentence (English; shown translated).</extracomment>
         <translation>en marcha</translation>
