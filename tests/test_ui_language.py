@@ -49,3 +49,26 @@ def test_numbers_shown_follow_the_language_and_the_clipboard_keeps_a_point(qapp)
     finally:
         translation.remove()
     assert fmt(12.5) == "12.5"
+
+
+def test_german_window_says_why_a_job_waits_in_the_sheets_words(qtbot, tmp_path, monkeypatch):
+    from pathlib import Path
+
+    from PySide6.QtCore import Qt
+
+    from dispatcher.ui.grid_model import COL_PLAN
+
+    shop = Path(__file__).resolve().parent.parent / "sample_shops" / "medium_machining_shop.dshop"
+    try:
+        translation.install("de")
+        window = make_window(qtbot, tmp_path, monkeypatch, shop)
+        plan, model = window.plan, window.model
+        grouped = [j for j in plan.waiting_jobs if plan.waiting_reasons.get(j) and plan.waiting_reasons[j].machines]
+        assert grouped, "the sample shop has jobs waiting for busy machines"
+        row = window.doc.shop.job_names().index(grouped[0])
+        tip = model.data(model.index(row, COL_PLAN), Qt.ItemDataRole.ToolTipRole)
+        assert "wartet in dieser Runde" in tip and "nur auf" in tip and "warten" in tip, tip
+        assert "must wait" not in tip
+        assert model.headerData(COL_PLAN, Qt.Orientation.Horizontal) == "Plan setzt ihn auf"
+    finally:
+        translation.remove()

@@ -65,6 +65,28 @@ def when_text(value: dt.datetime | dt.date | dt.time) -> str:
     return locale.toString(QDate(value.year, value.month, value.day), short)
 
 
+def waiting_text(plan, job: str) -> str:
+    """Why ``job`` waits in ``plan``, in the interface's language where the reason comes in
+    parts (the printed sheet's words: "3 jobs can only run on A, B, so 1 of them must
+    wait"); in English, and for reasons the core words alone, the core's sentence."""
+    reason = plan.waiting_reasons.get(job) if plan is not None else None
+    if reason is None:
+        return ""
+    if translation.current_language() == "en":
+        return reason.text
+    from dispatcher.sheet.build import NO_MACHINE
+    from dispatcher.sheet.render import Sheet
+
+    if reason.machines:
+        waiting = set(plan.waiting_jobs)
+        return Sheet().why_waits(len(reason.competing_jobs), ", ".join(reason.machines),
+                                 sum(1 for j in reason.competing_jobs if j in waiting))
+    text = reason.text.removeprefix(f"{job}: ")
+    if text.startswith(NO_MACHINE):
+        return QCoreApplication.translate("Sheet", NO_MACHINE) + text[len(NO_MACHINE):]
+    return reason.text
+
+
 def unit_text(label: str) -> str:
     """A shop's unit label (:meth:`dispatcher.shop.model.Unit.label`) in the interface's
     language: ``setup min`` and ``cost`` are ours; a currency stays as the shop names it."""

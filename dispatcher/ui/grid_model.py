@@ -26,7 +26,7 @@ from dispatcher.shop import DONE, DOWN, MAINTENANCE, MUST, MUST_NOT, RUNNING, UP
 from dispatcher.ui import palette
 from dispatcher.ui.document import ShopDocument
 from dispatcher.ui.edits import SetJobField, SetValues
-from dispatcher.ui.format import CellTextError, fmt, parse_cell, unit_text, when_text
+from dispatcher.ui.format import CellTextError, fmt, parse_cell, unit_text, waiting_text, when_text
 
 COL_RUSH = 0
 COL_PENALTY = 1
@@ -343,7 +343,7 @@ class GridModel(QAbstractTableModel):
             text = self.tr("\u25cb waits")
             reason = self._plan.waiting_reasons.get(job.name) if self._plan else None
             tip = (self.tr("{job} waits this round: {reason}") if reason else
-                   self.tr("{job} waits this round")).format(job=job.name, reason=reason.text if reason else "")
+                   self.tr("{job} waits this round")).format(job=job.name, reason=waiting_text(self._plan, job.name))
         else:
             text, tip = "", self.tr("no plan yet")
         if role in (Qt.ItemDataRole.DisplayRole, Qt.ItemDataRole.AccessibleTextRole):

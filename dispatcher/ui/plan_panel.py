@@ -22,7 +22,7 @@ from dispatcher.shop.staffed import operators_by_machine
 from dispatcher.shop import Plan
 from dispatcher.shop.fill_shift import ShiftFill
 from dispatcher.ui import palette
-from dispatcher.ui.format import fmt, unit_text
+from dispatcher.ui.format import fmt, unit_text, waiting_text
 from dispatcher.shop.plan import parts_word
 from dispatcher.shop.planning import MODE_ROUND, MODE_SHIFT
 from dispatcher.ui.solving import machine_entries, shift_hours
@@ -290,8 +290,9 @@ class PlanPanel(QWidget):
             else:
                 text = self.tr("cheaper to leave it waiting")
             item = QTreeWidgetItem(waiting, [f"\u25cb {job}", text, ""])
-            item.setToolTip(1, reason.text if reason else self.tr("left waiting: cheaper overall"))
-            item.setToolTip(0, reason.text if reason else "")
+            why = waiting_text(plan, job)
+            item.setToolTip(1, why if reason else self.tr("left waiting: cheaper overall"))
+            item.setToolTip(0, why)
         if len(plan.waiting_jobs) > MAX_LISTED:
             more = QTreeWidgetItem(waiting, [self.tr("\u2026 and %n more", "", len(plan.waiting_jobs) - MAX_LISTED),
                                              self.tr("see the grid's 'Plan puts it on' column"), ""])
