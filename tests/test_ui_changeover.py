@@ -288,3 +288,53 @@ def test_editor_delete_disallows_and_the_job_cannot_run_there(qtbot, window):
     assert t.change("knob mould", "lid mould") is None
     assert tab.model.index(r, c).data() == palette.MARK_CANNOT
     assert _cell(window, "WO-7001 lid", "Press 80t").data(ValueRole) is None
+
+
+# ---- the whole-shift timeline ---------------------------------------------------------------
+def test_timeline_draws_the_shift_plan_with_hover_and_keys(qtbot, tmp_path, monkeypatch, samples):
+    from PySide6.QtCore import QPoint
+    from PySide6.QtGui import QHelpEvent
+    from PySide6.QtWidgets import QToolTip
+
+    from dispatcher.shop.fill_shift import ShiftFill
+    from dispatcher.shop.timeline import CHANGE, JOB
+    from test_timeline import small_print_plant
+
+    window = make_window(qtbot, tmp_path, monkeypatch, small_print_plant(samples, tmp_path))
+    window.tabs.setCurrentWidget(window.timeline_tab.view)
+    assert "Whole shift" in window.timeline_tab.note.text() or "whole-shift" in window.timeline_tab.note.text()
+    press(qtbot, window, Qt.Key.Key_5, Qt.KeyboardModifier.ControlModifier)
+    qtbot.waitUntil(lambda: isinstance(window.plan, ShiftFill), timeout=60_000)
+    wait_plan(qtbot, window)
+    view = window.timeline_tab.timeline
+    lanes = view.lanes()
+    assert [lane.machine for lane in lanes] == [m.machine for m in window.plan.machines]
+    assert "proven optimal" in window.timeline_tab.note.text() or "gap at most" in window.timeline_tab.note.text()
+    k, i = next((k, i) for k, lane in enumerate(lanes) for i, b in enumerate(lane.bars) if b.kind == CHANGE)
+    change = lanes[k].bars[i]
+    job_index = next(j for j, b in enumerate(lanes[k].bars) if b.kind == JOB and b.job == change.job)
+    window.resize(1400, 700)
+    activate(qtbot, window)
+    qtbot.waitExposed(view)
+    for index, expect in ((job_index, [change.job, change.family, "06:"]), (i, ["before", change.job, "change from"])):
+        centre = view.bar_rect(k, index).center().toPoint()
+        view.event(QHelpEvent(QHelpEvent.Type.ToolTip, centre, view.mapToGlobal(centre)))
+        qtbot.waitUntil(lambda: QToolTip.isVisible())
+        for word in expect:
+            assert word in QToolTip.text()
+    QToolTip.hideText()
+    empty = QPoint(5, 5)  # the axis: no bar, no tooltip
+    assert view.bar_at(empty) is None
+    save_shot(window, tmp_path, "timeline")
+    view.setFocus()
+    with qtbot.waitSignal(view.current_changed) as blocker:
+        qtbot.keyClick(view, Qt.Key.Key_Right)
+    assert view.current() == (0, 0) and lanes[0].machine in blocker.args[0]
+    assert window.statusBar().currentMessage() == blocker.args[0]
+    qtbot.keyClick(view, Qt.Key.Key_Down)
+    assert view.current()[0] == 1
+
+
+def test_timeline_asks_for_whole_shift_mode_in_round_mode(qtbot, window):
+    assert window.timeline_tab.timeline.lanes() == []
+    assert "Ctrl+5" in window.timeline_tab.note.text()

@@ -12,6 +12,8 @@ own widgets, signals and worker:
   :mod:`~dispatcher.ui.alternatives_tab`): the two tabs beside the grid;
 * ``changeover_tab`` (:class:`~dispatcher.ui.changeover_tab.ChangeoverTab`): the changeover
   tables, families x families;
+* ``timeline_tab`` (:class:`~dispatcher.ui.timeline_view.TimelineTab`): the whole-shift
+  plan drawn per machine;
 * ``history_dock`` (:class:`~dispatcher.ui.history_dock.HistoryDock`);
 * ``printing`` (:class:`~dispatcher.ui.printing.SheetPrinting`);
 * ``settings_ctl`` (:class:`~dispatcher.ui.settings_dialog.SettingsController`).
@@ -50,6 +52,7 @@ from dispatcher.ui.settings_dialog import SettingsController, station_of
 from dispatcher.shop.planning import MODE_ROUND, MODE_SHIFT
 from dispatcher.shop.proposal import EVENT_DOWN, EVENT_UP
 from dispatcher.ui.solving import SolveOutcome, solve_outcome, solve_round_in_process
+from dispatcher.ui.timeline_view import TimelineTab
 from dispatcher.ui.whatif_tab import WhatIfTab
 from dispatcher.ui.worker import BackgroundRunner
 from dispatcher.ui.settings_keys import KEY_HISTORY
@@ -126,6 +129,8 @@ class MainWindow(QMainWindow):
         self.changeover_tab = ChangeoverTab(self)
         self.tabs.addTab(self.crew_tab.view, self.tr("C&rew"))
         self.tabs.addTab(self.changeover_tab.view, self.tr("C&hangeovers"))
+        self.timeline_tab = TimelineTab(self)
+        self.tabs.addTab(self.timeline_tab.view, self.tr("Time&line"))
         self.tabs.setAccessibleName(self.tr("Views of the shop"))
         self.tabs.setAccessibleDescription(self.tr("The grid, the what-if map, the alternatives and the crew"))
         self.plan_dock.setAccessibleName(self.tr("Plan"))

@@ -1757,6 +1757,10 @@ A machine&apos;s state in a sentence (English; shown translated).</extracomment>
         <translation>Rüstwe&amp;chsel</translation>
     </message>
     <message>
+        <source>Time&amp;line</source>
+        <translation>&amp;Zeitachse</translation>
+    </message>
+    <message>
         <source>Views of the shop</source>
         <translation>Ansichten des Betriebs</translation>
     </message>
@@ -3190,6 +3194,89 @@ Entscheidungen werden weiter in {path} erfasst.</translation>
     <message>
         <source>Untitled shop</source>
         <translation>Unbenannter Betrieb</translation>
+    </message>
+</context>
+<context>
+    <name>TimelineTab</name>
+    <message>
+        <source>Timeline</source>
+        <translation>Zeitachse</translation>
+    </message>
+    <message>
+        <source>The whole-shift plan drawn per machine on the shift&apos;s hours</source>
+        <translation>Der Plan der ganzen Schicht je Maschine über die Stunden der Schicht gezeichnet</translation>
+    </message>
+    <message>
+        <source>Solid: a planned job   dotted: already running   hatched: changeover before the job   cross-hatched: change into the end family   dashed line: end of the machine&apos;s hours</source>
+        <translation>Voll: ein geplanter Auftrag   gepunktet: läuft bereits   schraffiert: Rüstwechsel vor dem Auftrag   kreuzschraffiert: Wechsel in die Endfamilie   gestrichelte Linie: Ende der Maschinenstunden</translation>
+    </message>
+    <message>
+        <source>The timeline shows whole-shift plans: choose Plan &gt; Whole shift (Ctrl+5).</source>
+        <translation>Die Zeitachse zeigt Pläne für die ganze Schicht: Plan &gt; Ganze Schicht wählen (Strg+5).</translation>
+    </message>
+    <message>
+        <source>proven optimal</source>
+        <translation>nachweislich optimal</translation>
+    </message>
+    <message>
+        <source>gap at most {gap} % (proven lower bound {bound})</source>
+        <translation>Lücke höchstens {gap} % (bewiesene untere Schranke {bound})</translation>
+    </message>
+    <message>
+        <source>Whole-shift plan: total {total} {unit}, {gap}.</source>
+        <translation>Plan der ganzen Schicht: Summe {total} {unit}, {gap}.</translation>
+    </message>
+</context>
+<context>
+    <name>TimelineView</name>
+    <message>
+        <source>Shift timeline</source>
+        <extracomment>Fill colour and pattern of each kind of bar (never colour alone).</extracomment>
+        <translation>Schicht-Zeitachse</translation>
+    </message>
+    <message>
+        <source>One lane per machine; a bar per job on the shift&apos;s hours, changeovers hatched; arrow keys step through the bars</source>
+        <translation>Eine Bahn je Maschine; ein Balken je Auftrag über die Schichtstunden, Rüstwechsel schraffiert; die Pfeiltasten gehen die Balken durch</translation>
+    </message>
+    <message>
+        <source>{hours} h</source>
+        <translation>{hours} h</translation>
+    </message>
+    <message>
+        <source>no family</source>
+        <translation>keine Familie</translation>
+    </message>
+    <message>
+        <source>{start} to {end}</source>
+        <translation>{start} bis {end}</translation>
+    </message>
+    <message>
+        <source>{machine}: {job} already running ({family}), until {end}</source>
+        <translation>{machine}: {job} läuft bereits ({family}), bis {end}</translation>
+    </message>
+    <message>
+        <source>{machine}: change from {a} to the end family {b}: {value} {unit}, {span}</source>
+        <translation>{machine}: Wechsel von {a} in die Endfamilie {b}: {value} {unit}, {span}</translation>
+    </message>
+    <message>
+        <source>nothing mounted</source>
+        <translation>nichts gerüstet</translation>
+    </message>
+    <message>
+        <source>change from {a} to {b}: {value} {unit}</source>
+        <translation>Wechsel von {a} zu {b}: {value} {unit}</translation>
+    </message>
+    <message>
+        <source>no changeover priced</source>
+        <translation>kein Rüstwechsel bewertet</translation>
+    </message>
+    <message>
+        <source>{machine}: before {job}, {change} ({span})</source>
+        <translation>{machine}: vor {job}, {change} ({span})</translation>
+    </message>
+    <message>
+        <source>{machine}: {job}, family {family}, {span}; {change}</source>
+        <translation>{machine}: {job}, Familie {family}, {span}; {change}</translation>
     </message>
 </context>
 <context>

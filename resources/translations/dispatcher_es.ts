@@ -1757,6 +1757,10 @@ A machine&apos;s state in a sentence (English; shown translated).</extracomment>
         <translation>Cam&amp;bios</translation>
     </message>
     <message>
+        <source>Time&amp;line</source>
+        <translation>Cro&amp;nograma</translation>
+    </message>
+    <message>
         <source>Views of the shop</source>
         <translation>Vistas del taller</translation>
     </message>
@@ -3190,6 +3194,89 @@ Las decisiones se siguen registrando en {path}.</translation>
     <message>
         <source>Untitled shop</source>
         <translation>Taller sin título</translation>
+    </message>
+</context>
+<context>
+    <name>TimelineTab</name>
+    <message>
+        <source>Timeline</source>
+        <translation>Cronograma</translation>
+    </message>
+    <message>
+        <source>The whole-shift plan drawn per machine on the shift&apos;s hours</source>
+        <translation>El plan del turno completo dibujado por máquina sobre las horas del turno</translation>
+    </message>
+    <message>
+        <source>Solid: a planned job   dotted: already running   hatched: changeover before the job   cross-hatched: change into the end family   dashed line: end of the machine&apos;s hours</source>
+        <translation>Lleno: un trabajo planificado   punteado: ya en marcha   rayado: cambio antes del trabajo   cuadriculado: cambio a la familia final   línea discontinua: fin de las horas de la máquina</translation>
+    </message>
+    <message>
+        <source>The timeline shows whole-shift plans: choose Plan &gt; Whole shift (Ctrl+5).</source>
+        <translation>El cronograma muestra planes del turno completo: elija Plan &gt; Turno completo (Ctrl+5).</translation>
+    </message>
+    <message>
+        <source>proven optimal</source>
+        <translation>óptimo demostrado</translation>
+    </message>
+    <message>
+        <source>gap at most {gap} % (proven lower bound {bound})</source>
+        <translation>brecha como máximo {gap} % (cota inferior demostrada {bound})</translation>
+    </message>
+    <message>
+        <source>Whole-shift plan: total {total} {unit}, {gap}.</source>
+        <translation>Plan del turno completo: total {total} {unit}, {gap}.</translation>
+    </message>
+</context>
+<context>
+    <name>TimelineView</name>
+    <message>
+        <source>Shift timeline</source>
+        <extracomment>Fill colour and pattern of each kind of bar (never colour alone).</extracomment>
+        <translation>Cronograma del turno</translation>
+    </message>
+    <message>
+        <source>One lane per machine; a bar per job on the shift&apos;s hours, changeovers hatched; arrow keys step through the bars</source>
+        <translation>Una fila por máquina; una barra por trabajo sobre las horas del turno, cambios rayados; las flechas recorren las barras</translation>
+    </message>
+    <message>
+        <source>{hours} h</source>
+        <translation>{hours} h</translation>
+    </message>
+    <message>
+        <source>no family</source>
+        <translation>sin familia</translation>
+    </message>
+    <message>
+        <source>{start} to {end}</source>
+        <translation>de {start} a {end}</translation>
+    </message>
+    <message>
+        <source>{machine}: {job} already running ({family}), until {end}</source>
+        <translation>{machine}: {job} ya en marcha ({family}), hasta {end}</translation>
+    </message>
+    <message>
+        <source>{machine}: change from {a} to the end family {b}: {value} {unit}, {span}</source>
+        <translation>{machine}: cambio de {a} a la familia final {b}: {value} {unit}, {span}</translation>
+    </message>
+    <message>
+        <source>nothing mounted</source>
+        <translation>nada montado</translation>
+    </message>
+    <message>
+        <source>change from {a} to {b}: {value} {unit}</source>
+        <translation>cambio de {a} a {b}: {value} {unit}</translation>
+    </message>
+    <message>
+        <source>no changeover priced</source>
+        <translation>ningún cambio valorado</translation>
+    </message>
+    <message>
+        <source>{machine}: before {job}, {change} ({span})</source>
+        <translation>{machine}: antes de {job}, {change} ({span})</translation>
+    </message>
+    <message>
+        <source>{machine}: {job}, family {family}, {span}; {change}</source>
+        <translation>{machine}: {job}, familia {family}, {span}; {change}</translation>
     </message>
 </context>
 <context>
