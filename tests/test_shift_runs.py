@@ -136,3 +136,48 @@ def test_bad_shapes_are_refused():
         plan_shift_runs(np.zeros((2, 3, 3)), np.ones((3, 2)), [5, 5])
     with pytest.raises(DispatchInputError, match="changeovers must be >= 0"):
         plan_shift_runs(-np.ones((1, 2, 2)), np.ones((1, 1)), [5])
+
+
+@pytest.mark.parametrize("seed", range(12))
+def test_family_block_bound_never_exceeds_the_brute_force_optimum(seed):
+    """The relaxation with one change into every family a machine runs (Potts and
+    Kovalyov 2000) is a lower bound: checked against every plan tried by brute force."""
+    from dispatcher.engine.shift_runs import _assignment_bound, _capacity_bound, _check
+
+    rng = np.random.default_rng(300 + seed)
+    m = 2 if seed % 2 else 3
+    n = 6 if m == 2 else 5
+    c, hours, capacity = family_shop(rng, n, m, families=2 + seed % 2, forbid=0.1 if seed % 3 else 0.0,
+                                     tight=0.5 + 0.1 * (seed % 4))
+    pen = rng.integers(0, 40, size=n).astype(float)
+    tau = 1 / 60 if seed % 3 == 0 else 0.0
+    end = rng.integers(0, 20, size=(m, n + 1)).astype(float) if seed % 4 == 1 else None
+    must = np.zeros(n, dtype=bool)
+    must[0] = seed % 5 == 0
+    for most in (True, False):
+        expect = brute_force_shift(c, hours, capacity, end, pen, must, tau=tau, most_jobs_first=most)
+        if expect is None:
+            continue
+        p = _check(c, hours, capacity, end, pen, must, tau, None, "auto", most)
+        assert _capacity_bound(p) <= expect[1] + 1e-6
+        assert _assignment_bound(p) <= expect[1] + 1e-6
+
+
+def test_family_block_bound_is_stronger_when_families_repeat():
+    """Two families, every machine with many jobs of each: the family blocks lift the
+    bound above the cheapest-change-in relaxation (all same-family changes cost 0)."""
+    from dispatcher.engine.shift_runs import _capacity_bound, _check
+
+    fam = np.array([0, 0, 0, 1, 1, 1])
+    table = np.array([[0.0, 30.0], [30.0, 0.0]])
+    mounted = 0
+    nodes = np.concatenate([[mounted], fam])
+    c = np.stack([table[np.ix_(nodes, nodes)]] * 2)
+    hours = np.ones((6, 2))
+    capacity = np.full(2, 6.0)
+    p = _check(c, hours, capacity, None, np.full(6, 100.0), None, 0.0, None, "auto", True)
+    bound = _capacity_bound(p)
+    best = brute_force_shift(c, hours, capacity, None, np.full(6, 100.0))
+    # every job runs; family 1 must be changed into on some machine at least once: 30
+    assert best == (6, pytest.approx(30.0))
+    assert bound == pytest.approx(30.0, abs=1e-3)   # the LP optimum less its tolerance

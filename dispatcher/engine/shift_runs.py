@@ -22,9 +22,11 @@ style arcs per machine, generalised subtour cuts separated on the LP relaxation 
 maximum flows, then HiGHS with cuts added on integer solutions) for small shops, and a
 construction (cheapest insertion) plus local search (moving jobs between machines,
 every machine's order made exact by :func:`dispatcher.engine.order_runs`) for large
-ones. Both report a proven lower bound: the assignment relaxation (every job pays at
-least the cheapest change into it from a distinct predecessor, or its wait penalty),
-solved and certified by :func:`dispatcher.engine.solve`, and, from the exact method, the
+ones. Both report a proven lower bound, the best of: the assignment relaxation (every job
+pays at least the cheapest change into it from a distinct predecessor, or its wait
+penalty), solved and certified by :func:`dispatcher.engine.solve`; a linear relaxation
+that keeps the hours and charges each machine at least one change into every family it
+runs (Potts and Kovalyov 2000: a family setup per batch); and, from the exact method, the
 integer program's bound.
 """
 
@@ -128,6 +130,10 @@ def plan_shift_runs(changeover, hours, capacity, *, end_change=None, wait_penalt
        563-581, doi:10.1137/0206041 (cheapest insertion).
     .. [4] H. W. Kuhn, Naval Research Logistics Quarterly 2 (1955) 83-97 (the assignment
        relaxation; solved by :func:`dispatcher.engine.solve`).
+    .. [5] C. N. Potts and M. Y. Kovalyov, "Scheduling with batching: a review", European
+       Journal of Operational Research 120(2) (2000) 228-249,
+       doi:10.1016/S0377-2217(99)00153-8 (at least one family setup per batch: the
+       family-block relaxation of the bound).
     """
     p = _check(changeover, hours, capacity, end_change, wait_penalty, must_run, changeover_hours,
                time_limit, method, most_jobs_first)
@@ -320,24 +326,91 @@ def _assignment_bound(p: _Problem) -> float:
     return float(result.total) + end_min
 
 
+def _setup_groups(p: _Problem, k: int, lo: np.ndarray) -> list[tuple[list[int], float]]:
+    """Jobs of machine ``k`` grouped by their setup, each group with its block price.
+
+    Two jobs are grouped when the change from the mounted setup into them, the change out
+    of them into the end family and the multiset of changes into them from the other
+    jobs agree (what jobs of one family share). The price of a group is the cheapest
+    change into one of its jobs from outside the group (the mounted setup or a job of
+    another group that may run on ``k``) less the dearest of its jobs' cheapest changes
+    in, when positive. Any grouping keeps the bound valid; this one finds the families.
+    """
+    allowed = np.zeros(p.n + 1, dtype=bool)
+    allowed[p.nodes[k]] = True
+    groups: dict[tuple, list[int]] = {}
+    for node in p.nodes[k][1:]:
+        i = int(node) - 1
+        col = p.c[k, 1:, i + 1][allowed[1:]]
+        key = (float(p.c[k, 0, i + 1]), float(p.end[k, i + 1]), tuple(np.sort(col[np.isfinite(col)])))
+        groups.setdefault(key, []).append(i)
+    out = []
+    for members in groups.values():
+        inside = np.zeros(p.n + 1, dtype=bool)
+        inside[np.array(members) + 1] = True
+        into = p.c[k][np.ix_(allowed & ~inside, np.array(members) + 1)]
+        entry = float(np.min(into)) if into.size else math.inf
+        price = entry - float(np.max(lo[members]))
+        if math.isfinite(price) and price > 1e-9:
+            out.append((members, price))
+    return out
+
+
 def _capacity_bound(p: _Problem) -> float:
-    """The linear relaxation that keeps the hours: a job run on machine ``k`` pays at
-    least its cheapest change in there (and that change's hours), a job that waits its
-    penalty; each machine its cheapest end. A relaxation of every plan."""
+    """The linear relaxation that keeps the hours and the setup blocks.
+
+    A job run on machine ``k`` pays at least its cheapest change in from a node that may
+    run on ``k`` (and that change's hours), a job that waits its penalty; each machine its
+    cheapest end. On top, for every group of jobs sharing a setup (a family, see
+    :func:`_setup_groups`), the machine changes into the group at least once when it runs
+    any of its jobs: the first job of every block of consecutive jobs of one group comes
+    from outside the group, so it pays the group's cheapest change in from outside. With
+    ``y[k, g] >= x[i, k]`` for every job ``i`` of group ``g`` this adds ``y[k, g]`` times
+    the group's price (and its hours) to the relaxation. Every plan is a solution of the
+    linear program, so its optimum is a lower bound, whatever the triangle inequality.
+
+    References
+    ----------
+    .. [1] C. N. Potts and M. Y. Kovalyov, "Scheduling with batching: a review", European
+       Journal of Operational Research 120(2) (2000) 228-249,
+       doi:10.1016/S0377-2217(99)00153-8 (a family setup is paid at least once per batch).
+    .. [2] G. Cornuejols, G. L. Nemhauser and L. A. Wolsey, "The uncapacitated facility
+       location problem", in Discrete Location Theory, Wiley (1990) 119-171 (the
+       disaggregated linking ``y >= x`` that makes such a relaxation strong).
+    """
     n, m = p.n, p.m
     if n == 0:
         return float(sum(p.end[k, 0] for k in range(m)))
-    cin = np.min(p.c[:, :, 1:], axis=1).T                  # (n, m) cheapest change into i on k
-    ok = np.isfinite(cin) & np.isfinite(p.hours)
+    lo = np.full((n, m), np.inf)                            # cheapest change into i on k
+    for k in range(m):
+        lo[:, k] = np.min(p.c[k][p.nodes[k]][:, 1:], axis=0)
+    ok = np.isfinite(lo) & np.isfinite(p.hours)
     ii, kk = np.nonzero(ok)
     if ii.size == 0:
         return math.inf if p.must.any() else float(p.pen.sum())
-    use = p.hours[ii, kk] + p.tau * cin[ii, kk]
-    a_cap = coo_array((use, (kk, np.arange(ii.size))), shape=(m, ii.size))
-    a_job = coo_array((np.ones(ii.size), (ii, np.arange(ii.size))), shape=(n, ii.size))
-    res = milp(cin[ii, kk] - p.pen[ii], integrality=np.zeros(ii.size), bounds=Bounds(0, 1),
-               constraints=[LinearConstraint(a_cap, -np.inf, p.cap),
-                            LinearConstraint(a_job, p.must.astype(float), 1.0)])
+    nx = ii.size
+    column = {(int(i), int(k)): j for j, (i, k) in enumerate(zip(ii, kk))}
+    blocks = [(k, [i for i in members if (i, k) in column], price)
+              for k in range(m) for members, price in _setup_groups(p, k, lo[:, k])]
+    blocks = [b for b in blocks if b[1]]
+    ny = len(blocks)
+    cap_rows = list(kk) + [k for k, _, _ in blocks]
+    cap_vals = list(p.hours[ii, kk] + p.tau * lo[ii, kk]) + [p.tau * price for _, _, price in blocks]
+    a_cap = coo_array((cap_vals, (cap_rows, np.arange(nx + ny))), shape=(m, nx + ny))
+    a_job = coo_array((np.ones(nx), (ii, np.arange(nx))), shape=(n, nx + ny))
+    constraints = [LinearConstraint(a_cap, -np.inf, p.cap),
+                   LinearConstraint(a_job, p.must.astype(float), 1.0)]
+    rows, cols, vals, r = [], [], [], 0
+    for y, (k, members, _price) in enumerate(blocks):
+        for i in members:
+            rows += [r, r]
+            cols += [column[(i, k)], nx + y]
+            vals += [1.0, -1.0]
+            r += 1
+    if r:
+        constraints.append(LinearConstraint(coo_array((vals, (rows, cols)), shape=(r, nx + ny)), -np.inf, 0.0))
+    cost = np.concatenate([lo[ii, kk] - p.pen[ii], [price for _, _, price in blocks]])
+    res = milp(cost, integrality=np.zeros(nx + ny), bounds=Bounds(0, 1), constraints=constraints)
     if res.status == 2:
         return math.inf
     if res.x is None:
