@@ -110,3 +110,22 @@ def test_bad_changeover_matrix_is_refused_and_nothing_is_written(tmp_path, capsy
     code = main(["import-jobs", str(shop), str(out), "--changeovers", str(tmp_path / "colours.csv"),
                  "--table", "T1", "--machines", "Press 9"])
     assert code == 2 and not out.exists()
+
+
+def test_header_guess_and_ignored_fields(tmp_path):
+    """What the app's column-mapping dialog builds on: the header row with its row count,
+    the fields the header names, and a field left out even where a header names it."""
+    from dispatcher.io.joblist import guess_columns, read_job_list_header
+
+    path = tmp_path / "jobs.csv"
+    write_csv(path, [["Work Order", "Colour group", "X"], ["PJ-7", "spot red", "1"], ["PJ-8", "black", ""]])
+    header, n_rows = read_job_list_header(path)
+    assert (header, n_rows) == (["Work Order", "Colour group", "X"], 2)
+    assert guess_columns(header) == {"work_order": 0, "family": 1}
+    assert [r.family for r in read_job_list(path)] == ["spot red", "black"]
+    assert [r.family for r in read_job_list(path, ignore=["family"])] == [None, None]
+    assert [r.run_hours for r in read_job_list(path, {"run_hours": "X"})] == [1.0, None]
+    empty = tmp_path / "empty.csv"
+    empty.write_text("", encoding="utf-8")
+    with pytest.raises(JobListError, match="header row"):
+        read_job_list_header(empty)

@@ -338,3 +338,68 @@ def test_timeline_draws_the_shift_plan_with_hover_and_keys(qtbot, tmp_path, monk
 def test_timeline_asks_for_whole_shift_mode_in_round_mode(qtbot, window):
     assert window.timeline_tab.timeline.lanes() == []
     assert "Ctrl+5" in window.timeline_tab.note.text()
+
+
+# ---- job list import with a column mapping --------------------------------------------------
+JOB_LIST = (
+    "WO No,Description,Tool,Std hrs,Hot,Cost if late\n"
+    "WO-9001,WO-9001 grille,lid mould,1.5,yes,12\n"
+    "WO-9002,WO-9002 cap,clip mould,0.5,no,4\n"
+    "WO-7002,WO-7002 clip,knob mould,2,no,30\n"
+)
+
+
+def test_job_list_import_maps_columns_and_undo_takes_it_back(qtbot, window, tmp_path):
+    path = tmp_path / "jobs.csv"
+    path.write_text(JOB_LIST, encoding="utf-8")
+    before = window.doc.shop.job_names()
+    assert window.job_import.open(path)
+    dialog = window.job_import.dialog
+    qtbot.waitExposed(dialog)
+    # nothing in this header is a name the core knows: map every column by hand
+    assert all(c.currentIndex() == 0 for c in dialog.combos.values())
+    for field, header in (
+        ("work_order", "WO No"),
+        ("name", "Description"),
+        ("family", "Tool"),
+        ("run_hours", "Std hrs"),
+        ("rush", "Hot"),
+        ("wait_penalty", "Cost if late"),
+    ):
+        dialog.choose(field, header)
+    save_shot(dialog, tmp_path, "job-import")
+    qtbot.keyClick(dialog.buttons.button(dialog.buttons.StandardButton.Ok), Qt.Key.Key_Space)
+    wait_plan(qtbot, window)
+    shop = window.doc.shop
+    assert shop.job_names() == before + ["WO-9001 grille", "WO-9002 cap"]
+    new = shop.job_by_name("WO-9001 grille")
+    assert (new.family, new.run_hours, new.rush, new.wait_penalty) == ("lid mould", 1.5, True, 12)
+    updated = shop.job_by_name("WO-7002 clip")
+    assert (updated.family, updated.run_hours, updated.wait_penalty) == ("knob mould", 2, 30)
+    press(qtbot, window, Qt.Key.Key_Z, Qt.KeyboardModifier.ControlModifier)
+    wait_plan(qtbot, window)
+    assert window.doc.shop.job_names() == before
+    assert window.doc.shop.job_by_name("WO-7002 clip").family == "clip mould"
+
+
+def test_job_list_import_refuses_a_bad_cell_naming_row_and_column(qtbot, window, tmp_path):
+    path = tmp_path / "bad.csv"
+    path.write_text("job,run hours\nA,1\nB,lots\n", encoding="utf-8")
+    before = window.doc.shop.job_names()
+    assert window.job_import.open(path)
+    dialog = window.job_import.dialog
+    assert dialog.combos["name"].currentText() == "job"  # recognised header names preselected
+    with qtbot.waitSignal(window.warning) as blocker:
+        dialog.accept()
+    assert "bad.csv" in blocker.args[0] and "row 3" in blocker.args[0] and "column 2" in blocker.args[0]
+    assert window.doc.shop.job_names() == before and not window.doc.undo_stack.canUndo()
+
+
+def test_job_list_field_left_out_is_not_read(qtbot, window, tmp_path):
+    path = tmp_path / "jobs.csv"
+    path.write_text("job,family\nWO-7001 lid,spacer mould\n", encoding="utf-8")
+    assert window.job_import.open(path)
+    dialog = window.job_import.dialog
+    dialog.choose("family", None)
+    dialog.accept()
+    assert window.doc.shop.job_by_name("WO-7001 lid").family == "lid mould"

@@ -34,7 +34,7 @@ from dispatcher.shop.model import ChangeoverTable, Job, Shop
 from .grid import MAX_FILE_BYTES, MAX_JOBS, _bounded_rows, _sniff_delimiter, read_grid
 
 __all__ = ["FIELDS", "JobListError", "JobRow", "apply_changeover_table", "apply_job_list",
-           "read_changeover_table", "read_job_list"]
+           "guess_columns", "read_changeover_table", "read_job_list", "read_job_list_header"]
 
 #: Fields of a job list row and the column headers recognised for each.
 FIELDS = {
@@ -101,8 +101,35 @@ def _rows(path: Path) -> list[list[object]]:
     return _bounded_rows(csv.reader(io.StringIO(text), delimiter=_sniff_delimiter(text, source)), source)
 
 
-def read_job_list(path: str | os.PathLike, columns: Mapping[str, str] | None = None) -> list[JobRow]:
-    """The rows of a job list; ``columns`` maps a field to its column header."""
+def guess_columns(header: Sequence[object]) -> dict[str, int]:
+    """Field -> index of the header cell that names it (the names in :data:`FIELDS`; case,
+    spaces and underscores do not matter); fields no header names are left out."""
+    names = [_norm(h) for h in header]
+    out: dict[str, int] = {}
+    for field, known in FIELDS.items():
+        for k, h in enumerate(names):
+            if h in known:
+                out[field] = k
+                break
+    return out
+
+
+def read_job_list_header(path: str | os.PathLike) -> tuple[list[str], int]:
+    """The header row of a job list (cells as text) and how many rows follow it, read with
+    the same checks as :func:`read_job_list` (what a column-mapping dialog shows)."""
+    path = Path(path)
+    rows = _rows(path)
+    while rows and all(c is None or str(c).strip() == "" for c in rows[-1]):
+        rows.pop()
+    if not rows:
+        raise JobListError("expected a header row and one row per job", source=str(path))
+    return ["" if c is None else str(c).strip() for c in rows[0]], len(rows) - 1
+
+
+def read_job_list(path: str | os.PathLike, columns: Mapping[str, str] | None = None,
+                  ignore: Sequence[str] = ()) -> list[JobRow]:
+    """The rows of a job list; ``columns`` maps a field to its column header, ``ignore``
+    names fields not to read even where a header names them."""
     path = Path(path)
     source = str(path)
     rows = _rows(path)
@@ -122,12 +149,9 @@ def read_job_list(path: str | os.PathLike, columns: Mapping[str, str] | None = N
             raise JobListError(f"no column {given!r} for field {field!r} in the header row",
                                source=source, row=1)
         where[field] = header.index(_norm(given))
-    for field, names in FIELDS.items():
-        if field not in where:
-            for k, h in enumerate(header):
-                if h in names:
-                    where[field] = k
-                    break
+    for field, k in guess_columns(rows[0]).items():
+        if field not in ignore:
+            where.setdefault(field, k)
     if "name" not in where and "work_order" not in where:
         raise JobListError("no job name or work order column (map one with a column option)",
                            source=source, row=1)

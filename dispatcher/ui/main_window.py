@@ -45,6 +45,7 @@ from dispatcher.ui.grid_model import COL_PLAN, FIRST_MACHINE_COL, GridModel
 from dispatcher.ui.grid_edits import GridEdits
 from dispatcher.ui.grid_view import GridView
 from dispatcher.ui.history_dock import HistoryDock
+from dispatcher.ui.job_import import JobImport
 from dispatcher.ui.messages import Messenger
 from dispatcher.ui.plan_panel import PlanPanel
 from dispatcher.ui.printing import SheetPrinting
@@ -129,6 +130,7 @@ class MainWindow(QMainWindow):
         self.changeover_tab = ChangeoverTab(self)
         self.tabs.addTab(self.crew_tab.view, self.tr("C&rew"))
         self.tabs.addTab(self.changeover_tab.view, self.tr("C&hangeovers"))
+        self.job_import = JobImport(self)
         self.timeline_tab = TimelineTab(self)
         self.tabs.addTab(self.timeline_tab.view, self.tr("Time&line"))
         self.tabs.setAccessibleName(self.tr("Views of the shop"))
@@ -203,6 +205,9 @@ class MainWindow(QMainWindow):
                                        self.tr("Write the grid to a CSV or XLSX file"))
         self.act_import_into = self._action(self.tr("Import grid &into this shop\u2026"), self.on_import_into, None,
                                             self.tr("Merge a grid file into this shop by job and machine names"))
+        self.act_import_jobs = self._action(self.tr("Import &job list (CSV/XLSX)\u2026"), self.job_import.ask, None,
+                                            self.tr("Add or update jobs from a planning system's job list, "
+                                                    "choosing which column holds each field"))
         self.act_export_plan = self._action(self.tr("Export p&lan (CSV/XLSX)\u2026"), self.on_export_plan, None,
                                             self.tr("Write the plan shown to a CSV or XLSX file"))
         self.act_quit = self._action(self.tr("&Quit"), self.close, S.Quit, self.tr("Close the app"))
@@ -307,6 +312,7 @@ class MainWindow(QMainWindow):
         m.addSeparator()
         m.addAction(self.act_import)
         m.addAction(self.act_import_into)
+        m.addAction(self.act_import_jobs)
         m.addAction(self.act_export)
         m.addAction(self.act_export_plan)
         m.addSeparator()

@@ -1707,6 +1707,105 @@ A machine&apos;s state in a sentence (English; shown translated).</extracomment>
     </message>
 </context>
 <context>
+    <name>JobImport</name>
+    <message>
+        <source>Import job list</source>
+        <translation>Auftragsliste importieren</translation>
+    </message>
+    <message>
+        <source>Job lists (*.csv *.tsv *.txt *.xlsx)</source>
+        <translation>Auftragslisten (*.csv *.tsv *.txt *.xlsx)</translation>
+    </message>
+    <message>
+        <source>job list not imported: {problem}</source>
+        <translation>Auftragsliste nicht importiert: {problem}</translation>
+    </message>
+    <message>
+        <source>job list not imported, nothing changed: {problem}</source>
+        <translation>Auftragsliste nicht importiert, nichts geändert: {problem}</translation>
+    </message>
+    <message>
+        <source>Import job list {file}</source>
+        <translation>Auftragsliste {file} importieren</translation>
+    </message>
+    <message numerus="yes">
+        <source>Job list imported: %n job(s) added</source>
+        <translation>
+            <numerusform>Auftragsliste importiert: %n Auftrag hinzugefügt</numerusform>
+            <numerusform>Auftragsliste importiert: %n Aufträge hinzugefügt</numerusform>
+        </translation>
+    </message>
+    <message numerus="yes">
+        <source>%n updated</source>
+        <translation>
+            <numerusform>%n aktualisiert</numerusform>
+            <numerusform>%n aktualisiert</numerusform>
+        </translation>
+    </message>
+</context>
+<context>
+    <name>JobImportDialog</name>
+    <message>
+        <source>Import job list</source>
+        <translation>Auftragsliste importieren</translation>
+    </message>
+    <message>
+        <source>Which column of the file holds each field of a job</source>
+        <translation>Welche Spalte der Datei welches Feld eines Auftrags enthält</translation>
+    </message>
+    <message numerus="yes">
+        <source>{file}: %n job row(s). Choose the column that holds each field; jobs whose name is already in the shop are updated, the others added, waiting.</source>
+        <translation>
+            <numerusform>{file}: %n Auftragszeile. Die Spalte für jedes Feld wählen; Aufträge, deren Name schon im Betrieb steht, werden aktualisiert, die anderen wartend hinzugefügt.</numerusform>
+            <numerusform>{file}: %n Auftragszeilen. Die Spalte für jedes Feld wählen; Aufträge, deren Name schon im Betrieb steht, werden aktualisiert, die anderen wartend hinzugefügt.</numerusform>
+        </translation>
+    </message>
+    <message>
+        <source>Work order</source>
+        <translation>Arbeitsauftrag</translation>
+    </message>
+    <message>
+        <source>Job name</source>
+        <translation>Auftragsname</translation>
+    </message>
+    <message>
+        <source>Setup family</source>
+        <translation>Rüstfamilie</translation>
+    </message>
+    <message>
+        <source>Run hours</source>
+        <translation>Laufzeit (h)</translation>
+    </message>
+    <message>
+        <source>Due</source>
+        <translation>Fällig</translation>
+    </message>
+    <message>
+        <source>Rush (yes/no)</source>
+        <translation>Eilauftrag (ja/nein)</translation>
+    </message>
+    <message>
+        <source>Wait penalty</source>
+        <translation>Wartekosten</translation>
+    </message>
+    <message>
+        <source>(not in the file)</source>
+        <translation>(nicht in der Datei)</translation>
+    </message>
+    <message>
+        <source>column {n}</source>
+        <translation>Spalte {n}</translation>
+    </message>
+    <message>
+        <source>The column of the file holding {field}</source>
+        <translation>Die Spalte der Datei mit {field}</translation>
+    </message>
+    <message>
+        <source>&amp;Import</source>
+        <translation>&amp;Importieren</translation>
+    </message>
+</context>
+<context>
     <name>MainWindow</name>
     <message>
         <source>Dispatch grid</source>
@@ -1827,6 +1926,14 @@ A machine&apos;s state in a sentence (English; shown translated).</extracomment>
     <message>
         <source>Merge a grid file into this shop by job and machine names</source>
         <translation>Eine Rasterdatei nach Auftrags- und Maschinennamen in diesen Betrieb übernehmen</translation>
+    </message>
+    <message>
+        <source>Import &amp;job list (CSV/XLSX)…</source>
+        <translation>&amp;Auftragsliste importieren (CSV/XLSX)…</translation>
+    </message>
+    <message>
+        <source>Add or update jobs from a planning system&apos;s job list, choosing which column holds each field</source>
+        <translation>Aufträge aus der Auftragsliste eines Planungssystems hinzufügen oder aktualisieren, mit Wahl der Spalte für jedes Feld</translation>
     </message>
     <message>
         <source>Export p&amp;lan (CSV/XLSX)…</source>

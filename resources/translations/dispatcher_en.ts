@@ -128,6 +128,33 @@
     </message>
 </context>
 <context>
+    <name>JobImport</name>
+    <message numerus="yes">
+        <source>Job list imported: %n job(s) added</source>
+        <translation>
+            <numerusform>Job list imported: %n job added</numerusform>
+            <numerusform>Job list imported: %n jobs added</numerusform>
+        </translation>
+    </message>
+    <message numerus="yes">
+        <source>%n updated</source>
+        <translation>
+            <numerusform>%n updated</numerusform>
+            <numerusform>%n updated</numerusform>
+        </translation>
+    </message>
+</context>
+<context>
+    <name>JobImportDialog</name>
+    <message numerus="yes">
+        <source>{file}: %n job row(s). Choose the column that holds each field; jobs whose name is already in the shop are updated, the others added, waiting.</source>
+        <translation>
+            <numerusform>{file}: %n job row. Choose the column that holds each field; jobs whose name is already in the shop are updated, the others added, waiting.</numerusform>
+            <numerusform>{file}: %n job rows. Choose the column that holds each field; jobs whose name is already in the shop are updated, the others added, waiting.</numerusform>
+        </translation>
+    </message>
+</context>
+<context>
     <name>PlanPanel</name>
     <message numerus="yes">
         <source>%n job(s) wait for an operator</source>

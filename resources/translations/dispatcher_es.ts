@@ -1707,6 +1707,105 @@ A machine&apos;s state in a sentence (English; shown translated).</extracomment>
     </message>
 </context>
 <context>
+    <name>JobImport</name>
+    <message>
+        <source>Import job list</source>
+        <translation>Importar lista de trabajos</translation>
+    </message>
+    <message>
+        <source>Job lists (*.csv *.tsv *.txt *.xlsx)</source>
+        <translation>Listas de trabajos (*.csv *.tsv *.txt *.xlsx)</translation>
+    </message>
+    <message>
+        <source>job list not imported: {problem}</source>
+        <translation>lista de trabajos no importada: {problem}</translation>
+    </message>
+    <message>
+        <source>job list not imported, nothing changed: {problem}</source>
+        <translation>lista de trabajos no importada, nada cambió: {problem}</translation>
+    </message>
+    <message>
+        <source>Import job list {file}</source>
+        <translation>Importar la lista de trabajos {file}</translation>
+    </message>
+    <message numerus="yes">
+        <source>Job list imported: %n job(s) added</source>
+        <translation>
+            <numerusform>Lista importada: %n trabajo añadido</numerusform>
+            <numerusform>Lista importada: %n trabajos añadidos</numerusform>
+        </translation>
+    </message>
+    <message numerus="yes">
+        <source>%n updated</source>
+        <translation>
+            <numerusform>%n actualizado</numerusform>
+            <numerusform>%n actualizados</numerusform>
+        </translation>
+    </message>
+</context>
+<context>
+    <name>JobImportDialog</name>
+    <message>
+        <source>Import job list</source>
+        <translation>Importar lista de trabajos</translation>
+    </message>
+    <message>
+        <source>Which column of the file holds each field of a job</source>
+        <translation>Qué columna del archivo contiene cada campo de un trabajo</translation>
+    </message>
+    <message numerus="yes">
+        <source>{file}: %n job row(s). Choose the column that holds each field; jobs whose name is already in the shop are updated, the others added, waiting.</source>
+        <translation>
+            <numerusform>{file}: %n fila de trabajo. Elija la columna de cada campo; los trabajos cuyo nombre ya está en el taller se actualizan, los demás se añaden en espera.</numerusform>
+            <numerusform>{file}: %n filas de trabajos. Elija la columna de cada campo; los trabajos cuyo nombre ya está en el taller se actualizan, los demás se añaden en espera.</numerusform>
+        </translation>
+    </message>
+    <message>
+        <source>Work order</source>
+        <translation>Orden de trabajo</translation>
+    </message>
+    <message>
+        <source>Job name</source>
+        <translation>Nombre del trabajo</translation>
+    </message>
+    <message>
+        <source>Setup family</source>
+        <translation>Familia de preparación</translation>
+    </message>
+    <message>
+        <source>Run hours</source>
+        <translation>Horas de trabajo</translation>
+    </message>
+    <message>
+        <source>Due</source>
+        <translation>Vence</translation>
+    </message>
+    <message>
+        <source>Rush (yes/no)</source>
+        <translation>Urgente (sí/no)</translation>
+    </message>
+    <message>
+        <source>Wait penalty</source>
+        <translation>Penalización por espera</translation>
+    </message>
+    <message>
+        <source>(not in the file)</source>
+        <translation>(no está en el archivo)</translation>
+    </message>
+    <message>
+        <source>column {n}</source>
+        <translation>columna {n}</translation>
+    </message>
+    <message>
+        <source>The column of the file holding {field}</source>
+        <translation>La columna del archivo con {field}</translation>
+    </message>
+    <message>
+        <source>&amp;Import</source>
+        <translation>&amp;Importar</translation>
+    </message>
+</context>
+<context>
     <name>MainWindow</name>
     <message>
         <source>Dispatch grid</source>
@@ -1827,6 +1926,14 @@ A machine&apos;s state in a sentence (English; shown translated).</extracomment>
     <message>
         <source>Merge a grid file into this shop by job and machine names</source>
         <translation>Combinar un archivo de cuadrícula con este taller por nombres de trabajo y máquina</translation>
+    </message>
+    <message>
+        <source>Import &amp;job list (CSV/XLSX)…</source>
+        <translation>Importar lista de &amp;trabajos (CSV/XLSX)…</translation>
+    </message>
+    <message>
+        <source>Add or update jobs from a planning system&apos;s job list, choosing which column holds each field</source>
+        <translation>Añadir o actualizar trabajos desde la lista de un sistema de planificación, eligiendo la columna de cada campo</translation>
     </message>
     <message>
         <source>Export p&amp;lan (CSV/XLSX)…</source>
