@@ -504,7 +504,7 @@ class GridModel(QAbstractTableModel):
             if table is not None or m.mounted is not None or m.end_family is not None:
                 mounted = f"\n{palette.MARK_MOUNTED} {m.mounted if m.mounted is not None else '-'}"
                 if m.end_family is not None:
-                    mounted += f" {palette.MARK_END} {m.end_family}"
+                    mounted += f"\n{palette.MARK_END} {m.end_family}"
             if role in (Qt.ItemDataRole.DisplayRole, Qt.ItemDataRole.AccessibleTextRole):
                 return f"{m.name}\n{state}{slots}" + mounted + (f"\n{who}" if who else "")
             if role == Qt.ItemDataRole.ToolTipRole:
