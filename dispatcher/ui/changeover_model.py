@@ -14,7 +14,7 @@ from PySide6.QtCore import QAbstractTableModel, QCoreApplication, QModelIndex, Q
 from dispatcher.ui import palette
 from dispatcher.ui.document import ShopDocument
 from dispatcher.ui.edits import SetChanges
-from dispatcher.ui.format import CellTextError, fmt, parse_cell
+from dispatcher.ui.format import CellTextError, fmt, parse_cell, unit_text
 
 ChangeRole = Qt.ItemDataRole.UserRole + 1  # float | None: the entry (None = not allowed)
 translate = QCoreApplication.translate  # the name pyside6-lupdate collects
@@ -172,7 +172,7 @@ class ChangeoverModel(QAbstractTableModel):
             return None
         if role == Qt.ItemDataRole.ToolTipRole:
             what = frm if frm is not None else self.empty_name()
-            unit = self._doc.shop.unit.label()
+            unit = unit_text(self._doc.shop.unit.label())
             if value is None:
                 return self.tr(
                     "Change from {a} to {b}: not allowed (a job of {b} cannot follow {a} on "

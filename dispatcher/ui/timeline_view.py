@@ -18,7 +18,7 @@ from PySide6.QtWidgets import QLabel, QScrollArea, QToolTip, QVBoxLayout, QWidge
 from dispatcher.shop.fill_shift import ShiftFill
 from dispatcher.shop.timeline import CHANGE, END_CHANGE, JOB, RUNNING, Bar, Lane, shift_timeline
 from dispatcher.ui import palette
-from dispatcher.ui.format import fmt
+from dispatcher.ui.format import fmt, unit_text
 
 NAME_WIDTH = 150
 AXIS_HEIGHT = 26
@@ -294,11 +294,11 @@ class TimelineTab(QObject):
     def show_plan(self, plan) -> None:
         shop = self.window.doc.shop
         if not isinstance(plan, ShiftFill):
-            self.timeline.set_lanes([], shop.shift.hours, shop.shift.start, shop.unit.label())
+            self.timeline.set_lanes([], shop.shift.hours, shop.shift.start, unit_text(shop.unit.label()))
             self.note.setText(self.tr("The timeline shows whole-shift plans: choose Plan > Whole shift (Ctrl+5)."))
             return
         lanes = shift_timeline(shop, plan)
-        self.timeline.set_lanes(lanes, shop.shift.hours, shop.shift.start, shop.unit.label())
+        self.timeline.set_lanes(lanes, shop.shift.hours, shop.shift.start, unit_text(shop.unit.label()))
         gap = (
             self.tr("proven optimal")
             if plan.proven_optimal
@@ -308,6 +308,6 @@ class TimelineTab(QObject):
         )
         self.note.setText(
             self.tr("Whole-shift plan: total {total} {unit}, {gap}.").format(
-                total=fmt(plan.total), unit=shop.unit.label(), gap=gap
+                total=fmt(plan.total), unit=unit_text(shop.unit.label()), gap=gap
             )
         )
