@@ -82,7 +82,10 @@ def test_sigkill_at_random_moments_keeps_every_returned_decision(tmp_path):
     rng = random.Random(20261202)
     acks: dict[int, str] = {}
     mid_loop_kills = 0
-    for run in range(100):
+    run = 0
+    # At least 100 kills; on a loaded machine a child records fewer decisions before its
+    # kill, so keep killing (up to 400 runs) until 100 decisions were acknowledged.
+    while run < 100 or (len(acks) < 100 and run < 400):
         proc = child(path, f"r{run}")
         if run % 10 == 3:
             # Some kills land while the child starts up or opens (or creates) the file.
@@ -95,8 +98,9 @@ def test_sigkill_at_random_moments_keeps_every_returned_decision(tmp_path):
         out, _ = proc.communicate()
         assert proc.returncode == -signal.SIGKILL
         acks.update(acknowledged(out))
-    assert mid_loop_kills == 90
-    print(f"{len(acks)} decisions acknowledged over 100 kills")
+        run += 1
+    assert mid_loop_kills == run - (run + 6) // 10  # every tenth run, from the fourth, is early
+    print(f"{len(acks)} decisions acknowledged over {run} kills")
     assert len(acks) >= 100, "too few decisions recorded for the test to mean anything"
     store = HistoryStore(path)
     assert_intact(store, acks)
