@@ -78,3 +78,16 @@ def test_cancelling_a_long_read_keeps_the_document_and_stops_the_process(
     # The next open starts a new process and works.
     assert open_file(qtbot, window, samples / "medium_machining_shop.dshop")
     assert window.doc.path == samples / "medium_machining_shop.dshop"
+
+
+def test_a_big_shop_is_autosaved_by_a_worker_process(qtbot, tmp_path, monkeypatch, samples):
+    monkeypatch.setattr(files, "AUTOSAVE_IN_PROCESS_CELLS", 0)
+    window = make_window(qtbot, tmp_path, monkeypatch, samples / "medium_machining_shop.dshop")
+    assert window.model.setData(window.model.index(1, FIRST_MACHINE_COL + 1), "77")
+    try:
+        window.files.autosave_now(wait=True)
+        assert files._AUTOSAVER.running()  # the copy was written over there
+    finally:
+        files._AUTOSAVER.stop()
+    copy = window.files.autosave_path()
+    assert shop_to_dict(read_document(copy)) == shop_to_dict(window.doc.shop)

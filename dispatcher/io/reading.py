@@ -6,7 +6,8 @@ message names the file and the row and column (or job, machine and field).
 :func:`read_document_packed` is the same read made to run in another process: it never
 raises for a bad file but returns the message texts, and it returns the shop packed
 (:mod:`dispatcher.shop.packing`) so that it crosses back quickly. Reading never executes
-anything from the file.
+anything from the file. :func:`write_copy_packed` is the other direction, for the app's
+autosave: a packed shop written as a document by another process.
 """
 
 from __future__ import annotations
@@ -15,9 +16,9 @@ import os
 from pathlib import Path
 
 from dispatcher.io.grid import GRID_SUFFIXES, GridFileError, read_grid
-from dispatcher.io.shopfile import load_shop
+from dispatcher.io.shopfile import load_shop, save_shop
 from dispatcher.shop import Shop, ShopError, shop_from_grid
-from dispatcher.shop.packing import pack_shop
+from dispatcher.shop.packing import pack_shop, unpack_shop
 
 #: A message box shows at most this many problems; the rest go to its detail text.
 SHOWN_PROBLEMS = 8
@@ -50,3 +51,15 @@ def read_document_packed(path: str) -> tuple:
         return "ok", pack_shop(read_document(path))
     except (ShopError, GridFileError) as exc:
         return ("refused",) + problem_texts(exc)
+
+
+def write_copy_packed(packed: tuple, path: str) -> str:
+    """Write a packed shop to ``path`` as a shop document, without the whole-shop check
+    (an autosaved copy of work in progress); "" when written, else the reason."""
+    try:
+        target = Path(path)
+        target.parent.mkdir(parents=True, exist_ok=True)
+        save_shop(unpack_shop(packed), target, check=False)
+    except (OSError, ShopError) as exc:
+        return str(exc)
+    return ""

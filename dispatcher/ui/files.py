@@ -7,7 +7,8 @@ once; ``loaded(bool)`` says how it ended): in a background thread, or for a file
 file that cannot be read shows one message naming the file and the problem and leaves the
 open document exactly as it was. Autosave writes a copy of the unsaved document
 to a per-user folder every :data:`AUTOSAVE_MS` in a background thread (the GUI thread only
-takes a cheap snapshot); a clean save or close removes it, so a copy found at start-up
+takes a cheap snapshot; a shop over :data:`AUTOSAVE_IN_PROCESS_CELLS` is written by a
+worker process); a clean save or close removes it, so a copy found at start-up
 means the app did not close normally and the user is offered to recover it.
 """
 
@@ -20,11 +21,12 @@ from pathlib import Path
 from PySide6.QtCore import QObject, QRunnable, QSettings, QStandardPaths, QThreadPool, QTimer, Signal
 
 from dispatcher.io.grid import GridFileError
-from dispatcher.io.reading import problem_texts, read_document, read_document_packed
+from dispatcher.io.reading import problem_texts, read_document, read_document_packed, write_copy_packed
 from dispatcher.io.shopfile import SHOP_SUFFIX, load_shop, save_shop
 from dispatcher.io.spreadsheet import export_grid, export_plan, import_grid_file
 from dispatcher.shop import Shop, ShopError
-from dispatcher.shop.packing import unpack_shop
+from dispatcher.shop.packing import pack_shop, unpack_shop
+from dispatcher.errors import Cancelled
 from dispatcher.ui.document import ShopDocument
 from dispatcher.ui.messages import CANCEL, SAVE, Messenger
 from dispatcher.ui.settings_keys import KEY_RECENT
@@ -37,6 +39,11 @@ AUTOSAVE_MS = 60_000
 # shop) are read in a background thread, quicker than starting the process.
 LOAD_IN_PROCESS_BYTES = 1_000_000
 _LOADER = WorkerProcess()
+# Shops with more grid cells than this are autosaved by a worker process: writing the
+# document is mostly one json call that holds the interpreter lock (and so the window)
+# for about as long as parsing it; the autosave thread only packs the copy.
+AUTOSAVE_IN_PROCESS_CELLS = 50_000
+_AUTOSAVER = WorkerProcess()
 
 
 def read_for_window(path: Path, cancel=None) -> tuple:
@@ -74,11 +81,15 @@ class _AutosaveJob(QRunnable):
         self._shop, self._target = shop, target
 
     def run(self) -> None:
+        # An autosave that cannot be written must never disturb the user's work.
         try:
+            if len(self._shop.grid) > AUTOSAVE_IN_PROCESS_CELLS:
+                _AUTOSAVER.call(write_copy_packed, pack_shop(self._shop), str(self._target))
+                return
             self._target.parent.mkdir(parents=True, exist_ok=True)
             save_shop(self._shop, self._target, check=False)
-        except (OSError, ShopError):
-            pass  # an autosave that cannot be written must never disturb the user's work
+        except (OSError, ShopError, Cancelled):
+            pass
 
 
 class FileController(QObject):
