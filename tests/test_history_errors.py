@@ -1,0 +1,278 @@
+"""SQLite errors put into words a supervisor can act on (dispatcher.history.schema).
+
+Reference: the errors real SQLite raises (a lock held by a second connection, a page
+limit reached, a read-only connection, a file that is not a database, a folder that does
+not exist, a syntax error) with the primary result codes of SQLite's documentation
+("Result and Error Codes": BUSY 5, READONLY 8, IOERR 10, CORRUPT 11, FULL 13, CANTOPEN 14,
+NOTADB 26). Errors carrying only a code or only a text (other drivers, older Pythons) are
+built by hand, since SQLite itself always sends both. Creating and upgrading a history:
+the file's own ``application_id`` and ``user_version`` read back with plain sqlite3, and
+the folder listed with pathlib.
+"""
+
+from __future__ import annotations
+
+import os
+import re
+import sqlite3
+import time
+from datetime import datetime, timedelta, timezone
+from pathlib import Path
+
+import pytest
+
+from dispatcher.history import HistoryError
+from dispatcher.history.schema import (
+    APPLICATION_ID,
+    MIGRATIONS,
+    SCHEMA_VERSION,
+    Migration,
+    backup_path,
+    create_history,
+    is_busy,
+    migrate,
+    primary_code,
+    store_error,
+)
+
+FULL = ("no room left to write (the disk or the file's size limit is full); "
+        "free some space and try again")
+READ_ONLY = "the file or its folder is read-only; make it writable or choose another file"
+DAMAGED = ("the file is damaged or is not a dispatcher history; it was left as it is "
+           "(restore it from a backup or choose another file)")
+CANNOT_OPEN = "the file cannot be opened (check the folder exists and is accessible)"
+IO = "the disk reported an input/output error"
+
+
+def raised(action) -> sqlite3.Error:
+    with pytest.raises(sqlite3.Error) as info:
+        action()
+    return info.value
+
+
+def by_hand(text: str, code: int | None = None) -> sqlite3.Error:
+    exc = sqlite3.OperationalError(text)
+    if code is not None:
+        exc.sqlite_errorcode = code
+    return exc
+
+
+def message(exc: sqlite3.Error, why: str) -> str:
+    return f"/h.sqlite: recording failed: {why} [sqlite: {exc}]"
+
+
+def words(exc: sqlite3.Error) -> str:
+    return str(store_error(Path("/h.sqlite"), exc, "recording"))
+
+
+def locked_error(tmp_path) -> sqlite3.Error:
+    path = tmp_path / "locked.sqlite"
+    first = sqlite3.connect(path, isolation_level=None)
+    first.execute("CREATE TABLE t (x)")
+    first.execute("BEGIN IMMEDIATE")
+    second = sqlite3.connect(path, timeout=0, isolation_level=None)
+    try:
+        return raised(lambda: second.execute("BEGIN IMMEDIATE"))
+    finally:
+        second.close()
+        first.execute("ROLLBACK")
+        first.close()
+
+
+def test_a_lock_held_elsewhere_is_busy(tmp_path):
+    exc = locked_error(tmp_path)
+    assert primary_code(exc) == 5
+    assert is_busy(exc)
+    assert words(exc) == message(exc, str(exc))  # passed on as SQLite words it
+
+
+def test_extended_codes_reduce_to_their_primary_code():
+    # SQLITE_BUSY_SNAPSHOT = 517 = BUSY | (2 << 8); SQLITE_IOERR_WRITE = 778 = IOERR | (3 << 8).
+    assert primary_code(by_hand("x", 517)) == 5
+    assert primary_code(by_hand("x", 778)) == 10
+    assert is_busy(by_hand("x", 517))
+    assert words(by_hand("x", 778)) == message(by_hand("x", 778), IO)
+
+
+def test_without_a_code_the_text_decides_busy():
+    assert primary_code(by_hand("database is locked")) is None
+    assert is_busy(by_hand("database is locked"))
+    assert is_busy(by_hand("Database Is Busy"))
+    assert not is_busy(by_hand("no such table: t"))
+    assert not is_busy(by_hand("database is locked", 1))  # the code wins over the text
+
+
+def test_a_syntax_error_is_neither_busy_nor_translated(tmp_path):
+    conn = sqlite3.connect(tmp_path / "a.sqlite")
+    exc = raised(lambda: conn.execute("SELEC 1"))
+    conn.close()
+    assert primary_code(exc) == 1
+    assert not is_busy(exc)
+    assert words(exc) == message(exc, str(exc))
+
+
+def test_real_sqlite_errors_get_their_words(tmp_path):
+    full = sqlite3.connect(tmp_path / "full.sqlite")
+    full.execute("PRAGMA max_page_count = 2")
+    exc = raised(lambda: full.execute("CREATE TABLE t (x)").execute(
+        "INSERT INTO t VALUES (zeroblob(100000))"))
+    full.close()
+    assert primary_code(exc) == 13 and words(exc) == message(exc, FULL)
+
+    sqlite3.connect(tmp_path / "ro.sqlite").execute("CREATE TABLE t (x)").connection.close()
+    ro = sqlite3.connect(f"file:{tmp_path / 'ro.sqlite'}?mode=ro", uri=True)
+    exc = raised(lambda: ro.execute("INSERT INTO t VALUES (1)"))
+    ro.close()
+    assert primary_code(exc) == 8 and words(exc) == message(exc, READ_ONLY)
+
+    junk = tmp_path / "junk.sqlite"
+    junk.write_bytes(b"not a database at all " * 100)
+    conn = sqlite3.connect(junk)
+    exc = raised(lambda: conn.execute("SELECT * FROM sqlite_master"))
+    conn.close()
+    assert primary_code(exc) == 26 and words(exc) == message(exc, DAMAGED)
+
+    exc = raised(lambda: sqlite3.connect(tmp_path / "no such folder" / "h.sqlite"))
+    assert primary_code(exc) == 14 and words(exc) == message(exc, CANNOT_OPEN)
+
+
+@pytest.mark.parametrize(("code", "why"), [
+    (13, FULL), (8, READ_ONLY), (11, DAMAGED), (26, DAMAGED), (14, CANNOT_OPEN), (10, IO),
+    (12, "something else"), (9, "something else"), (27, "something else"),
+    (15, "something else"),
+])
+def test_the_code_alone_decides(code, why):
+    exc = by_hand("something else", code)
+    assert words(exc) == message(exc, why)
+
+
+@pytest.mark.parametrize(("text", "why"), [
+    ("database or disk is full", FULL),
+    ("attempt to write a readonly database", READ_ONLY),
+    ("the folder is read-only", READ_ONLY),
+    ("database disk image is malformed", DAMAGED),
+    ("file is not a database", DAMAGED),
+    ("unable to open database file", CANNOT_OPEN),
+    ("disk I/O error", "disk I/O error"),  # no code: passed on as it is
+])
+def test_the_text_alone_decides(text, why):
+    exc = by_hand(text)
+    assert words(exc) == message(exc, why)
+
+
+def test_backup_name_carries_the_version_and_the_utc_time(monkeypatch):
+    # Reference: the clock in UTC, with the process in a zone five hours behind it.
+    monkeypatch.setenv("TZ", "EST+5")
+    time.tzset()
+    try:
+        before = datetime.now(timezone.utc)
+        name = backup_path(Path("/plant/history.sqlite"), 1).name
+        after = datetime.now(timezone.utc)
+    finally:
+        monkeypatch.undo()
+        time.tzset()
+    found = re.fullmatch(r"history\.sqlite\.backup-v1-(\d{8}T\d{12})Z", name)
+    assert found, name
+    stamp = datetime.strptime(found.group(1), "%Y%m%dT%H%M%S%f").replace(tzinfo=timezone.utc)
+    assert before - timedelta(microseconds=1) <= stamp <= after
+
+
+# --------------------------------------------------------------------------- creating, migrating
+
+def connect(path: Path) -> sqlite3.Connection:
+    return sqlite3.connect(path, isolation_level=None)
+
+
+def identity(path: Path) -> tuple[int, int]:
+    conn = sqlite3.connect(path)
+    try:
+        return (conn.execute("PRAGMA application_id").fetchone()[0],
+                conn.execute("PRAGMA user_version").fetchone()[0])
+    finally:
+        conn.close()
+
+
+def test_a_missing_folder_is_refused_unless_asked_for(tmp_path):
+    path = tmp_path / "plant" / "line 2" / "history.sqlite"
+    with pytest.raises(HistoryError) as info:
+        create_history(path, connect)
+    assert str(info.value) == (
+        f"{path}: the folder {path.parent} does not exist, so no history was created and "
+        "nothing was recorded. Check the path, or create the history with: dispatcher "
+        "history init PATH")
+    assert not (tmp_path / "plant").exists()
+    create_history(path, connect, make_folder=True)  # two missing levels
+    assert identity(path) == (APPLICATION_ID, SCHEMA_VERSION)
+    again = path.parent / "second.sqlite"
+    create_history(again, connect, make_folder=True)  # the folder exists now
+    assert identity(again) == (APPLICATION_ID, SCHEMA_VERSION)
+
+
+def test_a_folder_that_cannot_be_made_is_reported(tmp_path):
+    (tmp_path / "a file").write_text("not a folder")
+    path = tmp_path / "a file" / "history.sqlite"
+    with pytest.raises(HistoryError,
+                       match=rf"^{re.escape(str(path))}: cannot create the folder for the "
+                             r"history: \w[\w ]+$"):
+        create_history(path, connect, make_folder=True)
+
+
+def test_only_the_given_migrations_are_run(tmp_path):
+    path = tmp_path / "v1.sqlite"
+    create_history(path, connect, MIGRATIONS[:1])
+    assert identity(path) == (APPLICATION_ID, 1)
+
+
+def test_a_failing_step_creates_nothing_and_says_so(tmp_path):
+    path = tmp_path / "h.sqlite"
+    broken = (Migration(1, "broken", lambda conn: conn.execute("SELEC 1")),)
+    with pytest.raises(HistoryError) as info:
+        create_history(path, connect, broken)
+    assert str(info.value) == (f'{path}: creating the history failed: near "SELEC": syntax '
+                               'error [sqlite: near "SELEC": syntax error]')
+    assert list(tmp_path.iterdir()) == []
+
+
+def test_without_hard_links_the_new_history_is_moved_into_place(tmp_path, monkeypatch):
+    # A file system without hard links: os.link fails with EPERM (injected).
+    def no_links(src, dst):
+        raise PermissionError(1, "Operation not permitted")
+    monkeypatch.setattr(os, "link", no_links)
+    path = tmp_path / "h.sqlite"
+    create_history(path, connect)
+    assert identity(path) == (APPLICATION_ID, SCHEMA_VERSION)
+    assert [p.name for p in tmp_path.iterdir()] == ["h.sqlite"]
+    # Another program's file already there: it is kept as it is, ours discarded.
+    theirs = tmp_path / "theirs.sqlite"
+    theirs.write_bytes(b"someone else's file")
+    create_history(theirs, connect)
+    assert theirs.read_bytes() == b"someone else's file"
+    assert sorted(p.name for p in tmp_path.iterdir()) == ["h.sqlite", "theirs.sqlite"]
+
+
+def test_a_current_file_is_not_migrated_nor_backed_up(tmp_path):
+    path = tmp_path / "h.sqlite"
+    create_history(path, connect)
+    conn = connect(path)
+    try:
+        assert migrate(conn, path, SCHEMA_VERSION) is None
+    finally:
+        conn.close()
+    assert [p.name for p in tmp_path.iterdir() if "backup" in p.name] == []
+
+
+def test_a_backup_that_cannot_be_written_stops_the_upgrade(tmp_path):
+    path = tmp_path / "v1.sqlite"
+    create_history(path, connect, MIGRATIONS[:1])
+    conn = connect(path)
+    elsewhere = tmp_path / "no such folder" / "v1.sqlite"  # its backup has nowhere to go
+    try:
+        with pytest.raises(HistoryError,
+                           match=rf"^{re.escape(str(elsewhere))}: could not write a backup to "
+                                 rf"{re.escape(str(elsewhere))}\.backup-v1-\d{{8}}T\d{{12}}Z "
+                                 r"before upgrading the history \(unable to open database "
+                                 r"file\); nothing was changed$"):
+            migrate(conn, elsewhere, 1)
+    finally:
+        conn.close()
+    assert identity(path) == (APPLICATION_ID, 1)
