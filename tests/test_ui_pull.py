@@ -115,3 +115,31 @@ def test_pulling_a_running_job_frees_its_machine(qtbot, tmp_path, monkeypatch, s
     # The machine is free again: the new plan gives it a job or lists it idle.
     assert machine in [a["machine"] for a in plan["assignments"]] + plan["idle_machines"]
     assert name not in window.doc.shop.job_names()
+
+
+def test_pulled_job_takes_its_typed_cannot_run_marks_along(qtbot, shop_window, tmp_path):
+    """A "cannot run" typed over a changeover table belongs to its job: when the job is
+    pulled the mark goes too (else the saved file names a job it lacks and is refused on
+    opening), and undo puts it back."""
+    from dispatcher.io.shopfile import dump_shop_text, parse_shop_text
+
+    window = shop_window
+    shop = window.doc.shop
+    assert shop.changeover_tables, "the moulding sample derives its values from tables"
+    row, name, machine = _ordinary_planned(window)
+    job = shop.jobs[row]
+    other = next(m for m in shop.machines if m.name != machine)
+    shop.blocked.add((job.id, other.id))
+    assert without_job(shop, row).blocked == shop.blocked - {(job.id, other.id)}
+    dialog = window.decisions.pull(row)
+    with qtbot.waitSignal(window.decision_recorded):
+        dialog.confirm("Supervisor P", "order cancelled by the customer")
+    wait_plan(qtbot, window)
+    after = window.doc.shop
+    assert name not in after.job_names()
+    assert all(j != job.id for j, _ in after.blocked)
+    reopened = parse_shop_text(dump_shop_text(after), str(tmp_path / "saved.dshop"))
+    assert name not in reopened.job_names()
+    window.doc.undo_stack.undo()
+    wait_plan(qtbot, window)
+    assert (job.id, other.id) in window.doc.shop.blocked

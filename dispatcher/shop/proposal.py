@@ -114,12 +114,13 @@ def propose(shop: Shop, event: str, objective: str, *, machine: int | None = Non
 
 
 def without_job(shop: Shop, index: int) -> Shop:
-    """A copy of ``shop`` without job ``index``: its grid values and run hours, its pins and
-    its place in the plan in force go too."""
+    """A copy of ``shop`` without job ``index``: its grid values, typed "cannot run" marks
+    and run hours, its pins and its place in the plan in force go too."""
     new = shop.copy()
     gone = new.jobs.pop(index)
     new.grid = {k: v for k, v in new.grid.items() if k[0] != gone.id}
     new.hours = {k: v for k, v in new.hours.items() if k[0] != gone.id}
+    new.blocked = {k for k in new.blocked if k[0] != gone.id}
     new.pins = [p for p in new.pins if p.job != gone.id]
     new.plan_in_force = {m: [j for j in js if j != gone.id]
                          for m, js in new.plan_in_force.items()}

@@ -28,6 +28,7 @@ class RemovedRecord:
     hours: dict = field(default_factory=dict)
     pins: list = field(default_factory=list)
     plan_in_force: dict | None = None
+    blocked: set = field(default_factory=set)
 
 
 class ShopDocument(QObject):
@@ -289,6 +290,10 @@ class ShopDocument(QObject):
             del shop.grid[k]
         for k in hours:
             del shop.hours[k]
+        # Typed "cannot run" marks over a changeover table go too: a saved file naming a
+        # job or machine it no longer has would not open again.
+        blocked = {k for k in shop.blocked if key_of_record(k)}
+        shop.blocked -= blocked
         pins = [p for p in shop.pins if pin_of_record(p)]
         shop.pins = [p for p in shop.pins if not pin_of_record(p)]
         in_force = {m: list(js) for m, js in shop.plan_in_force.items()}
@@ -296,12 +301,13 @@ class ShopDocument(QObject):
         shop.plan_in_force = {m: [j for j in js if j != rid] for m, js in shop.plan_in_force.items()
                               if m != rid}
         shop.plan_in_force = {m: js for m, js in shop.plan_in_force.items() if js}
-        return RemovedRecord(record, grid, hours, pins, in_force)
+        return RemovedRecord(record, grid, hours, pins, in_force, blocked)
 
     def _restore(self, saved: RemovedRecord) -> None:
         self.shop.grid.update(saved.grid)
         self.shop.hours.update(saved.hours)
         self.shop.pins.extend(saved.pins)
+        self.shop.blocked |= saved.blocked
         if saved.plan_in_force is not None:
             self.shop.plan_in_force = {m: list(js) for m, js in saved.plan_in_force.items()}
 
