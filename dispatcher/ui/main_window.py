@@ -134,7 +134,8 @@ class MainWindow(QMainWindow):
         self.timeline_tab = TimelineTab(self)
         self.tabs.addTab(self.timeline_tab.view, self.tr("Time&line"))
         self.tabs.setAccessibleName(self.tr("Views of the shop"))
-        self.tabs.setAccessibleDescription(self.tr("The grid, the what-if map, the alternatives and the crew"))
+        self.tabs.setAccessibleDescription(self.tr(
+            "The grid, the what-if map, the alternatives, the crew, the changeover tables and the timeline"))
         self.plan_dock.setAccessibleName(self.tr("Plan"))
         self.plan_dock.setAccessibleDescription(self.tr("The plan for the grid as it is now"))
         self.history_dock = HistoryDock(self)

@@ -1864,8 +1864,8 @@ A machine&apos;s state in a sentence (English; shown translated).</extracomment>
         <translation>Ansichten des Betriebs</translation>
     </message>
     <message>
-        <source>The grid, the what-if map, the alternatives and the crew</source>
-        <translation>Das Raster, die Was-wäre-wenn-Karte, die Alternativen und das Personal</translation>
+        <source>The grid, the what-if map, the alternatives, the crew, the changeover tables and the timeline</source>
+        <translation>Das Raster, die Was-wäre-wenn-Karte, die Alternativen, das Personal, die Rüstwechseltabellen und die Zeitachse</translation>
     </message>
     <message>
         <source>The plan for the grid as it is now</source>

@@ -1864,8 +1864,8 @@ A machine&apos;s state in a sentence (English; shown translated).</extracomment>
         <translation>Vistas del taller</translation>
     </message>
     <message>
-        <source>The grid, the what-if map, the alternatives and the crew</source>
-        <translation>La cuadrícula, el mapa qué pasaría si, las alternativas y el personal</translation>
+        <source>The grid, the what-if map, the alternatives, the crew, the changeover tables and the timeline</source>
+        <translation>La cuadrícula, el mapa qué pasaría si, las alternativas, el personal, las tablas de cambios y el cronograma</translation>
     </message>
     <message>
         <source>The plan for the grid as it is now</source>
