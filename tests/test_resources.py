@@ -10,12 +10,13 @@ import subprocess
 import sys
 import venv
 import xml.etree.ElementTree as ET
+import zipfile
 from configparser import ConfigParser
 from pathlib import Path
 
 import pytest
 
-from dispatcher import resources
+from dispatcher import __version__, resources
 
 ROOT = Path(__file__).resolve().parent.parent
 
@@ -152,12 +153,20 @@ def test_wheel_installed_in_a_fresh_venv_finds_every_resource(tmp_path):
     ignore = shutil.ignore_patterns("__pycache__", "*.pyc")
     for name in ("dispatcher", "resources"):
         shutil.copytree(ROOT / name, src / name, ignore=ignore)
-    for name in ("pyproject.toml", "setup.py", "README.md"):
+    for name in ("pyproject.toml", "setup.py", "README.md", "LICENSE"):
         shutil.copy2(ROOT / name, src / name)
     dist = tmp_path / "dist"
-    subprocess.run([sys.executable, "-m", "pip", "wheel", "--no-deps", "-q", "-w", str(dist),
-                    str(src)], check=True, capture_output=True)
+    built = subprocess.run([sys.executable, "-m", "pip", "wheel", "--no-deps", "-v", "-w", str(dist),
+                            str(src)], check=True, capture_output=True, text=True)
     (wheel,) = dist.glob("shiftdispatch-*.whl")
+    # The build backend does not complain about the project's metadata (it warned about
+    # the license as a TOML table before the SPDX string form of PEP 639).
+    log = built.stdout + built.stderr
+    assert "BuildBackendWarning" not in log and "SetuptoolsDeprecationWarning" not in log, log
+    with zipfile.ZipFile(wheel) as archive:
+        metadata = archive.read(f"shiftdispatch-{__version__}.dist-info/METADATA").decode()
+        assert f"shiftdispatch-{__version__}.dist-info/licenses/LICENSE" in archive.namelist()
+    assert "License-Expression: MIT" in metadata.splitlines()
 
     env_dir = tmp_path / "venv"
     venv.EnvBuilder(with_pip=False).create(env_dir)
