@@ -60,6 +60,7 @@ from dispatcher.ui.settings_keys import KEY_HISTORY
 
 APP_TITLE = "Dispatcher"
 GRID_PATTERNS = "*.csv *.tsv *.txt *.xlsx"
+MAX_MACHINE_WIDTH = 220  # px: a machine column sized to its heading grows no wider
 
 
 class MainWindow(QMainWindow):
@@ -452,6 +453,8 @@ class MainWindow(QMainWindow):
         self.model.set_plan(outcome.plan)
         if self._fit_columns:
             self._fit_grid_columns()
+        else:
+            self._widen_machine_columns()
         self.plan_panel.show_plan(outcome.plan, self.doc.shop.unit.label(), outcome.seconds,
                                   self.doc.shop.machine_names())
         if outcome.problem:
@@ -495,12 +498,22 @@ class MainWindow(QMainWindow):
         for column in range(FIRST_MACHINE_COL):
             view.resizeColumnToContents(column)
         view.setColumnWidth(COL_PLAN, max(view.columnWidth(COL_PLAN), 170))
-        metrics = header.fontMetrics()
-        floor = metrics.horizontalAdvance("000000.0") + 16
+        floor = header.fontMetrics().horizontalAdvance("000000.0") + 16
         for k in range(self.doc.n_machines()):
-            text = str(self.model.headerData(FIRST_MACHINE_COL + k, Qt.Orientation.Horizontal) or "")
-            widest = max((metrics.horizontalAdvance(line) for line in text.split("\n")), default=0)
-            view.setColumnWidth(FIRST_MACHINE_COL + k, min(max(widest + 16, floor), 220))
+            view.setColumnWidth(FIRST_MACHINE_COL + k, min(max(self._header_need(k), floor), MAX_MACHINE_WIDTH))
+
+    def _header_need(self, k: int) -> int:
+        """The width machine column ``k``'s heading needs in the header's style."""
+        return self.view.horizontalHeader().sectionSizeFromContents(FIRST_MACHINE_COL + k).width()
+
+    def _widen_machine_columns(self, *_args) -> None:
+        """A heading that grew (a machine down or in maintenance, its operator named) widens
+        its column up to the limit; columns never shrink here, so a hand-set width stays."""
+        for k in range(self.doc.n_machines()):
+            column = FIRST_MACHINE_COL + k
+            need = min(self._header_need(k), MAX_MACHINE_WIDTH)
+            if self.view.columnWidth(column) < need:
+                self.view.setColumnWidth(column, need)
 
     # ---- files ------------------------------------------------------------------------------
     def file_filter(self) -> str:

@@ -3,7 +3,7 @@ the total, the objective (switchable) and whether the optimality certificate che
 
 from __future__ import annotations
 
-from PySide6.QtCore import QT_TRANSLATE_NOOP, Qt, Signal
+from PySide6.QtCore import QT_TRANSLATE_NOOP, QEvent, Qt, Signal
 from PySide6.QtWidgets import (
     QComboBox,
     QFormLayout,
@@ -126,6 +126,7 @@ class PlanPanel(QWidget):
         head.setSectionResizeMode(1, QHeaderView.ResizeMode.Stretch)
         head.setSectionResizeMode(2, QHeaderView.ResizeMode.Interactive)
         layout.addWidget(self.tree, 1)
+        self.tree.viewport().installEventFilter(self)  # a scroll bar or a narrower dock
         self._unit = ""
 
     # ---- state ----------------------------------------------------------------------------
@@ -319,6 +320,22 @@ class PlanPanel(QWidget):
             down.setExpanded(True)
         for column in (0, 2):
             self.tree.resizeColumnToContents(column)
+        self._keep_heading_room()
+
+    def _keep_heading_room(self) -> None:
+        """Narrow the machine column (its names elide) rather than clip the stretched
+        column's heading when the panel is narrow (long headings in other languages)."""
+        head = self.tree.header()
+        need = head.sectionSizeFromContents(1).width()
+        room = self.tree.viewport().width() - head.sectionSize(2)
+        if head.sectionSize(0) + need > room:
+            floor = head.sectionSizeFromContents(0).width()
+            self.tree.setColumnWidth(0, max(floor, room - need))
+
+    def eventFilter(self, watched, event) -> bool:
+        if watched is self.tree.viewport() and event.type() == QEvent.Type.Resize:
+            self._keep_heading_room()
+        return super().eventFilter(watched, event)
 
     def _parts_text(self, data: dict, unit: str) -> str:
         """`` (setups 208 + wait penalties 210)`` in the interface's language (the words of
