@@ -10,10 +10,10 @@ from datetime import datetime, timezone
 
 from PySide6.QtCore import QObject
 from PySide6.QtGui import QGuiApplication
-from PySide6.QtWidgets import QInputDialog
 
 from dispatcher.limits import name_problem
 from dispatcher.shop import DONE, MAINTENANCE, MUST, MUST_NOT, UP, Job, Machine
+from dispatcher.ui import asking
 from dispatcher.ui.clipboard import PasteError, copy_block, paste_changes
 from dispatcher.ui.edits import (AddJob, AddMachine, SetJobField, SetJobsState, SetMachineFields, SetPin,
                                  SetValues, UseTable)
@@ -94,7 +94,8 @@ class GridEdits(QObject):
         self.doc.undo_stack.push(SetPin(self.doc, row, col, kind, text))
 
     def ask_add_job(self) -> None:
-        name, ok = QInputDialog.getText(self.window, self.tr("Add job"), self.tr("Name of the new job (unique):"))
+        name, ok = asking.get_text(self.window, self.tr("Add job"), self.tr("Name of the new job (unique):"),
+                                   self.tr("A new row: the job cannot run anywhere until values are typed in"))
         if ok:
             self.add_job(name)
 
@@ -111,8 +112,9 @@ class GridEdits(QObject):
         return True
 
     def ask_add_machine(self) -> None:
-        name, ok = QInputDialog.getText(self.window, self.tr("Add machine"),
-                                        self.tr("Name of the new machine (unique):"))
+        name, ok = asking.get_text(self.window, self.tr("Add machine"),
+                                   self.tr("Name of the new machine (unique):"),
+                                   self.tr("A new column: no job can run on it until values are typed in"))
         if ok:
             self.add_machine(name)
 
@@ -141,9 +143,10 @@ class GridEdits(QObject):
         if row is None:
             return
         job = self.doc.job_at(row)
-        value, ok = QInputDialog.getDouble(self.window, self.tr("Wait penalty"),
-                                           self.tr("Cost of leaving {job} waiting:").format(job=job.name),
-                                           job.wait_penalty, 0.0, 1e12, 2)
+        value, ok = asking.get_double(self.window, self.tr("Wait penalty"),
+                                      self.tr("Cost of leaving {job} waiting:").format(job=job.name),
+                                      self.tr("Added to the plan's total when the job waits"),
+                                      job.wait_penalty, 0.0, 1e12, 2)
         if ok and value != job.wait_penalty:
             self.doc.undo_stack.push(SetJobField(self.doc, row, "wait_penalty", value,
                                                  self.tr("Wait penalty of {job}").format(job=job.name)))
@@ -154,9 +157,9 @@ class GridEdits(QObject):
             self.show_warning(self.tr("choose a cell in a machine column first"))
             return
         m = self.doc.machine_at(col)
-        value, ok = QInputDialog.getInt(self.window, self.tr("Slots"),
-                                        self.tr("Jobs {machine} takes per round:").format(machine=m.name),
-                                        m.slots, 1, 100)
+        value, ok = asking.get_int(self.window, self.tr("Slots"),
+                                   self.tr("Jobs {machine} takes per round:").format(machine=m.name),
+                                   self.tr("How many jobs the machine runs at once, 1 to 100"), m.slots, 1, 100)
         if ok:
             self.set_slots(col, value)
 
@@ -210,8 +213,9 @@ class GridEdits(QObject):
         title = self.tr("Mounted family") if field == "mounted" else self.tr("End family")
         label = (self.tr("Family {machine} has mounted now:") if field == "mounted"
                  else self.tr("Family {machine} must end the shift in:")).format(machine=m.name)
-        text, ok = QInputDialog.getItem(self.window, title, label, choices,
-                                        choices.index(current) if current in choices else 0, True)
+        text, ok = asking.get_item(self.window, title, label,
+                                   self.tr("A family of the machine's changeover table"), choices,
+                                   choices.index(current) if current in choices else 0, True)
         if ok:
             self.set_machine_family(col, None if text == nothing else text, field)
 

@@ -234,7 +234,9 @@ class GridModel(QAbstractTableModel):
         else:
             background = None
         bold, italic = planned or running, source == "derived"
-        return {_DISPLAY: text, _ACCESSIBLE: text, _DECORATION: None, _FOREGROUND: None,
+        # text readable on the cell's shade in whatever palette (dark, high contrast)
+        foreground = palette.text_over(background) if background is not None else None
+        return {_DISPLAY: text, _ACCESSIBLE: text, _DECORATION: None, _FOREGROUND: foreground,
                 _CHECK: None, _EDIT: "x" if value is None else fmt(value),
                 _ALIGNMENT: _CENTRE if value is None else _RIGHT, _BACKGROUND: background,
                 _FONT: _font(bold, italic) if bold or italic else None,
@@ -246,6 +248,10 @@ class GridModel(QAbstractTableModel):
 
     def computed_data(self, row: int, column: int, role: int):
         """``data()`` worked out from the document and the plan, without the cache."""
+        if role == _FOREGROUND:
+            # Text readable on the cell's shade in whatever palette (dark, high contrast)
+            background = self.computed_data(row, column, _BACKGROUND)
+            return palette.text_over(background) if background is not None else None
         if column == COL_RUSH:
             return self._rush_data(row, role)
         if column == COL_PENALTY:
@@ -264,8 +270,6 @@ class GridModel(QAbstractTableModel):
             return Qt.CheckState.Checked if job.rush else Qt.CheckState.Unchecked
         if role in (Qt.ItemDataRole.DisplayRole, Qt.ItemDataRole.AccessibleTextRole):
             return self._rush_text if job.rush else ""
-        if role == Qt.ItemDataRole.ForegroundRole and job.rush:
-            return palette.colour("black")
         if role == Qt.ItemDataRole.BackgroundRole and job.rush:
             return palette.colour("rush", 110)
         if role == Qt.ItemDataRole.ToolTipRole:

@@ -10,10 +10,11 @@ import threading
 
 from PySide6.QtCore import QCoreApplication, QObject, QTimer, Signal
 from PySide6.QtGui import QKeySequence
-from PySide6.QtWidgets import QDockWidget, QInputDialog
+from PySide6.QtWidgets import QDockWidget
 
 from dispatcher.history import HistoryError, HistoryInputError, HistoryStore
 from dispatcher.io.shopfile import ShopFileError, shop_from_dict
+from dispatcher.ui import asking
 from dispatcher.ui.history_panel import HistoryPanel
 from dispatcher.ui.settings_keys import KEY_SUPERVISOR
 from dispatcher.ui.worker import BackgroundRunner
@@ -150,9 +151,10 @@ class HistoryDock(QDockWidget):
         window = self.window_
         if by is None:
             by = str(window.settings.value(KEY_SUPERVISOR, ""))
-            by, ok = QInputDialog.getText(window, self.tr("Restore decision"),
-                                          self.tr("Restore decision #{number}: supervisor name").format(
-                                              number=decision_id), text=by)
+            by, ok = asking.get_text(window, self.tr("Restore decision"),
+                                     self.tr("Restore decision #{number}: supervisor name").format(
+                                         number=decision_id),
+                                     self.tr("Who records the restored plan as a new decision"), text=by)
             if not ok or not by.strip():
                 return None
         try:

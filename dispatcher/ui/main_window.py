@@ -134,6 +134,23 @@ class MainWindow(QMainWindow):
         self.job_import = JobImport(self)
         self.timeline_tab = TimelineTab(self)
         self.tabs.addTab(self.timeline_tab.view, self.tr("Time&line"))
+        bar = self.tabs.tabBar()
+        bar.setAccessibleName(self.tr("Views"))
+        bar.setAccessibleDescription(self.tr("Switch between the grid, the what-if map, the alternatives, "
+                                             "the crew, the changeover tables and the timeline (Alt and the underlined letter)"))
+        for page, tip in ((self.view, self.tr("Jobs as rows, machines as columns: type setup values, pin or "
+                                              "forbid pairs")),
+                          (self.whatif_tab.view, self.tr("How much worse the plan gets if a job is forced onto "
+                                                         "a machine")),
+                          (self.alternatives_tab.view, self.tr("The best few plans, best first, and what each "
+                                                               "changes")),
+                          (self.crew_tab.view, self.tr("Operators: present, how many machines each minds, what "
+                                                       "they are authorised to run")),
+                          (self.changeover_tab.view, self.tr("Changeover tables: the setup between job families "
+                                                             "on each machine")),
+                          (self.timeline_tab.view, self.tr("Each machine's jobs over the shift in run order, "
+                                                           "with their changeovers"))):
+            self.tabs.setTabToolTip(self.tabs.indexOf(page), tip)
         self.tabs.setAccessibleName(self.tr("Views of the shop"))
         self.tabs.setAccessibleDescription(self.tr(
             "The grid, the what-if map, the alternatives, the crew, the changeover tables and the timeline"))

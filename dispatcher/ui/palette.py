@@ -11,7 +11,7 @@ that are friendly to colorblind people" (2002; revised 2008), the eight-colour p
 
 from __future__ import annotations
 
-from PySide6.QtGui import QColor
+from PySide6.QtGui import QColor, QGuiApplication, QPalette
 
 #: The eight Okabe-Ito colours (Okabe and Ito 2002), by their published names.
 OKABE_ITO = {
@@ -75,7 +75,34 @@ def heat_colour(fraction: float) -> QColor:
     return QColor(r, g, b)
 
 
+def _linear(channel: float) -> float:
+    return channel / 12.92 if channel <= 0.03928 else ((channel + 0.055) / 1.055) ** 2.4
+
+
+def relative_luminance(c: QColor) -> float:
+    """WCAG 2.x relative luminance of an opaque colour (sRGB channels made linear)."""
+    return 0.2126 * _linear(c.redF()) + 0.7152 * _linear(c.greenF()) + 0.0722 * _linear(c.blueF())
+
+
 def text_on(background: QColor) -> QColor:
-    """Black or white text, whichever contrasts more with ``background``."""
-    lum = 0.2126 * background.redF() + 0.7152 * background.greenF() + 0.0722 * background.blueF()
-    return QColor("#000000") if lum > 0.45 else QColor("#FFFFFF")
+    """Black or white text, whichever has the higher WCAG 2.x contrast ratio with the
+    opaque ``background`` (one of the two always reaches 4.5 : 1, the AA minimum)."""
+    lum = relative_luminance(background)
+    on_black = (lum + 0.05) / 0.05      # contrast of black text
+    on_white = 1.05 / (lum + 0.05)      # contrast of white text
+    return QColor("#000000") if on_black >= on_white else QColor("#FFFFFF")
+
+
+def over(colour: QColor, base: QColor) -> QColor:
+    """``colour`` (possibly translucent) as painted over the opaque ``base``."""
+    a = colour.alphaF()
+    return QColor(round(colour.red() * a + base.red() * (1 - a)),
+                  round(colour.green() * a + base.green() * (1 - a)),
+                  round(colour.blue() * a + base.blue() * (1 - a)))
+
+
+def text_over(background: QColor, base_role: QPalette.ColorRole = QPalette.ColorRole.Base) -> QColor:
+    """Readable text for a translucent ``background`` painted over the application
+    palette's ``base_role`` (Base for cells, Button for headings): the marks stay
+    readable in a dark or high-contrast scheme as in the default light one."""
+    return text_on(over(QColor(background), QGuiApplication.palette().color(base_role)))

@@ -150,6 +150,17 @@
     </message>
 </context>
 <context>
+    <name>Asking</name>
+    <message>
+        <source>Use this value</source>
+        <translation>Diesen Wert übernehmen</translation>
+    </message>
+    <message>
+        <source>Close without changing anything</source>
+        <translation>Schließen, ohne etwas zu ändern</translation>
+    </message>
+</context>
+<context>
     <name>ChangeoverModel</name>
     <message>
         <source>the clipboard holds no text to paste</source>
@@ -1102,6 +1113,10 @@ Der gültige Plan bleibt unverändert.</translation>
         <translation>Name des neuen Auftrags (eindeutig):</translation>
     </message>
     <message>
+        <source>A new row: the job cannot run anywhere until values are typed in</source>
+        <translation>Eine neue Zeile: der Auftrag kann nirgends laufen, bis Werte eingegeben sind</translation>
+    </message>
+    <message>
         <source>job name {name} is empty or already used</source>
         <translation>Auftragsname {name} ist leer oder schon vergeben</translation>
     </message>
@@ -1120,6 +1135,10 @@ Der gültige Plan bleibt unverändert.</translation>
     <message>
         <source>Name of the new machine (unique):</source>
         <translation>Name der neuen Maschine (eindeutig):</translation>
+    </message>
+    <message>
+        <source>A new column: no job can run on it until values are typed in</source>
+        <translation>Eine neue Spalte: kein Auftrag kann darauf laufen, bis Werte eingegeben sind</translation>
     </message>
     <message>
         <source>machine name {name} is empty or already used</source>
@@ -1142,6 +1161,10 @@ Der gültige Plan bleibt unverändert.</translation>
         <translation>Kosten, wenn {job} warten muss:</translation>
     </message>
     <message>
+        <source>Added to the plan&apos;s total when the job waits</source>
+        <translation>Wird zur Summe des Plans addiert, wenn der Auftrag wartet</translation>
+    </message>
+    <message>
         <source>Wait penalty of {job}</source>
         <translation>Wartekosten von {job}</translation>
     </message>
@@ -1152,6 +1175,10 @@ Der gültige Plan bleibt unverändert.</translation>
     <message>
         <source>Jobs {machine} takes per round:</source>
         <translation>Aufträge, die {machine} je Runde übernimmt:</translation>
+    </message>
+    <message>
+        <source>How many jobs the machine runs at once, 1 to 100</source>
+        <translation>Wie viele Aufträge die Maschine gleichzeitig fährt, 1 bis 100</translation>
     </message>
     <message numerus="yes">
         <source>{machine} takes %n job(s)</source>
@@ -1191,6 +1218,10 @@ Der gültige Plan bleibt unverändert.</translation>
     <message>
         <source>Family {machine} must end the shift in:</source>
         <translation>Familie, in der {machine} die Schicht beenden muss:</translation>
+    </message>
+    <message>
+        <source>A family of the machine&apos;s changeover table</source>
+        <translation>Eine Familie aus der Rüstwechseltabelle der Maschine</translation>
     </message>
     <message>
         <source>{machine}: the family name {problem}</source>
@@ -1547,6 +1578,10 @@ A machine&apos;s state in a sentence (English; shown translated).</extracomment>
         <translation>Entscheidung Nr. {number} wiederherstellen: Name der Schichtleitung</translation>
     </message>
     <message>
+        <source>Who records the restored plan as a new decision</source>
+        <translation>Wer den wiederhergestellten Plan als neue Entscheidung erfasst</translation>
+    </message>
+    <message>
         <source>Cannot restore</source>
         <translation>Wiederherstellen nicht möglich</translation>
     </message>
@@ -1858,6 +1893,38 @@ A machine&apos;s state in a sentence (English; shown translated).</extracomment>
     <message>
         <source>Time&amp;line</source>
         <translation>&amp;Zeitachse</translation>
+    </message>
+    <message>
+        <source>Views</source>
+        <translation>Ansichten</translation>
+    </message>
+    <message>
+        <source>Switch between the grid, the what-if map, the alternatives, the crew, the changeover tables and the timeline (Alt and the underlined letter)</source>
+        <translation>Zwischen Raster, Was-wäre-wenn, Alternativen, Personal, Rüstwechseltabellen und Zeitachse wechseln (Alt und der unterstrichene Buchstabe)</translation>
+    </message>
+    <message>
+        <source>Jobs as rows, machines as columns: type setup values, pin or forbid pairs</source>
+        <translation>Aufträge als Zeilen, Maschinen als Spalten: Rüstwerte eingeben, Paare festlegen oder sperren</translation>
+    </message>
+    <message>
+        <source>How much worse the plan gets if a job is forced onto a machine</source>
+        <translation>Wie viel schlechter der Plan wird, wenn ein Auftrag auf eine Maschine gezwungen wird</translation>
+    </message>
+    <message>
+        <source>The best few plans, best first, and what each changes</source>
+        <translation>Die besten Pläne, der beste zuerst, und was jeder ändert</translation>
+    </message>
+    <message>
+        <source>Operators: present, how many machines each minds, what they are authorised to run</source>
+        <translation>Bediener: anwesend, wie viele Maschinen jeder betreut, wofür sie freigegeben sind</translation>
+    </message>
+    <message>
+        <source>Changeover tables: the setup between job families on each machine</source>
+        <translation>Rüstwechseltabellen: die Rüstzeit zwischen Auftragsfamilien je Maschine</translation>
+    </message>
+    <message>
+        <source>Each machine&apos;s jobs over the shift in run order, with their changeovers</source>
+        <translation>Die Aufträge jeder Maschine über die Schicht in Laufreihenfolge, mit ihren Rüstwechseln</translation>
     </message>
     <message>
         <source>Views of the shop</source>

@@ -150,6 +150,17 @@
     </message>
 </context>
 <context>
+    <name>Asking</name>
+    <message>
+        <source>Use this value</source>
+        <translation>Usar este valor</translation>
+    </message>
+    <message>
+        <source>Close without changing anything</source>
+        <translation>Cerrar sin cambiar nada</translation>
+    </message>
+</context>
+<context>
     <name>ChangeoverModel</name>
     <message>
         <source>the clipboard holds no text to paste</source>
@@ -1102,6 +1113,10 @@ El plan vigente no cambia.</translation>
         <translation>Nombre del trabajo nuevo (único):</translation>
     </message>
     <message>
+        <source>A new row: the job cannot run anywhere until values are typed in</source>
+        <translation>Una fila nueva: el trabajo no puede ir a ninguna máquina hasta que se escriban valores</translation>
+    </message>
+    <message>
         <source>job name {name} is empty or already used</source>
         <translation>el nombre de trabajo {name} está vacío o ya se usa</translation>
     </message>
@@ -1120,6 +1135,10 @@ El plan vigente no cambia.</translation>
     <message>
         <source>Name of the new machine (unique):</source>
         <translation>Nombre de la máquina nueva (único):</translation>
+    </message>
+    <message>
+        <source>A new column: no job can run on it until values are typed in</source>
+        <translation>Una columna nueva: ningún trabajo puede ir a ella hasta que se escriban valores</translation>
     </message>
     <message>
         <source>machine name {name} is empty or already used</source>
@@ -1142,6 +1161,10 @@ El plan vigente no cambia.</translation>
         <translation>Coste de dejar esperando {job}:</translation>
     </message>
     <message>
+        <source>Added to the plan&apos;s total when the job waits</source>
+        <translation>Se suma al total del plan cuando el trabajo espera</translation>
+    </message>
+    <message>
         <source>Wait penalty of {job}</source>
         <translation>Penalización por espera de {job}</translation>
     </message>
@@ -1152,6 +1175,10 @@ El plan vigente no cambia.</translation>
     <message>
         <source>Jobs {machine} takes per round:</source>
         <translation>Trabajos que acepta {machine} por ronda:</translation>
+    </message>
+    <message>
+        <source>How many jobs the machine runs at once, 1 to 100</source>
+        <translation>Cuántos trabajos lleva la máquina a la vez, de 1 a 100</translation>
     </message>
     <message numerus="yes">
         <source>{machine} takes %n job(s)</source>
@@ -1191,6 +1218,10 @@ El plan vigente no cambia.</translation>
     <message>
         <source>Family {machine} must end the shift in:</source>
         <translation>Familia en la que {machine} debe terminar el turno:</translation>
+    </message>
+    <message>
+        <source>A family of the machine&apos;s changeover table</source>
+        <translation>Una familia de la tabla de cambios de la máquina</translation>
     </message>
     <message>
         <source>{machine}: the family name {problem}</source>
@@ -1547,6 +1578,10 @@ A machine&apos;s state in a sentence (English; shown translated).</extracomment>
         <translation>Restaurar la decisión n.º {number}: nombre del supervisor</translation>
     </message>
     <message>
+        <source>Who records the restored plan as a new decision</source>
+        <translation>Quién registra el plan restaurado como una decisión nueva</translation>
+    </message>
+    <message>
         <source>Cannot restore</source>
         <translation>No se puede restaurar</translation>
     </message>
@@ -1858,6 +1893,38 @@ A machine&apos;s state in a sentence (English; shown translated).</extracomment>
     <message>
         <source>Time&amp;line</source>
         <translation>Cro&amp;nograma</translation>
+    </message>
+    <message>
+        <source>Views</source>
+        <translation>Vistas</translation>
+    </message>
+    <message>
+        <source>Switch between the grid, the what-if map, the alternatives, the crew, the changeover tables and the timeline (Alt and the underlined letter)</source>
+        <translation>Cambiar entre la cuadrícula, el mapa qué pasaría si, las alternativas, el personal, las tablas de cambios y el cronograma (Alt y la letra subrayada)</translation>
+    </message>
+    <message>
+        <source>Jobs as rows, machines as columns: type setup values, pin or forbid pairs</source>
+        <translation>Trabajos en filas, máquinas en columnas: escriba los valores de preparación, fije o prohíba pares</translation>
+    </message>
+    <message>
+        <source>How much worse the plan gets if a job is forced onto a machine</source>
+        <translation>Cuánto empeora el plan si un trabajo se fuerza a una máquina</translation>
+    </message>
+    <message>
+        <source>The best few plans, best first, and what each changes</source>
+        <translation>Los mejores planes, el mejor primero, y lo que cambia cada uno</translation>
+    </message>
+    <message>
+        <source>Operators: present, how many machines each minds, what they are authorised to run</source>
+        <translation>Operarios: presentes, cuántas máquinas atiende cada uno, qué están autorizados a manejar</translation>
+    </message>
+    <message>
+        <source>Changeover tables: the setup between job families on each machine</source>
+        <translation>Tablas de cambios: la preparación entre familias de trabajos en cada máquina</translation>
+    </message>
+    <message>
+        <source>Each machine&apos;s jobs over the shift in run order, with their changeovers</source>
+        <translation>Los trabajos de cada máquina a lo largo del turno en orden de ejecución, con sus cambios</translation>
     </message>
     <message>
         <source>Views of the shop</source>
