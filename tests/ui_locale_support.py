@@ -297,8 +297,12 @@ def visible_texts(top: QWidget, rows: int = 30) -> list[tuple[QWidget, str]]:
 
 def _item_texts(view, model, parent, rows) -> list[tuple[QWidget, str]]:
     out = []
+    try:
+        columns = model.columnCount(parent)
+    except TypeError:  # a list widget's model keeps columnCount private: one column
+        columns = 1
     for r in range(min(model.rowCount(parent), rows)):
-        for c in range(model.columnCount(parent)):
+        for c in range(columns):
             index = model.index(r, c, parent)
             text = model.data(index, Qt.ItemDataRole.DisplayRole)
             if isinstance(text, str):

@@ -47,7 +47,7 @@ class CrewTab(QObject):
         self.empty.setWordWrap(True)
         self.empty.setAccessibleName(self.tr("No crew"))
         self.empty.setAccessibleDescription(self.empty.text())
-        self.add = QPushButton(self.tr("&Add operator"), self.view)
+        self.add = QPushButton(self.tr("Add &operator"), self.view)
         self.add.setAccessibleName(self.tr("Add operator"))
         self.add.setAccessibleDescription(self.tr("Add an operator to the crew (Ctrl+Z takes it back)"))
         self.add.clicked.connect(self.add_operator)

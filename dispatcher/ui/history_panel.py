@@ -128,7 +128,7 @@ class HistoryPanel(QWidget):
             self.reason.addItem(reason_text(key), key)
         self.reason.setAccessibleName(self.tr("Reason filter"))
         self.reason.setAccessibleDescription(self.tr("Show only decisions with this kind of reason"))
-        self.refresh_button = QPushButton(self.tr("&Refresh"))
+        self.refresh_button = QPushButton(self.tr("Refre&sh"))
         self.refresh_button.setAccessibleName(self.tr("Refresh"))
         self.refresh_button.setAccessibleDescription(self.tr("Read the decisions again with these filters"))
         filter_label = QLabel(self.tr("Filter:"))

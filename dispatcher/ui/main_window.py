@@ -222,7 +222,7 @@ class MainWindow(QMainWindow):
                                        self.tr("Start a shop from a grid file"))
         self.act_export = self._action(self.tr("&Export grid (CSV/XLSX)\u2026"), self.on_export, None,
                                        self.tr("Write the grid to a CSV or XLSX file"))
-        self.act_import_into = self._action(self.tr("Import grid &into this shop\u2026"), self.on_import_into, None,
+        self.act_import_into = self._action(self.tr("Import grid in&to this shop\u2026"), self.on_import_into, None,
                                             self.tr("Merge a grid file into this shop by job and machine names"))
         self.act_import_jobs = self._action(self.tr("Import &job list (CSV/XLSX)\u2026"), self.job_import.ask, None,
                                             self.tr("Add or update jobs from a planning system's job list, "
@@ -244,9 +244,9 @@ class MainWindow(QMainWindow):
                                            self.tr("Copy the selection with job and machine names"))
         self.act_paste = self._action(self.tr("&Paste"), self._paste, S.Paste,
                                       self.tr("Paste a tab-separated block from a spreadsheet"))
-        self.act_cannot = self._action(self.tr("Mark &cannot run"), self._cannot_run, S.Delete,
+        self.act_cannot = self._action(self.tr("Mar&k cannot run"), self._cannot_run, S.Delete,
                                        self.tr("The machine cannot run the job (selected cells)"))
-        self.act_pin = self._action(self.tr("&Pin job to this machine"), lambda: self.edits.pin(MUST), "Ctrl+Shift+M",
+        self.act_pin = self._action(self.tr("P&in job to this machine"), lambda: self.edits.pin(MUST), "Ctrl+Shift+M",
                                     self.tr("The job must go to this machine"))
         self.act_forbid = self._action(self.tr("&Forbid this pair"), lambda: self.edits.pin(MUST_NOT), "Ctrl+Shift+F",
                                        self.tr("The job must not go to this machine"))
@@ -277,13 +277,13 @@ class MainWindow(QMainWindow):
                                      "Ctrl+D", self.tr("Mark the current machine down and re-dispatch"))
         self.act_up = self._action(self.tr("Machine back &up\u2026"), lambda: self.decisions.machine_event(EVENT_UP),
                                    "Ctrl+U", self.tr("Mark the current machine up again and re-dispatch"))
-        self.act_maint = self._action(self.tr("Machine in &maintenance"), self.edits.toggle_maintenance, None,
+        self.act_maint = self._action(self.tr("Machine in mai&ntenance"), self.edits.toggle_maintenance, None,
                                       self.tr("The current machine takes no jobs (planned maintenance)"))
         self.act_slots = self._action(self.tr("Set &slots\u2026"), self.edits.ask_slots, None,
                                       self.tr("How many jobs the current machine takes per round"))
         self.act_confirm = self._action(self.tr("&Put plan in force\u2026"), lambda: self.decisions.confirm_plan(),
                                         "Ctrl+Return", self.tr("Record the plan shown as the decision in force"))
-        self.act_resolve = self._action(self.tr("Re-&solve now"), self.request_solve, "F5", self.tr("Solve again"))
+        self.act_resolve = self._action(self.tr("Re-s&olve now"), self.request_solve, "F5", self.tr("Solve again"))
         self.act_cancel = self._action(self.tr("&Cancel solve"), self.cancel_solve, "Esc",
                                        self.tr("Stop waiting for a long solve"))
         self.objective_group = QActionGroup(self)

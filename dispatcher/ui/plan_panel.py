@@ -61,7 +61,7 @@ class PlanPanel(QWidget):
         self.objective.setAccessibleDescription(self.tr("What the plan optimises; changing it re-solves at once"))
         self.objective.currentIndexChanged.connect(
             lambda _: self.objective_changed.emit(self.objective.currentData()))
-        form.addRow(self.tr("&Objective:"), self.objective)
+        form.addRow(self.tr("O&bjective:"), self.objective)
         self.mode = QComboBox()
         for key, label in MODE_LABELS.items():
             self.mode.addItem(self.tr(label), key)
@@ -70,7 +70,7 @@ class PlanPanel(QWidget):
         self.mode.setAccessibleName(self.tr("Planning mode"))
         self.mode.setAccessibleDescription(self.mode.toolTip())
         self.mode.currentIndexChanged.connect(lambda _: self.mode_changed.emit(self.mode.currentData()))
-        form.addRow(self.tr("&Mode:"), self.mode)
+        form.addRow(self.tr("Mo&de:"), self.mode)
         self.total = QLabel("-")
         self.total.setTextInteractionFlags(Qt.TextInteractionFlag.TextSelectableByMouse)
         self.total.setAccessibleName(self.tr("Plan total"))

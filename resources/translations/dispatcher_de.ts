@@ -35,20 +35,12 @@
 <context>
     <name>AlternativesView</name>
     <message>
-        <source>How &amp;many plans:</source>
-        <translation>&amp;Wie viele Pläne:</translation>
-    </message>
-    <message>
         <source>The best plans to list, best first</source>
         <translation>Die besten Pläne, die aufgelistet werden, der beste zuerst</translation>
     </message>
     <message>
         <source>How many plans</source>
         <translation>Wie viele Pläne</translation>
-    </message>
-    <message>
-        <source>&amp;Find best plans</source>
-        <translation>Beste Pläne &amp;finden</translation>
     </message>
     <message>
         <source>Find best plans</source>
@@ -83,7 +75,15 @@
         <translation>Der ausgewählte Plan und was er gegenüber dem besten ändert</translation>
     </message>
     <message>
-        <source>&amp;Put this plan in force…</source>
+        <source>How ma&amp;ny plans:</source>
+        <translation>&amp;Wie viele Pläne:</translation>
+    </message>
+    <message>
+        <source>Find best p&amp;lans</source>
+        <translation>Beste Pläne &amp;finden</translation>
+    </message>
+    <message>
+        <source>Put this plan &amp;in force…</source>
         <translation>Diesen Plan in &amp;Kraft setzen…</translation>
     </message>
     <message>
@@ -257,7 +257,7 @@
         <translation>Welche Rüsttabelle das Raster darunter bearbeitet</translation>
     </message>
     <message>
-        <source>&amp;Table:</source>
+        <source>Tab&amp;le:</source>
         <translation>&amp;Tabelle:</translation>
     </message>
     <message>
@@ -503,7 +503,7 @@
         <translation>Kein Personal</translation>
     </message>
     <message>
-        <source>&amp;Add operator</source>
+        <source>Add &amp;operator</source>
         <translation>Bediener &amp;hinzufügen</translation>
     </message>
     <message>
@@ -1633,7 +1633,7 @@ A machine&apos;s state in a sentence (English; shown translated).</extracomment>
         <translation>Nur Entscheidungen mit dieser Art von Grund zeigen</translation>
     </message>
     <message>
-        <source>&amp;Refresh</source>
+        <source>Refre&amp;sh</source>
         <translation>A&amp;ktualisieren</translation>
     </message>
     <message>
@@ -1987,10 +1987,6 @@ A machine&apos;s state in a sentence (English; shown translated).</extracomment>
         <translation>Das Raster in eine CSV- oder XLSX-Datei schreiben</translation>
     </message>
     <message>
-        <source>Import grid &amp;into this shop…</source>
-        <translation>Raster in diesen Betrieb &amp;übernehmen…</translation>
-    </message>
-    <message>
         <source>Merge a grid file into this shop by job and machine names</source>
         <translation>Eine Rasterdatei nach Auftrags- und Maschinennamen in diesen Betrieb übernehmen</translation>
     </message>
@@ -2051,16 +2047,8 @@ A machine&apos;s state in a sentence (English; shown translated).</extracomment>
         <translation>Einen tabulatorgetrennten Block aus einer Tabellenkalkulation einfügen</translation>
     </message>
     <message>
-        <source>Mark &amp;cannot run</source>
-        <translation>Als nicht &amp;möglich markieren</translation>
-    </message>
-    <message>
         <source>The machine cannot run the job (selected cells)</source>
         <translation>Die Maschine kann den Auftrag nicht ausführen (ausgewählte Zellen)</translation>
-    </message>
-    <message>
-        <source>&amp;Pin job to this machine</source>
-        <translation>Auftrag auf diese Maschine &amp;festlegen</translation>
     </message>
     <message>
         <source>The job must go to this machine</source>
@@ -2171,10 +2159,6 @@ A machine&apos;s state in a sentence (English; shown translated).</extracomment>
         <translation>Die aktuelle Maschine wieder als bereit markieren und neu zuteilen</translation>
     </message>
     <message>
-        <source>Machine in &amp;maintenance</source>
-        <translation>Maschine in &amp;Wartung</translation>
-    </message>
-    <message>
         <source>The current machine takes no jobs (planned maintenance)</source>
         <translation>Die aktuelle Maschine nimmt keine Aufträge an (geplante Wartung)</translation>
     </message>
@@ -2195,12 +2179,28 @@ A machine&apos;s state in a sentence (English; shown translated).</extracomment>
         <translation>Den angezeigten Plan als gültige Entscheidung erfassen</translation>
     </message>
     <message>
-        <source>Re-&amp;solve now</source>
-        <translation>Jetzt neu &amp;berechnen</translation>
+        <source>Import grid in&amp;to this shop…</source>
+        <translation>Raster in diesen Betrieb &amp;übernehmen…</translation>
+    </message>
+    <message>
+        <source>Mar&amp;k cannot run</source>
+        <translation>Als nicht &amp;möglich markieren</translation>
+    </message>
+    <message>
+        <source>P&amp;in job to this machine</source>
+        <translation>Auftrag auf diese Maschine &amp;festlegen</translation>
+    </message>
+    <message>
+        <source>Machine in mai&amp;ntenance</source>
+        <translation>Maschine in &amp;Wartung</translation>
     </message>
     <message>
         <source>Solve again</source>
         <translation>Erneut berechnen</translation>
+    </message>
+    <message>
+        <source>Re-s&amp;olve now</source>
+        <translation>Jetzt neu &amp;berechnen</translation>
     </message>
     <message>
         <source>&amp;Cancel solve</source>
@@ -2402,10 +2402,6 @@ A machine&apos;s state in a sentence (English; shown translated).</extracomment>
         <translation>Ziel</translation>
     </message>
     <message>
-        <source>&amp;Objective:</source>
-        <translation>&amp;Ziel:</translation>
-    </message>
-    <message>
         <source>Plan one dispatch round, or fill each machine&apos;s whole shift (needs run hours; may take longer, with progress and cancel)</source>
         <translation>Eine Zuteilungsrunde planen oder die ganze Schicht jeder Maschine füllen (braucht Laufzeiten; kann länger dauern, mit Fortschritt und Abbruch)</translation>
     </message>
@@ -2414,7 +2410,11 @@ A machine&apos;s state in a sentence (English; shown translated).</extracomment>
         <translation>Planungsart</translation>
     </message>
     <message>
-        <source>&amp;Mode:</source>
+        <source>O&amp;bjective:</source>
+        <translation>&amp;Ziel:</translation>
+    </message>
+    <message>
+        <source>Mo&amp;de:</source>
         <translation>&amp;Art:</translation>
     </message>
     <message>

@@ -35,20 +35,12 @@
 <context>
     <name>AlternativesView</name>
     <message>
-        <source>How &amp;many plans:</source>
-        <translation>&amp;Cuántos planes:</translation>
-    </message>
-    <message>
         <source>The best plans to list, best first</source>
         <translation>Los mejores planes que listar, el mejor primero</translation>
     </message>
     <message>
         <source>How many plans</source>
         <translation>Cuántos planes</translation>
-    </message>
-    <message>
-        <source>&amp;Find best plans</source>
-        <translation>&amp;Buscar los mejores planes</translation>
     </message>
     <message>
         <source>Find best plans</source>
@@ -83,7 +75,15 @@
         <translation>El plan seleccionado y lo que cambia respecto al mejor</translation>
     </message>
     <message>
-        <source>&amp;Put this plan in force…</source>
+        <source>How ma&amp;ny plans:</source>
+        <translation>&amp;Cuántos planes:</translation>
+    </message>
+    <message>
+        <source>Find best p&amp;lans</source>
+        <translation>&amp;Buscar los mejores planes</translation>
+    </message>
+    <message>
+        <source>Put this plan &amp;in force…</source>
         <translation>&amp;Poner este plan en vigor…</translation>
     </message>
     <message>
@@ -257,7 +257,7 @@
         <translation>Qué tabla de cambios edita la cuadrícula de abajo</translation>
     </message>
     <message>
-        <source>&amp;Table:</source>
+        <source>Tab&amp;le:</source>
         <translation>&amp;Tabla:</translation>
     </message>
     <message>
@@ -503,7 +503,7 @@
         <translation>Sin personal</translation>
     </message>
     <message>
-        <source>&amp;Add operator</source>
+        <source>Add &amp;operator</source>
         <translation>&amp;Añadir operario</translation>
     </message>
     <message>
@@ -1633,7 +1633,7 @@ A machine&apos;s state in a sentence (English; shown translated).</extracomment>
         <translation>Mostrar solo las decisiones con este tipo de motivo</translation>
     </message>
     <message>
-        <source>&amp;Refresh</source>
+        <source>Refre&amp;sh</source>
         <translation>&amp;Actualizar</translation>
     </message>
     <message>
@@ -1987,10 +1987,6 @@ A machine&apos;s state in a sentence (English; shown translated).</extracomment>
         <translation>Escribir la cuadrícula en un archivo CSV o XLSX</translation>
     </message>
     <message>
-        <source>Import grid &amp;into this shop…</source>
-        <translation>Importar cuadrícula en es&amp;te taller…</translation>
-    </message>
-    <message>
         <source>Merge a grid file into this shop by job and machine names</source>
         <translation>Combinar un archivo de cuadrícula con este taller por nombres de trabajo y máquina</translation>
     </message>
@@ -2051,16 +2047,8 @@ A machine&apos;s state in a sentence (English; shown translated).</extracomment>
         <translation>Pegar un bloque separado por tabuladores desde una hoja de cálculo</translation>
     </message>
     <message>
-        <source>Mark &amp;cannot run</source>
-        <translation>Marcar como no p&amp;uede</translation>
-    </message>
-    <message>
         <source>The machine cannot run the job (selected cells)</source>
         <translation>La máquina no puede hacer el trabajo (celdas seleccionadas)</translation>
-    </message>
-    <message>
-        <source>&amp;Pin job to this machine</source>
-        <translation>&amp;Fijar el trabajo a esta máquina</translation>
     </message>
     <message>
         <source>The job must go to this machine</source>
@@ -2171,10 +2159,6 @@ A machine&apos;s state in a sentence (English; shown translated).</extracomment>
         <translation>Marcar la máquina actual de nuevo en marcha y reasignar</translation>
     </message>
     <message>
-        <source>Machine in &amp;maintenance</source>
-        <translation>Máquina en man&amp;tenimiento</translation>
-    </message>
-    <message>
         <source>The current machine takes no jobs (planned maintenance)</source>
         <translation>La máquina actual no acepta trabajos (mantenimiento planificado)</translation>
     </message>
@@ -2195,12 +2179,28 @@ A machine&apos;s state in a sentence (English; shown translated).</extracomment>
         <translation>Registrar el plan mostrado como la decisión vigente</translation>
     </message>
     <message>
-        <source>Re-&amp;solve now</source>
-        <translation>Recalcu&amp;lar ahora</translation>
+        <source>Import grid in&amp;to this shop…</source>
+        <translation>Importar cuadrícula en es&amp;te taller…</translation>
+    </message>
+    <message>
+        <source>Mar&amp;k cannot run</source>
+        <translation>Marcar como no p&amp;uede</translation>
+    </message>
+    <message>
+        <source>P&amp;in job to this machine</source>
+        <translation>&amp;Fijar el trabajo a esta máquina</translation>
+    </message>
+    <message>
+        <source>Machine in mai&amp;ntenance</source>
+        <translation>Máquina en man&amp;tenimiento</translation>
     </message>
     <message>
         <source>Solve again</source>
         <translation>Calcular de nuevo</translation>
+    </message>
+    <message>
+        <source>Re-s&amp;olve now</source>
+        <translation>Recalcu&amp;lar ahora</translation>
     </message>
     <message>
         <source>&amp;Cancel solve</source>
@@ -2402,10 +2402,6 @@ A machine&apos;s state in a sentence (English; shown translated).</extracomment>
         <translation>Objetivo</translation>
     </message>
     <message>
-        <source>&amp;Objective:</source>
-        <translation>&amp;Objetivo:</translation>
-    </message>
-    <message>
         <source>Plan one dispatch round, or fill each machine&apos;s whole shift (needs run hours; may take longer, with progress and cancel)</source>
         <translation>Planificar una ronda de asignación o llenar el turno completo de cada máquina (necesita horas de trabajo; puede tardar más, con progreso y cancelación)</translation>
     </message>
@@ -2414,7 +2410,11 @@ A machine&apos;s state in a sentence (English; shown translated).</extracomment>
         <translation>Modo de planificación</translation>
     </message>
     <message>
-        <source>&amp;Mode:</source>
+        <source>O&amp;bjective:</source>
+        <translation>&amp;Objetivo:</translation>
+    </message>
+    <message>
+        <source>Mo&amp;de:</source>
         <translation>&amp;Modo:</translation>
     </message>
     <message>
