@@ -155,6 +155,11 @@ class WhatIfView(QWidget):
 
     def show_grid(self, shop: Shop, grid: WhatIfGrid, unit: str) -> None:
         self.model.set_grid(shop, grid, unit)
+        # each machine column as wide as its name needs (never narrower than the default)
+        header = self.table.horizontalHeader()
+        for k in range(min(self.model.columnCount(), 400)):
+            header.resizeSection(k, max(header.defaultSectionSize(),
+                                        min(header.sectionSizeFromContents(k).width(), 220)))
         self.status.setText(self.tr("Largest extra: {extra} {unit}").format(extra=fmt(grid.largest, 2),
                                                                             unit=unit_text(unit)))
         self.status.setToolTip(self.tr("The dearest single forced pair, against the plan shown"))
