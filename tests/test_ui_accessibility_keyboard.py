@@ -160,7 +160,7 @@ def test_alternatives_found_and_put_in_force_by_keys(qtbot, window, tmp_path):
     tab = window.alternatives_tab.view
     assert window.tabs.currentWidget() is tab
     tab.find.setFocus()
-    _key(qtbot, tab, Qt.Key.Key_L, ALT)                                  # Find best plans
+    _key(qtbot, tab, Qt.Key.Key_N, ALT)                                  # Find best plans
     qtbot.waitUntil(lambda: tab.list.count() > 1, timeout=20_000)
     tab.list.setFocus()
     _key(qtbot, tab.list, Qt.Key.Key_Down)
@@ -206,7 +206,7 @@ def test_history_restore_by_keys(qtbot, window):
     qtbot.waitUntil(lambda: panel.selected_ids() == [1], timeout=5000)
     seen: list[str] = []
     _type_into_next_dialog(qtbot, "Supervisor B", seen)
-    _key(qtbot, panel, Qt.Key.Key_T, ALT)                                 # Restore...
+    _key(qtbot, panel, Qt.Key.Key_S, ALT)                                 # Restore...
     qtbot.waitUntil(lambda: len(window.history.list()) == 2, timeout=5000)
     assert seen
     wait_plan(qtbot, window)

@@ -34,7 +34,7 @@ class AlternativesView(QWidget):
         self.plans: list[Plan] = []
         layout = QVBoxLayout(self)
         row = QHBoxLayout()
-        count_label = QLabel(self.tr("How ma&ny plans:"))
+        count_label = QLabel(self.tr("How man&y plans:"))
         row.addWidget(count_label)
         self.count = QSpinBox()
         self.count.setRange(2, 50)
@@ -43,7 +43,7 @@ class AlternativesView(QWidget):
         self.count.setAccessibleName(self.tr("How many plans"))
         self.count.setAccessibleDescription(self.count.toolTip())
         count_label.setBuddy(self.count)
-        self.find = QPushButton(self.tr("Find best p&lans"))
+        self.find = QPushButton(self.tr("Find best pla&ns"))
         self.find.setAccessibleName(self.tr("Find best plans"))
         self.find.setAccessibleDescription(self.tr("Rank the best plans of the shop as it is now"))
         row.addWidget(self.count)

@@ -36,7 +36,7 @@ class ChangeoverTab(QObject):
         self.chooser.setObjectName("changeoverTableChooser")
         self.chooser.setAccessibleName(self.tr("Changeover table"))
         self.chooser.setAccessibleDescription(self.tr("Which changeover table the grid below edits"))
-        label = QLabel(self.tr("Tab&le:"), self.view)
+        label = QLabel(self.tr("&Table:"), self.view)
         label.setBuddy(self.chooser)
         self.machines = QLabel(self.view)
         self.machines.setWordWrap(True)

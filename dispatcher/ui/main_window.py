@@ -137,7 +137,8 @@ class MainWindow(QMainWindow):
         bar = self.tabs.tabBar()
         bar.setAccessibleName(self.tr("Views"))
         bar.setAccessibleDescription(self.tr("Switch between the grid, the what-if map, the alternatives, "
-                                             "the crew, the changeover tables and the timeline (Alt and the underlined letter)"))
+                                             "the crew, the changeover tables and the timeline "
+                                             "(Alt and the underlined letter)"))
         for page, tip in ((self.view, self.tr("Jobs as rows, machines as columns: type setup values, pin or "
                                               "forbid pairs")),
                           (self.whatif_tab.view, self.tr("How much worse the plan gets if a job is forced onto "

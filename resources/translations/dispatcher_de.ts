@@ -75,11 +75,11 @@
         <translation>Der ausgewählte Plan und was er gegenüber dem besten ändert</translation>
     </message>
     <message>
-        <source>How ma&amp;ny plans:</source>
+        <source>How man&amp;y plans:</source>
         <translation>&amp;Wie viele Pläne:</translation>
     </message>
     <message>
-        <source>Find best p&amp;lans</source>
+        <source>Find best pla&amp;ns</source>
         <translation>Beste Pläne &amp;finden</translation>
     </message>
     <message>
@@ -257,7 +257,7 @@
         <translation>Welche Rüsttabelle das Raster darunter bearbeitet</translation>
     </message>
     <message>
-        <source>Tab&amp;le:</source>
+        <source>&amp;Table:</source>
         <translation>&amp;Tabelle:</translation>
     </message>
     <message>
@@ -1633,12 +1633,8 @@ A machine&apos;s state in a sentence (English; shown translated).</extracomment>
         <translation>Nur Entscheidungen mit dieser Art von Grund zeigen</translation>
     </message>
     <message>
-        <source>Refre&amp;sh</source>
-        <translation>A&amp;ktualisieren</translation>
-    </message>
-    <message>
         <source>Refresh</source>
-        <translation>Aktualisieren</translation>
+        <translation>A&amp;ktualisieren</translation>
     </message>
     <message>
         <source>Read the decisions again with these filters</source>
@@ -1689,7 +1685,7 @@ A machine&apos;s state in a sentence (English; shown translated).</extracomment>
         <translation>Zwei vergleichen</translation>
     </message>
     <message>
-        <source>Res&amp;tore…</source>
+        <source>Re&amp;store…</source>
         <translation>&amp;Wiederherstellen…</translation>
     </message>
     <message>

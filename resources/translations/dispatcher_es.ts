@@ -75,11 +75,11 @@
         <translation>El plan seleccionado y lo que cambia respecto al mejor</translation>
     </message>
     <message>
-        <source>How ma&amp;ny plans:</source>
+        <source>How man&amp;y plans:</source>
         <translation>&amp;Cuántos planes:</translation>
     </message>
     <message>
-        <source>Find best p&amp;lans</source>
+        <source>Find best pla&amp;ns</source>
         <translation>&amp;Buscar los mejores planes</translation>
     </message>
     <message>
@@ -257,7 +257,7 @@
         <translation>Qué tabla de cambios edita la cuadrícula de abajo</translation>
     </message>
     <message>
-        <source>Tab&amp;le:</source>
+        <source>&amp;Table:</source>
         <translation>&amp;Tabla:</translation>
     </message>
     <message>
@@ -1633,12 +1633,8 @@ A machine&apos;s state in a sentence (English; shown translated).</extracomment>
         <translation>Mostrar solo las decisiones con este tipo de motivo</translation>
     </message>
     <message>
-        <source>Refre&amp;sh</source>
-        <translation>&amp;Actualizar</translation>
-    </message>
-    <message>
         <source>Refresh</source>
-        <translation>Actualizar</translation>
+        <translation>&amp;Actualizar</translation>
     </message>
     <message>
         <source>Read the decisions again with these filters</source>
@@ -1689,7 +1685,7 @@ A machine&apos;s state in a sentence (English; shown translated).</extracomment>
         <translation>Comparar dos</translation>
     </message>
     <message>
-        <source>Res&amp;tore…</source>
+        <source>Re&amp;store…</source>
         <translation>Res&amp;taurar…</translation>
     </message>
     <message>
@@ -1992,7 +1988,7 @@ A machine&apos;s state in a sentence (English; shown translated).</extracomment>
     </message>
     <message>
         <source>Import &amp;job list (CSV/XLSX)…</source>
-        <translation>Importar lista de &amp;trabajos (CSV/XLSX)…</translation>
+        <translation>Importar lista de tra&amp;bajos (CSV/XLSX)…</translation>
     </message>
     <message>
         <source>Add or update jobs from a planning system&apos;s job list, choosing which column holds each field</source>
