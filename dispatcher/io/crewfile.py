@@ -10,6 +10,7 @@ from __future__ import annotations
 from datetime import date, time
 from typing import Any
 
+from dispatcher.limits import name_problem
 from dispatcher.shop.crew import Authorisation, Crew, Operator
 
 #: First document format version that may hold a crew.
@@ -33,7 +34,8 @@ def read_crew(r, block: Any) -> Crew:
         ops = []
     for n, o in enumerate(ops, start=1):
         label = o.get("label") if isinstance(o, dict) else None
-        where = f"operator {label!r} (#{n})" if isinstance(label, str) else f"operator #{n}"
+        where = (f"operator {label!r} (#{n})" if isinstance(label, str) and name_problem(label) is None
+                 else f"operator #{n}")
         o = r.obj(o, where, OPERATOR_FIELDS)
         if o is None:
             continue
@@ -47,7 +49,11 @@ def read_crew(r, block: Any) -> Crew:
     if not isinstance(groups, dict):
         r.bad("crew, field 'groups'", "expected an object group name -> list of machine ids")
         groups = {}
-    for name, members in groups.items():
+    for n, (name, members) in enumerate(groups.items(), start=1):
+        problem = name_problem(name)
+        if problem:
+            r.bad(f"crew, machine group #{n}, field 'name'", problem)
+            continue
         if not isinstance(members, list) or not all(isinstance(m, str) for m in members):
             r.bad(f"crew, machine group {name!r}", "expected a list of machine ids")
             continue

@@ -26,6 +26,7 @@ from datetime import date, datetime, time, timedelta
 import numpy as np
 
 from dispatcher.errors import BadInputError
+from dispatcher.limits import name_problem
 
 
 class CrewUnsupportedError(BadInputError, ValueError):
@@ -129,8 +130,13 @@ def crew_problems(shop) -> list:
         if n > 1:
             add(f"operator label {label!r}", f"is used by {n} operators; labels must be unique")
     start, end = _shift_window(shop)
-    for o in crew.operators:
-        where = f"operator {o.label!r} (id {o.id})"
+    for n, o in enumerate(crew.operators, start=1):
+        where = describe_operator(o, n)
+        for key in ("id", "label", "notes"):
+            v = getattr(o, key)
+            problem = name_problem(v, free_text=key == "notes") if isinstance(v, str) else None
+            if problem:
+                add(f"{where}, field '{key}'", problem)
         if not isinstance(o.id, str) or not o.id.strip():
             add(f"operator {o.label!r}, field 'id'", "must be a non-empty text")
         if not isinstance(o.label, str) or not o.label.strip():
@@ -150,9 +156,13 @@ def crew_problems(shop) -> list:
         if o.arrives is not None and o.leaves is not None and start is not None \
                 and _minutes_from(o.leaves, start) <= _minutes_from(o.arrives, start):
             add(f"{where}, field 'leaves'", "must be after the time the operator arrives")
-    for name, members in crew.groups.items():
+    for n, (name, members) in enumerate(crew.groups.items(), start=1):
         if not name.strip():
             add("crew, field 'groups'", "a group name must be a non-empty text")
+        problem = name_problem(name)
+        if problem:
+            add(f"machine group #{n}, field 'name'", problem)
+            name = f"#{n}"
         for mid in members:
             if mid not in machine_ids:
                 add(f"machine group {name!r}", f"names machine id {mid!r}, which the shop does not have")
@@ -173,6 +183,18 @@ def crew_problems(shop) -> list:
             or not 0 <= crew.warn_days <= 366:
         add("crew, field 'warn_days'", f"{crew.warn_days!r} must be a whole number from 0 to 366")
     return out
+
+
+def describe_operator(o: Operator, n: int) -> str:
+    """``operator 'Trainee' (id O6)``, or by position when the label or id is not a short
+    one-line text (so that a message never repeats a runaway label)."""
+    label_ok = isinstance(o.label, str) and name_problem(o.label) is None
+    id_ok = isinstance(o.id, str) and name_problem(o.id) is None
+    if label_ok and id_ok:
+        return f"operator {o.label!r} (id {o.id})"
+    if id_ok:
+        return f"operator #{n} (id {o.id})"
+    return f"operator {o.label!r} (#{n})" if label_ok else f"operator #{n}"
 
 
 def _shift_window(shop) -> tuple[time | None, time | None]:
