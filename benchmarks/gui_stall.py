@@ -11,7 +11,7 @@ off the GUI thread (``dispatcher.ui.files``: the generated 2.5 MB document in th
 process), so the stall left is the window's own work. The measurement is repeated
 (``--runs N``, default 3, each in a fresh window); the script prints one line per shop and
 run, the median and the worst per shop, and ends with ``worst_stall_ms <number>`` (the
-worst over all runs).
+worst over all runs, opening or scrolling and editing).
 
 The machine may be shared: beside each worst gap the script prints how much of it the GUI
 thread spent computing (its CPU time); the rest it waited for a processor or for the
@@ -169,9 +169,9 @@ def main() -> int:
         print(f"{path.name}: scrolling+editing median {statistics.median(editing):.0f} ms, "
               f"worst {max(editing):.0f} ms; opening median {statistics.median(opening):.0f} ms, "
               f"worst {max(opening):.0f} ms ({len(runs)} runs)")
-        worst = max(worst, max(editing))
+        worst = max(worst, max(editing), max(opening))
     print("load average after: " + " ".join(f"{x:.2f}" for x in os.getloadavg()))
-    print(f"goal: scrolling and editing never block the GUI thread for more than {GOAL_MS:.0f} ms")
+    print(f"goal: opening, scrolling and editing never block the GUI thread for more than {GOAL_MS:.0f} ms")
     print(f"worst_stall_ms {worst:.0f}")
     return 0
 

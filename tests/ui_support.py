@@ -57,6 +57,8 @@ def wait_plan(qtbot, window: MainWindow) -> None:
     qtbot.waitUntil(lambda: not window.runner.is_busy(), timeout=20_000)
     window.runner.wait_idle()
     qtbot.waitUntil(lambda: not window.runner.is_busy(), timeout=20_000)
+    # the grid's columns follow the new headings a chunk per turn of the event loop
+    qtbot.waitUntil(window.columns.settled, timeout=20_000)
 
 
 def reference_total(values: np.ndarray, allowed: np.ndarray) -> float:

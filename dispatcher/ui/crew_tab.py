@@ -10,7 +10,7 @@ running machine.
 
 from __future__ import annotations
 
-from PySide6.QtCore import QT_TRANSLATE_NOOP, QObject
+from PySide6.QtCore import QT_TRANSLATE_NOOP, QEvent, QObject
 from PySide6.QtGui import QGuiApplication
 from PySide6.QtWidgets import QHBoxLayout, QLabel, QPushButton, QTableView, QVBoxLayout, QWidget
 
@@ -63,13 +63,29 @@ class CrewTab(QObject):
         layout.addWidget(self.table, 1)
         layout.addLayout(row)
         layout.addWidget(caution)
+        self._size_pending = False
+        self.view.installEventFilter(self)
         self.model.modelReset.connect(self._refresh)
         self._refresh()
 
     def _refresh(self) -> None:
         has_crew = bool(self.doc.shop.crew.operators)
         self.empty.setVisible(not has_crew)
-        self.table.resizeColumnsToContents()
+        # Sizing measures every cell (a machine column each): done when the tab is seen,
+        # not while a big shop opens behind another tab.
+        self._size_pending = has_crew
+        if self.view.isVisible():
+            self._size_columns()
+
+    def _size_columns(self) -> None:
+        if self._size_pending:
+            self._size_pending = False
+            self.table.resizeColumnsToContents()
+
+    def eventFilter(self, watched, event) -> bool:
+        if watched is self.view and event.type() == QEvent.Type.Show:
+            self._size_columns()
+        return False
 
     def add_operator(self) -> None:
         crew = self.doc.shop.crew

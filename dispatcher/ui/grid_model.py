@@ -51,6 +51,9 @@ _CELL_ROLES = [Qt.ItemDataRole.DisplayRole, Qt.ItemDataRole.EditRole,
                Qt.ItemDataRole.BackgroundRole, Qt.ItemDataRole.ToolTipRole,
                Qt.ItemDataRole.AccessibleTextRole, Qt.ItemDataRole.FontRole, ValueRole, PinRole,
                SourceRole]
+#: The roles a heading answers (:meth:`GridModel.headerData`).
+_HEADER_ROLES = frozenset({Qt.ItemDataRole.DisplayRole, Qt.ItemDataRole.AccessibleTextRole,
+                           Qt.ItemDataRole.ToolTipRole, Qt.ItemDataRole.BackgroundRole})
 _PLAN_ROLES = [Qt.ItemDataRole.DisplayRole, Qt.ItemDataRole.BackgroundRole,
                Qt.ItemDataRole.ToolTipRole, Qt.ItemDataRole.AccessibleTextRole, PlannedRole]
 
@@ -69,6 +72,7 @@ _SOURCE = int(SourceRole)
 #: The roles kept per cell (a role not listed, such as the tooltip, is computed when asked).
 CACHED_ROLES = (_DISPLAY, _DECORATION, _EDIT, _FONT, _ALIGNMENT, _BACKGROUND, _FOREGROUND,
                 _CHECK, _ACCESSIBLE, _VALUE, _PIN, _SOURCE, _PLANNED, _RUNNING)
+_CACHED_SET = frozenset(CACHED_ROLES)
 #: At most this many cells are kept (a few pages of a big shop); the cache starts afresh.
 CACHE_CELLS = 20_000
 _RIGHT = int(Qt.AlignmentFlag.AlignRight | Qt.AlignmentFlag.AlignVCenter)
@@ -186,20 +190,20 @@ class GridModel(QAbstractTableModel):
         key = (index.row(), index.column())
         entry = self._cache.get(key)
         if entry is None:
-            entry = self._entry(*key)
+            # Machine cells: every cached role in one pass. Job columns: each role when it is
+            # first asked for (painting and column sizing ask for a few roles, and the
+            # others - a rush tick, a wait penalty's value - cost a lookup each).
+            entry = self._cell_entry(key[0], key[1] - FIRST_MACHINE_COL) if key[1] >= FIRST_MACHINE_COL else {}
             if len(self._cache) >= CACHE_CELLS:
                 self._cache.clear()
             self._cache[key] = entry
         role = int(role)
         if role in entry:
             return entry[role]
-        return self.computed_data(key[0], key[1], role)
-
-    def _entry(self, row: int, column: int) -> dict:
-        """Every role of :data:`CACHED_ROLES` for one cell (machine cells in one pass)."""
-        if column >= FIRST_MACHINE_COL:
-            return self._cell_entry(row, column - FIRST_MACHINE_COL)
-        return {role: self.computed_data(row, column, role) for role in CACHED_ROLES}
+        value = self.computed_data(key[0], key[1], role)
+        if role in _CACHED_SET and key[1] < FIRST_MACHINE_COL:
+            entry[role] = value
+        return value
 
     def _cell_entry(self, row: int, col: int) -> dict:
         """The cached roles of one machine cell, as :meth:`_cell_data` gives them."""
@@ -480,6 +484,11 @@ class GridModel(QAbstractTableModel):
         return self.tr(STATE_WORDS[state]) if state in STATE_WORDS else state
 
     def headerData(self, section: int, orientation: Qt.Orientation, role: int = Qt.ItemDataRole.DisplayRole):
+        # The header asks for a dozen roles per section when it measures or paints; only
+        # these four have answers, and building a machine's heading costs a few string
+        # formats, so the others return at once (a 1000 x 200 shop measures 200 headings).
+        if role not in _HEADER_ROLES:
+            return None
         shop = self._doc.shop
         if orientation == Qt.Orientation.Horizontal:
             if section < FIRST_MACHINE_COL:

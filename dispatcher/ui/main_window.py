@@ -37,11 +37,12 @@ from dispatcher.shop.fill_shift import ShiftFill
 from dispatcher.ui import palette
 from dispatcher.ui.alternatives_tab import AlternativesTab
 from dispatcher.ui.changeover_tab import ChangeoverTab
+from dispatcher.ui.column_sizing import ColumnSizer
 from dispatcher.ui.crew_tab import CrewTab
 from dispatcher.ui.decision_flow import DecisionFlow
 from dispatcher.ui.document import ShopDocument
 from dispatcher.ui.files import FileController
-from dispatcher.ui.grid_model import COL_PLAN, FIRST_MACHINE_COL, GridModel
+from dispatcher.ui.grid_model import FIRST_MACHINE_COL, GridModel
 from dispatcher.ui.grid_edits import GridEdits
 from dispatcher.ui.grid_view import GridView
 from dispatcher.ui.history_dock import HistoryDock
@@ -60,7 +61,6 @@ from dispatcher.ui.settings_keys import KEY_HISTORY
 
 APP_TITLE = "Dispatcher"
 GRID_PATTERNS = "*.csv *.tsv *.txt *.xlsx"
-MAX_MACHINE_WIDTH = 220  # px: a machine column sized to its heading grows no wider
 
 
 class MainWindow(QMainWindow):
@@ -85,12 +85,12 @@ class MainWindow(QMainWindow):
         self.objective = "total"
         self.mode = MODE_ROUND
         self.plan: Plan | ShiftFill | None = None
-        self._fit_columns = True
         self.last_problem = ""
 
         self.model = GridModel(self.doc, self)
         self.view = GridView(self)
         self.view.setModel(self.model)
+        self.columns = ColumnSizer(self.view, self.doc.n_machines, self)
         self.view.setAccessibleName(self.tr("Dispatch grid"))
         self.view.setAccessibleDescription(self.tr(
             "Jobs as rows, machines as columns: each cell is the value of a job on a machine; "
@@ -469,10 +469,7 @@ class MainWindow(QMainWindow):
             return
         self.plan = outcome.plan
         self.model.set_plan(outcome.plan)
-        if self._fit_columns:
-            self._fit_grid_columns()
-        else:
-            self._widen_machine_columns()
+        self.columns.size_soon()
         self.plan_panel.show_plan(outcome.plan, self.doc.shop.unit.label(), outcome.seconds,
                                   self.doc.shop.machine_names())
         if outcome.problem:
@@ -502,36 +499,7 @@ class MainWindow(QMainWindow):
 
     def _on_reset(self) -> None:
         self.plan = None
-        self._fit_columns = True
-
-    def _fit_grid_columns(self) -> None:
-        """Size columns to their text once per opened shop: the job columns measured on a
-        sample of rows, the machine columns from their header text (cell values are short
-        numbers). Measuring every machine column's cells stalled the window for over a
-        second on a 1000 x 200 shop."""
-        self._fit_columns = False
-        view = self.view
-        header = view.horizontalHeader()
-        header.setResizeContentsPrecision(60)
-        for column in range(FIRST_MACHINE_COL):
-            view.resizeColumnToContents(column)
-        view.setColumnWidth(COL_PLAN, max(view.columnWidth(COL_PLAN), 170))
-        floor = header.fontMetrics().horizontalAdvance("000000.0") + 16
-        for k in range(self.doc.n_machines()):
-            view.setColumnWidth(FIRST_MACHINE_COL + k, min(max(self._header_need(k), floor), MAX_MACHINE_WIDTH))
-
-    def _header_need(self, k: int) -> int:
-        """The width machine column ``k``'s heading needs in the header's style."""
-        return self.view.horizontalHeader().sectionSizeFromContents(FIRST_MACHINE_COL + k).width()
-
-    def _widen_machine_columns(self, *_args) -> None:
-        """A heading that grew (a machine down or in maintenance, its operator named) widens
-        its column up to the limit; columns never shrink here, so a hand-set width stays."""
-        for k in range(self.doc.n_machines()):
-            column = FIRST_MACHINE_COL + k
-            need = min(self._header_need(k), MAX_MACHINE_WIDTH)
-            if self.view.columnWidth(column) < need:
-                self.view.setColumnWidth(column, need)
+        self.columns.start_over()
 
     # ---- files ------------------------------------------------------------------------------
     def file_filter(self) -> str:
