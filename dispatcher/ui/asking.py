@@ -15,10 +15,11 @@ from PySide6.QtWidgets import (
     QDialogButtonBox,
     QInputDialog,
     QLineEdit,
+    QPlainTextEdit,
     QWidget,
 )
 
-__all__ = ["get_double", "get_int", "get_item", "get_text"]
+__all__ = ["get_double", "get_int", "get_item", "get_long_text", "get_text"]
 
 
 def _dialog(parent: QWidget | None, title: str, label: str) -> QInputDialog:
@@ -32,7 +33,7 @@ def _describe(dialog: QInputDialog, label: str, description: str) -> None:
     """Name the value's field by the dialog's question and describe it; describe OK and Cancel."""
     dialog.minimumSizeHint()  # QInputDialog builds its layout (the buttons) on first need
     for field in dialog.findChildren(QWidget):
-        if isinstance(field, (QLineEdit, QAbstractSpinBox, QComboBox)):
+        if isinstance(field, (QLineEdit, QPlainTextEdit, QAbstractSpinBox, QComboBox)):
             if isinstance(field.parentWidget(), (QAbstractSpinBox, QComboBox)):
                 continue  # the line edit inside a spin box or combo box
             field.setAccessibleName(label.rstrip(":"))
@@ -57,6 +58,19 @@ def get_text(parent, title: str, label: str, description: str, text: str = "") -
     dialog = _dialog(parent, title, label)
     dialog.setInputMode(QInputDialog.InputMode.TextInput)
     dialog.setTextValue(text)
+    ok = _run(dialog, label, description)
+    return dialog.textValue(), ok
+
+
+def get_long_text(parent, title: str, label: str, description: str, text: str = "") -> tuple[str, bool]:
+    """Free text over several lines (notes): Return starts a new line, Tab reaches OK."""
+    dialog = _dialog(parent, title, label)
+    dialog.setInputMode(QInputDialog.InputMode.TextInput)
+    dialog.setOption(QInputDialog.InputDialogOption.UsePlainTextEditForTextInput, True)
+    dialog.setTextValue(text)
+    dialog.minimumSizeHint()  # builds the text field
+    for field in dialog.findChildren(QPlainTextEdit):
+        field.setTabChangesFocus(True)
     ok = _run(dialog, label, description)
     return dialog.textValue(), ok
 

@@ -1,28 +1,35 @@
-"""The crew as an editable table: operators (rows) x label, present, minds, then machines.
+"""The crew as an editable table: operators (rows) x label, present, arrives, leaves,
+minds, notes, then machines.
 
 A machine cell is checked when the operator is authorised for that machine (directly or
 through a machine group); its text says how, and an authorisation that runs out within
 the crew's warning days (or already has) is marked and shaded. Every change is an
-undoable edit (:mod:`dispatcher.ui.edits`) through the document.
+undoable edit (:mod:`dispatcher.ui.edits`) through the document; what is typed is
+checked by the core (:mod:`dispatcher.shop.crew_edit`), and a refusal changes nothing and
+is announced by ``refused(message)``.
 """
 
 from __future__ import annotations
 
 from datetime import date
 
-from PySide6.QtCore import QT_TRANSLATE_NOOP, QAbstractTableModel, QModelIndex, Qt
+from PySide6.QtCore import QT_TRANSLATE_NOOP, QAbstractTableModel, QModelIndex, Qt, Signal
 
 from dispatcher.shop.crew import ABSENT, MAX_MINDING, PRESENT
+from dispatcher.shop.crew_edit import with_operator_text, with_times
+from dispatcher.shop.model import ShopError
 from dispatcher.ui import palette
 from dispatcher.ui.document import ShopDocument
-from dispatcher.ui.edits import SetAuthorisations, SetOperatorField
+from dispatcher.ui.edits import SetAuthorisations, SetCrew, SetOperatorField
 from dispatcher.ui.format import when_text
 
-COL_LABEL, COL_PRESENT, COL_MINDS = 0, 1, 2
-FIRST_MACHINE = 3
+COL_LABEL, COL_PRESENT, COL_ARRIVES, COL_LEAVES, COL_MINDS, COL_NOTES = range(6)
+FIRST_MACHINE = 6
+TIME_COLUMNS = {COL_ARRIVES: "arrives", COL_LEAVES: "leaves"}
 #: Heads of the leading columns (English; the model shows them translated).
 LEADING = (QT_TRANSLATE_NOOP("CrewModel", "Operator"), QT_TRANSLATE_NOOP("CrewModel", "Present"),
-           QT_TRANSLATE_NOOP("CrewModel", "Minds"))
+           QT_TRANSLATE_NOOP("CrewModel", "Arrives"), QT_TRANSLATE_NOOP("CrewModel", "Leaves"),
+           QT_TRANSLATE_NOOP("CrewModel", "Minds"), QT_TRANSLATE_NOOP("CrewModel", "Notes"))
 
 #: Words read as "authorised" / "not authorised" when a block is pasted.
 YES = {"1", "x", "y", "yes", "true", "\u2713", "ja", "si", "s\u00ed"}
@@ -31,6 +38,9 @@ NO = {"", "0", "n", "no", "false", "-", "nein"}
 
 class CrewModel(QAbstractTableModel):
     """Table model of ``doc.shop.crew`` (rows: operators)."""
+
+    #: An edit was refused (the message says why); nothing changed.
+    refused = Signal(str)
 
     def __init__(self, doc: ShopDocument, parent=None):
         super().__init__(parent)
@@ -55,8 +65,10 @@ class CrewModel(QAbstractTableModel):
         base = Qt.ItemFlag.ItemIsEnabled | Qt.ItemFlag.ItemIsSelectable
         if not index.isValid():
             return Qt.ItemFlag.NoItemFlags
-        if index.column() in (COL_LABEL, COL_MINDS):
+        if index.column() in (COL_LABEL, COL_ARRIVES, COL_LEAVES, COL_MINDS):
             return base | Qt.ItemFlag.ItemIsEditable
+        if index.column() == COL_NOTES:
+            return base   # several lines: edited in a dialog (the crew tab opens it)
         return base | Qt.ItemFlag.ItemIsUserCheckable
 
     # ---- what an authorisation cell holds -------------------------------------------------------
@@ -112,14 +124,37 @@ class CrewModel(QAbstractTableModel):
             if role == Qt.ItemDataRole.CheckStateRole:
                 return Qt.CheckState.Checked if op.attendance == PRESENT else Qt.CheckState.Unchecked
             if role in (Qt.ItemDataRole.DisplayRole, Qt.ItemDataRole.AccessibleTextRole):
-                text = self.tr("present") if op.attendance == PRESENT else self.tr("absent")
-                if op.attendance == PRESENT and op.arrives is not None:
-                    text += self.tr(", from {time}").format(time=when_text(op.arrives))
-                if op.attendance == PRESENT and op.leaves is not None:
-                    text += self.tr(", until {time}").format(time=when_text(op.leaves))
-                return text
+                return self.tr("present") if op.attendance == PRESENT else self.tr("absent")
             if role == Qt.ItemDataRole.ToolTipRole:
                 return self.tr("Space or click: mark present or absent for this shift")
+            return None
+        if col in TIME_COLUMNS:
+            t = getattr(op, TIME_COLUMNS[col])
+            if role == Qt.ItemDataRole.DisplayRole:
+                return "" if t is None else when_text(t)
+            if role == Qt.ItemDataRole.EditRole:
+                return "" if t is None else t.strftime("%H:%M")
+            if role == Qt.ItemDataRole.AccessibleTextRole:
+                if t is not None:
+                    return when_text(t)
+                return self.tr("from the shift's start") if col == COL_ARRIVES else self.tr("until the shift's end")
+            if role == Qt.ItemDataRole.ToolTipRole:
+                return (self.tr("When {operator} arrives: HH:MM within the shift, empty for the shift's start "
+                                "(F2 or double-click to type)") if col == COL_ARRIVES else
+                        self.tr("When {operator} leaves: HH:MM within the shift, empty for the shift's end "
+                                "(F2 or double-click to type)")).format(operator=op.label)
+            if role == Qt.ItemDataRole.TextAlignmentRole:
+                return int(Qt.AlignmentFlag.AlignCenter)
+            return None
+        if col == COL_NOTES:
+            if role in (Qt.ItemDataRole.DisplayRole, Qt.ItemDataRole.AccessibleTextRole):
+                first, _, rest = op.notes.strip().partition("\n")
+                return first + ("\u2026" if rest.strip() else "")
+            if role == Qt.ItemDataRole.EditRole:
+                return op.notes
+            if role == Qt.ItemDataRole.ToolTipRole:
+                return (op.notes + "\n\n" if op.notes else "") + self.tr(
+                    "Notes on {operator} (F2 or double-click to edit)").format(operator=op.label)
             return None
         if col == COL_MINDS:
             if role in (Qt.ItemDataRole.DisplayRole, Qt.ItemDataRole.EditRole,
@@ -154,7 +189,7 @@ class CrewModel(QAbstractTableModel):
                 tip += (self.tr(", expired %n day(s) ago (counts as none)", "", -left) if left < 0
                         else self.tr(", expires in %n day(s)", "", left))
             if how.startswith("through"):
-                tip += self.tr("; a group authorisation is changed in the shop document")
+                tip += self.tr("; the group's authorisation is given or withdrawn from the cell's menu")
             return tip
         return None
 
@@ -172,8 +207,12 @@ class CrewModel(QAbstractTableModel):
         m = self._doc.machine_at(section - FIRST_MACHINE)
         unattended = m.id in set(self._doc.shop.crew.unattended)
         if role == Qt.ItemDataRole.ToolTipRole:
-            return self.tr("{machine}: runs unattended (needs no operator)").format(machine=m.name) \
+            tip = self.tr("{machine}: runs unattended (needs no operator)").format(machine=m.name) \
                 if unattended else m.name
+            groups = [name for name, members in self._doc.shop.crew.groups.items() if m.id in members]
+            if groups:
+                tip += "\n" + self.tr("Machine groups: {groups}").format(groups=", ".join(groups))
+            return tip + "\n" + self.tr("Right-click: runs unattended or needs an operator; machine groups")
         return m.name + ("\n" + self.tr("(unattended)") if unattended else "")
 
     # ---- edits ----------------------------------------------------------------------------
@@ -184,10 +223,37 @@ class CrewModel(QAbstractTableModel):
         op = doc.shop.crew.operators[row]
         if col == COL_LABEL and role == Qt.ItemDataRole.EditRole:
             label = str(value).strip()
-            if not label or label == op.label or any(o.label == label for o in doc.shop.crew.operators):
+            if label == op.label:
+                return False
+            try:
+                with_operator_text(doc.shop, op.id, "label", label)
+            except ShopError as exc:
+                self.refused.emit(self.tr("renaming {operator} refused: {problem}; nothing changed").format(
+                    operator=op.label, problem=exc.summary(3)))
                 return False
             doc.undo_stack.push(SetOperatorField(doc, row, "label", label, self.tr("Rename {operator}").format(
                 operator=op.label)))
+            return True
+        if col in TIME_COLUMNS and role == Qt.ItemDataRole.EditRole:
+            key, text = TIME_COLUMNS[col], str(value).strip()
+            old = getattr(op, key)
+            if text == ("" if old is None else old.strftime("%H:%M")):
+                return False
+            try:
+                crew = with_times(doc.shop, op.id, **{key: text})
+            except ShopError as exc:
+                self.refused.emit(self.tr("time refused: {problem}; nothing changed").format(
+                    problem=exc.summary(3)))
+                return False
+            t = getattr(crew.operator(op.id), key)
+            if col == COL_ARRIVES:
+                what = (self.tr("{operator} arrives at {time}") if t is not None else
+                        self.tr("{operator} arrives at the shift's start"))
+            else:
+                what = (self.tr("{operator} leaves at {time}") if t is not None else
+                        self.tr("{operator} leaves at the shift's end"))
+            doc.undo_stack.push(SetCrew(doc, crew, what.format(
+                operator=op.label, time="" if t is None else when_text(t))))
             return True
         if col == COL_MINDS and role == Qt.ItemDataRole.EditRole:
             try:
@@ -208,6 +274,8 @@ class CrewModel(QAbstractTableModel):
                                                  (self.tr("{operator} present") if on else
                                                   self.tr("{operator} absent")).format(operator=op.label)))
             return True
+        if col < FIRST_MACHINE:
+            return False
         k = col - FIRST_MACHINE
         machine = doc.machine_at(k).name
         doc.undo_stack.push(SetAuthorisations(

@@ -38,7 +38,7 @@ class ShopDocument(QObject):
     ``cells_changed(rows, cols)`` - grid values or pins of these (row, col) pairs changed.
     ``jobs_changed(rows)`` - per-job fields (rush, wait penalty, state) changed.
     ``machines_changed(cols)`` - per-machine fields (state, slots) changed.
-    ``crew_changed`` - operators, attendance, capacities or authorisations changed.
+    ``crew_changed`` - operators, attendance, capacities, authorisations or groups changed.
     ``tables_changed(index)`` - entries of that changeover table changed (the derived
     values of its machines too, announced with ``cells_changed``).
     ``edited`` - any change at all (the plan must be re-solved).
@@ -225,6 +225,12 @@ class ShopDocument(QObject):
 
     def _apply_operator_field(self, op: int, field: str, value) -> None:
         setattr(self.shop.crew.operators[op], field, value)
+        self.crew_changed.emit()
+        self.edited.emit()
+
+    def _apply_crew(self, crew) -> None:
+        """Put ``crew`` (a whole :class:`~dispatcher.shop.crew.Crew`) in the shop."""
+        self.shop.crew = crew
         self.crew_changed.emit()
         self.edited.emit()
 

@@ -261,3 +261,37 @@ class AddOperator(QUndoCommand):
 
     def undo(self) -> None:
         self._doc._remove_operator(len(self._doc.shop.crew.operators) - 1)
+
+
+class SetCrew(QUndoCommand):
+    """Put in a crew made by one checked edit of :mod:`dispatcher.shop.crew_edit` (times,
+    expiry, groups, unattended machines, notes, removing an operator, warning days).
+
+    Edits with the same ``merge`` key that follow each other (the warning days stepped
+    with the arrows) become one step of the undo history.
+    """
+
+    MERGE_IDS = {"warn_days": 1701}
+
+    def __init__(self, doc: ShopDocument, crew, text: str, merge: str | None = None):
+        super().__init__(text)
+        self._doc = doc
+        self._old = doc.shop.crew.copy()
+        self._new = crew.copy()
+        self._id = self.MERGE_IDS.get(merge, -1)
+
+    def id(self) -> int:
+        return self._id
+
+    def mergeWith(self, other: QUndoCommand) -> bool:
+        if other.id() != self._id or self._id == -1:
+            return False
+        self._new = other._new.copy()
+        self.setText(other.text())
+        return True
+
+    def redo(self) -> None:
+        self._doc._apply_crew(self._new.copy())
+
+    def undo(self) -> None:
+        self._doc._apply_crew(self._old.copy())
