@@ -112,6 +112,7 @@ def data_names(window, tmp_path) -> list[str]:
         names += [m.name, m.id]
     if shop.crew is not None:
         names += [o.label for o in shop.crew.operators] + list(shop.crew.groups)
+        names += [line for o in shop.crew.operators for line in o.notes.splitlines()]  # typed notes
     if window.doc.path is not None:
         names.append(window.doc.path.name)
     names += [APP_TITLE, "Supervisor A", NOTE, str(window.history.path), str(SAMPLES),

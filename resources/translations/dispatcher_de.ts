@@ -327,6 +327,14 @@
     </message>
 </context>
 <context>
+    <name>CrewDelegate</name>
+    <message>
+        <source>HH:MM</source>
+        <extracomment>Widest the notes column starts (the full notes are in the tooltip and the dialog).</extracomment>
+        <translation>HH:MM</translation>
+    </message>
+</context>
+<context>
     <name>CrewModel</name>
     <message>
         <source>Operator</source>
@@ -338,12 +346,24 @@
         <translation>Anwesend</translation>
     </message>
     <message>
+        <source>Arrives</source>
+        <translation>Kommt</translation>
+    </message>
+    <message>
+        <source>Leaves</source>
+        <translation>Geht</translation>
+    </message>
+    <message>
         <source>Minds</source>
         <translation>Bedient</translation>
     </message>
     <message>
+        <source>Notes</source>
+        <translation>Notizen</translation>
+    </message>
+    <message>
         <source>expired ({how})</source>
-        <extracomment>Words read as &quot;authorised&quot; / &quot;not authorised&quot; when a block is pasted.</extracomment>
+        <extracomment>Words read as &quot;authorised&quot; / &quot;not authorised&quot; when a block is pasted. An edit was refused (the message says why); nothing changed.</extracomment>
         <translation>abgelaufen ({how})</translation>
     </message>
     <message>
@@ -371,16 +391,28 @@
         <translation>abwesend</translation>
     </message>
     <message>
-        <source>, from {time}</source>
-        <translation>, ab {time}</translation>
-    </message>
-    <message>
-        <source>, until {time}</source>
-        <translation>, bis {time}</translation>
-    </message>
-    <message>
         <source>Space or click: mark present or absent for this shift</source>
         <translation>Leertaste oder Klick: für diese Schicht als anwesend oder abwesend markieren</translation>
+    </message>
+    <message>
+        <source>from the shift&apos;s start</source>
+        <translation>ab Schichtbeginn</translation>
+    </message>
+    <message>
+        <source>until the shift&apos;s end</source>
+        <translation>bis Schichtende</translation>
+    </message>
+    <message>
+        <source>When {operator} arrives: HH:MM within the shift, empty for the shift&apos;s start (F2 or double-click to type)</source>
+        <translation>Wann {operator} kommt: HH:MM innerhalb der Schicht, leer für den Schichtbeginn (F2 oder Doppelklick zum Eingeben)</translation>
+    </message>
+    <message>
+        <source>When {operator} leaves: HH:MM within the shift, empty for the shift&apos;s end (F2 or double-click to type)</source>
+        <translation>Wann {operator} geht: HH:MM innerhalb der Schicht, leer für das Schichtende (F2 oder Doppelklick zum Eingeben)</translation>
+    </message>
+    <message>
+        <source>Notes on {operator} (F2 or double-click to edit)</source>
+        <translation>Notizen zu {operator} (F2 oder Doppelklick zum Bearbeiten)</translation>
     </message>
     <message>
         <source>How many machines {operator} runs at once (1 to {most})</source>
@@ -421,20 +453,52 @@
         </translation>
     </message>
     <message>
-        <source>; a group authorisation is changed in the shop document</source>
-        <translation>; eine Gruppenbefugnis wird im Betriebsdokument geändert</translation>
+        <source>; the group&apos;s authorisation is given or withdrawn from the cell&apos;s menu</source>
+        <translation>; die Gruppenbefugnis wird im Kontextmenü der Zelle erteilt oder entzogen</translation>
     </message>
     <message>
         <source>{machine}: runs unattended (needs no operator)</source>
         <translation>{machine}: läuft unbeaufsichtigt (braucht keinen Bediener)</translation>
     </message>
     <message>
+        <source>Machine groups: {groups}</source>
+        <translation>Maschinengruppen: {groups}</translation>
+    </message>
+    <message>
+        <source>Right-click: runs unattended or needs an operator; machine groups</source>
+        <translation>Rechtsklick: läuft unbeaufsichtigt oder braucht einen Bediener; Maschinengruppen</translation>
+    </message>
+    <message>
         <source>(unattended)</source>
         <translation>(unbeaufsichtigt)</translation>
     </message>
     <message>
+        <source>renaming {operator} refused: {problem}; nothing changed</source>
+        <translation>Umbenennen von {operator} abgelehnt: {problem}; nichts geändert</translation>
+    </message>
+    <message>
         <source>Rename {operator}</source>
         <translation>{operator} umbenennen</translation>
+    </message>
+    <message>
+        <source>time refused: {problem}; nothing changed</source>
+        <translation>Uhrzeit abgelehnt: {problem}; nichts geändert</translation>
+    </message>
+    <message>
+        <source>{operator} arrives at {time}</source>
+        <translation>{operator} kommt um {time}</translation>
+    </message>
+    <message>
+        <source>{operator} arrives at the shift&apos;s start</source>
+        <translation>{operator} kommt zum Schichtbeginn</translation>
+    </message>
+    <message>
+        <source>{operator} leaves at {time}</source>
+        <translation>{operator} geht um {time}</translation>
+    </message>
+    <message>
+        <source>{operator} leaves at the shift&apos;s end</source>
+        <translation>{operator} geht zum Schichtende</translation>
     </message>
     <message numerus="yes">
         <source>{operator} minds %n machine(s)</source>
@@ -491,8 +555,8 @@
         <translation>Personaltabelle</translation>
     </message>
     <message>
-        <source>One row per operator: present, machines minded at once, and a check for each machine they may run</source>
-        <translation>Eine Zeile je Bediener: anwesend, gleichzeitig bediente Maschinen und ein Haken für jede Maschine, die er führen darf</translation>
+        <source>One row per operator: present, arrives, leaves, machines minded at once, notes, and a check for each machine they may run; F2 on a machine cell sets the expiry date, the context menu gives machine groups and removes an operator</source>
+        <translation>Eine Zeile je Bediener: anwesend, kommt, geht, gleichzeitig bediente Maschinen, Notizen und ein Haken für jede Maschine, die er führen darf; F2 auf einer Maschinenzelle setzt das Ablaufdatum, das Kontextmenü erteilt Maschinengruppen und entfernt einen Bediener</translation>
     </message>
     <message>
         <source>This shop has no crew: plans do not staff machines. Add an operator to plan with who is here.</source>
@@ -515,12 +579,183 @@
         <translation>Einen Bediener zum Personal hinzufügen (Strg+Z nimmt es zurück)</translation>
     </message>
     <message>
+        <source>Remove opera&amp;tor</source>
+        <translation>Bediener en&amp;tfernen</translation>
+    </message>
+    <message>
+        <source>Remove operator</source>
+        <translation>Bediener entfernen</translation>
+    </message>
+    <message>
+        <source>Remove the operator of the current row with their authorisations (Ctrl+Z puts them back)</source>
+        <translation>Den Bediener der aktuellen Zeile mit seinen Befugnissen entfernen (Strg+Z holt ihn zurück)</translation>
+    </message>
+    <message>
+        <source>Machine gro&amp;ups…</source>
+        <translation>Maschinen&amp;gruppen…</translation>
+    </message>
+    <message>
+        <source>Machine groups</source>
+        <translation>Maschinengruppen</translation>
+    </message>
+    <message>
+        <source>See, create, rename and delete machine groups and choose their machines</source>
+        <translation>Maschinengruppen ansehen, anlegen, umbenennen und löschen und ihre Maschinen wählen</translation>
+    </message>
+    <message>
+        <source>Warn about authorisations expiring within</source>
+        <translation>Warnen vor Befugnissen, die ablaufen innerhalb von</translation>
+    </message>
+    <message>
+        <source> days</source>
+        <translation> Tagen</translation>
+    </message>
+    <message>
+        <source>Warning days</source>
+        <translation>Warntage</translation>
+    </message>
+    <message>
+        <source>Authorisations that run out within this many days of the shift&apos;s day are marked here and listed in the plan and on the sheet</source>
+        <translation>Befugnisse, die innerhalb so vieler Tage nach dem Schichttag ablaufen, werden hier markiert und im Plan und auf dem Blatt aufgeführt</translation>
+    </message>
+    <message>
         <source>Safety caution</source>
         <translation>Sicherheitshinweis</translation>
     </message>
     <message>
+        <source>{what} refused: {problem}; nothing changed</source>
+        <translation>{what} abgelehnt: {problem}; nichts geändert</translation>
+    </message>
+    <message>
+        <source>Operator {operator}</source>
+        <translation>Bediener {operator}</translation>
+    </message>
+    <message>
+        <source>&amp;Expiry date…</source>
+        <translation>&amp;Ablaufdatum…</translation>
+    </message>
+    <message>
+        <source>&amp;Notes…</source>
+        <translation>&amp;Notizen…</translation>
+    </message>
+    <message>
+        <source>Authorised for &amp;group</source>
+        <translation>&amp;Befugt für Gruppe</translation>
+    </message>
+    <message>
+        <source>Authorised for group</source>
+        <translation>Befugt für Gruppe</translation>
+    </message>
+    <message>
+        <source>(no machine groups)</source>
+        <translation>(keine Maschinengruppen)</translation>
+    </message>
+    <message>
+        <source>Runs una&amp;ttended (needs no operator)</source>
+        <translation>Läuft &amp;unbeaufsichtigt (braucht keinen Bediener)</translation>
+    </message>
+    <message>
         <source>Add Operator {n}</source>
         <translation>Bediener {n} hinzufügen</translation>
+    </message>
+    <message>
+        <source>Remove {operator}</source>
+        <translation>{operator} entfernen</translation>
+    </message>
+    <message>
+        <source>removing the operator</source>
+        <translation>Entfernen des Bedieners</translation>
+    </message>
+    <message>
+        <source>Notes</source>
+        <translation>Notizen</translation>
+    </message>
+    <message>
+        <source>Notes on {operator}:</source>
+        <translation>Notizen zu {operator}:</translation>
+    </message>
+    <message>
+        <source>Free text kept with the operator (shown in the crew table&apos;s tooltip)</source>
+        <translation>Freier Text beim Bediener (im Tooltip der Personaltabelle gezeigt)</translation>
+    </message>
+    <message>
+        <source>Notes on {operator}</source>
+        <translation>Notizen zu {operator}</translation>
+    </message>
+    <message>
+        <source>notes</source>
+        <translation>Notizen</translation>
+    </message>
+    <message>
+        <source>group {group} (all its machines)</source>
+        <translation>Gruppe {group} (alle ihre Maschinen)</translation>
+    </message>
+    <message>
+        <source>{operator} is not authorised for {machine}: authorise first (Space), then set the expiry date</source>
+        <translation>{operator} ist für {machine} nicht befugt: zuerst befugen (Leertaste), dann das Ablaufdatum setzen</translation>
+    </message>
+    <message>
+        <source>Authorisation expiry</source>
+        <translation>Ablauf der Befugnis</translation>
+    </message>
+    <message>
+        <source>{operator} for {what} expires on (YYYY-MM-DD; empty: never):</source>
+        <translation>{operator} für {what} läuft ab am (JJJJ-MM-TT; leer: nie):</translation>
+    </message>
+    <message>
+        <source>The last day the authorisation counts; after it the operator is not planned on these machines</source>
+        <translation>Der letzte Tag, an dem die Befugnis gilt; danach wird der Bediener nicht mehr für diese Maschinen eingeplant</translation>
+    </message>
+    <message>
+        <source>{operator} for {what}: expires {date}</source>
+        <translation>{operator} für {what}: läuft am {date} ab</translation>
+    </message>
+    <message>
+        <source>{operator} for {what}: no expiry</source>
+        <translation>{operator} für {what}: ohne Ablauf</translation>
+    </message>
+    <message>
+        <source>expiry date</source>
+        <translation>Ablaufdatum</translation>
+    </message>
+    <message>
+        <source>{machine} runs unattended</source>
+        <translation>{machine} läuft unbeaufsichtigt</translation>
+    </message>
+    <message>
+        <source>{machine} needs an operator</source>
+        <translation>{machine} braucht einen Bediener</translation>
+    </message>
+    <message>
+        <source>unattended machine</source>
+        <translation>Unbeaufsichtigte Maschine</translation>
+    </message>
+    <message>
+        <source>Authorise {operator} for group {group}</source>
+        <translation>{operator} für die Gruppe {group} befugen</translation>
+    </message>
+    <message>
+        <source>Withdraw {operator} from group {group}</source>
+        <translation>Befugnis von {operator} für die Gruppe {group} entziehen</translation>
+    </message>
+    <message>
+        <source>group authorisation</source>
+        <translation>Gruppenbefugnis</translation>
+    </message>
+    <message numerus="yes">
+        <source>Warn %n day(s) before an authorisation expires</source>
+        <translation>
+            <numerusform>%n Tag vor Ablauf einer Befugnis warnen</numerusform>
+            <numerusform>%n Tage vor Ablauf einer Befugnis warnen</numerusform>
+        </translation>
+    </message>
+    <message>
+        <source>warning days</source>
+        <translation>Warntage</translation>
+    </message>
+    <message>
+        <source>Change machine groups</source>
+        <translation>Maschinengruppen ändern</translation>
     </message>
     <message>
         <source>paste into the crew refused: {problem}; nothing changed</source>
@@ -1552,6 +1787,112 @@ A machine&apos;s state in a sentence (English; shown translated).</extracomment>
     <message>
         <source>Family of {job} cleared</source>
         <translation>Familie von {job} gelöscht</translation>
+    </message>
+</context>
+<context>
+    <name>GroupsDialog</name>
+    <message>
+        <source>Machine groups</source>
+        <translation>Maschinengruppen</translation>
+    </message>
+    <message>
+        <source>Groups of machines an operator can be authorised for at once</source>
+        <translation>Gruppen von Maschinen, für die ein Bediener auf einmal befugt werden kann</translation>
+    </message>
+    <message>
+        <source>Groups</source>
+        <translation>Gruppen</translation>
+    </message>
+    <message>
+        <source>The machine groups of this shop; choose one to see and change its machines</source>
+        <translation>Die Maschinengruppen dieses Betriebs; eine wählen, um ihre Maschinen zu sehen und zu ändern</translation>
+    </message>
+    <message>
+        <source>Machines of the group</source>
+        <translation>Maschinen der Gruppe</translation>
+    </message>
+    <message>
+        <source>A check for each machine in the chosen group (Space toggles)</source>
+        <translation>Ein Haken für jede Maschine der gewählten Gruppe (Leertaste schaltet um)</translation>
+    </message>
+    <message>
+        <source>Group name</source>
+        <translation>Gruppenname</translation>
+    </message>
+    <message>
+        <source>The name for a new group, or the new name of the chosen group</source>
+        <translation>Der Name für eine neue Gruppe oder der neue Name der gewählten Gruppe</translation>
+    </message>
+    <message>
+        <source>&amp;New group</source>
+        <translation>&amp;Neue Gruppe</translation>
+    </message>
+    <message>
+        <source>New group</source>
+        <translation>Neue Gruppe</translation>
+    </message>
+    <message>
+        <source>Add a group with the name typed, without machines</source>
+        <translation>Eine Gruppe mit dem eingegebenen Namen anlegen, ohne Maschinen</translation>
+    </message>
+    <message>
+        <source>&amp;Rename</source>
+        <translation>&amp;Umbenennen</translation>
+    </message>
+    <message>
+        <source>Rename group</source>
+        <translation>Gruppe umbenennen</translation>
+    </message>
+    <message>
+        <source>Give the chosen group the name typed; its authorisations keep it</source>
+        <translation>Der gewählten Gruppe den eingegebenen Namen geben; ihre Befugnisse bleiben bei ihr</translation>
+    </message>
+    <message>
+        <source>&amp;Delete</source>
+        <translation>&amp;Löschen</translation>
+    </message>
+    <message>
+        <source>Delete group</source>
+        <translation>Gruppe löschen</translation>
+    </message>
+    <message>
+        <source>Delete the chosen group and the authorisations through it</source>
+        <translation>Die gewählte Gruppe und die Befugnisse über sie löschen</translation>
+    </message>
+    <message>
+        <source>Problem</source>
+        <translation>Problem</translation>
+    </message>
+    <message>
+        <source>Use these groups (Ctrl+Z takes the change back)</source>
+        <translation>Diese Gruppen verwenden (Strg+Z nimmt die Änderung zurück)</translation>
+    </message>
+    <message>
+        <source>Close without changing anything</source>
+        <translation>Schließen, ohne etwas zu ändern</translation>
+    </message>
+    <message>
+        <source>Groups:</source>
+        <translation>Gruppen:</translation>
+    </message>
+    <message>
+        <source>Machines in the group:</source>
+        <translation>Maschinen der Gruppe:</translation>
+    </message>
+    <message>
+        <source>refused: {problem}; nothing changed</source>
+        <translation>abgelehnt: {problem}; nichts geändert</translation>
+    </message>
+    <message>
+        <source>a group named {name} exists already; nothing changed</source>
+        <translation>eine Gruppe namens {name} gibt es schon; nichts geändert</translation>
+    </message>
+    <message numerus="yes">
+        <source>%n authorisation(s) through the deleted group go with it</source>
+        <translation>
+            <numerusform>%n Befugnis über die gelöschte Gruppe entfällt mit ihr</numerusform>
+            <numerusform>%n Befugnisse über die gelöschte Gruppe entfallen mit ihr</numerusform>
+        </translation>
     </message>
 </context>
 <context>

@@ -72,6 +72,13 @@
 <context>
     <name>CrewTab</name>
     <message numerus="yes">
+        <source>Warn %n day(s) before an authorisation expires</source>
+        <translation>
+            <numerusform>Warn %n day before an authorisation expires</numerusform>
+            <numerusform>Warn %n days before an authorisation expires</numerusform>
+        </translation>
+    </message>
+    <message numerus="yes">
         <source>Paste %n authorisation(s)</source>
         <translation>
             <numerusform>Paste %n authorisation</numerusform>
@@ -124,6 +131,16 @@
         <translation>
             <numerusform>{machine}: {state}, takes %n job per round</numerusform>
             <numerusform>{machine}: {state}, takes %n jobs per round</numerusform>
+        </translation>
+    </message>
+</context>
+<context>
+    <name>GroupsDialog</name>
+    <message numerus="yes">
+        <source>%n authorisation(s) through the deleted group go with it</source>
+        <translation>
+            <numerusform>%n authorisation through the deleted group goes with it</numerusform>
+            <numerusform>%n authorisations through the deleted group go with it</numerusform>
         </translation>
     </message>
 </context>

@@ -327,6 +327,14 @@
     </message>
 </context>
 <context>
+    <name>CrewDelegate</name>
+    <message>
+        <source>HH:MM</source>
+        <extracomment>Widest the notes column starts (the full notes are in the tooltip and the dialog).</extracomment>
+        <translation>HH:MM</translation>
+    </message>
+</context>
+<context>
     <name>CrewModel</name>
     <message>
         <source>Operator</source>
@@ -338,12 +346,24 @@
         <translation>Presente</translation>
     </message>
     <message>
+        <source>Arrives</source>
+        <translation>Llega</translation>
+    </message>
+    <message>
+        <source>Leaves</source>
+        <translation>Se va</translation>
+    </message>
+    <message>
         <source>Minds</source>
         <translation>Atiende</translation>
     </message>
     <message>
+        <source>Notes</source>
+        <translation>Notas</translation>
+    </message>
+    <message>
         <source>expired ({how})</source>
-        <extracomment>Words read as &quot;authorised&quot; / &quot;not authorised&quot; when a block is pasted.</extracomment>
+        <extracomment>Words read as &quot;authorised&quot; / &quot;not authorised&quot; when a block is pasted. An edit was refused (the message says why); nothing changed.</extracomment>
         <translation>caducada ({how})</translation>
     </message>
     <message>
@@ -371,16 +391,28 @@
         <translation>ausente</translation>
     </message>
     <message>
-        <source>, from {time}</source>
-        <translation>, desde las {time}</translation>
-    </message>
-    <message>
-        <source>, until {time}</source>
-        <translation>, hasta las {time}</translation>
-    </message>
-    <message>
         <source>Space or click: mark present or absent for this shift</source>
         <translation>Espacio o clic: marcar presente o ausente en este turno</translation>
+    </message>
+    <message>
+        <source>from the shift&apos;s start</source>
+        <translation>desde el inicio del turno</translation>
+    </message>
+    <message>
+        <source>until the shift&apos;s end</source>
+        <translation>hasta el final del turno</translation>
+    </message>
+    <message>
+        <source>When {operator} arrives: HH:MM within the shift, empty for the shift&apos;s start (F2 or double-click to type)</source>
+        <translation>Cuándo llega {operator}: HH:MM dentro del turno, vacío para el inicio del turno (F2 o doble clic para escribir)</translation>
+    </message>
+    <message>
+        <source>When {operator} leaves: HH:MM within the shift, empty for the shift&apos;s end (F2 or double-click to type)</source>
+        <translation>Cuándo se va {operator}: HH:MM dentro del turno, vacío para el final del turno (F2 o doble clic para escribir)</translation>
+    </message>
+    <message>
+        <source>Notes on {operator} (F2 or double-click to edit)</source>
+        <translation>Notas sobre {operator} (F2 o doble clic para editar)</translation>
     </message>
     <message>
         <source>How many machines {operator} runs at once (1 to {most})</source>
@@ -421,20 +453,52 @@
         </translation>
     </message>
     <message>
-        <source>; a group authorisation is changed in the shop document</source>
-        <translation>; una autorización de grupo se cambia en el documento del taller</translation>
+        <source>; the group&apos;s authorisation is given or withdrawn from the cell&apos;s menu</source>
+        <translation>; la autorización del grupo se da o se retira desde el menú de la celda</translation>
     </message>
     <message>
         <source>{machine}: runs unattended (needs no operator)</source>
         <translation>{machine}: funciona sin atención (no necesita operario)</translation>
     </message>
     <message>
+        <source>Machine groups: {groups}</source>
+        <translation>Grupos de máquinas: {groups}</translation>
+    </message>
+    <message>
+        <source>Right-click: runs unattended or needs an operator; machine groups</source>
+        <translation>Clic derecho: funciona sin atención o necesita operario; grupos de máquinas</translation>
+    </message>
+    <message>
         <source>(unattended)</source>
         <translation>(sin atención)</translation>
     </message>
     <message>
+        <source>renaming {operator} refused: {problem}; nothing changed</source>
+        <translation>cambio de nombre de {operator} rechazado: {problem}; no ha cambiado nada</translation>
+    </message>
+    <message>
         <source>Rename {operator}</source>
         <translation>Renombrar a {operator}</translation>
+    </message>
+    <message>
+        <source>time refused: {problem}; nothing changed</source>
+        <translation>hora rechazada: {problem}; no ha cambiado nada</translation>
+    </message>
+    <message>
+        <source>{operator} arrives at {time}</source>
+        <translation>{operator} llega a las {time}</translation>
+    </message>
+    <message>
+        <source>{operator} arrives at the shift&apos;s start</source>
+        <translation>{operator} llega al inicio del turno</translation>
+    </message>
+    <message>
+        <source>{operator} leaves at {time}</source>
+        <translation>{operator} se va a las {time}</translation>
+    </message>
+    <message>
+        <source>{operator} leaves at the shift&apos;s end</source>
+        <translation>{operator} se va al final del turno</translation>
     </message>
     <message numerus="yes">
         <source>{operator} minds %n machine(s)</source>
@@ -491,8 +555,8 @@
         <translation>Tabla de personal</translation>
     </message>
     <message>
-        <source>One row per operator: present, machines minded at once, and a check for each machine they may run</source>
-        <translation>Una fila por operario: presente, máquinas atendidas a la vez y una marca por cada máquina que puede manejar</translation>
+        <source>One row per operator: present, arrives, leaves, machines minded at once, notes, and a check for each machine they may run; F2 on a machine cell sets the expiry date, the context menu gives machine groups and removes an operator</source>
+        <translation>Una fila por operario: presente, llega, se va, máquinas atendidas a la vez, notas y una marca por cada máquina que puede manejar; F2 en una celda de máquina fija la fecha de caducidad, el menú contextual da grupos de máquinas y quita un operario</translation>
     </message>
     <message>
         <source>This shop has no crew: plans do not staff machines. Add an operator to plan with who is here.</source>
@@ -515,12 +579,183 @@
         <translation>Añadir un operario al personal (Ctrl+Z lo deshace)</translation>
     </message>
     <message>
+        <source>Remove opera&amp;tor</source>
+        <translation>&amp;Quitar operario</translation>
+    </message>
+    <message>
+        <source>Remove operator</source>
+        <translation>Quitar operario</translation>
+    </message>
+    <message>
+        <source>Remove the operator of the current row with their authorisations (Ctrl+Z puts them back)</source>
+        <translation>Quitar el operario de la fila actual con sus autorizaciones (Ctrl+Z lo devuelve)</translation>
+    </message>
+    <message>
+        <source>Machine gro&amp;ups…</source>
+        <translation>&amp;Grupos de máquinas…</translation>
+    </message>
+    <message>
+        <source>Machine groups</source>
+        <translation>Grupos de máquinas</translation>
+    </message>
+    <message>
+        <source>See, create, rename and delete machine groups and choose their machines</source>
+        <translation>Ver, crear, renombrar y eliminar grupos de máquinas y elegir sus máquinas</translation>
+    </message>
+    <message>
+        <source>Warn about authorisations expiring within</source>
+        <translation>Avisar de autorizaciones que caducan en</translation>
+    </message>
+    <message>
+        <source> days</source>
+        <translation> días</translation>
+    </message>
+    <message>
+        <source>Warning days</source>
+        <translation>Días de aviso</translation>
+    </message>
+    <message>
+        <source>Authorisations that run out within this many days of the shift&apos;s day are marked here and listed in the plan and on the sheet</source>
+        <translation>Las autorizaciones que caducan en estos días desde el día del turno se marcan aquí y se listan en el plan y en la hoja</translation>
+    </message>
+    <message>
         <source>Safety caution</source>
         <translation>Advertencia de seguridad</translation>
     </message>
     <message>
+        <source>{what} refused: {problem}; nothing changed</source>
+        <translation>{what} rechazado: {problem}; no ha cambiado nada</translation>
+    </message>
+    <message>
+        <source>Operator {operator}</source>
+        <translation>Operario {operator}</translation>
+    </message>
+    <message>
+        <source>&amp;Expiry date…</source>
+        <translation>Fecha de &amp;caducidad…</translation>
+    </message>
+    <message>
+        <source>&amp;Notes…</source>
+        <translation>&amp;Notas…</translation>
+    </message>
+    <message>
+        <source>Authorised for &amp;group</source>
+        <translation>Autorizado para el gr&amp;upo</translation>
+    </message>
+    <message>
+        <source>Authorised for group</source>
+        <translation>Autorizado para el grupo</translation>
+    </message>
+    <message>
+        <source>(no machine groups)</source>
+        <translation>(sin grupos de máquinas)</translation>
+    </message>
+    <message>
+        <source>Runs una&amp;ttended (needs no operator)</source>
+        <translation>Funciona &amp;sin atención (no necesita operario)</translation>
+    </message>
+    <message>
         <source>Add Operator {n}</source>
         <translation>Añadir operario {n}</translation>
+    </message>
+    <message>
+        <source>Remove {operator}</source>
+        <translation>Quitar a {operator}</translation>
+    </message>
+    <message>
+        <source>removing the operator</source>
+        <translation>Quitar el operario</translation>
+    </message>
+    <message>
+        <source>Notes</source>
+        <translation>Notas</translation>
+    </message>
+    <message>
+        <source>Notes on {operator}:</source>
+        <translation>Notas sobre {operator}:</translation>
+    </message>
+    <message>
+        <source>Free text kept with the operator (shown in the crew table&apos;s tooltip)</source>
+        <translation>Texto libre guardado con el operario (se muestra en la información de la tabla de personal)</translation>
+    </message>
+    <message>
+        <source>Notes on {operator}</source>
+        <translation>Notas sobre {operator}</translation>
+    </message>
+    <message>
+        <source>notes</source>
+        <translation>Notas</translation>
+    </message>
+    <message>
+        <source>group {group} (all its machines)</source>
+        <translation>el grupo {group} (todas sus máquinas)</translation>
+    </message>
+    <message>
+        <source>{operator} is not authorised for {machine}: authorise first (Space), then set the expiry date</source>
+        <translation>{operator} no está autorizado para {machine}: autorice primero (Espacio) y luego fije la fecha de caducidad</translation>
+    </message>
+    <message>
+        <source>Authorisation expiry</source>
+        <translation>Caducidad de la autorización</translation>
+    </message>
+    <message>
+        <source>{operator} for {what} expires on (YYYY-MM-DD; empty: never):</source>
+        <translation>{operator} para {what} caduca el (AAAA-MM-DD; vacío: nunca):</translation>
+    </message>
+    <message>
+        <source>The last day the authorisation counts; after it the operator is not planned on these machines</source>
+        <translation>El último día en que cuenta la autorización; después el operario no se planifica en estas máquinas</translation>
+    </message>
+    <message>
+        <source>{operator} for {what}: expires {date}</source>
+        <translation>{operator} para {what}: caduca el {date}</translation>
+    </message>
+    <message>
+        <source>{operator} for {what}: no expiry</source>
+        <translation>{operator} para {what}: sin caducidad</translation>
+    </message>
+    <message>
+        <source>expiry date</source>
+        <translation>Fecha de caducidad</translation>
+    </message>
+    <message>
+        <source>{machine} runs unattended</source>
+        <translation>{machine} funciona sin atención</translation>
+    </message>
+    <message>
+        <source>{machine} needs an operator</source>
+        <translation>{machine} necesita operario</translation>
+    </message>
+    <message>
+        <source>unattended machine</source>
+        <translation>Máquina sin atención</translation>
+    </message>
+    <message>
+        <source>Authorise {operator} for group {group}</source>
+        <translation>Autorizar a {operator} para el grupo {group}</translation>
+    </message>
+    <message>
+        <source>Withdraw {operator} from group {group}</source>
+        <translation>Retirar a {operator} del grupo {group}</translation>
+    </message>
+    <message>
+        <source>group authorisation</source>
+        <translation>Autorización de grupo</translation>
+    </message>
+    <message numerus="yes">
+        <source>Warn %n day(s) before an authorisation expires</source>
+        <translation>
+            <numerusform>Avisar %n día antes de que caduque una autorización</numerusform>
+            <numerusform>Avisar %n días antes de que caduque una autorización</numerusform>
+        </translation>
+    </message>
+    <message>
+        <source>warning days</source>
+        <translation>Días de aviso</translation>
+    </message>
+    <message>
+        <source>Change machine groups</source>
+        <translation>Cambiar grupos de máquinas</translation>
     </message>
     <message>
         <source>paste into the crew refused: {problem}; nothing changed</source>
@@ -1552,6 +1787,112 @@ A machine&apos;s state in a sentence (English; shown translated).</extracomment>
     <message>
         <source>Family of {job} cleared</source>
         <translation>Familia de {job} borrada</translation>
+    </message>
+</context>
+<context>
+    <name>GroupsDialog</name>
+    <message>
+        <source>Machine groups</source>
+        <translation>Grupos de máquinas</translation>
+    </message>
+    <message>
+        <source>Groups of machines an operator can be authorised for at once</source>
+        <translation>Grupos de máquinas para los que se puede autorizar a un operario de una vez</translation>
+    </message>
+    <message>
+        <source>Groups</source>
+        <translation>Grupos</translation>
+    </message>
+    <message>
+        <source>The machine groups of this shop; choose one to see and change its machines</source>
+        <translation>Los grupos de máquinas de este taller; elija uno para ver y cambiar sus máquinas</translation>
+    </message>
+    <message>
+        <source>Machines of the group</source>
+        <translation>Máquinas del grupo</translation>
+    </message>
+    <message>
+        <source>A check for each machine in the chosen group (Space toggles)</source>
+        <translation>Una marca por cada máquina del grupo elegido (Espacio la cambia)</translation>
+    </message>
+    <message>
+        <source>Group name</source>
+        <translation>Nombre del grupo</translation>
+    </message>
+    <message>
+        <source>The name for a new group, or the new name of the chosen group</source>
+        <translation>El nombre de un grupo nuevo o el nuevo nombre del grupo elegido</translation>
+    </message>
+    <message>
+        <source>&amp;New group</source>
+        <translation>&amp;Nuevo grupo</translation>
+    </message>
+    <message>
+        <source>New group</source>
+        <translation>Nuevo grupo</translation>
+    </message>
+    <message>
+        <source>Add a group with the name typed, without machines</source>
+        <translation>Añadir un grupo con el nombre escrito, sin máquinas</translation>
+    </message>
+    <message>
+        <source>&amp;Rename</source>
+        <translation>&amp;Renombrar</translation>
+    </message>
+    <message>
+        <source>Rename group</source>
+        <translation>Renombrar grupo</translation>
+    </message>
+    <message>
+        <source>Give the chosen group the name typed; its authorisations keep it</source>
+        <translation>Dar al grupo elegido el nombre escrito; sus autorizaciones lo siguen</translation>
+    </message>
+    <message>
+        <source>&amp;Delete</source>
+        <translation>&amp;Eliminar</translation>
+    </message>
+    <message>
+        <source>Delete group</source>
+        <translation>Eliminar grupo</translation>
+    </message>
+    <message>
+        <source>Delete the chosen group and the authorisations through it</source>
+        <translation>Eliminar el grupo elegido y las autorizaciones a través de él</translation>
+    </message>
+    <message>
+        <source>Problem</source>
+        <translation>Problema</translation>
+    </message>
+    <message>
+        <source>Use these groups (Ctrl+Z takes the change back)</source>
+        <translation>Usar estos grupos (Ctrl+Z deshace el cambio)</translation>
+    </message>
+    <message>
+        <source>Close without changing anything</source>
+        <translation>Cerrar sin cambiar nada</translation>
+    </message>
+    <message>
+        <source>Groups:</source>
+        <translation>Grupos:</translation>
+    </message>
+    <message>
+        <source>Machines in the group:</source>
+        <translation>Máquinas del grupo:</translation>
+    </message>
+    <message>
+        <source>refused: {problem}; nothing changed</source>
+        <translation>rechazado: {problem}; no ha cambiado nada</translation>
+    </message>
+    <message>
+        <source>a group named {name} exists already; nothing changed</source>
+        <translation>ya existe un grupo llamado {name}; no ha cambiado nada</translation>
+    </message>
+    <message numerus="yes">
+        <source>%n authorisation(s) through the deleted group go with it</source>
+        <translation>
+            <numerusform>%n autorización a través del grupo eliminado se va con él</numerusform>
+            <numerusform>%n autorizaciones a través del grupo eliminado se van con él</numerusform>
+        </translation>
     </message>
 </context>
 <context>
