@@ -62,7 +62,8 @@ SHEET_PENDING = {
     "min": "the unit after each value (shop.model.Unit.label)",
     "unattended": "operator column of an unattended machine (sheet/build.py)",
     "Crew": "crew section heading (sheet/render.py)",
-    "Short jobs could but the present can staff only": "crew shortage (sheet/build.py, engine/staffing.py)",
+    # words that also occur in typed notes count as data and drop out of the English text
+    "Short jobs could but": "crew shortage (sheet/build.py, engine/staffing.py)",
     "present authorised": "crew shortage, second line (engine/staffing.py)",
     "Authorisation": "expiring authorisations (sheet/build.py, shop/staffed.py)",
     "Not here yet": "operators not here yet (sheet/build.py)",
