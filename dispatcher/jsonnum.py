@@ -9,7 +9,7 @@ from __future__ import annotations
 import math
 
 #: Beyond this, not every whole float is exactly an int in JSON readers (2**53).
-_EXACT = 2**53
+EXACT_INTS = 2**53
 
 
 def json_number(x: float | None, *, digits: int | None = None) -> int | float | None:
@@ -26,4 +26,4 @@ def json_number(x: float | None, *, digits: int | None = None) -> int | float | 
     x = float(x)
     if digits is not None and math.isfinite(x):
         x = round(x, digits)
-    return int(x) if math.isfinite(x) and x.is_integer() and abs(x) < _EXACT else x
+    return int(x) if math.isfinite(x) and x.is_integer() and abs(x) < EXACT_INTS else x

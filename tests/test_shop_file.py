@@ -197,3 +197,34 @@ def test_save_replaces_and_keeps_permissions(tmp_path):
     assert load_shop(path).name == "renamed"
     assert path.stat().st_mode & 0o777 == 0o640
     assert dump_shop_text(shop) == path.read_text(encoding="utf-8")
+
+
+def test_grid_is_written_in_shop_order_whatever_order_the_cells_were_set():
+    # Reference: the plain definition (every cell sorted by the job's then the machine's
+    # place in the shop), against the writer's row-by-row gathering; values whole or not,
+    # big, and missing (cannot run) on a shuffled dict.
+    import random
+
+    jobs = [Job(f"J{i}", f"WO-{i} part (invented)") for i in range(12)]
+    machines = [Machine(f"M{k}", f"Cell {k}") for k in range(7)]
+    shop = Shop(name="order", jobs=jobs, machines=machines)
+    cells = [(j.id, m.id) for j in jobs for m in machines if (hash((j.id, m.id)) % 5)]
+    rng = random.Random(3)
+    rng.shuffle(cells)
+    values = [5.0, 7.5, 2.0**60, 0.0, 12, 1e12]
+    shop.grid = {c: values[n % len(values)] for n, c in enumerate(cells)}
+    written = shop_to_dict(shop)["grid"]
+    jo = {j.id: i for i, j in enumerate(jobs)}
+    mo = {m.id: i for i, m in enumerate(machines)}
+    expected_order = sorted(shop.grid, key=lambda c: (jo[c[0]], mo[c[1]]))
+    assert [(jid, mid) for jid, row in written.items() for mid in row] == expected_order
+    for (jid, mid) in expected_order:
+        v = shop.grid[(jid, mid)]
+        out = written[jid][mid]
+        assert out == v and (type(out) is int) == (float(v).is_integer() and abs(v) < 2**53)
+    assert load_shop_text_roundtrip(shop) == shop.grid
+
+
+def load_shop_text_roundtrip(shop) -> dict:
+    data = json.loads(dump_shop_text(shop))
+    return {(j, m): v for j, row in data["grid"].items() for m, v in row.items()}

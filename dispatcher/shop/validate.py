@@ -75,8 +75,12 @@ def shop_problems(shop: Shop) -> list[Problem]:
     job_ids = {j.id for j in shop.jobs}
     running_on: dict[str, list[str]] = defaultdict(list)
 
+    # describe_job/describe_machine name the first item with an id; looked up once here
+    # (a search per item made checking a 1000-job shop quadratic)
+    first_job = {j.id: j for j in reversed(shop.jobs)}
+    first_machine = {m.id: m for m in reversed(shop.machines)}
     for m in shop.machines:
-        where = shop.describe_machine(m.id)
+        where = f"machine {first_machine[m.id].name!r} (id {m.id})"
         if m.state not in MACHINE_STATES:
             add(f"{where}, field 'state'", f"{m.state!r} is not one of {', '.join(MACHINE_STATES)}")
         if isinstance(m.slots, bool) or not isinstance(m.slots, int) or not 1 <= m.slots <= MAX_SLOTS:
@@ -87,7 +91,7 @@ def shop_problems(shop: Shop) -> list[Problem]:
             add(f"{where}, field 'speed_factor'", f"{m.speed_factor!r} must be a number > 0 and at most 1e12")
 
     for j in shop.jobs:
-        where = shop.describe_job(j.id)
+        where = f"job {first_job[j.id].name!r} (id {j.id})"
         if j.state not in JOB_STATES:
             add(f"{where}, field 'state'", f"{j.state!r} is not one of {', '.join(JOB_STATES)}")
         for fname in ("wait_penalty",):
@@ -124,7 +128,12 @@ def shop_problems(shop: Shop) -> list[Problem]:
         return f"{block}, {shop.describe_job(jid)}, {shop.describe_machine(mid)}"
 
     for (jid, mid), v in shop.grid.items():
-        # the place is spelled out only for a problem: grids have up to millions of cells
+        # the place is spelled out only for a problem: grids have up to millions of cells,
+        # so a sound cell (known ids, a float or int from 0 to the limit; NaN fails the
+        # comparison) is passed by the cheapest test first
+        if (type(v) is float or type(v) is int) and 0 <= v <= MAX_VALUE and jid in job_ids \
+                and mid in machine_ids:
+            continue
         if jid not in job_ids:
             add(pair("grid", jid, mid), f"names unknown job id {jid!r}")
         if mid not in machine_ids:
