@@ -27,13 +27,17 @@ from dispatcher.history.schema import (
     MIGRATIONS,
     SCHEMA_VERSION,
     Migration,
+    apply_migrations,
     backup_path,
     create_history,
     is_busy,
     migrate,
     primary_code,
+    quick_check,
+    read_only_file,
     store_error,
 )
+from test_history_append_only import record_two
 
 FULL = ("no room left to write (the disk or the file's size limit is full); "
         "free some space and try again")
@@ -276,3 +280,128 @@ def test_a_backup_that_cannot_be_written_stops_the_upgrade(tmp_path):
     finally:
         conn.close()
     assert identity(path) == (APPLICATION_ID, 1)
+
+
+def test_an_upgrade_runs_the_given_steps_up_to_the_last(tmp_path):
+    # A third step after the released ones: the upgrade must go to the last step given,
+    # not to the newest released one. Reference: user_version and sqlite_master read back.
+    path = tmp_path / "v2.sqlite"
+    create_history(path, connect)
+    notes = Migration(3, "notes", lambda conn: conn.execute("CREATE TABLE notes (x TEXT)"))
+    conn = connect(path)
+    try:
+        copy = migrate(conn, path, SCHEMA_VERSION, (*MIGRATIONS, notes))
+    finally:
+        conn.close()
+    assert copy is not None and copy.name.startswith("v2.sqlite.backup-v2-")
+    assert identity(path) == (APPLICATION_ID, 3)
+    assert identity(copy) == (APPLICATION_ID, 2)
+    conn = sqlite3.connect(path)
+    try:
+        tables = {r[0] for r in conn.execute("SELECT name FROM sqlite_master WHERE type = 'table'")}
+    finally:
+        conn.close()
+    assert "notes" in tables
+
+
+def test_a_failing_upgrade_step_is_undone_and_its_error_passed_on(tmp_path):
+    # The step creates a table, then fails: the whole upgrade is rolled back (the table
+    # is gone, the version unchanged), the step's own error reaches the caller, and the
+    # connection is left outside any transaction. Reference: sqlite_master and
+    # user_version read back with a fresh sqlite3 connection.
+    path = tmp_path / "v1.sqlite"
+    create_history(path, connect, MIGRATIONS[:1])
+
+    def half_done(conn: sqlite3.Connection) -> None:
+        conn.execute("CREATE TABLE half (x)")
+        conn.execute("SELEC 1")
+    conn = connect(path)
+    try:
+        with pytest.raises(sqlite3.OperationalError, match='near "SELEC": syntax error'):
+            migrate(conn, path, 1, (MIGRATIONS[0], Migration(2, "half", half_done)))
+        assert not conn.in_transaction
+        conn.execute("BEGIN IMMEDIATE")  # usable again
+        conn.execute("ROLLBACK")
+    finally:
+        conn.close()
+    assert identity(path) == (APPLICATION_ID, 1)
+    fresh = sqlite3.connect(path)
+    try:
+        assert fresh.execute("SELECT count(*) FROM sqlite_master WHERE name = 'half'").fetchone() == (0,)
+    finally:
+        fresh.close()
+
+
+def test_steps_out_of_order_are_refused(tmp_path):
+    skipped = (MIGRATIONS[0], Migration(3, "three", lambda conn: None))
+    with pytest.raises(RuntimeError, match=r"^history migrations out of order at version 3$"):
+        apply_migrations(sqlite3.connect(":memory:"), 0, skipped)
+
+
+def test_a_failure_moving_the_new_history_into_place_is_reported(tmp_path, monkeypatch):
+    # No hard links, and the move fails too (an I/O error, injected): the supervisor gets
+    # the system's words, and neither the history nor the half-built file is left behind.
+    def no_links(src, dst):
+        raise PermissionError(1, "Operation not permitted")
+
+    def failing_move(src, dst):
+        raise OSError(5, "Input/output error")
+    monkeypatch.setattr(os, "link", no_links)
+    monkeypatch.setattr(os, "replace", failing_move)
+    path = tmp_path / "h.sqlite"
+    with pytest.raises(HistoryError) as info:
+        create_history(path, connect)
+    assert str(info.value) == f"{path}: cannot create the history: Input/output error"
+    assert list(tmp_path.iterdir()) == []
+
+
+def test_read_only_means_a_file_that_exists_and_may_not_be_written(tmp_path):
+    # Reference: the file's mode bits set with os.chmod (a missing file can still be created).
+    path = tmp_path / "h.sqlite"
+    assert read_only_file(path) is False
+    path.write_bytes(b"")
+    assert read_only_file(path) is False
+    os.chmod(path, 0o444)
+    assert read_only_file(path) is True
+
+
+def _damage_index_page(path: Path, index: str) -> None:
+    """Point the first cell of an index's root page outside the page (a real b-tree fault)."""
+    conn = sqlite3.connect(path)
+    try:
+        conn.execute("PRAGMA wal_checkpoint(TRUNCATE)")
+        page_size = conn.execute("PRAGMA page_size").fetchone()[0]
+        root = conn.execute("SELECT rootpage FROM sqlite_master WHERE name = ?", (index,)).fetchone()[0]
+    finally:
+        conn.close()
+    data = bytearray(path.read_bytes())
+    start = (root - 1) * page_size
+    assert data[start] == 0x0A  # a leaf index page (SQLite file format, section 1.6)
+    data[start + 8:start + 10] = b"\xff\xff"
+    path.write_bytes(bytes(data))
+
+
+def test_a_damaged_history_is_reported_with_every_fault_sqlite_finds(tmp_path):
+    # Reference: PRAGMA quick_check on a plain sqlite3 connection, which reports one row
+    # per damaged database; the history and a damaged copy attached beside it give two.
+    path = tmp_path / "h.sqlite"
+    record_two(path)
+    _damage_index_page(path, "decision_rows_job")
+    copy = tmp_path / "copy.sqlite"
+    copy.write_bytes(path.read_bytes())
+    conn = connect(path)
+    try:
+        conn.execute("ATTACH DATABASE ? AS copy", (str(copy),))
+        faults = [r[0] for r in conn.execute("PRAGMA quick_check(5)")]
+        assert len(faults) == 2 and all("On tree page" in f for f in faults)
+        with pytest.raises(HistoryError) as info:
+            quick_check(conn, path)
+    finally:
+        conn.close()
+    assert str(info.value) == (f"{path}: the history file is damaged ({faults[0]}; {faults[1]}); "
+                               "it was left as it is. Restore it from a backup or choose another file")
+    fresh = connect(tmp_path / "fresh.sqlite")
+    try:
+        quick_check(fresh, tmp_path / "fresh.sqlite")  # a sound file passes
+    finally:
+        fresh.close()
