@@ -59,7 +59,9 @@ cd "$scratch"
   echo "only_mutate=$mutate"
   echo "also_copy="  # data the tests read (mutmut copies only the sources and tests)
   for d in sample_shops resources docs; do echo "    $d"; done
-  echo "pytest_add_cli_args=-p no:cacheprovider -x -q${deselect:+ --deselect $deselect}"
+  # One argument per line: mutmut passes a one-line value to pytest as a single argument.
+  echo "pytest_add_cli_args="
+  for a in -p no:cacheprovider -x -q ${deselect:+--deselect $deselect}; do echo "    $a"; done
   echo "pytest_add_cli_args_test_selection="
   for t in $tests; do echo "    $t"; done
 } > setup.cfg

@@ -79,7 +79,8 @@ def alternating_reach(allowed: np.ndarray, machine_of_job: np.ndarray,
     allowed : boolean jobs x machines array
     machine_of_job : int array
         A matching (-1 = unmatched).
-    start_jobs : int array or boolean mask
+    start_jobs : int array
+        Job indices.
 
     Returns
     -------
