@@ -21,6 +21,7 @@ from pathlib import Path
 
 import pytest
 
+from dispatcher.errors import HINT_OTHER_HISTORY_FILE
 from dispatcher.history import HistoryError
 from dispatcher.history.schema import (
     APPLICATION_ID,
@@ -29,6 +30,7 @@ from dispatcher.history.schema import (
     Migration,
     apply_migrations,
     backup_path,
+    check_identity,
     create_history,
     is_busy,
     migrate,
@@ -405,3 +407,48 @@ def test_a_damaged_history_is_reported_with_every_fault_sqlite_finds(tmp_path):
         quick_check(fresh, tmp_path / "fresh.sqlite")  # a sound file passes
     finally:
         fresh.close()
+
+
+def _sqlite_file(path: Path, app_id: int, version: int) -> sqlite3.Connection:
+    conn = connect(path)
+    conn.execute("CREATE TABLE notes (x TEXT)")
+    conn.execute(f"PRAGMA application_id = {app_id}")
+    conn.execute(f"PRAGMA user_version = {version}")
+    return conn
+
+
+@pytest.mark.parametrize(("app_id", "version", "newest", "why", "hint"), [
+    (0, 0, SCHEMA_VERSION, "an SQLite file, but not a dispatcher history; it was left as it is. "
+     "Choose another file", HINT_OTHER_HISTORY_FILE),
+    (0x12345678, 2, SCHEMA_VERSION, "an SQLite file, but not a dispatcher history; it was left as "
+     "it is. Choose another file", HINT_OTHER_HISTORY_FILE),
+    (APPLICATION_ID, SCHEMA_VERSION + 1, SCHEMA_VERSION,
+     f"written by a newer version of dispatcher (history schema {SCHEMA_VERSION + 1}, this "
+     f"version reads up to {SCHEMA_VERSION}); update dispatcher to use it. The file was left "
+     "as it is", None),
+    (APPLICATION_ID, 2, 1, "written by a newer version of dispatcher (history schema 2, this "
+     "version reads up to 1); update dispatcher to use it. The file was left as it is", None),
+    (APPLICATION_ID, 0, SCHEMA_VERSION, "a dispatcher history without a schema; it was left as "
+     "it is. Choose another file", HINT_OTHER_HISTORY_FILE),
+])
+def test_a_file_that_is_not_a_usable_history_is_named_and_refused(tmp_path, app_id, version,
+                                                                  newest, why, hint):
+    # Reference: the two header fields written with plain sqlite3 PRAGMAs.
+    path = tmp_path / "h.sqlite"
+    conn = _sqlite_file(path, app_id, version)
+    try:
+        with pytest.raises(HistoryError) as info:
+            check_identity(conn, path, newest)
+    finally:
+        conn.close()
+    assert str(info.value) == f"{path}: {why}"
+    assert info.value.hint == hint
+
+
+@pytest.mark.parametrize("version", [1, SCHEMA_VERSION])
+def test_a_history_of_a_known_schema_gives_its_version(tmp_path, version):
+    conn = _sqlite_file(tmp_path / "h.sqlite", APPLICATION_ID, version)
+    try:
+        assert check_identity(conn, tmp_path / "h.sqlite") == version
+    finally:
+        conn.close()
