@@ -15,6 +15,7 @@ from __future__ import annotations
 import os
 import re
 import sqlite3
+import struct
 import time
 from datetime import datetime, timedelta, timezone
 from pathlib import Path
@@ -30,6 +31,7 @@ from dispatcher.history.schema import (
     Migration,
     apply_migrations,
     backup_path,
+    check_header,
     check_identity,
     create_history,
     is_busy,
@@ -365,6 +367,8 @@ def test_read_only_means_a_file_that_exists_and_may_not_be_written(tmp_path):
     assert read_only_file(path) is False
     os.chmod(path, 0o444)
     assert read_only_file(path) is True
+    os.chmod(path, 0o555)  # executable bits do not make it writable
+    assert read_only_file(path) is True
 
 
 def _damage_index_page(path: Path, index: str) -> None:
@@ -452,3 +456,92 @@ def test_a_history_of_a_known_schema_gives_its_version(tmp_path, version):
         assert check_identity(conn, tmp_path / "h.sqlite") == version
     finally:
         conn.close()
+
+
+# --------------------------------------------------------------------------- checks before opening
+
+NOT_SQLITE = ("not a dispatcher history (not an SQLite database file); it was left as it is. "
+              "Choose another file")
+
+
+def refusal(path: Path) -> HistoryError:
+    with pytest.raises(HistoryError) as info:
+        check_header(path)
+    return info.value
+
+
+def _sqlite_with_pages(path: Path, page_size: int, rows: int = 4) -> int:
+    """A real SQLite file with the given page size; returns its page count."""
+    conn = sqlite3.connect(path)
+    conn.execute(f"PRAGMA page_size = {page_size}")
+    conn.execute("CREATE TABLE t (x BLOB)")
+    for _ in range(rows):
+        conn.execute("INSERT INTO t VALUES (zeroblob(?))", (page_size,))
+    conn.commit()
+    pages = conn.execute("PRAGMA page_count").fetchone()[0]
+    conn.close()
+    assert path.stat().st_size == pages * page_size
+    return pages
+
+
+def test_an_empty_or_foreign_file_is_refused_by_its_first_bytes(tmp_path):
+    path = tmp_path / "h.sqlite"
+    path.write_bytes(b"")
+    err = refusal(path)
+    assert str(err) == (f"{path}: the file is empty (0 bytes), so it is not a dispatcher history; "
+                        "it was left as it is. Move it away or choose another file")
+    assert err.hint == HINT_OTHER_HISTORY_FILE
+    for content in (b"job,machine\nWO-1,Press 1\n" * 10,   # a grid saved under the wrong name
+                    b"SQLite format 3\x00" + b"\x00" * 40):  # the magic, but no whole header
+        path.write_bytes(content)
+        err = refusal(path)
+        assert (str(err), err.hint) == (f"{path}: {NOT_SQLITE}", HINT_OTHER_HISTORY_FILE)
+
+
+def test_a_folder_in_place_of_the_history_is_reported_in_the_system_s_words(tmp_path):
+    path = tmp_path / "h.sqlite"
+    path.mkdir()
+    assert str(refusal(path)) == f"{path}: cannot read the history file: Is a directory"
+
+
+@pytest.mark.parametrize("page_size", [1024, 32768, 65536])
+def test_a_cut_file_is_refused_with_the_size_its_header_gives(tmp_path, page_size):
+    # Reference: SQLite writes the file; its header stores 65536 as 1 (file format 1.3.2).
+    path = tmp_path / "h.sqlite"
+    pages = _sqlite_with_pages(path, page_size)
+    assert path.read_bytes()[16:18] == (b"\x00\x01" if page_size == 65536 else
+                                        page_size.to_bytes(2, "big"))
+    check_header(path)  # whole: accepted
+    cut = (pages - 1) * page_size + 10
+    with path.open("r+b") as f:
+        f.truncate(cut)
+    err = refusal(path)
+    assert str(err) == (f"{path}: the history file is truncated ({cut} bytes, its header says "
+                        f"{pages * page_size}); it was left as it is. Restore it from a backup "
+                        "or choose another file")
+    assert err.hint == HINT_OTHER_HISTORY_FILE
+
+
+def test_the_header_size_counts_for_a_file_changed_more_than_two_billion_times(tmp_path):
+    # The change counter and its valid-for copy are unsigned 32-bit numbers (file format
+    # 1.3.8); set both past 2**31 by hand, as a long-lived file reaches them.
+    path = tmp_path / "h.sqlite"
+    pages = _sqlite_with_pages(path, 4096)
+    data = bytearray(path.read_bytes()[:(pages - 1) * 4096])
+    data[24:28] = data[92:96] = struct.pack(">I", 2**31 + 7)
+    path.write_bytes(bytes(data))
+    assert "is truncated" in str(refusal(path))
+
+
+def test_a_pending_write_ahead_log_makes_the_header_size_untrusted(tmp_path):
+    # With a non-empty "-wal" file beside it the main file may lag behind its header (the
+    # log is copied back at the next checkpoint), so a short file is left to SQLite.
+    path = tmp_path / "h.sqlite"
+    pages = _sqlite_with_pages(path, 4096)
+    with path.open("r+b") as f:
+        f.truncate((pages - 1) * 4096)
+    wal = tmp_path / "h.sqlite-wal"
+    wal.write_bytes(b"")
+    assert "is truncated" in str(refusal(path))  # an empty log holds nothing
+    wal.write_bytes(b"\x37\x7f\x06\x82" + b"\x00" * 28)
+    check_header(path)
