@@ -200,7 +200,7 @@ def test_a_change_to_the_rows_is_caught(tmp_path, change):
 
 # ---------------------------------------------------------------- upgrading a schema-1 file
 
-def _schema_1_file(path: Path, n: int) -> None:
+def _schema_1_file(path: Path, n: int, plan_of=lambda i: dict(PLAN, total=440 + i)) -> None:
     """A history as schema 1 wrote it, built with its statements and raw inserts."""
     conn = raw(path)
     conn.execute("PRAGMA journal_mode = WAL")
@@ -209,15 +209,16 @@ def _schema_1_file(path: Path, n: int) -> None:
     conn.execute("PRAGMA user_version = 1")
     for i in range(1, n + 1):
         shop = json.dumps({"name": "s", "n": i})
-        plan = json.dumps(dict(PLAN, total=440 + i), separators=(",", ":"))
+        plan_i = plan_of(i)
+        plan = json.dumps(plan_i, separators=(",", ":"))
         digest = hashlib.sha256((shop + "\x00" + plan).encode()).hexdigest()
         conn.execute(
             "INSERT INTO decisions (time_utc, shift_date, shift_label, supervisor, "
             "reason_kind, reason_text, shop_name, objective, total, certificate, replaces, "
             "shop_json, plan_json, digest) VALUES ('2026-03-14T05:00:00.000000Z', "
             "'2026-03-13', 'night', 'Supervisor A', 'other', '', 's', 'total', ?, "
-            "'verified', ?, ?, ?, ?)", (440 + i, i - 1 or None, shop, plan, digest))
-        for a in PLAN["assignments"]:
+            "'verified', ?, ?, ?, ?)", (plan_i["total"], i - 1 or None, shop, plan, digest))
+        for a in plan_i["assignments"]:
             conn.execute("INSERT INTO decision_rows VALUES (?, 'assigned', ?, ?, ?)",
                          (i, a["machine"], a["job"], a["cost"]))
     conn.close()
@@ -245,6 +246,22 @@ def test_schema_1_history_is_upgraded_and_old_decisions_verify(tmp_path):
     # A column schema 1 did not check (the total) is now covered for the old decisions too.
     _drop_triggers(conn)
     conn.execute("UPDATE decisions SET total = 1 WHERE id = 1")
+    conn.close()
+    with pytest.raises(HistoryError, match="#1 no longer matches"):
+        HistoryStore(path).get(1)
+
+
+def test_an_old_decision_without_rows_is_sealed_on_upgrade(tmp_path):
+    # A plan for a shop with no jobs and no machines stores no rows at all.
+    empty = dict(PLAN, total=0, assignments=[], idle_machines=[])
+    path = tmp_path / "h.sqlite"
+    _schema_1_file(path, 1, plan_of=lambda i: empty)
+    store = HistoryStore(path)
+    assert store.get(1).total == 0 and store.rows() == []
+    conn = raw(path)
+    assert conn.execute("SELECT seal IS NOT NULL FROM decisions WHERE id = 1").fetchone() == (1,)
+    _drop_triggers(conn)
+    conn.execute("UPDATE decisions SET supervisor = 'Supervisor B' WHERE id = 1")
     conn.close()
     with pytest.raises(HistoryError, match="#1 no longer matches"):
         HistoryStore(path).get(1)
