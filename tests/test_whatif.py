@@ -107,7 +107,8 @@ def test_floyd_distances_match_networkx():
 
 
 def test_bottleneck_is_refused():
-    with pytest.raises(ValueError, match="'total' and 'maximize'"):
+    with pytest.raises(ValueError, match=r"^what-if costs are defined for the 'total' and "
+                                         r"'maximize' objectives$"):
         what_if(solve(np.ones((2, 2)), objective="bottleneck"))
 
 
@@ -116,3 +117,36 @@ def test_degenerate_shapes(shape):
     result = what_if(solve(np.ones(shape)))
     assert result.extra.shape == shape
     assert result.wait_extra.shape == (shape[0],)
+    assert result.best_other.shape == result.best_other_extra.shape == (shape[0],)
+    if shape[1] == 0:  # no machine: no other machine for anyone
+        assert (result.best_other == -1).all() and np.isnan(result.best_other_extra).all()
+
+
+@pytest.mark.parametrize(("values", "allowed", "must"), [
+    ([[3.0]], [[True]], [True]),        # the only plan: the job on the machine, it cannot wait
+    ([[3.0]], [[True]], [False]),
+    ([[3.0]], [[False]], [False]),      # the pair is not allowed: the job waits
+    ([[3.0, 1.0]], [[True, True]], [True]),
+])
+def test_tiny_grids_match_forced_re_solves(values, allowed, must):
+    # Reference: the forced re-solves above (scipy through solve) and, for a must-run job,
+    # the definition: no plan keeps it waiting.
+    values, allowed, must = np.array(values), np.array(allowed), np.array(must)
+    penalty = np.zeros(len(values))
+    base = solve(values, allowed, wait_penalty=penalty, must_run=must)
+    result = what_if(base)
+    for job, machine in itertools.product(range(values.shape[0]), range(-1, values.shape[1])):
+        got = result.extra[job, machine] if machine >= 0 else result.wait_extra[job]
+        ref = forced(values, allowed, penalty, must, "total", job, machine, base.planned_count)
+        if ref is None:
+            assert np.isnan(got), (job, machine)
+        else:
+            assert got == pytest.approx(ref - base.total, abs=1e-9), (job, machine)
+
+
+def test_distances_leave_the_weights_as_they_were():
+    # The caller's matrix is read, never overwritten (Floyd's updates go to a copy).
+    w = np.array([[0.0, 5.0, 1.0], [np.inf, 0.0, np.inf], [np.inf, 1.0, 0.0]])
+    before = w.copy()
+    assert alternating_distances(w)[0, 1] == 2.0  # 0 -> 2 -> 1
+    assert np.array_equal(w, before)
