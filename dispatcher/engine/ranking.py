@@ -167,6 +167,11 @@ class _Ranker:
                 bound = next(node.search)
             else:
                 bound = node.search.send(limit - node.base)
+            while node.base + bound <= limit:
+                # The search paused on a distance above ``limit - base`` only by rounding:
+                # the node is no dearer than the front of the queue, so go on (two such
+                # nodes with equal keys would otherwise trade places for ever).
+                bound = node.search.send(bound)
         except StopIteration as done:
             placed, _ = done.value
             node.search = None
