@@ -117,9 +117,6 @@ class _Ranker:
         self.rise = forced_rise(cert.cost, cert.col_of_row, cert.row_potential, cert.col_potential)
         self.root_key = float(cert.cost[np.arange(self.size), cert.col_of_row].sum()) if self.size else 0.0
 
-    def choice(self, col: int) -> int:
-        return col if col < self.n_machines else WAIT
-
     def matrix(self, node: _Node) -> np.ndarray:
         m = self.base.copy()
         nm = self.n_machines
