@@ -135,3 +135,19 @@ def test_list_input_and_integer_dtype():
     assert result.machine_of_job.dtype.kind == "i"
     assert result.machine_of_job.tolist() == [1, 0]
     assert isinstance(result.total, float) and result.total == 5.0
+
+
+@pytest.mark.parametrize(("costs", "allowed", "penalty", "words"), [
+    ([["a", "1"]], None, None,
+     "costs must be numbers, got list: could not convert string to float: 'a'"),
+    ([[1.0, np.inf]], None, None,
+     "value at job 0, machine 1 is inf: values must be finite (mark incompatible pairs in "
+     "the allowed mask)"),
+    ([[0.0, 0.5, -1.0]], None, None, "value at job 0, machine 2 is -1.0: values must be >= 0"),
+    ([[1.0], [2.0]], None, [1.0, -0.5], "wait penalties must be finite numbers >= 0"),
+])
+def test_bad_input_is_named_in_full(costs, allowed, penalty, words):
+    # The cell named is the first offending one in reading order (job, then machine).
+    with pytest.raises(DispatchInputError) as info:
+        solve(costs, allowed, wait_penalty=penalty)
+    assert str(info.value) == words
