@@ -152,6 +152,14 @@ def test_cached_cell_answers_follow_every_kind_of_change(doc):
     other = next(f for f in families if f != doc.shop.jobs[3].family)
     doc.undo_stack.push(SetJobField(doc, 3, "family", other, "family"))
     _every_role_matches(model, roles)
+    # a plan arriving for the edited shop (other cells planned) and no plan at all: the
+    # cells it leaves alone keep their cached answers, the others follow
+    first = {r: model.planned_col(r) for r in range(model.rowCount())}
+    model.set_plan(solve_shop(doc.shop))
+    assert {r: model.planned_col(r) for r in range(model.rowCount())} != first
+    _every_role_matches(model, roles)
+    model.set_plan(None)
+    _every_role_matches(model, roles)
     for _ in range(5):
         doc.undo_stack.undo()
     _every_role_matches(model, roles)

@@ -163,9 +163,16 @@ class GridModel(QAbstractTableModel):
                 if r.job in rows and r.machine in cols:
                     running[rows[r.job]] = cols[r.machine]
             waiting = {rows[n] for n in plan.waiting_jobs if n in rows}
-        touched = {(r, c) for r, c in self._planned.items()} ^ {(r, c) for r, c in planned.items()}
+        touched = (set(self._planned.items()) ^ set(planned.items())) | \
+            (set(self._running.items()) ^ set(running.items()))
         self._plan, self._planned, self._running, self._waiting = plan, planned, running, waiting
-        self._cache.clear()
+        # Only the cells whose mark changed and the plan column depend on the plan: the rest
+        # of the cache stays, so a plan arriving repaints the page without recomputing it.
+        cache = self._cache
+        for r, c in touched:
+            cache.pop((r, FIRST_MACHINE_COL + c), None)
+        for r in range(self.rowCount()):
+            cache.pop((r, COL_PLAN), None)
         operators = operators_by_machine(getattr(plan, "staffing", None))
         if operators != self._operators:
             self._operators = operators
