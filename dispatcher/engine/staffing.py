@@ -254,6 +254,12 @@ class _Network:
 
     def max_flow(self, sources, qualified, capacity) -> tuple[int, np.ndarray]:
         """Maximum number of the given jobs routed together, and a minimum cut (node mask)."""
+        if not sources.any():
+            # Nothing to route: every arc out of the source has capacity 0, so the cut is
+            # the source alone (what the search below finds, without building the graph).
+            reach = np.zeros(self.n_nodes, bool)
+            reach[self.source] = True
+            return 0, reach
         cap = self.cut_caps(sources, qualified, capacity)
         indptr, indices, arc = self._cut_layout
         graph = csr_matrix((cap[arc].astype(np.int32), indices, indptr), shape=(self.n_nodes,) * 2)
@@ -341,15 +347,18 @@ def _min_cost_flow(layout, tails, heads, cap, cost, supply, flow=None, pot=None)
     flow = np.where(cost + pot[tails] - pot[heads] < 0, cap, flow)
     s_cap = cap[layout.arc]
     s_cost = np.where(layout.back, -cost[layout.arc], cost[layout.arc])
+    # Node excesses and residual room are worked out once and then moved along each
+    # augmenting path (the path's arcs and their twins, its two end nodes) - not recounted
+    # over every arc at each step.
+    excess = supply + np.bincount(heads, flow, n_nodes) - np.bincount(tails, flow, n_nodes)
+    excess = np.rint(excess).astype(np.int64)
+    f = flow[layout.arc]
+    room = np.where(layout.back, f, s_cap - f)
     while True:
-        excess = supply + np.bincount(heads, flow, n_nodes) - np.bincount(tails, flow, n_nodes)
-        excess = np.rint(excess).astype(np.int64)
         starts = np.flatnonzero(excess > 0)
         if starts.size == 0:
             return flow, pot, 0
         start = int(starts[0])
-        f = flow[layout.arc]
-        room = np.where(layout.back, f, s_cap - f)
         # A closed arc weighs inf (scipy's Dijkstra never takes it); explicit zeros are arcs.
         weight = np.where(room > 0, np.maximum(s_cost + pot[layout.tail] - pot[layout.head], 0.0),
                           np.inf)
@@ -366,6 +375,11 @@ def _min_cost_flow(layout, tails, heads, cap, cost, supply, flow=None, pot=None)
         ids, back = layout.arc[pos], layout.back[pos]
         flow[ids[~back]] += delta
         flow[ids[back]] -= delta
+        excess[start] -= delta
+        excess[target] += delta
+        twins = np.searchsorted(layout.key, path[:-1] * n_nodes + path[1:])
+        room[pos] -= delta
+        room[twins] += delta
 
 
 def _path_nodes(pred, sink) -> np.ndarray:
@@ -531,7 +545,11 @@ def _staffed_flow(values, mask, qual, cap, needs, penalty, tier, objective, net=
     net = net or _Network(mask, needs, qual.shape[0], tier)
     cumulative, cuts = [], []
     for upto in range(_TIERS):
-        count, cut = net.max_flow(tier <= upto, qual, cap)
+        if upto and not (tier == upto).any():
+            # no job in this tier: the same jobs as the tier before, the same flow and cut
+            count, cut = cumulative[-1], cuts[-1].copy()
+        else:
+            count, cut = net.max_flow(tier <= upto, qual, cap)
         cumulative.append(count)
         cuts.append(cut)
     n_must = int((tier == TIER_MUST).sum())
