@@ -411,3 +411,34 @@ def test_warning_days_by_the_spin_box_are_one_undo_step(qtbot, window):
 
 def test_new_crew_controls_are_named(qtbot, window):
     assert not missing(window.crew_tab.view)
+
+
+def test_delete_withdraws_the_selected_own_authorisations_and_leaves_the_grid_alone(qtbot, window):
+    from PySide6.QtCore import QItemSelectionModel
+
+    table, model = window.crew_tab.table, window.crew_tab.model
+    grid_before = dict(window.doc.shop.grid)
+    laser, lead = _row(window, "Laser operator"), _row(window, "Cell lead")
+    cutter, brake = _col(window, "Laser cutter"), _col(window, "Press brake 1")
+    picked = [(laser, cutter), (lead, cutter), (lead, brake)]
+    assert [model.authorisation(r, c - FIRST_MACHINE)[0] for r, c in picked] == [True, True, True]
+    assert model.authorisation(lead, brake - FIRST_MACHINE)[1].startswith("through")
+    table.setFocus()
+    table.clearSelection()
+    for r, c in picked:
+        table.selectionModel().select(model.index(r, c), QItemSelectionModel.SelectionFlag.Select)
+    qtbot.keyClick(table, Qt.Key.Key_Delete)
+    wait_plan(qtbot, window)
+    assert [model.authorisation(r, c - FIRST_MACHINE)[0] for r, c in picked] == [False, False, True]
+    assert window.doc.shop.grid == grid_before, "Delete on the Crew tab never marks grid cells"
+    assert window.doc.undo_stack.undoText() == "Withdraw 2 authorisations"
+    _undo(qtbot, window)
+    assert [model.authorisation(r, c - FIRST_MACHINE)[0] for r, c in picked] == [True, True, True]
+
+
+def test_delete_on_a_tab_without_the_grid_changes_nothing(qtbot, window):
+    window.view.selectAll()
+    window.tabs.setCurrentWidget(window.whatif_tab.view)
+    before, depth = dict(window.doc.shop.grid), window.doc.undo_stack.count()
+    window.act_cannot.trigger()
+    assert window.doc.shop.grid == before and window.doc.undo_stack.count() == depth

@@ -376,6 +376,21 @@ class CrewTab(QObject):
         dialog.open()
         return dialog
 
+    def clear(self) -> None:
+        """Delete on this tab: withdraw the selected authorisations (one undoable edit)."""
+        picked = sorted({(i.row(), i.column() - FIRST_MACHINE) for i in self.table.selectionModel().selectedIndexes()
+                         if i.column() >= FIRST_MACHINE})
+        cells = []
+        for row, k in picked:
+            # an operator's own authorisations; one through a machine group stays (the
+            # groups window changes it)
+            authorised, how, _left = self.model.authorisation(row, k)
+            if authorised and not how.startswith("through"):
+                cells.append((row, k, False))
+        if cells:
+            self.doc.undo_stack.push(SetAuthorisations(self.doc, cells,
+                                                       self.tr("Withdraw %n authorisation(s)", "", len(cells))))
+
     def paste(self) -> bool:
         index = self.table.currentIndex()
         row, col = (index.row(), index.column()) if index.isValid() else (0, FIRST_MACHINE)

@@ -181,11 +181,14 @@ class MainWindow(QMainWindow):
             self.edits.paste()
 
     def _cannot_run(self) -> None:
-        """Delete: the selected changes are not allowed on the Changeovers tab, else the
-        selected grid cells cannot run."""
+        """Delete: on the Grid tab the selected cells cannot run; on the Changeovers tab the
+        selected changes are not allowed; on the Crew tab the selected authorisations are
+        withdrawn; elsewhere nothing (the grid is not in sight)."""
         if self.changeover_tab.is_current():
             self.changeover_tab.clear()
-        else:
+        elif self.crew_tab.is_current():
+            self.crew_tab.clear()
+        elif self.tabs.currentWidget() is self.view:
             self.edits.cannot_run()
 
     @property

@@ -757,6 +757,13 @@
         <source>Change machine groups</source>
         <translation>Maschinengruppen ändern</translation>
     </message>
+    <message numerus="yes">
+        <source>Withdraw %n authorisation(s)</source>
+        <translation>
+            <numerusform>%n Befugnis entziehen</numerusform>
+            <numerusform>%n Befugnisse entziehen</numerusform>
+        </translation>
+    </message>
     <message>
         <source>paste into the crew refused: {problem}; nothing changed</source>
         <translation>Einfügen ins Personal abgelehnt: {problem}; nichts geändert</translation>
@@ -1504,7 +1511,7 @@ Der gültige Plan bleibt unverändert.</translation>
     </message>
     <message>
         <source>up</source>
-        <extracomment>The roles kept per cell (a role not listed, such as the tooltip, is computed when asked). At most this many cells are kept (a few pages of a big shop); the cache starts afresh. A machine&apos;s state in its column head, after its mark (English; shown translated).
+        <extracomment>The roles a heading answers (:meth:`GridModel.headerData`). The roles kept per cell (a role not listed, such as the tooltip, is computed when asked). At most this many cells are kept (a few pages of a big shop); the cache starts afresh. A machine&apos;s state in its column head, after its mark (English; shown translated).
 ----------
 A machine&apos;s state in a sentence (English; shown translated).</extracomment>
         <translation>bereit</translation>

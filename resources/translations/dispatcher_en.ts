@@ -79,6 +79,13 @@
         </translation>
     </message>
     <message numerus="yes">
+        <source>Withdraw %n authorisation(s)</source>
+        <translation>
+            <numerusform>Withdraw %n authorisation</numerusform>
+            <numerusform>Withdraw %n authorisations</numerusform>
+        </translation>
+    </message>
+    <message numerus="yes">
         <source>Paste %n authorisation(s)</source>
         <translation>
             <numerusform>Paste %n authorisation</numerusform>
