@@ -558,9 +558,13 @@ def shop_to_dict(shop: Shop) -> dict[str, Any]:
         out: dict[str, dict[str, int | float]] = {}
         for jid in dict.fromkeys(ordered):
             row = rows[jid]
-            out[jid] = {mid: (int(v) if type(v) is float and v.is_integer() and -EXACT_INTS < v < EXACT_INTS
-                              else None if v is None else json_number(v))
-                        for mid in sorted(row, key=morder.__getitem__) for v in (row[mid],)}
+            written = out[jid] = {}
+            for mid in sorted(row, key=morder.__getitem__):
+                v = row[mid]
+                if type(v) is float and v.is_integer() and -EXACT_INTS < v < EXACT_INTS:
+                    written[mid] = int(v)       # json_number's rule, without the call
+                else:
+                    written[mid] = None if v is None else json_number(v)
         return out
 
     families = uses_changeovers(shop)

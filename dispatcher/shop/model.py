@@ -435,15 +435,20 @@ class Shop:
     def describe_job(self, job_id: str) -> str:
         """``job 'Name' (id X)`` for messages; just the id when unknown."""
         try:
-            return f"job {self.job(job_id).name!r} (id {job_id})"
+            return describe("job", self.job(job_id))
         except KeyError:
             return f"job id {job_id!r}"
 
     def describe_machine(self, machine_id: str) -> str:
         try:
-            return f"machine {self.machine(machine_id).name!r} (id {machine_id})"
+            return describe("machine", self.machine(machine_id))
         except KeyError:
             return f"machine id {machine_id!r}"
+
+
+def describe(kind: str, item: Job | Machine) -> str:
+    """``job 'Name' (id X)`` (``kind`` 'job' or 'machine') for messages."""
+    return f"{kind} {item.name!r} (id {item.id})"
 
 
 def shop_from_grid(jobs: list[str], machines: list[str], values: np.ndarray,

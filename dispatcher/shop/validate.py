@@ -28,6 +28,7 @@ from .model import (
     Problem,
     Shop,
     ShopError,
+    describe,
 )
 
 
@@ -80,7 +81,7 @@ def shop_problems(shop: Shop) -> list[Problem]:
     first_job = {j.id: j for j in reversed(shop.jobs)}
     first_machine = {m.id: m for m in reversed(shop.machines)}
     for m in shop.machines:
-        where = f"machine {first_machine[m.id].name!r} (id {m.id})"
+        where = describe("machine", first_machine[m.id])
         if m.state not in MACHINE_STATES:
             add(f"{where}, field 'state'", f"{m.state!r} is not one of {', '.join(MACHINE_STATES)}")
         if isinstance(m.slots, bool) or not isinstance(m.slots, int) or not 1 <= m.slots <= MAX_SLOTS:
@@ -91,7 +92,7 @@ def shop_problems(shop: Shop) -> list[Problem]:
             add(f"{where}, field 'speed_factor'", f"{m.speed_factor!r} must be a number > 0 and at most 1e12")
 
     for j in shop.jobs:
-        where = f"job {first_job[j.id].name!r} (id {j.id})"
+        where = describe("job", first_job[j.id])
         if j.state not in JOB_STATES:
             add(f"{where}, field 'state'", f"{j.state!r} is not one of {', '.join(JOB_STATES)}")
         for fname in ("wait_penalty",):
